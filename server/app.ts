@@ -1,0 +1,114 @@
+import 'reflect-metadata';
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import express, { Router, type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import type { DataSource } from 'typeorm';
+import { configurePassport } from './auth/passport';
+import { DatabaseSessionStore } from './auth/session-store';
+import type { Env } from './env';
+import { csrfGuard } from './middleware/csrf';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { createAuditRepository } from './modules/audit/audit.repository';
+import { auditRoutes } from './modules/audit/audit.routes';
+import { authRoutes } from './modules/auth/auth.routes';
+import { createAuthService } from './modules/auth/auth.service';
+import { createBatchRepository } from './modules/batches/batch.repository';
+import { batchRoutes } from './modules/batches/batch.routes';
+import { createSessionRepository } from './modules/sessions/session.repository';
+import { createStudioRepository, studioRoutes } from './modules/studios/studio.routes';
+import { createStyleRepository } from './modules/styles/style.repository';
+import { styleRoutes } from './modules/styles/style.routes';
+import { createUserRepository } from './modules/users/user.repository';
+import { userRoutes } from './modules/users/user.routes';
+import { createUserService } from './modules/users/user.service';
+
+export interface AppDeps {
+  ds: DataSource;
+  env: Pick<Env, 'NODE_ENV' | 'SESSION_SECRET' | 'TRUST_PROXY' | 'LOGIN_RATE_LIMIT' | 'LOGIN_LOCK_AFTER'> &
+    Partial<Env>;
+  now?: () => Date;
+  /** Folder of the built client; served with an SPA fallback when present. */
+  clientDir?: string;
+}
+
+/** Build the Express app. Never listens: server/index.ts does, tests use supertest. */
+export function createApp(deps: AppDeps): Express {
+  const { ds, env } = deps;
+  const now = deps.now ?? (() => new Date());
+  const app = express();
+  app.disable('x-powered-by');
+  if (env.TRUST_PROXY) app.set('trust proxy', 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          connectSrc: ["'self'"],
+          mediaSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+
+  const audit = createAuditRepository(ds);
+  const users = createUserRepository(ds);
+  const styles = createStyleRepository(ds);
+  const batches = createBatchRepository(ds);
+  const studios = createStudioRepository(ds);
+  const auth = createAuthService({ ds, users, audit, lockAfter: env.LOGIN_LOCK_AFTER, now });
+  const passport = configurePassport(auth);
+
+  const api = Router();
+  api.use(express.json({ limit: '2mb' }));
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(
+    session({
+      name: 'seamrun.sid',
+      secret: env.SESSION_SECRET,
+      store: new DatabaseSessionStore(createSessionRepository(ds)),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      proxy: env.TRUST_PROXY,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: 'auto',
+        maxAge: 12 * 60 * 60 * 1000,
+      },
+    }),
+  );
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(csrfGuard);
+
+  api.use('/auth', authRoutes(auth, passport, { loginLimit: env.LOGIN_RATE_LIMIT }));
+  api.use('/users', userRoutes(createUserService({ users, audit })));
+  api.use('/studio', studioRoutes(studios, audit));
+  api.use('/styles', styleRoutes(styles, audit));
+  api.use('/batches', batchRoutes(batches, styles, audit));
+  api.use('/audit', auditRoutes(audit));
+  api.use(notFoundHandler);
+  api.use(errorHandler(env.NODE_ENV === 'development'));
+  app.use('/api', api);
+
+  const clientDir = deps.clientDir ?? resolve('dist/client');
+  if (existsSync(join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*path}', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
+  }
+  return app;
+}

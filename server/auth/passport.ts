@@ -1,0 +1,33 @@
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import type { Actor } from './require';
+import type { AuthService } from '../modules/auth/auth.service';
+
+interface SessionUser {
+  id: number;
+  v: number;
+}
+
+/** Wire passport: local strategy for e-mail + password, session holds id and session version. */
+export function configurePassport(auth: AuthService) {
+  const p = new passport.Passport();
+  p.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
+      auth.verifyPassword(email, password).then(
+        (user) => done(null, user),
+        (err) => done(err),
+      );
+    }),
+  );
+  p.serializeUser((user, done) => {
+    const u = user as Actor & { sessionVersion?: number };
+    done(null, { id: u.id, v: u.sessionVersion ?? 1 } satisfies SessionUser);
+  });
+  p.deserializeUser((stored: SessionUser, done) => {
+    auth.actorForSession(stored.id, stored.v).then(
+      (actor) => done(null, actor ?? false),
+      (err) => done(err),
+    );
+  });
+  return p;
+}

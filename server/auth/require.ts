@@ -1,0 +1,37 @@
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import { can, type Permission, type Role } from '../../shared/auth/permissions';
+import { forbidden, unauthenticated } from '../errors';
+
+/** The signed-in person as the server sees them on every request. */
+export interface Actor {
+  id: number;
+  studioId: number;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends Actor {}
+  }
+}
+
+export function actorOf(req: Request): Actor {
+  if (!req.user) throw unauthenticated();
+  return req.user;
+}
+
+export const requireAuth: RequestHandler = (req, _res, next) =>
+  req.user ? next() : next(unauthenticated());
+
+/** Gate a route on the permission map in shared/auth; 401 when signed out, 403 when not allowed. */
+export function requirePermission(...permissions: Permission[]): RequestHandler {
+  return (req: Request, _res: Response, next: NextFunction) => {
+    if (!req.user) return next(unauthenticated());
+    if (!permissions.some((p) => can(req.user!.role, p))) return next(forbidden());
+    next();
+  };
+}

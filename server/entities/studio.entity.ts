@@ -1,0 +1,23 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity('studios')
+export class StudioEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  /** ISO 4217 code, e.g. KES. */
+  @Column({ type: 'varchar', length: 3 })
+  currency: string;
+
+  @Column({ type: 'varchar', length: 8, default: 'metric' })
+  unitSystem: 'metric' | 'imperial';
+
+  @Column({ type: 'real', default: 8 })
+  workingDayHours: number;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}

@@ -1,0 +1,52 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { Role } from '../../shared/auth/permissions';
+import { StudioEntity } from './studio.entity';
+
+@Entity('users')
+export class UserEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @ManyToOne(() => StudioEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'studioId' })
+  studio?: StudioEntity;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  /** Sign-in name: an e-mail or a username, unique across the installation. */
+  @Index({ unique: true })
+  @Column({ type: 'varchar', length: 200 })
+  email: string;
+
+  @Column({ type: 'varchar', length: 16 })
+  role: Role;
+
+  @Column({ type: 'varchar', length: 255 })
+  passwordHash: string;
+
+  @Column({ type: 'varchar', length: 255, nullable: true })
+  pinHash: string | null;
+
+  @Column({ type: 'boolean', default: false })
+  mustChangePassword: boolean;
+
+  @Column({ type: 'boolean', default: true })
+  active: boolean;
+
+  @Column({ type: 'integer', default: 0 })
+  failedLogins: number;
+
+  @Column({ type: 'datetime', nullable: true })
+  lockedUntil: Date | null;
+
+  /** Bumped on password change or deactivation; sessions carrying an older value are dropped. */
+  @Column({ type: 'integer', default: 1 })
+  sessionVersion: number;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}

@@ -1,0 +1,41 @@
+import 'dotenv/config';
+import { z } from 'zod';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  DATABASE_PATH: z.string().default('data/seamrun.sqlite'),
+  SESSION_SECRET: z.string().min(16).default('dev-only-session-secret-change-me'),
+  TRUST_PROXY: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
+  DEMO_PASSWORD: z.string().min(8).default('seamrun-demo'),
+  DEMO_PIN_PREFIX: z.string().regex(/^\d{2}$/).default('40'),
+  SEED_DEMO: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  LOGIN_LOCK_AFTER: z.coerce.number().int().min(1).default(8),
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
+  NESTING_SECONDS: z.coerce.number().min(1).max(3600).default(20),
+  SMTP_URL: z.string().default(''),
+  MAIL_FROM: z.string().default('Seamrun <no-reply@seamrun.local>'),
+  LOCAL_SMTP_PORT: z.coerce.number().int().min(0).default(2525),
+  PAYMENTS_SECRET_KEY: z.string().default(''),
+  LOCAL_PAYMENTS_PORT: z.coerce.number().int().min(0).default(12111),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+/** Parse process.env once; a readable failure names every bad variable. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

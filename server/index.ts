@@ -1,0 +1,36 @@
+import 'reflect-metadata';
+import type { Server } from 'node:http';
+import { openDatabase } from './db/data-source';
+import { createApp } from './app';
+import { loadEnv, type Env } from './env';
+import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
+
+/** env → data source → migrations → seed → listen. */
+export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
+  const env: Env = loadEnv({ ...process.env, ...overrides });
+  const ds = await openDatabase(env.DATABASE_PATH);
+  const seeded = env.SEED_DEMO
+    ? await seedDemoStudio(ds, { password: env.DEMO_PASSWORD, pinPrefix: env.DEMO_PIN_PREFIX, today: new Date() })
+    : false;
+  const app = createApp({ ds, env });
+  const server: Server = await new Promise((resolve) => {
+    const s = app.listen(env.PORT, env.HOST, () => resolve(s));
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : env.PORT;
+  return { server, ds, env, port, seeded };
+}
+
+export function printBanner(port: number, env: Env, seeded: boolean) {
+  const lines = [
+    '',
+    `Seamrun is running at http://localhost:${port}`,
+    seeded ? 'Demo studio "Tamarind Row Studio" seeded.' : 'Using the existing database.',
+    `Demo sign-ins (password: ${env.DEMO_PASSWORD}):`,
+    ...DEMO_PEOPLE.map(
+      (p) => `  ${p.role.padEnd(10)} ${p.email.padEnd(30)}${p.pin ? ` PIN ${demoPin(env.DEMO_PIN_PREFIX, p.pin)}` : ''}`,
+    ),
+    '',
+  ];
+  console.log(lines.join('\n'));
+}

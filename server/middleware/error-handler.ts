@@ -1,0 +1,39 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { AppError } from '../errors';
+
+export const notFoundHandler: RequestHandler = (_req, res) => {
+  res.status(404).json({ error: { code: 'not_found', message: 'No such API route' } });
+};
+
+/** Shapes every error as { error: { code, message, fields? } }; no stack trace outside development. */
+export function errorHandler(isDevelopment: boolean): ErrorRequestHandler {
+  return (err, _req, res, _next) => {
+    if (err instanceof AppError) {
+      res.status(err.status).json({
+        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+      });
+      return;
+    }
+    const e = err as { type?: string; status?: number; code?: string; message?: string; stack?: string };
+    if (e.type === 'entity.too.large' || e.code === 'LIMIT_FILE_SIZE') {
+      res.status(413).json({ error: { code: 'too_large', message: 'The request or file is too large' } });
+      return;
+    }
+    if (e.type === 'entity.parse.failed') {
+      res.status(400).json({ error: { code: 'validation', message: 'The body is not valid JSON', fields: { body: 'Invalid JSON' } } });
+      return;
+    }
+    if (String(e.code ?? '').startsWith('SQLITE_CONSTRAINT')) {
+      res.status(409).json({ error: { code: 'conflict', message: 'That record conflicts with one already saved' } });
+      return;
+    }
+    if (process.env.NODE_ENV !== 'test') console.error(err);
+    res.status(500).json({
+      error: {
+        code: 'internal',
+        message: 'Something went wrong on the server',
+        ...(isDevelopment && e.stack ? { stack: e.stack } : {}),
+      },
+    });
+  };
+}

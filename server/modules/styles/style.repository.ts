@@ -1,0 +1,19 @@
+import type { DataSource } from 'typeorm';
+import { StyleEntity } from '../../entities';
+
+export type StyleRepository = ReturnType<typeof createStyleRepository>;
+
+/** Style queries, always scoped to one studio. */
+export function createStyleRepository(ds: DataSource) {
+  const repo = ds.getRepository(StyleEntity);
+  return {
+    list: (studioId: number) => repo.find({ where: { studioId }, order: { code: 'ASC' } }),
+    get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
+    byCode: (studioId: number, code: string) => repo.findOne({ where: { studioId, code } }),
+    insert: (s: Partial<StyleEntity>) => repo.save(repo.create(s)),
+    async update(studioId: number, id: number, patch: Partial<StyleEntity>) {
+      await repo.update({ studioId, id }, patch);
+      return repo.findOneOrFail({ where: { studioId, id } });
+    },
+  };
+}

@@ -1,0 +1,25 @@
+import type { PersonDto } from '../../../shared/schemas/people';
+import type { UserDto } from '../../../shared/schemas/auth';
+import type { StudioEntity, UserEntity } from '../../entities';
+
+export const presentPerson = (u: UserEntity): PersonDto => ({
+  id: u.id,
+  name: u.name,
+  email: u.email,
+  role: u.role,
+  active: Boolean(u.active),
+  hasPin: Boolean(u.pinHash),
+  mustChangePassword: Boolean(u.mustChangePassword),
+});
+
+export const presentMe = (u: UserEntity, studio: StudioEntity): UserDto => ({
+  id: u.id,
+  email: u.email,
+  name: u.name,
+  role: u.role,
+  studioId: studio.id,
+  studioName: studio.name,
+  currency: studio.currency,
+  unitSystem: studio.unitSystem,
+  mustChangePassword: Boolean(u.mustChangePassword),
+});

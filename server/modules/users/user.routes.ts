@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import { idParam } from '../../../shared/schemas/common';
+import { createPersonInput, updatePersonInput } from '../../../shared/schemas/people';
+import { actorOf, requirePermission } from '../../auth/require';
+import { validate } from '../../middleware/validate';
+import { presentPerson } from './user.presenter';
+import type { UserService } from './user.service';
+
+export function userRoutes(service: UserService) {
+  const r = Router();
+  r.use(requirePermission('people:manage'));
+  r.get('/', async (req, res) => {
+    res.json({ users: (await service.list(actorOf(req))).map(presentPerson) });
+  });
+  r.post('/', validate({ body: createPersonInput }), async (req, res) => {
+    res.status(201).json({ user: presentPerson(await service.create(actorOf(req), req.body)) });
+  });
+  r.patch('/:id', validate({ params: idParam, body: updatePersonInput }), async (req, res) => {
+    const id = (req.params as unknown as { id: number }).id;
+    res.json({ user: presentPerson(await service.update(actorOf(req), id, req.body)) });
+  });
+  return r;
+}

@@ -1,0 +1,53 @@
+import type { CreatePersonInput, UpdatePersonInput } from '../../../shared/schemas/people';
+import { hashSecret } from '../../auth/password';
+import type { Actor } from '../../auth/require';
+import { badRequest, conflict, notFound } from '../../errors';
+import type { AuditRepository } from '../audit/audit.repository';
+import type { UserRepository } from './user.repository';
+
+export type UserService = ReturnType<typeof createUserService>;
+
+export function createUserService(deps: { users: UserRepository; audit: AuditRepository }) {
+  const { users, audit } = deps;
+  return {
+    list: (actor: Actor) => users.list(actor.studioId),
+
+    async create(actor: Actor, input: CreatePersonInput) {
+      if (await users.findByEmail(input.email)) {
+        throw conflict('Someone already signs in with that email', { email: 'Already in use' });
+      }
+      const created = await users.insert({
+        studioId: actor.studioId,
+        name: input.name,
+        email: input.email,
+        role: input.role,
+        // A PIN-only floor worker still gets an unusable random password hash.
+        passwordHash: await hashSecret(input.temporaryPassword ?? crypto.randomUUID()),
+        pinHash: input.pin ? await hashSecret(input.pin) : null,
+        mustChangePassword: Boolean(input.temporaryPassword),
+        active: true,
+      });
+      await audit.record(actor, 'create', 'user', created.id, undefined, { name: input.name, role: input.role });
+      return created;
+    },
+
+    async update(actor: Actor, id: number, input: UpdatePersonInput) {
+      const before = await users.get(actor.studioId, id);
+      if (!before) throw notFound('Person');
+      if (id === actor.id && (input.role && input.role !== 'owner' || input.active === false)) {
+        throw badRequest('You cannot remove your own owner role or deactivate yourself', {
+          [input.role ? 'role' : 'active']: 'Not for your own account',
+        });
+      }
+      const patch: Record<string, unknown> = { ...input };
+      if (input.active === false || (input.role && input.role !== before.role)) {
+        patch.sessionVersion = before.sessionVersion + 1;
+      }
+      await users.update(actor.studioId, id, patch);
+      const after = (await users.get(actor.studioId, id))!;
+      await audit.record(actor, input.active === false ? 'deactivate' : 'update', 'user', id,
+        { role: before.role, active: before.active }, { role: after.role, active: after.active });
+      return after;
+    },
+  };
+}

@@ -1,0 +1,4 @@
+export * from './types';
+export * from './polygon';
+export * from './bezier';
+export * from './polyline';

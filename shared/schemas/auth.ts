@@ -1,0 +1,50 @@
+import { z } from 'zod';
+import { ROLES } from '../auth/permissions';
+import { currencyCode } from './common';
+
+export const loginInput = z.object({
+  email: z.string().trim().toLowerCase().min(1, 'Email is required').max(200),
+  password: z.string().min(1, 'Password is required').max(200),
+});
+export type LoginInput = z.infer<typeof loginInput>;
+
+export const pinLoginInput = z.object({
+  email: z.string().trim().toLowerCase().min(1, 'Email is required').max(200),
+  pin: z.string().regex(/^\d{4,6}$/, 'PIN is 4 to 6 digits'),
+});
+export type PinLoginInput = z.infer<typeof pinLoginInput>;
+
+export const passwordRule = z
+  .string()
+  .min(10, 'At least 10 characters')
+  .max(200, 'At most 200 characters');
+
+export const changePasswordInput = z.object({
+  currentPassword: z.string().min(1, 'Current password is required').max(200),
+  newPassword: passwordRule,
+});
+export type ChangePasswordInput = z.infer<typeof changePasswordInput>;
+
+export const createStudioInput = z.object({
+  studioName: z.string().trim().min(2, 'Studio name is required').max(120),
+  currency: currencyCode,
+  unitSystem: z.enum(['metric', 'imperial']),
+  ownerName: z.string().trim().min(1, 'Your name is required').max(120),
+  email: z.string().trim().toLowerCase().email('Enter a valid email').max(200),
+  password: passwordRule,
+});
+export type CreateStudioInput = z.infer<typeof createStudioInput>;
+
+export const userSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+});
+export type UserDto = z.infer<typeof userSchema> & {
+  studioId: number;
+  studioName: string;
+  currency: string;
+  unitSystem: 'metric' | 'imperial';
+  mustChangePassword: boolean;
+};

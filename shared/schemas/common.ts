@@ -1,0 +1,16 @@
+import { z } from 'zod';
+
+export const idParam = z.object({ id: z.coerce.number().int().positive() });
+export const currencyCode = z
+  .string()
+  .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code, e.g. KES')
+  .refine((c) => {
+    try {
+      return Intl.supportedValuesOf('currency').includes(c);
+    } catch {
+      return true;
+    }
+  }, 'Not an ISO 4217 currency code');
+export const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date as YYYY-MM-DD');
+export const sizeLabel = z.string().trim().min(1, 'Size label is required').max(12, 'At most 12 characters');
+export const safeText = (max: number) => z.string().trim().max(max, `At most ${max} characters`);

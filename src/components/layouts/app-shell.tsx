@@ -1,0 +1,92 @@
+import { useState, type ComponentType, type SVGProps } from 'react';
+import { NavLink, Outlet, useNavigate } from 'react-router';
+import { can, ROLE_LABELS, type Permission } from '@shared/auth/permissions';
+import { paths } from '@/config/paths';
+import { useLogout, useMe } from '@/lib/auth';
+import { IconBatch, IconDress, IconHome, IconMenu, IconOut, IconPeople, IconSettings } from '../ui/icons';
+import { Logo } from '../ui/logo';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  icon: ComponentType<SVGProps<SVGSVGElement>>;
+  permission?: Permission;
+}
+
+/** Feature areas register their entries here, in menu order. */
+export const NAV_ITEMS: NavItem[] = [
+  { to: paths.home.getHref(), label: 'Today', icon: IconHome },
+  { to: paths.styles.getHref(), label: 'Styles', icon: IconDress, permission: 'styles:write' },
+  { to: paths.batches.getHref(), label: 'Batches', icon: IconBatch, permission: 'batches:write' },
+  { to: paths.people.getHref(), label: 'People', icon: IconPeople, permission: 'people:manage' },
+  { to: paths.settings.getHref(), label: 'Studio', icon: IconSettings, permission: 'studio:manage' },
+];
+
+export function AppShell() {
+  const { data: me } = useMe();
+  const logout = useLogout();
+  const navigate = useNavigate();
+  const [open, setOpen] = useState(false);
+  const items = NAV_ITEMS.filter((i) => !i.permission || can(me?.role, i.permission));
+
+  const links = (
+    <nav aria-label="Main" className="flex flex-col gap-1">
+      {items.map((i) => (
+        <NavLink
+          key={i.to}
+          to={i.to}
+          end={i.to === '/'}
+          onClick={() => setOpen(false)}
+          className={({ isActive }) =>
+            `flex items-center gap-3 rounded-lg px-3 py-2 text-sm font-medium ${
+              isActive ? 'bg-calico-50 text-thread-800' : 'text-calico-100 hover:bg-thread-800'
+            }`
+          }
+        >
+          <i.icon /> {i.label}
+        </NavLink>
+      ))}
+    </nav>
+  );
+
+  const handleSignOut = async () => {
+    await logout.mutateAsync();
+    navigate(paths.signIn.getHref());
+  };
+
+  return (
+    <div className="min-h-screen md:flex">
+      <header className="flex items-center justify-between bg-thread-700 px-4 py-3 md:hidden">
+        <span className="rounded-lg bg-calico-50 px-2 py-1"><Logo size={24} /></span>
+        <button type="button" aria-label="Menu" className="text-calico-50" onClick={() => setOpen((o) => !o)}>
+          <IconMenu />
+        </button>
+      </header>
+      <aside
+        className={`${open ? 'block' : 'hidden'} bg-thread-700 px-3 py-4 md:flex md:w-60 md:flex-col md:justify-between md:min-h-screen`}
+      >
+        <div>
+          <div className="mb-6 hidden rounded-lg bg-calico-50 px-3 py-2 md:block"><Logo /></div>
+          {links}
+        </div>
+        <div className="mt-6 border-t border-thread-600 pt-4 text-sm text-calico-100">
+          <p className="font-medium">{me?.name}</p>
+          <p className="text-xs opacity-80">
+            {me ? ROLE_LABELS[me.role] : ''} · {me?.studioName}
+          </p>
+          <div className="mt-3 flex gap-3">
+            <NavLink to={paths.account.getHref()} className="underline" onClick={() => setOpen(false)}>
+              Account
+            </NavLink>
+            <button type="button" className="flex items-center gap-1 underline" onClick={handleSignOut}>
+              <IconOut width={16} height={16} /> Sign out
+            </button>
+          </div>
+        </div>
+      </aside>
+      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,111 @@
+import {
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type SortingState,
+} from '@tanstack/react-table';
+import { useSearchParams } from 'react-router';
+
+/**
+ * The one table of Seamrun, over TanStack Table. Sort and filter live in the URL query string
+ * (?sort=col.desc&q=text) so links and reloads keep them.
+ */
+export function DataTable<T>({
+  data,
+  columns,
+  filterPlaceholder = 'Filter…',
+  onRowClick,
+  empty = 'Nothing here yet.',
+}: {
+  data: T[];
+  columns: ColumnDef<T, any>[];
+  filterPlaceholder?: string;
+  onRowClick?: (row: T) => void;
+  empty?: string;
+}) {
+  const [params, setParams] = useSearchParams();
+  const q = params.get('q') ?? '';
+  const sortParam = params.get('sort');
+  const sorting: SortingState = sortParam
+    ? [{ id: sortParam.split('.')[0], desc: sortParam.endsWith('.desc') }]
+    : [];
+  const table = useReactTable({
+    data,
+    columns,
+    state: { sorting, globalFilter: q },
+    onSortingChange: (updater) => {
+      const next = typeof updater === 'function' ? updater(sorting) : updater;
+      const p = new URLSearchParams(params);
+      if (next[0]) p.set('sort', `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}`);
+      else p.delete('sort');
+      setParams(p, { replace: true });
+    },
+    onGlobalFilterChange: (value: string) => {
+      const p = new URLSearchParams(params);
+      if (value) p.set('q', value);
+      else p.delete('q');
+      setParams(p, { replace: true });
+    },
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+  return (
+    <div>
+      <input
+        aria-label="Filter rows"
+        className="field-input mb-3 max-w-xs"
+        placeholder={filterPlaceholder}
+        value={q}
+        onChange={(e) => table.setGlobalFilter(e.target.value)}
+      />
+      <div className="overflow-x-auto rounded-card border border-calico-200 bg-white">
+        <table className="min-w-full text-sm">
+          <thead className="bg-thread-700 text-left text-calico-50">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => (
+                  <th key={h.id} className="px-3 py-2 font-medium">
+                    {h.column.getCanSort() ? (
+                      <button type="button" className="flex items-center gap-1" onClick={h.column.getToggleSortingHandler()}>
+                        {flexRender(h.column.columnDef.header, h.getContext())}
+                        <span aria-hidden>{{ asc: '▲', desc: '▼' }[h.column.getIsSorted() as string] ?? '·'}</span>
+                      </button>
+                    ) : (
+                      flexRender(h.column.columnDef.header, h.getContext())
+                    )}
+                  </th>
+                ))}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr
+                key={row.id}
+                className={`border-t border-calico-200 odd:bg-calico-50 ${onRowClick ? 'cursor-pointer hover:bg-thread-700/5' : ''}`}
+                onClick={onRowClick ? () => onRowClick(row.original) : undefined}
+              >
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-3 py-2 align-top">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+            {table.getRowModel().rows.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-3 py-6 text-center text-ink-600">
+                  {empty}
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

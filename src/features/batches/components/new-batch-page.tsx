@@ -1,0 +1,93 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { addDays, format } from 'date-fns';
+import { useMemo, useState } from 'react';
+import { useNavigate } from 'react-router';
+import { createBatchInput } from '@shared/schemas/batches';
+import { Field } from '@/components/ui/form';
+import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { styleQueries } from '@/features/styles/api/style-queries';
+import { useCreateBatch } from '../api/batch-queries';
+
+export function NewBatchPage() {
+  const { data: styles } = useSuspenseQuery(styleQueries.list());
+  const navigate = useNavigate();
+  const create = useCreateBatch();
+  const [styleId, setStyleId] = useState<number>(styles[0]?.id ?? 0);
+  const style = styles.find((s) => s.id === styleId);
+  const [qty, setQty] = useState<Record<string, string>>({});
+  const [dueDate, setDueDate] = useState(format(addDays(new Date(), 21), 'yyyy-MM-dd'));
+  const [notes, setNotes] = useState('');
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
+
+  const quantities = useMemo(
+    () => Object.fromEntries((style?.sizeRun ?? []).map((s) => [s, qty[s] === undefined || qty[s] === '' ? 0 : Number(qty[s])])),
+    [style, qty],
+  );
+  const total = Object.values(quantities).reduce((a, b) => a + (Number.isFinite(b) ? b : 0), 0);
+
+  const handleSubmit = async (e: React.FormEvent) => {
+    e.preventDefault();
+    const parsed = createBatchInput.safeParse({ styleId, quantities, dueDate, notes });
+    if (!parsed.success) {
+      setFieldErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.') || 'form', i.message])));
+      return;
+    }
+    setFieldErrors({});
+    try {
+      const b = await create.mutateAsync(parsed.data);
+      navigate(paths.batch.getHref(b.id));
+    } catch (err) {
+      if (err instanceof ApiError) setFieldErrors(err.fields);
+    }
+  };
+
+  return (
+    <>
+      <PageHeader title="New batch" subtitle="Pick a style, enter how many of each size to make, and when it must ship." />
+      <Card>
+        <form onSubmit={handleSubmit} className="max-w-2xl space-y-5" noValidate>
+          <div>
+            <label className="field-label" htmlFor="styleId">Style</label>
+            <select id="styleId" className="field-input" value={styleId} onChange={(e) => setStyleId(Number(e.target.value))}>
+              {styles.map((s) => <option key={s.id} value={s.id}>{s.code} · {s.name}</option>)}
+            </select>
+          </div>
+          <fieldset>
+            <legend className="field-label">Quantity per size</legend>
+            <div className="grid grid-cols-3 gap-3 sm:grid-cols-6">
+              {style?.sizeRun.map((s) => (
+                <div key={s}>
+                  <label className="block text-center text-xs font-semibold text-thread-800" htmlFor={`qty-${s}`}>{s}</label>
+                  <input
+                    id={`qty-${s}`}
+                    aria-label={`Quantity ${s}`}
+                    inputMode="numeric"
+                    className="field-input text-center"
+                    value={qty[s] ?? ''}
+                    placeholder="0"
+                    onChange={(e) => setQty({ ...qty, [s]: e.target.value.replace(/[^\d]/g, '') })}
+                  />
+                  {fieldErrors[`quantities.${s}`] ? <p className="field-error">{fieldErrors[`quantities.${s}`]}</p> : null}
+                </div>
+              ))}
+              <div className="flex flex-col items-center justify-end rounded-lg bg-thread-700 px-2 py-2 text-calico-50">
+                <span className="text-xs">Total</span>
+                <output aria-label="Total garments" className="text-xl font-bold">{total}</output>
+              </div>
+            </div>
+            {fieldErrors.quantities ? <p className="field-error">{fieldErrors.quantities}</p> : null}
+          </fieldset>
+          <Field label="Due date" type="date" name="dueDate" value={dueDate} onChange={(e) => setDueDate(e.target.value)} error={fieldErrors.dueDate} />
+          <div>
+            <label className="field-label" htmlFor="notes">Notes</label>
+            <textarea id="notes" className="field-input" rows={2} value={notes} onChange={(e) => setNotes(e.target.value)} />
+          </div>
+          <ErrorNote error={create.error} />
+          <button className="btn-primary" type="submit" disabled={create.isPending}>Create batch</button>
+        </form>
+      </Card>
+    </>
+  );
+}

@@ -1,0 +1,49 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { differenceInCalendarDays, parseISO } from 'date-fns';
+import { Link } from 'react-router';
+import { Badge, Card, PageHeader } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { formatDate } from '@/lib/format';
+import { batchQueries } from '@/features/batches/api/batch-queries';
+
+export function OwnerHome({ name }: { name: string }) {
+  const { data: batches } = useSuspenseQuery(batchQueries.list());
+  const open = batches.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled');
+  const today = new Date();
+  const attention = open
+    .map((b) => ({ b, days: differenceInCalendarDays(parseISO(b.dueDate), today) }))
+    .filter(({ b, days }) => days <= 7 || b.status === 'planned');
+  return (
+    <>
+      <PageHeader title={`Good day, ${name.split(' ')[0]}`} subtitle="Batches in progress and what needs you today." actions={<Link className="btn-primary" to={paths.newBatch.getHref()}>Plan a batch</Link>} />
+      <div className="grid gap-5 lg:grid-cols-3">
+        <Card title="In progress" className="lg:col-span-2">
+          {open.length === 0 ? <p className="text-sm text-ink-600">No open batches.</p> : null}
+          <ul className="divide-y divide-calico-200">
+            {open.map((b) => (
+              <li key={b.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
+                <Link to={paths.batch.getHref(b.id)} className="font-medium text-thread-800 underline-offset-2 hover:underline">
+                  {b.code} · {b.styleName}
+                </Link>
+                <span className="text-sm text-ink-600">{b.total} garments · due {formatDate(b.dueDate)}</span>
+                <Badge tone="blue">{b.status}</Badge>
+              </li>
+            ))}
+          </ul>
+        </Card>
+        <Card title="Needs attention">
+          {attention.length === 0 ? <p className="text-sm text-ink-600">Nothing pressing.</p> : null}
+          <ul className="space-y-2 text-sm">
+            {attention.map(({ b, days }) => (
+              <li key={b.id} className="rounded-lg bg-calico-50 px-3 py-2">
+                <span className="font-medium">{b.code}</span>{' '}
+                {b.status === 'planned' ? 'is not cut yet' : 'is in ' + b.status}
+                {days <= 7 ? <> — <span className="text-madder-700">due in {days} days</span></> : <> — due in {days} days</>}
+              </li>
+            ))}
+          </ul>
+        </Card>
+      </div>
+    </>
+  );
+}

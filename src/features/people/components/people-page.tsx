@@ -1,0 +1,96 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { createColumnHelper } from '@tanstack/react-table';
+import { useState } from 'react';
+import { ROLE_LABELS, ROLES, type Role } from '@shared/auth/permissions';
+import { createPersonInput, type PersonDto } from '@shared/schemas/people';
+import { DataTable } from '@/components/ui/data-table';
+import { Field } from '@/components/ui/form';
+import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
+import { useMe } from '@/lib/auth';
+import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
+
+const c = createColumnHelper<PersonDto>();
+
+function RoleCell({ person }: { person: PersonDto }) {
+  const update = useUpdatePerson();
+  const me = useMe().data;
+  return (
+    <select
+      aria-label={`Role of ${person.name}`}
+      className="rounded border border-calico-300 bg-white px-2 py-1 text-sm"
+      value={person.role}
+      disabled={person.id === me?.id}
+      onChange={(e) => update.mutate({ id: person.id, role: e.target.value as Role })}
+    >
+      {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+    </select>
+  );
+}
+
+function ActiveCell({ person }: { person: PersonDto }) {
+  const update = useUpdatePerson();
+  const me = useMe().data;
+  if (person.id === me?.id) return <Badge tone="teal">you</Badge>;
+  return (
+    <button type="button" className="text-sm underline" onClick={() => update.mutate({ id: person.id, active: !person.active })}>
+      {person.active ? 'Deactivate' : 'Reactivate'}
+    </button>
+  );
+}
+
+const columns = [
+  c.accessor('name', { header: 'Name' }),
+  c.accessor('email', { header: 'Sign-in' }),
+  c.accessor('role', { header: 'Role', cell: (i) => <RoleCell person={i.row.original} /> }),
+  c.accessor('active', { header: 'Status', cell: (i) => (i.getValue() ? <Badge tone="teal">active</Badge> : <Badge tone="red">inactive</Badge>) }),
+  c.accessor('hasPin', { header: 'PIN', cell: (i) => (i.getValue() ? 'yes' : '—') }),
+  c.display({ id: 'actions', header: '', cell: (i) => <ActiveCell person={i.row.original} /> }),
+];
+
+function AddPersonForm() {
+  const add = useAddPerson();
+  const [v, setV] = useState({ name: '', email: '', role: 'machinist' as Role, temporaryPassword: '', pin: '' });
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const handleSubmit = async (e: React.FormEvent) => {
+    e.preventDefault();
+    const input = { ...v, temporaryPassword: v.temporaryPassword || undefined, pin: v.pin || undefined };
+    const parsed = createPersonInput.safeParse(input);
+    if (!parsed.success) return setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), i.message])));
+    try {
+      await add.mutateAsync(parsed.data);
+      setErrors({});
+      setV({ name: '', email: '', role: 'machinist', temporaryPassword: '', pin: '' });
+    } catch (err) {
+      if (err instanceof ApiError) setErrors(err.fields);
+    }
+  };
+  const set = (k: keyof typeof v) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setV({ ...v, [k]: e.target.value });
+  return (
+    <form onSubmit={handleSubmit} className="grid gap-3 sm:grid-cols-3" noValidate>
+      <Field label="Name" name="name" value={v.name} onChange={set('name')} error={errors.name} />
+      <Field label="Email or username" name="email" value={v.email} onChange={set('email')} error={errors.email} />
+      <div>
+        <label className="field-label" htmlFor="new-role">Role</label>
+        <select id="new-role" className="field-input" value={v.role} onChange={set('role')}>
+          {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+        </select>
+      </div>
+      <Field label="Temporary password" name="temporaryPassword" type="text" value={v.temporaryPassword} onChange={set('temporaryPassword')} error={errors.temporaryPassword} hint="They change it at first sign-in" />
+      <Field label="Floor PIN (4–6 digits)" name="pin" inputMode="numeric" value={v.pin} onChange={set('pin')} error={errors.pin} hint="For the shared floor tablet" />
+      <div className="flex items-end"><button className="btn-primary" type="submit" disabled={add.isPending}>Add person</button></div>
+      <div className="sm:col-span-3"><ErrorNote error={add.error && !(add.error instanceof ApiError && Object.keys(add.error.fields).length) ? add.error : null} /></div>
+    </form>
+  );
+}
+
+export function PeoplePage() {
+  const { data } = useSuspenseQuery(peopleQueries.list());
+  return (
+    <>
+      <PageHeader title="People" subtitle="Your cutter, machinists and finishers, and what each may do." />
+      <Card title="Add a person" className="mb-5"><AddPersonForm /></Card>
+      <DataTable data={data} columns={columns} filterPlaceholder="Filter people…" />
+    </>
+  );
+}

@@ -1,0 +1,18 @@
+import { queryOptions, useMutation } from '@tanstack/react-query';
+import type { CreateStyleInput, StyleDto } from '@shared/schemas/styles';
+import { api } from '@/lib/api-client';
+import { queryClient } from '@/lib/query-client';
+
+export const styleQueries = {
+  all: () => ({ queryKey: ['styles'] as const }),
+  list: () => queryOptions({ queryKey: ['styles', 'list'], queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles }),
+  detail: (id: number) =>
+    queryOptions({ queryKey: ['styles', 'detail', id], queryFn: async () => (await api.get<{ style: StyleDto }>(`/styles/${id}`)).style }),
+};
+
+export const useSaveStyle = (id?: number) =>
+  useMutation({
+    mutationFn: async (v: CreateStyleInput) =>
+      (id ? await api.put<{ style: StyleDto }>(`/styles/${id}`, v) : await api.post<{ style: StyleDto }>('/styles', v)).style,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: styleQueries.all().queryKey }),
+  });

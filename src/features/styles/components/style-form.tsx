@@ -1,0 +1,54 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { createStyleInput, STYLE_STATUSES, type CreateStyleInput, type StyleDto } from '@shared/schemas/styles';
+import { Field } from '@/components/ui/form';
+import { ErrorNote } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
+import { useSaveStyle } from '../api/style-queries';
+
+type FormValues = z.input<typeof createStyleInput>;
+
+export function StyleForm({ style, onSaved }: { style?: StyleDto; onSaved: (s: StyleDto) => void }) {
+  const save = useSaveStyle(style?.id);
+  const [sizesText, setSizesText] = useState((style?.sizeRun ?? ['XS', 'S', 'M', 'L', 'XL']).join(', '));
+  const form = useForm<FormValues>({
+    resolver: zodResolver(createStyleInput),
+    defaultValues: style ?? { code: '', name: '', description: '', sizeRun: ['XS', 'S', 'M', 'L', 'XL'], baseSize: 'M', status: 'draft' },
+  });
+  const e = form.formState.errors;
+  const serverFields = save.error instanceof ApiError ? save.error.fields : {};
+  const onSubmit = form.handleSubmit(async (v) => onSaved(await save.mutateAsync(v as CreateStyleInput)));
+  return (
+    <form onSubmit={onSubmit} className="grid max-w-2xl gap-4 sm:grid-cols-2" noValidate>
+      <Field label="Code" {...form.register('code')} error={e.code?.message ?? serverFields.code} />
+      <Field label="Name" {...form.register('name')} error={e.name?.message} />
+      <div className="sm:col-span-2">
+        <label className="field-label" htmlFor="description">Description</label>
+        <textarea id="description" rows={3} className="field-input" {...form.register('description')} />
+      </div>
+      <Field
+        label="Size run (in order, comma separated)"
+        name="sizeRunText"
+        value={sizesText}
+        onChange={(ev) => {
+          setSizesText(ev.target.value);
+          form.setValue('sizeRun', ev.target.value.split(',').map((s) => s.trim()).filter(Boolean), { shouldValidate: true });
+        }}
+        error={e.sizeRun?.message ?? e.sizeRun?.root?.message ?? (Array.isArray(e.sizeRun) ? 'Check each size label' : undefined)}
+      />
+      <Field label="Base size" {...form.register('baseSize')} error={e.baseSize?.message} />
+      <div>
+        <label className="field-label" htmlFor="status">Status</label>
+        <select id="status" className="field-input" {...form.register('status')}>
+          {STYLE_STATUSES.map((s) => <option key={s} value={s}>{s}</option>)}
+        </select>
+      </div>
+      <div className="sm:col-span-2 space-y-3">
+        <ErrorNote error={save.error} />
+        <button type="submit" className="btn-primary" disabled={save.isPending}>Save style</button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,63 @@
+import { fileURLToPath } from 'node:url';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+import { defineConfig } from 'vitest/config';
+
+const dir = (p: string) => fileURLToPath(new URL(p, import.meta.url));
+
+export const alias = {
+  '@shared': dir('./shared'),
+  '@grading': dir('./grading/index.ts'),
+  '@planning': dir('./planning/index.ts'),
+  '@exports': dir('./exports'),
+  '@server': dir('./server'),
+  '@tests': dir('./tests'),
+  '@': dir('./src'),
+};
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias },
+  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  server: {
+    port: 5173,
+    proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },
+  },
+  test: {
+    env: { TZ: 'UTC', NODE_ENV: 'test' },
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: 'unit',
+          environment: 'node',
+          include: ['{shared,grading,planning,exports,server,src}/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/fixtures/setup-unit.ts'],
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'integration',
+          environment: 'node',
+          include: ['tests/integration/**/*.test.ts'],
+          setupFiles: ['tests/fixtures/setup-integration.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/e2e/global-setup.ts'],
+          testTimeout: 120_000,
+          hookTimeout: 180_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
