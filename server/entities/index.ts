@@ -1,11 +1,54 @@
+import { AttendanceEntity } from './attendance.entity';
 import { AuditEntryEntity } from './audit-entry.entity';
 import { BatchEntity } from './batch.entity';
+import { BundleEntity } from './bundle.entity';
+import { CostingSettingsEntity } from './costing-settings.entity';
+import { CutPlanEntity } from './cut-plan.entity';
+import { FabricEntity } from './fabric.entity';
+import { GradingSetEntity } from './grading-set.entity';
+import { LayEntity } from './lay.entity';
+import { MailMessageEntity } from './mail-message.entity';
+import { MarkerEntity } from './marker.entity';
+import { OperationEntity } from './operation.entity';
+import { PayPeriodEntity } from './pay-period.entity';
+import { PayoutEntity } from './payout.entity';
+import { PurchaseOrderEntity } from './purchase-order.entity';
+import { RollEntity } from './roll.entity';
 import { SessionEntity } from './session.entity';
 import { StudioEntity } from './studio.entity';
 import { StyleEntity } from './style.entity';
+import { SupplierEntity } from './supplier.entity';
+import { TrimEntity } from './trim.entity';
+import { UploadEntity } from './upload.entity';
 import { UserEntity } from './user.entity';
+import { WorkLogEntity } from './work-log.entity';
 
-export { AuditEntryEntity, BatchEntity, SessionEntity, StudioEntity, StyleEntity, UserEntity };
+export {
+  AttendanceEntity,
+  AuditEntryEntity,
+  BatchEntity,
+  BundleEntity,
+  CostingSettingsEntity,
+  CutPlanEntity,
+  FabricEntity,
+  GradingSetEntity,
+  LayEntity,
+  MailMessageEntity,
+  MarkerEntity,
+  OperationEntity,
+  PayPeriodEntity,
+  PayoutEntity,
+  PurchaseOrderEntity,
+  RollEntity,
+  SessionEntity,
+  StudioEntity,
+  StyleEntity,
+  SupplierEntity,
+  TrimEntity,
+  UploadEntity,
+  UserEntity,
+  WorkLogEntity,
+};
 
 /** Every entity the data source knows. */
 export const entities = [
@@ -15,4 +58,22 @@ export const entities = [
   BatchEntity,
   AuditEntryEntity,
   SessionEntity,
+  FabricEntity,
+  RollEntity,
+  GradingSetEntity,
+  MarkerEntity,
+  CutPlanEntity,
+  LayEntity,
+  BundleEntity,
+  OperationEntity,
+  WorkLogEntity,
+  AttendanceEntity,
+  PayPeriodEntity,
+  PayoutEntity,
+  SupplierEntity,
+  TrimEntity,
+  CostingSettingsEntity,
+  PurchaseOrderEntity,
+  MailMessageEntity,
+  UploadEntity,
 ];

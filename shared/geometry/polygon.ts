@@ -1,4 +1,4 @@
-import type { BBox, Point, Polygon } from './types';
+import type { BBox, Polygon } from './types';
 
 /**
  * Signed area by the shoelace formula: positive for counter-clockwise rings in a y-up frame.

@@ -1,0 +1,68 @@
+import js from '@eslint/js';
+import importX from 'eslint-plugin-import-x';
+import reactHooks from 'eslint-plugin-react-hooks';
+import tseslint from 'typescript-eslint';
+
+const pureCoreRules = {
+  'no-restricted-imports': [
+    'error',
+    {
+      patterns: [
+        { group: ['node:*', 'fs', 'path', 'child_process', 'worker_threads'], message: 'Pure cores do no I/O.' },
+        { group: ['express', 'typeorm', 'react', 'react-dom', 'better-sqlite3'], message: 'Pure cores stay framework-free.' },
+      ],
+    },
+  ],
+  'no-restricted-globals': ['error', { name: 'process', message: 'Pass configuration in as arguments.' }],
+  'no-restricted-properties': [
+    'error',
+    { object: 'Date', property: 'now', message: 'Take `now` as an argument.' },
+    { object: 'Math', property: 'random', message: 'Take a seeded rng as an argument.' },
+  ],
+};
+
+export default tseslint.config(
+  { ignores: ['**/*.d.ts', 'dist/**', 'node_modules/**', 'data/**', 'coverage/**', 'tests/e2e/screenshots/**', '*.mjs'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    plugins: { 'import-x': importX },
+    rules: {
+      '@typescript-eslint/no-explicit-any': 'off',
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unsafe-function-type': 'off',
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            { target: './shared/geometry', from: ['./shared/schemas', './shared/auth', './shared/types', './grading', './planning', './server', './src', './exports'], message: 'The geometry kernel is the bottom layer.' },
+            { target: './shared', from: ['./grading', './planning', './server', './src', './exports'], message: 'shared/ is isomorphic and imports no app layer.' },
+            { target: './grading', from: ['./planning', './server', './src', './exports'], message: 'grading imports only shared.' },
+            { target: './planning', from: ['./server', './src', './exports'], message: 'planning imports shared and grading/index.ts only.' },
+            { target: './exports', from: ['./server', './src'], message: 'exports is plain data in, bytes out.' },
+            { target: './src', from: ['./server', './exports'], message: 'The client never imports server or exports.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: { 'react-hooks/rules-of-hooks': 'error' },
+  },
+  {
+    files: ['grading/**/*.ts', 'planning/**/*.ts', 'shared/**/*.ts'],
+    ignores: ['**/*.test.ts'],
+    rules: pureCoreRules,
+  },
+  {
+    files: ['server/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['typeorm'], importNames: ['Repository'], message: 'Query through *.repository.ts.' }] },
+      ],
+    },
+  },
+);

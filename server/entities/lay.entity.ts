@@ -1,0 +1,64 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+export interface LayRollLine {
+  rollId: number;
+  label: string;
+  shadeLot: string;
+  plies: number;
+  expectedRemnantMm: number;
+  actualPlies?: number;
+  actualRemnantMm?: number;
+  note?: string;
+}
+
+@Entity('lays')
+@Index(['studioId', 'cutPlanId', 'seq'], { unique: true })
+export class LayEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @Column({ type: 'integer' })
+  cutPlanId: number;
+
+  @Column({ type: 'integer' })
+  batchId: number;
+
+  @Column({ type: 'integer' })
+  seq: number;
+
+  @Column({ type: 'simple-json' })
+  ratio: Record<string, number>;
+
+  @Column({ type: 'integer' })
+  plies: number;
+
+  @Column({ type: 'real' })
+  markerLengthMm: number;
+
+  @Column({ type: 'real' })
+  endAllowanceMm: number;
+
+  @Column({ type: 'integer', nullable: true })
+  markerId: number | null;
+
+  @Column({ type: 'varchar', length: 24 })
+  spreadingMode: string;
+
+  @Column({ type: 'simple-json' })
+  rolls: LayRollLine[];
+
+  @Column({ type: 'varchar', length: 12, default: 'planned' })
+  status: 'planned' | 'cut';
+
+  @Column({ type: 'text', default: '' })
+  flaws: string;
+
+  @Column({ type: 'datetime', nullable: true })
+  cutAt: Date | null;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}

@@ -1,0 +1,58 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+export type MarkerStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+
+@Entity('markers')
+@Index(['studioId', 'inputHash'])
+export class MarkerEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @Column({ type: 'integer' })
+  styleId: number;
+
+  @Column({ type: 'integer', nullable: true })
+  batchId: number | null;
+
+  @Column({ type: 'integer', nullable: true })
+  fabricId: number | null;
+
+  /** Size → garments in this marker. */
+  @Column({ type: 'simple-json' })
+  ratio: Record<string, number>;
+
+  @Column({ type: 'real' })
+  widthMm: number;
+
+  /** SHA-256 of the engine input: an unchanged marker is never recomputed. */
+  @Column({ type: 'varchar', length: 64 })
+  inputHash: string;
+
+  @Column({ type: 'varchar', length: 12, default: 'queued' })
+  status: MarkerStatus;
+
+  @Column({ type: 'real', nullable: true })
+  lengthMm: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  utilisation: number | null;
+
+  @Column({ type: 'real', default: 0 })
+  elapsedMs: number;
+
+  /** The engine's input (pieces, quantities) and its placements, for drawing and export. */
+  @Column({ type: 'simple-json', nullable: true })
+  input: unknown;
+
+  @Column({ type: 'simple-json', nullable: true })
+  result: unknown;
+
+  @Column({ type: 'text', default: '' })
+  error: string;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}

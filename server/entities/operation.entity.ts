@@ -1,0 +1,41 @@
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity('operations')
+@Index(['studioId', 'styleId', 'seq'])
+export class OperationEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @Column({ type: 'integer' })
+  styleId: number;
+
+  @Column({ type: 'integer' })
+  seq: number;
+
+  /** Short code within the style, e.g. OP05. */
+  @Column({ type: 'varchar', length: 12 })
+  code: string;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 12 })
+  section: 'cutting' | 'sewing' | 'finishing';
+
+  @Column({ type: 'varchar', length: 24 })
+  machineType: string;
+
+  /** Standard allowed minutes per garment. */
+  @Column({ type: 'real' })
+  sam: number;
+
+  /** Codes of operations that must be done first. */
+  @Column({ type: 'simple-json' })
+  predecessors: string[];
+
+  @Column({ type: 'integer', nullable: true })
+  pieceRateMinor: number | null;
+}

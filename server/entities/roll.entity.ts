@@ -1,0 +1,44 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { FabricEntity } from './fabric.entity';
+
+@Entity('rolls')
+@Index(['studioId', 'label'], { unique: true })
+export class RollEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @Column({ type: 'integer' })
+  fabricId: number;
+
+  @ManyToOne(() => FabricEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'fabricId' })
+  fabric?: FabricEntity;
+
+  @Column({ type: 'varchar', length: 40 })
+  label: string;
+
+  @Column({ type: 'real' })
+  lengthMm: number;
+
+  @Column({ type: 'real' })
+  widthMm: number;
+
+  @Column({ type: 'varchar', length: 40 })
+  shadeLot: string;
+
+  @Column({ type: 'varchar', length: 10 })
+  receivedDate: string;
+
+  @Column({ type: 'real' })
+  remainingMm: number;
+
+  /** A short end kept as stock. */
+  @Column({ type: 'boolean', default: false })
+  isRemnant: boolean;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}

@@ -1,0 +1,50 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+/** One operation done on one bundle. Unique per bundle, operation and attempt: logged once. */
+@Entity('work_logs')
+@Index(['bundleId', 'operationId', 'attempt'], { unique: true })
+@Index(['studioId', 'userId', 'createdAt'])
+export class WorkLogEntity {
+  @PrimaryGeneratedColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'integer' })
+  studioId: number;
+
+  @Column({ type: 'integer' })
+  bundleId: number;
+
+  @Column({ type: 'integer' })
+  operationId: number;
+
+  /** 0 for the first time; rework after a failed check counts up and is not paid again. */
+  @Column({ type: 'integer', default: 0 })
+  attempt: number;
+
+  @Column({ type: 'integer' })
+  userId: number;
+
+  @Column({ type: 'integer' })
+  pieces: number;
+
+  @Column({ type: 'real' })
+  earnedMinutes: number;
+
+  @Column({ type: 'integer', default: 0 })
+  payMinor: number;
+
+  /** Sent by the device so a retried log is never doubled. */
+  @Index({ unique: true })
+  @Column({ type: 'varchar', length: 80 })
+  idempotencyKey: string;
+
+  /** pass | fail for quality checks; empty otherwise. */
+  @Column({ type: 'varchar', length: 8, default: '' })
+  outcome: string;
+
+  @Column({ type: 'varchar', length: 200, default: '' })
+  defect: string;
+
+  @CreateDateColumn({ type: 'datetime' })
+  createdAt: Date;
+}
