@@ -22,6 +22,8 @@ import { createStyleRepository } from './modules/styles/style.repository';
 import { styleRoutes } from './modules/styles/style.routes';
 import { createUserRepository } from './modules/users/user.repository';
 import { userRoutes } from './modules/users/user.routes';
+import { FEATURE_MODULES } from './modules';
+import type { ModuleContext } from './modules/module';
 import { createUserService } from './modules/users/user.service';
 
 export interface AppDeps {
@@ -31,6 +33,8 @@ export interface AppDeps {
   now?: () => Date;
   /** Folder of the built client; served with an SPA fallback when present. */
   clientDir?: string;
+  /** Filled by createApp so the caller can start and stop the modules' services. */
+  moduleContext?: { current?: ModuleContext };
 }
 
 /** Build the Express app. Never listens: server/index.ts does, tests use supertest. */
@@ -101,6 +105,9 @@ export function createApp(deps: AppDeps): Express {
   api.use('/styles', styleRoutes(styles, audit));
   api.use('/batches', batchRoutes(batches, styles, audit));
   api.use('/audit', auditRoutes(audit));
+  const ctx: ModuleContext = { ds, env, audit, now, services: new Map() };
+  for (const m of FEATURE_MODULES) m.register(api, ctx);
+  if (deps.moduleContext) deps.moduleContext.current = ctx;
   api.use(notFoundHandler);
   api.use(errorHandler(env.NODE_ENV === 'development'));
   app.use('/api', api);

@@ -3,6 +3,8 @@ import type { Server } from 'node:http';
 import { openDatabase } from './db/data-source';
 import { createApp } from './app';
 import { loadEnv, type Env } from './env';
+import { FEATURE_MODULES } from './modules';
+import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 
 /** env → data source → migrations → seed → listen. */
@@ -10,15 +12,27 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
   const ds = await openDatabase(env.DATABASE_PATH);
   const seeded = env.SEED_DEMO
-    ? await seedDemoStudio(ds, { password: env.DEMO_PASSWORD, pinPrefix: env.DEMO_PIN_PREFIX, today: new Date() })
+    ? await seedDemoStudio(ds, {
+        password: env.DEMO_PASSWORD,
+        pinPrefix: env.DEMO_PIN_PREFIX,
+        today: new Date(),
+        nestingSeconds: Math.min(env.NESTING_SECONDS, 6),
+      })
     : false;
-  const app = createApp({ ds, env });
+  const holder: { current?: ModuleContext } = {};
+  const app = createApp({ ds, env, moduleContext: holder });
+  for (const m of FEATURE_MODULES) await m.start?.(holder.current!);
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.PORT;
-  return { server, ds, env, port, seeded };
+  const stop = async () => {
+    for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
+    await new Promise((r) => server.close(r));
+    if (ds.isInitialized) await ds.destroy();
+  };
+  return { server, ds, env, port, seeded, stop };
 }
 
 export function printBanner(port: number, env: Env, seeded: boolean) {

@@ -3,6 +3,15 @@ import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/auth/permissions';
 import { hashSecret } from '../auth/password';
 import { BatchEntity, StudioEntity, StyleEntity, UserEntity } from '../entities';
+import { seedCosting } from './costing.seed';
+import { seedCutting } from './cutting.seed';
+import { seedFloor } from './floor.seed';
+import { seedGrading } from './grading.seed';
+import { seedLine } from './line.seed';
+import type { SeedContext } from './seed-context';
+
+/** Area seeders in dependency order: pieces → fabric, markers, cut plan → line → floor → costing. */
+const AREA_SEEDS: ((ctx: SeedContext) => Promise<void>)[] = [seedGrading, seedCutting, seedLine, seedFloor, seedCosting];
 
 /** Our own invented demo people; none is a real person. */
 export const DEMO_PEOPLE: { email: string; name: string; role: Role; pin?: string }[] = [
@@ -24,6 +33,8 @@ export interface SeedOptions {
   password: string;
   pinPrefix: string;
   today: Date;
+  /** Budget of each seeded marker, in seconds. */
+  nestingSeconds?: number;
 }
 
 /** PIN of a demo floor worker: the prefix then their two digits, e.g. 4011. */
@@ -33,7 +44,7 @@ export const demoPin = (prefix: string, suffix: string) => `${prefix}${suffix}`;
 export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise<boolean> {
   if ((await ds.getRepository(StudioEntity).count()) > 0) return false;
   const passwordHash = await hashSecret(opts.password);
-  await ds.transaction(async (m) => {
+  const ids = await ds.transaction(async (m) => {
     const studio = await m.getRepository(StudioEntity).save({
       name: 'Tamarind Row Studio',
       currency: 'KES',
@@ -61,7 +72,7 @@ export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise
       baseSize: 'M',
       status: 'approved',
     });
-    await m.getRepository(BatchEntity).save({
+    const batch = await m.getRepository(BatchEntity).save({
       studioId: studio.id,
       styleId: style.id,
       quantities: DEMO_QUANTITIES,
@@ -69,6 +80,10 @@ export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise
       status: 'planned',
       notes: 'First ready-to-wear run of the Sable shirt dress.',
     });
+    const owner = await m.getRepository(UserEntity).findOneByOrFail({ email: DEMO_PEOPLE[0].email });
+    return { studioId: studio.id, styleId: style.id, batchId: batch.id, ownerId: owner.id };
   });
+  const ctx: SeedContext = { ds, ...ids, today: opts.today, nestingSeconds: opts.nestingSeconds ?? 4 };
+  for (const seed of AREA_SEEDS) await seed(ctx);
   return true;
 }

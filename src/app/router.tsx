@@ -17,7 +17,7 @@ import { PeoplePage } from '@/features/people/components/people-page';
 import { SettingsPage } from '@/features/studio/components/settings-page';
 import { NewStylePage, StyleDetailPage } from '@/features/styles/components/style-edit-page';
 import { StylesPage } from '@/features/styles/components/styles-page';
-import { EXTRA_ROUTES } from './extra-routes';
+import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES } from './extra-routes';
 
 function SectionError() {
   const error = useRouteError() as Error;
@@ -48,21 +48,21 @@ export const router = createBrowserRouter([
   {
     path: '/',
     loader: requireSignedIn,
-    element: <AppShell />,
+    element: <AppShell extraNav={EXTRA_NAV} />,
     errorElement: <SectionError />,
     children: [
       {
         errorElement: <SectionError />,
         element: <Suspense fallback={<Spinner />}><Outlet /></Suspense>,
         children: [
-          { index: true, element: <HomePage /> },
+          { index: true, element: <HomePage homes={EXTRA_HOMES} /> },
           { path: paths.account.path, element: <AccountPage /> },
           { path: paths.styles.path, element: <Guard permission="styles:write"><StylesPage /></Guard> },
           { path: paths.newStyle.path, element: <Guard permission="styles:write"><NewStylePage /></Guard> },
           { path: paths.style.path, element: <Guard permission="styles:write"><StyleDetailPage /></Guard> },
           { path: paths.batches.path, element: <Guard permission="batches:write"><BatchesPage /></Guard> },
           { path: paths.newBatch.path, element: <Guard permission="batches:write"><NewBatchPage /></Guard> },
-          { path: paths.batch.path, element: <Guard permission="batches:write"><BatchDetailPage /></Guard> },
+          { path: paths.batch.path, element: <Guard permission="batches:write"><BatchDetailPage panels={BATCH_PANELS} /></Guard> },
           { path: paths.people.path, element: <Guard permission="people:manage"><PeoplePage /></Guard> },
           { path: paths.settings.path, element: <Guard permission="studio:manage"><SettingsPage /></Guard> },
           ...EXTRA_ROUTES,

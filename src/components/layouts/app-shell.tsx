@@ -13,7 +13,7 @@ export interface NavItem {
   permission?: Permission;
 }
 
-/** Feature areas register their entries here, in menu order. */
+/** The foundation's menu; feature areas add theirs through extraNav. */
 export const NAV_ITEMS: NavItem[] = [
   { to: paths.home.getHref(), label: 'Today', icon: IconHome },
   { to: paths.styles.getHref(), label: 'Styles', icon: IconDress, permission: 'styles:write' },
@@ -22,12 +22,12 @@ export const NAV_ITEMS: NavItem[] = [
   { to: paths.settings.getHref(), label: 'Studio', icon: IconSettings, permission: 'studio:manage' },
 ];
 
-export function AppShell() {
+export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
   const { data: me } = useMe();
   const logout = useLogout();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
-  const items = NAV_ITEMS.filter((i) => !i.permission || can(me?.role, i.permission));
+  const items = [...NAV_ITEMS.slice(0, 3), ...extraNav, ...NAV_ITEMS.slice(3)].filter((i) => !i.permission || can(me?.role, i.permission));
 
   const links = (
     <nav aria-label="Main" className="flex flex-col gap-1">

@@ -4,9 +4,10 @@ import { Badge, Card, PageHeader, Spinner } from '@/components/ui/page';
 import { formatDate } from '@/lib/format';
 import { batchQueries } from '../api/batch-queries';
 import { batchTone } from './batch-columns';
-import { BATCH_PANELS } from './batch-panels';
+import type { ComponentType } from 'react';
+import type { BatchDto } from '@shared/schemas/batches';
 
-export function BatchDetailPage() {
+export function BatchDetailPage({ panels = [] }: { panels?: { key: string; Panel: ComponentType<{ batch: BatchDto }> }[] }) {
   const id = Number(useParams().id);
   const { data: b, isLoading } = useQuery(batchQueries.detail(id));
   if (isLoading || !b) return <Spinner />;
@@ -32,7 +33,7 @@ export function BatchDetailPage() {
         {b.notes ? <p className="mt-3 text-sm text-ink-600">{b.notes}</p> : null}
       </Card>
       <div className="mt-5 space-y-5">
-        {BATCH_PANELS.map(({ key, Panel }) => <Panel key={key} batch={b} />)}
+        {panels.map(({ key, Panel }) => <Panel key={key} batch={b} />)}
       </div>
     </>
   );

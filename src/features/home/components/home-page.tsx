@@ -4,12 +4,10 @@ import { Spinner } from '@/components/ui/page';
 import { useMe } from '@/lib/auth';
 import { OwnerHome } from './owner-home';
 
-/** Each role's own home page; areas for other roles register theirs here. */
-export const ROLE_HOMES: Partial<Record<Role, ComponentType<{ name: string }>>> = { owner: OwnerHome };
-
-export function HomePage() {
+/** Each role's own home page; other roles' homes come from their feature areas. */
+export function HomePage({ homes = {} }: { homes?: Partial<Record<Role, ComponentType<{ name: string }>>> }) {
   const me = useMe().data;
   if (!me) return <Spinner />;
-  const Home = ROLE_HOMES[me.role];
+  const Home = me.role === 'owner' ? OwnerHome : homes[me.role];
   return Home ? <Home name={me.name} /> : <Spinner />;
 }

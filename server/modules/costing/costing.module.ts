@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The costing area. */
+export const costingModule: ApiModule = {
+  name: 'costing',
+  register() {},
+};

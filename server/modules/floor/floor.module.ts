@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The floor area. */
+export const floorModule: ApiModule = {
+  name: 'floor',
+  register() {},
+};

@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The grading area. */
+export const gradingModule: ApiModule = {
+  name: 'grading',
+  register() {},
+};

@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The line area. */
+export const lineModule: ApiModule = {
+  name: 'line',
+  register() {},
+};

@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The mail area. */
+export const mailModule: ApiModule = {
+  name: 'mail',
+  register() {},
+};

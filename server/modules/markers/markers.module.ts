@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The markers area. */
+export const markersModule: ApiModule = {
+  name: 'markers',
+  register() {},
+};

@@ -1,0 +1,7 @@
+import type { ApiModule } from '../module';
+
+/** The pay area. */
+export const payModule: ApiModule = {
+  name: 'pay',
+  register() {},
+};
