@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { buildMarkerListInput } from '../xlsx/fixtures.testing';
+import { CUTTING_ROOM_CAUTIONS_TITLE } from './cutting-cautions';
+import { buildMarkerListPdf } from './marker-list.pdf';
+import { buildCutTicketPdf } from './cut-ticket.pdf';
+import { pdfHeader, pdfPageCount, pdfText } from './pdf-reader.testing';
+
+describe('buildMarkerListPdf', () => {
+  it('prints heading, lays, rolls and cautions on one page', async () => {
+    const pdf = await buildMarkerListPdf(buildMarkerListInput(), { compress: false });
+    expect(pdfHeader(pdf)).toBe('%PDF-');
+    expect(pdfPageCount(pdf)).toBe(1);
+    const text = pdfText(pdf);
+    for (const s of [
+      'Marker list per roll',
+      'Linden Row Studio',
+      '14 Mar 2026',
+      'DR-12 — Wrap dress',
+      'B-2026-07',
+    ]) {
+      expect(text).toContain(s);
+    }
+    expect(text).toContain('S×1 M×2 L×1');
+    expect(text).toContain('Face to face, zig-zag');
+    // Jana (2008) R1 [quoted]: 6.5 m lay; roll A 15 m, 2 plies, 2 m remnant
+    expect(text).toContain('6.500 m');
+    expect(text).toContain('15.000 m');
+    expect(text).toContain('2.000 m');
+    expect(text).toContain('1.0 cm');
+    expect(text).toContain(CUTTING_ROOM_CAUTIONS_TITLE);
+    expect(text).toContain('mesh (chain-mail) glove');
+  });
+
+  it('uses passed-in cautions and yards for an imperial studio', async () => {
+    const input = buildMarkerListInput({
+      unitSystem: 'imperial',
+      cautions: ['Custom caution from the studio.'],
+    });
+    const text = pdfText(await buildMarkerListPdf(input, { compress: false }));
+    expect(text).toContain('Custom caution from the studio.');
+    expect(text).not.toContain('mesh (chain-mail) glove');
+    expect(text).toContain('7.108 yd');
+  });
+
+  it('is compressed by default and still a PDF', async () => {
+    const pdf = await buildMarkerListPdf(buildMarkerListInput());
+    expect(pdfHeader(pdf)).toBe('%PDF-');
+    expect(pdf.toString('latin1')).toContain('/FlateDecode');
+  });
+});
+
+describe('buildCutTicketPdf', () => {
+  it('prints one page per lay with its ratio, plies per roll and cautions', async () => {
+    const pdf = await buildCutTicketPdf(buildMarkerListInput(), { compress: false });
+    expect(pdfHeader(pdf)).toBe('%PDF-');
+    expect(pdfPageCount(pdf)).toBe(2);
+    const text = pdfText(pdf);
+    expect(text).toContain('Cut ticket — lay 1');
+    expect(text).toContain('Cut ticket — lay 2');
+    expect(text).toContain('S×1 M×2 L×1 (16 garments)');
+    expect(text).toContain('XL×2 (6 garments)');
+    expect(text).toContain('Viscose twill, navy, width 145.0 cm');
+    expect(
+      text.match(new RegExp(CUTTING_ROOM_CAUTIONS_TITLE.replace(/[()]/g, '\\$&'), 'g'))?.length,
+    ).toBe(2);
+  });
+
+  it('gives a single page when there are no lays', async () => {
+    const pdf = await buildCutTicketPdf(buildMarkerListInput({ lays: [] }), { compress: false });
+    expect(pdfPageCount(pdf)).toBe(1);
+    expect(pdfText(pdf)).toContain('No lays in this cut order.');
+  });
+});
