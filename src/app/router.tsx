@@ -6,6 +6,7 @@ import { Spinner } from '@/components/ui/page';
 import { paths } from '@/config/paths';
 import { meQueries, useMe } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
+import { AuditPage } from '@/features/audit/components/audit-page';
 import { AccountPage } from '@/features/auth/components/account-page';
 import { NewStudioPage } from '@/features/auth/components/new-studio-page';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
@@ -65,6 +66,7 @@ export const router = createBrowserRouter([
           { path: paths.batch.path, element: <Guard permission="batches:write"><BatchDetailPage panels={BATCH_PANELS} /></Guard> },
           { path: paths.people.path, element: <Guard permission="people:manage"><PeoplePage /></Guard> },
           { path: paths.settings.path, element: <Guard permission="studio:manage"><SettingsPage /></Guard> },
+          { path: paths.audit.path, element: <Guard permission="audit:read"><AuditPage /></Guard> },
           ...EXTRA_ROUTES,
           { path: '*', element: <Navigate to="/" replace /> },
         ],

@@ -3,7 +3,7 @@ import { NavLink, Outlet, useNavigate } from 'react-router';
 import { can, ROLE_LABELS, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
 import { useLogout, useMe } from '@/lib/auth';
-import { IconBatch, IconDress, IconHome, IconMenu, IconOut, IconPeople, IconSettings } from '../ui/icons';
+import { IconBatch, IconChart, IconDress, IconHome, IconMenu, IconOut, IconPeople, IconSettings } from '../ui/icons';
 import { Logo } from '../ui/logo';
 
 export interface NavItem {
@@ -20,6 +20,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: paths.batches.getHref(), label: 'Batches', icon: IconBatch, permission: 'batches:write' },
   { to: paths.people.getHref(), label: 'People', icon: IconPeople, permission: 'people:manage' },
   { to: paths.settings.getHref(), label: 'Studio', icon: IconSettings, permission: 'studio:manage' },
+  { to: paths.audit.getHref(), label: 'Audit trail', icon: IconChart, permission: 'audit:read' },
 ];
 
 export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
