@@ -13,7 +13,7 @@ export function createBatchRepository(ds: DataSource) {
       repo.findOne({ where: { studioId, id }, relations: { style: true } }),
     insert: (b: Partial<BatchEntity>) => repo.save(repo.create(b)),
     async update(studioId: number, id: number, patch: Partial<BatchEntity>) {
-      await repo.update({ studioId, id }, patch);
+      if (Object.keys(patch).length) await repo.update({ studioId, id }, patch);
       return repo.findOneOrFail({ where: { studioId, id }, relations: { style: true } });
     },
   };

@@ -18,7 +18,9 @@ export function createStudioRepository(ds: DataSource) {
   const repo = ds.getRepository(StudioEntity);
   return {
     get: (id: number) => repo.findOneByOrFail({ id }),
-    update: (id: number, patch: Partial<StudioEntity>) => repo.update({ id }, patch),
+    update: async (id: number, patch: Partial<StudioEntity>) => {
+      if (Object.keys(patch).length) await repo.update({ id }, patch);
+    },
   };
 }
 export type StudioRepository = ReturnType<typeof createStudioRepository>;

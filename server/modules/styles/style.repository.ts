@@ -12,7 +12,7 @@ export function createStyleRepository(ds: DataSource) {
     byCode: (studioId: number, code: string) => repo.findOne({ where: { studioId, code } }),
     insert: (s: Partial<StyleEntity>) => repo.save(repo.create(s)),
     async update(studioId: number, id: number, patch: Partial<StyleEntity>) {
-      await repo.update({ studioId, id }, patch);
+      if (Object.keys(patch).length) await repo.update({ studioId, id }, patch);
       return repo.findOneOrFail({ where: { studioId, id } });
     },
   };

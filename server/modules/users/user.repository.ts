@@ -13,8 +13,10 @@ export function createUserRepository(ds: DataSource) {
     get: (studioId: number, id: number) => users.findOne({ where: { studioId, id } }),
     list: (studioId: number) => users.find({ where: { studioId }, order: { role: 'ASC', name: 'ASC' } }),
     insert: (u: Partial<UserEntity>) => users.save(users.create(u)),
-    update: (studioId: number, id: number, patch: Partial<UserEntity>) =>
-      users.update({ studioId, id }, patch),
+    update: async (studioId: number, id: number, patch: Partial<UserEntity>) => {
+      // An empty patch is a no-op, not an error.
+      if (Object.keys(patch).length) await users.update({ studioId, id }, patch);
+    },
     recordFailure: (id: number, failedLogins: number, lockedUntil: Date | null) =>
       users.update({ id }, { failedLogins, lockedUntil }),
     clearFailures: (id: number) => users.update({ id }, { failedLogins: 0, lockedUntil: null }),

@@ -1,0 +1,77 @@
+import { In, Not, type DataSource } from 'typeorm';
+import {
+  BatchEntity,
+  BundleEntity,
+  CostingSettingsEntity,
+  CutPlanEntity,
+  FabricEntity,
+  LayEntity,
+  MarkerEntity,
+  OperationEntity,
+  StudioEntity,
+  SupplierEntity,
+  TrimEntity,
+  WorkLogEntity,
+} from '../../entities';
+
+export type CostingRepository = ReturnType<typeof createCostingRepository>;
+
+/**
+ * Costing queries, every one scoped to one studio. Cut plans, lays, markers, operations and work logs
+ * belong to other areas: they are only read here.
+ */
+export function createCostingRepository(ds: DataSource) {
+  const trims = ds.getRepository(TrimEntity);
+  const settings = ds.getRepository(CostingSettingsEntity);
+  return {
+    studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
+    batch: (studioId: number, id: number) =>
+      ds.getRepository(BatchEntity).findOne({ where: { studioId, id }, relations: { style: true } }),
+    styleExists: async (studioId: number, styleId: number) =>
+      (await ds.query('SELECT 1 FROM styles WHERE studioId = ? AND id = ?', [studioId, styleId])).length > 0,
+    settings: (studioId: number, styleId: number) => settings.findOneBy({ studioId, styleId }),
+    async saveSettings(studioId: number, styleId: number, patch: Partial<CostingSettingsEntity>) {
+      const existing = await settings.findOneBy({ studioId, styleId });
+      if (existing) await settings.update({ id: existing.id }, patch);
+      else await settings.save(settings.create({ labourCostPerMinuteMinor: 0, ...patch, studioId, styleId }));
+      return settings.findOneByOrFail({ studioId, styleId });
+    },
+    trims: (studioId: number, styleId: number) => trims.find({ where: { studioId, styleId }, order: { id: 'ASC' } }),
+    trim: (studioId: number, id: number) => trims.findOneBy({ studioId, id }),
+    insertTrim: (t: Partial<TrimEntity>) => trims.save(trims.create(t)),
+    async updateTrim(studioId: number, id: number, patch: Partial<TrimEntity>) {
+      await trims.update({ studioId, id }, patch);
+      return trims.findOneByOrFail({ studioId, id });
+    },
+    deleteTrim: (studioId: number, id: number) => trims.delete({ studioId, id }),
+    suppliers: (studioId: number) => ds.getRepository(SupplierEntity).find({ where: { studioId } }),
+    supplier: (studioId: number, id: number) => ds.getRepository(SupplierEntity).findOneBy({ studioId, id }),
+    fabric: (studioId: number, id: number) => ds.getRepository(FabricEntity).findOneBy({ studioId, id }),
+    firstFabric: (studioId: number) =>
+      ds.getRepository(FabricEntity).findOne({ where: { studioId }, order: { id: 'ASC' } }),
+    /** The batch's current cut plan: released before draft, newest first; superseded plans never. */
+    async cutPlan(studioId: number, batchId: number) {
+      const plans = await ds.getRepository(CutPlanEntity).find({
+        where: { studioId, batchId, status: Not('superseded') },
+        order: { id: 'DESC' },
+      });
+      return plans.find((p) => p.status === 'released') ?? plans[0] ?? null;
+    },
+    lays: (studioId: number, cutPlanId: number) =>
+      ds.getRepository(LayEntity).find({ where: { studioId, cutPlanId }, order: { seq: 'ASC' } }),
+    /** Finished markers made for this batch (or the style when none is tied to the batch). */
+    async doneMarkers(studioId: number, styleId: number, batchId: number) {
+      const repo = ds.getRepository(MarkerEntity);
+      const forBatch = await repo.find({ where: { studioId, batchId, status: 'done' }, order: { id: 'DESC' } });
+      if (forBatch.length) return forBatch;
+      return repo.find({ where: { studioId, styleId, status: 'done' }, order: { id: 'DESC' } });
+    },
+    operations: (studioId: number, styleId: number) =>
+      ds.getRepository(OperationEntity).find({ where: { studioId, styleId }, order: { seq: 'ASC' } }),
+    async workLogs(studioId: number, batchId: number) {
+      const bundles = await ds.getRepository(BundleEntity).find({ where: { studioId, batchId }, select: { id: true } });
+      if (!bundles.length) return [];
+      return ds.getRepository(WorkLogEntity).find({ where: { studioId, bundleId: In(bundles.map((b) => b.id)) } });
+    },
+  };
+}

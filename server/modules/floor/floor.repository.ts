@@ -1,0 +1,77 @@
+import { Between, In, type DataSource } from 'typeorm';
+import {
+  AttendanceEntity,
+  BatchEntity,
+  BundleEntity,
+  GradingSetEntity,
+  OperationEntity,
+  StudioEntity,
+  UserEntity,
+  WorkLogEntity,
+} from '../../entities';
+
+export type FloorRepository = ReturnType<typeof createFloorRepository>;
+
+/** True when a driver error is a UNIQUE constraint failure (SQLite says SQLITE_CONSTRAINT_UNIQUE). */
+export function isUniqueViolation(e: unknown): boolean {
+  const err = e as { code?: string; message?: string; driverError?: { code?: string } };
+  const code = err?.driverError?.code ?? err?.code ?? '';
+  return code === 'SQLITE_CONSTRAINT_UNIQUE' || /UNIQUE constraint failed/.test(err?.message ?? '');
+}
+
+/** The text SQLite holds for a UTC datetime column ('YYYY-MM-DD HH:MM:SS.SSS'). */
+const sqlTime = (d: Date) => d.toISOString().replace('T', ' ').replace('Z', '');
+
+/** Floor queries: bundles, operations, work logs and attendance, always scoped to one studio. */
+export function createFloorRepository(ds: DataSource) {
+  const bundles = ds.getRepository(BundleEntity);
+  const ops = ds.getRepository(OperationEntity);
+  const logs = ds.getRepository(WorkLogEntity);
+  const attendance = ds.getRepository(AttendanceEntity);
+  const users = ds.getRepository(UserEntity);
+  const batches = ds.getRepository(BatchEntity);
+  return {
+    studio: (studioId: number) => ds.getRepository(StudioEntity).findOneBy({ id: studioId }),
+    batch: (studioId: number, id: number) => batches.findOne({ where: { studioId, id }, relations: { style: true } }),
+    /** Open batches that hold a bundle with this number, newest first. */
+    async bundleByNumber(studioId: number, number: number, batchId?: number) {
+      if (batchId) return bundles.findOneBy({ studioId, batchId, number });
+      const found = await bundles.find({ where: { studioId, number }, order: { batchId: 'DESC' } });
+      if (found.length <= 1) return found[0] ?? null;
+      const open = await batches.find({ where: { studioId, id: In(found.map((b) => b.batchId)) } });
+      const openIds = new Set(open.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
+      return found.find((b) => openIds.has(b.batchId)) ?? found[0];
+    },
+    bundle: (studioId: number, id: number) => bundles.findOneBy({ studioId, id }),
+    bundlesOfBatch: (studioId: number, batchId: number) => bundles.find({ where: { studioId, batchId }, order: { number: 'ASC' } }),
+    saveReopened: (studioId: number, id: number, reopened: Record<string, number>) =>
+      bundles.update({ studioId, id }, { reopened }),
+    operationsOfStyle: (studioId: number, styleId: number) =>
+      ops.find({ where: { studioId, styleId }, order: { seq: 'ASC', id: 'ASC' } }),
+    operation: (studioId: number, id: number) => ops.findOneBy({ studioId, id }),
+    logByKey: (studioId: number, idempotencyKey: string) => logs.findOneBy({ studioId, idempotencyKey }),
+    logAttempt: (studioId: number, bundleId: number, operationId: number, attempt: number) =>
+      logs.findOneBy({ studioId, bundleId, operationId, attempt }),
+    log: (studioId: number, id: number) => logs.findOneBy({ studioId, id }),
+    logsOfBundle: (studioId: number, bundleId: number) => logs.find({ where: { studioId, bundleId }, order: { id: 'ASC' } }),
+    logsOfBundles: (studioId: number, bundleIds: number[]) =>
+      bundleIds.length ? logs.find({ where: { studioId, bundleId: In(bundleIds) }, order: { id: 'ASC' } }) : Promise.resolve([]),
+    /** Logs stamped in [from, to); QueryBuilder because SQLite compares the stored UTC text, not Date objects. */
+    logsBetween: (studioId: number, from: Date, to: Date, userId?: number) => {
+      const q = logs
+        .createQueryBuilder('l')
+        .where('l.studioId = :studioId', { studioId })
+        .andWhere('l.createdAt >= :from AND l.createdAt < :to', { from: sqlTime(from), to: sqlTime(to) });
+      if (userId !== undefined) q.andWhere('l.userId = :userId', { userId });
+      return q.orderBy('l.id', 'ASC').getMany();
+    },
+    insertLog: async (l: Partial<WorkLogEntity>) => logs.save(logs.create(l)),
+    deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
+    attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
+      attendance.find({ where: { studioId, day: Between(fromDay, toDay) } }),
+    usersByIds: (studioId: number, ids: number[]) =>
+      ids.length ? users.find({ where: { studioId, id: In(ids) } }) : Promise.resolve([]),
+    user: (studioId: number, id: number) => users.findOneBy({ studioId, id }),
+    gradingSet: (studioId: number, styleId: number) => ds.getRepository(GradingSetEntity).findOneBy({ studioId, styleId }),
+  };
+}

@@ -1,0 +1,254 @@
+import { can } from '../../../shared/auth/permissions';
+import type { BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
+import { UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
+import type { Actor } from '../../auth/require';
+import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
+import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
+import type { AuditRepository } from '../audit/audit.repository';
+import { logEarnedMinutes, logPayMinor } from './floor-math';
+import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
+import { isUniqueViolation, type FloorRepository } from './floor.repository';
+
+export type FloorService = ReturnType<typeof createFloorService>;
+
+/** Start of the UTC day holding `d`. Days are UTC calendar days (the server runs TZ=UTC). */
+export const dayStart = (d: Date) => new Date(Date.UTC(d.getUTCFullYear(), d.getUTCMonth(), d.getUTCDate()));
+export const dayOf = (d: Date | string) => new Date(d).toISOString().slice(0, 10);
+
+/** A tiny time-boxed memo: operations and batches are read on every log, but change rarely. */
+function memo<K, V>(ttlMs: number, now: () => number) {
+  const m = new Map<K, { at: number; v: Promise<V> }>();
+  return (key: K, load: () => Promise<V>) => {
+    const hit = m.get(key);
+    if (hit && now() - hit.at < ttlMs) return hit.v;
+    const v = load();
+    m.set(key, { at: now(), v });
+    v.catch(() => m.delete(key));
+    return v;
+  };
+}
+
+/** The current attempt of an operation on a bundle: how many times it was sent back. */
+export const attemptOf = (b: Pick<BundleEntity, 'reopened'>, opId: number) => b.reopened?.[String(opId)] ?? 0;
+
+/** Which operations are done on a bundle now, from its logs (only the current attempt counts). */
+export function doneMap(bundle: BundleEntity, logs: WorkLogEntity[]) {
+  const done = new Map<number, WorkLogEntity>();
+  for (const l of logs) if (l.bundleId === bundle.id && l.attempt === attemptOf(bundle, l.operationId)) done.set(l.operationId, l);
+  return done;
+}
+
+export function createFloorService(deps: { repo: FloorRepository; audit: AuditRepository; now: () => Date }) {
+  const { repo, audit, now } = deps;
+  const clock = () => now().getTime();
+  const opsMemo = memo<number, OperationEntity[]>(2000, clock);
+  const batchMemo = memo<number, BatchEntity | null>(2000, clock);
+  const currencyMemo = memo<number, string>(10000, clock);
+  const reopenLocks = new Map<number, Promise<unknown>>();
+
+  const styleOps = (studioId: number, styleId: number) => opsMemo(styleId, () => repo.operationsOfStyle(studioId, styleId));
+  const batchOf = (studioId: number, batchId: number) => batchMemo(batchId, () => repo.batch(studioId, batchId));
+  const currency = (studioId: number) => currencyMemo(studioId, async () => (await repo.studio(studioId))?.currency ?? 'KES');
+
+  async function findBundle(studioId: number, number: number, batchId?: number) {
+    const bundle = await repo.bundleByNumber(studioId, number, batchId);
+    if (!bundle) throw new AppError(404, 'not_found', `Bundle ${number} not found`, { bundleNumber: 'No such bundle' });
+    const batch = await batchOf(studioId, bundle.batchId);
+    if (!batch) throw notFound('Batch');
+    return { bundle, batch, ops: await styleOps(studioId, batch.styleId) };
+  }
+
+  function missingPredecessors(op: OperationEntity, ops: OperationEntity[], done: Map<number, WorkLogEntity>) {
+    const byCode = new Map(ops.map((o) => [o.code, o]));
+    return op.predecessors
+      .map((c) => byCode.get(c))
+      .filter((p): p is OperationEntity => Boolean(p) && !done.has(p!.id))
+      .map((p) => `${p.code} ${p.name} is not logged yet on this bundle`);
+  }
+
+  async function userName(studioId: number, userId: number, actor: Actor) {
+    if (userId === actor.id) return actor.name;
+    return (await repo.user(studioId, userId))?.name ?? 'someone';
+  }
+
+  async function alreadyLogged(actor: Actor, existing: WorkLogEntity, bundle: BundleEntity, op: OperationEntity) {
+    const who = await userName(actor.studioId, existing.userId, actor);
+    const at = new Date(existing.createdAt).toISOString().slice(11, 16);
+    return conflict(`Bundle ${bundle.number} · ${op.code} ${op.name} was already logged by ${who} at ${at} UTC`, {
+      operationId: `Logged by ${who}`,
+    });
+  }
+
+  /** The saved log as the original response gave it, for a retried idempotency key. */
+  async function replay(actor: Actor, log: WorkLogEntity): Promise<LogWorkResult> {
+    if (log.userId !== actor.id) throw conflict('This idempotency key belongs to another log', { idempotencyKey: 'Already used' });
+    const bundle = (await repo.bundle(actor.studioId, log.bundleId))!;
+    const batch = (await batchOf(actor.studioId, bundle.batchId))!;
+    const ops = await styleOps(actor.studioId, batch.styleId);
+    const op = ops.find((o) => o.id === log.operationId) ?? (await repo.operation(actor.studioId, log.operationId))!;
+    const earlier = (await repo.logsOfBundle(actor.studioId, bundle.id)).filter((l) => l.id < log.id);
+    const warnings = missingPredecessors(op, ops, doneMap(bundle, earlier));
+    return { log: presentLog(log, bundle, op, actor.name, await currency(actor.studioId)), warnings };
+  }
+
+  /** Serialise read-modify-write of one bundle's reopened map. */
+  async function withBundleLock<T>(bundleId: number, fn: () => Promise<T>): Promise<T> {
+    const prev = reopenLocks.get(bundleId) ?? Promise.resolve();
+    const run = prev.then(fn, fn);
+    reopenLocks.set(bundleId, run.catch(() => undefined));
+    return run;
+  }
+
+  async function reopen(studioId: number, bundleId: number, opIds: number[]) {
+    await withBundleLock(bundleId, async () => {
+      const b = (await repo.bundle(studioId, bundleId))!;
+      const reopened = { ...(b.reopened ?? {}) };
+      for (const id of opIds) reopened[String(id)] = (reopened[String(id)] ?? 0) + 1;
+      await repo.saveReopened(studioId, bundleId, reopened);
+    });
+  }
+
+  return {
+    styleOps,
+    batchOf,
+    currency,
+
+    /** A bundle with this person's operations first and each operation's state. */
+    async lookup(actor: Actor, number: number, batchId?: number): Promise<BundleDto> {
+      const { bundle, batch, ops } = await findBundle(actor.studioId, number, batchId);
+      const logs = await repo.logsOfBundle(actor.studioId, bundle.id);
+      const done = doneMap(bundle, logs);
+      const names = new Map((await repo.usersByIds(actor.studioId, [...new Set(logs.map((l) => l.userId))])).map((u) => [u.id, u.name]));
+      const mineSection = actor.role === 'finisher' ? 'finishing' : actor.role === 'machinist' ? 'sewing' : null;
+      const loggedBefore = new Set(logs.filter((l) => l.userId === actor.id).map((l) => l.operationId));
+      const operations = ops
+        .map((o) => presentOperation(o, o.section === mineSection || loggedBefore.has(o.id)))
+        .sort((a, b) => Number(b.isMine) - Number(a.isMine));
+      const states: BundleOperationState[] = ops.map((o) => {
+        const l = done.get(o.id);
+        return { operationId: o.id, done: Boolean(l), attempt: attemptOf(bundle, o.id), doneBy: l ? (names.get(l.userId) ?? '') : null, doneAt: l ? new Date(l.createdAt).toISOString() : null };
+      });
+      return {
+        id: bundle.id,
+        batchId: bundle.batchId,
+        batchCode: `B-${String(bundle.batchId).padStart(4, '0')}`,
+        number: bundle.number,
+        size: bundle.size,
+        shadeLot: bundle.shadeLot,
+        plyFrom: bundle.plyFrom,
+        plyTo: bundle.plyTo,
+        pieces: bundle.pieces,
+        styleName: batch.style?.name ?? '',
+        operations,
+        states,
+        specNotes: await specNotes(repo, actor.studioId, batch.styleId, bundle.size),
+      };
+    },
+
+    /**
+     * Log an operation done on a bundle, once. The same idempotency key replays the first answer; a second
+     * log of the same bundle operation is refused with who logged it; missing predecessors only warn.
+     */
+    async log(actor: Actor, input: LogWorkInput): Promise<{ status: 200 | 201; result: LogWorkResult }> {
+      const prior = await repo.logByKey(actor.studioId, input.idempotencyKey);
+      if (prior) return { status: 201, result: await replay(actor, prior) };
+      const { bundle, ops } = await findBundle(actor.studioId, input.bundleNumber, input.batchId);
+      const op = ops.find((o) => o.id === input.operationId);
+      if (!op) throw badRequest('operationId: not an operation of this style', { operationId: 'Not an operation of this bundle’s style' });
+      const isCheck = isCheckOperation(op);
+      if (isCheck && !can(actor.role, 'quality:check')) throw forbidden('Quality checks are logged by finishers');
+      if (isCheck && !input.outcome) throw badRequest('outcome: say pass or fail', { outcome: 'Say pass or fail' });
+      if (!isCheck && input.outcome) throw badRequest('outcome: only a quality check passes or fails', { outcome: 'Only for a quality check' });
+      const rework = input.outcome === 'fail' ? ops.find((o) => o.id === input.reworkOperationId) : undefined;
+      if (input.outcome === 'fail' && !rework) throw badRequest('reworkOperationId: not an operation of this style', { reworkOperationId: 'Not an operation of this style' });
+
+      const attempt = attemptOf(bundle, op.id);
+      const logs = await repo.logsOfBundle(actor.studioId, bundle.id);
+      const existing = logs.find((l) => l.operationId === op.id && l.attempt === attempt);
+      if (existing) throw await alreadyLogged(actor, existing, bundle, op);
+      const warnings = missingPredecessors(op, ops, doneMap(bundle, logs));
+
+      let saved: WorkLogEntity;
+      try {
+        saved = await repo.insertLog({
+          studioId: actor.studioId,
+          bundleId: bundle.id,
+          operationId: op.id,
+          attempt,
+          userId: actor.id,
+          pieces: bundle.pieces,
+          earnedMinutes: logEarnedMinutes(bundle.pieces, op.sam, attempt),
+          payMinor: logPayMinor(bundle.pieces, op.pieceRateMinor, attempt),
+          idempotencyKey: input.idempotencyKey,
+          outcome: input.outcome ?? '',
+          defect: input.outcome === 'fail' ? (input.defect ?? '') : '',
+          createdAt: now(),
+        });
+      } catch (e) {
+        if (!isUniqueViolation(e)) throw e;
+        // Lost a race: the same key (a retry) replays, another key for the same bundle operation is refused.
+        const sameKey = await repo.logByKey(actor.studioId, input.idempotencyKey);
+        if (sameKey) return { status: 201, result: await replay(actor, sameKey) };
+        const winner = await repo.logAttempt(actor.studioId, bundle.id, op.id, attempt);
+        if (winner) throw await alreadyLogged(actor, winner, bundle, op);
+        throw e;
+      }
+      if (rework) await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
+      const dto = presentLog(saved, bundle, op, actor.name, await currency(actor.studioId));
+      await audit.record(actor, input.outcome === 'fail' ? 'fail-check' : 'log', 'work_log', saved.id, undefined, {
+        bundle: bundle.number,
+        operation: op.code,
+        attempt,
+        outcome: saved.outcome,
+        defect: saved.defect,
+        rework: rework?.code,
+      });
+      return { status: 201, result: { log: dto, warnings } };
+    },
+
+    /** Undo one's own log within the undo window. A failed check that reopened work cannot be undone here. */
+    async undo(actor: Actor, id: number) {
+      const log = await repo.log(actor.studioId, id);
+      if (!log) throw notFound('Log');
+      if (log.userId !== actor.id) throw forbidden('You can undo only your own logs');
+      if (clock() - new Date(log.createdAt).getTime() > UNDO_WINDOW_MS) throw conflict('The undo window has passed; ask the owner');
+      if (log.outcome === 'fail') throw conflict('A failed check sent work back for rework; ask the owner to correct it');
+      await repo.deleteLog(actor.studioId, id);
+      await audit.record(actor, 'undo', 'work_log', id, { bundleId: log.bundleId, operationId: log.operationId, attempt: log.attempt }, undefined);
+    },
+
+    /** Today's logs, pieces and earnings of the signed-in person only. */
+    async today(actor: Actor): Promise<TodayDto> {
+      const from = dayStart(now());
+      const to = new Date(from.getTime() + 86_400_000);
+      const logs = (await repo.logsBetween(actor.studioId, from, to, actor.id)).reverse();
+      const cur = await currency(actor.studioId);
+      const dtos = [];
+      for (const l of logs) {
+        const bundle = await repo.bundle(actor.studioId, l.bundleId);
+        const batch = bundle ? await batchOf(actor.studioId, bundle.batchId) : null;
+        const op = batch ? (await styleOps(actor.studioId, batch.styleId)).find((o) => o.id === l.operationId) : undefined;
+        dtos.push(presentLog(l, bundle ?? { number: 0, batchId: 0 }, op ?? { code: '?', name: 'Operation removed' }, actor.name, cur));
+      }
+      return {
+        day: dayOf(from),
+        logs: dtos,
+        pieces: logs.reduce((a, l) => a + l.pieces, 0),
+        bundleOps: logs.length,
+        earningsMinor: logs.reduce((a, l) => a + l.payMinor, 0),
+        currency: cur,
+      };
+    },
+  };
+}
+
+/** Points of measure of the bundle's size from the style's size chart, for the checker; empty without one. */
+async function specNotes(repo: FloorRepository, studioId: number, styleId: number, size: string): Promise<string[]> {
+  const set = await repo.gradingSet(studioId, styleId);
+  const chart = set?.sizeChart as { sizes?: string[]; values?: Record<string, number[]> } | undefined;
+  const i = chart?.sizes?.indexOf(size) ?? -1;
+  if (!chart?.values || i < 0) return [];
+  return Object.entries(chart.values)
+    .filter(([, v]) => Array.isArray(v) && typeof v[i] === 'number')
+    .map(([pom, v]) => `${pom.replace(/[-_]/g, ' ')}: ${(v[i] / 10).toFixed(1)} cm`);
+}
