@@ -13,7 +13,7 @@ export default async function setup(project: TestProject) {
   const dir = mkdtempSync(join(tmpdir(), 'seamrun-e2e-'));
   process.env.SCRYPT_LOG_N = '10';
   const { startServer } = await import('../../server/index');
-  const { server, ds, port } = await startServer({
+  const { stop, port } = await startServer({
     PORT: '0',
     HOST: '127.0.0.1',
     NODE_ENV: 'production',
@@ -25,8 +25,7 @@ export default async function setup(project: TestProject) {
   });
   project.provide('baseUrl', `http://127.0.0.1:${port}`);
   return async () => {
-    await new Promise((r) => server.close(r));
-    await ds.destroy();
+    await stop();
     rmSync(dir, { recursive: true, force: true });
   };
 }
