@@ -61,7 +61,7 @@ function writePiece(d: Drawing, piece: Piece, size: string, dx: number, o: Piece
   for (const h of piece.drillHoles) d.drawCircle(...P(h), 1.5);
   d.setActiveLayer(DXF_LAYERS.internal);
   for (const line of piece.internalLines) if (line.points.length > 1) d.drawPolyline(line.points.map(P), false);
-  const mid = { x: (g.from.x + g.to.x) / 2 + 5, y: (g.from.y + g.to.y) / 2 };
+  const mid = { x: (g.from.x + g.to.x) / 2, y: (g.from.y + g.to.y) / 2 };
   d.setActiveLayer(DXF_LAYERS.label).drawText(...P(mid), 5, 0, [piece.name, piece.id, size, piece.cut, piece.quantity].join('|'));
 }
 
@@ -86,11 +86,15 @@ export function dxfToPieces(text: string, seamAllowanceMm = 10): Piece[] {
   const entities = parsed?.entities ?? [];
   const on = (layer: string) => entities.filter((e) => e.layer === layer);
   const isPoly = (e: DxfEntity) => e.type === 'LWPOLYLINE' || e.type === 'POLYLINE';
-  return on(DXF_LAYERS.sewing).filter((e) => isPoly(e) && e.shape && (e.vertices?.length ?? 0) >= 3).map((e, k) => {
+  const outlines = on(DXF_LAYERS.sewing).filter((e) => isPoly(e) && e.shape && (e.vertices?.length ?? 0) >= 3);
+  const labels = on(DXF_LAYERS.label);
+  return outlines.map((e, k) => {
     let outline = e.vertices!.map((v) => ({ x: v.x, y: v.y }));
     if (polygonSignedArea(outline) < 0) outline = outline.reverse();
     const inside = (p?: { x: number; y: number }) => !!p && polygonContainsPoint(outline, p);
-    const label = on(DXF_LAYERS.label).find((t) => inside(t.startPoint))?.text?.split('|') ?? [];
+    // Labels are written in outline order; fall back to the label inside the outline for foreign files.
+    const own = labels.length === outlines.length ? labels[k] : labels.find((t) => inside(t.startPoint));
+    const label = own?.text?.split('|') ?? [];
     const grain = on(DXF_LAYERS.grain).find((l) => inside(l.vertices?.[0]));
     const internalLines: InternalLine[] = on(DXF_LAYERS.internal).filter((l) => isPoly(l) && inside(l.vertices?.[0]))
       .map((l, i) => ({ kind: 'reference', name: `line-${i}`, points: l.vertices!.map((v) => ({ x: v.x, y: v.y })) }));

@@ -1,0 +1,2 @@
+export { makeBundles } from './make-bundles';
+export type { CutLay, MakeBundlesInput, Bundle } from './make-bundles';

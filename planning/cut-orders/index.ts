@@ -1,0 +1,6 @@
+export * from './cut-order.types';
+export * from './spreading-constants';
+export { planCutOrder } from './plan-cut-order';
+export { allocateRolls } from './allocate-rolls';
+export type { FabricRoll, LayToSpread, RollAllocationInput, RollSegment, RollUse, RollAllocation } from './allocate-rolls';
+export { countRatios } from './ratio-candidates';

@@ -1,0 +1,26 @@
+import { mm, type Millimetres } from '@shared/units';
+
+/**
+ * Safety (end) allowance at EACH end of a spread of non-elastic fabric: 1 cm.
+ * Source: Vilumsone-Nemes, *Industrial Cutting of Textile Materials*, §4.2.3, p. 31 [quoted].
+ */
+export const END_ALLOWANCE_EACH_END_NON_ELASTIC_MM: Millimetres = mm(10);
+/** Elastic fabrics: 1.5–2.0 cm at each end; the upper value is kept (same source, p. 31). */
+export const END_ALLOWANCE_EACH_END_ELASTIC_MM: Millimetres = mm(20);
+/** First ply on underlay paper: up to 3 cm at each end (same source, p. 31). */
+export const END_ALLOWANCE_EACH_END_FIRST_PLY_MM: Millimetres = mm(30);
+
+/**
+ * Default end allowance per ply (both ends together): 2 × 1 cm for non-elastic fabric, 20 mm.
+ * Vilumsone-Nemes, §4.2.3, p. 31.
+ */
+export const DEFAULT_END_ALLOWANCE_PER_PLY_MM: Millimetres = mm(2 * END_ALLOWANCE_EACH_END_NON_ELASTIC_MM);
+
+/** Splice (overlap) zone, "optimal" width 10–20 cm; 150 mm is the middle of it (Vilumsone-Nemes, p. 41). */
+export const DEFAULT_SPLICE_OVERLAP_MM: Millimetres = mm(150);
+
+/**
+ * Roll ends at or above this length are kept as stock (remnants), shorter ones are waste.
+ * 1 m is common practice (no published figure).
+ */
+export const DEFAULT_REMNANT_STOCK_THRESHOLD_MM: Millimetres = mm(1000);

@@ -1,0 +1,3 @@
+export { operatorEfficiency, earnedMinutes, lineEfficiency } from './efficiency';
+export { computePiecePay } from './piece-pay';
+export type { WorkRecord, PiecePayInput, PersonPay, PiecePay } from './piece-pay';

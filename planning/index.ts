@@ -1,0 +1,7 @@
+export * from './cut-orders';
+export * from './line-balancing';
+export * from './capacity';
+export * from './costing';
+export * from './bundles';
+export * from './floor';
+export * from './nesting';

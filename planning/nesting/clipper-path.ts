@@ -1,0 +1,86 @@
+import ClipperLib from 'clipper-lib';
+import type { Path, Paths } from 'clipper-lib';
+import type { Point, Polygon } from '@shared/geometry/types';
+
+/**
+ * Clipper works on integers and is exact below ±4.7e7 (its fast 53-bit range; its 128-bit "full
+ * range" produced broken Minkowski unions in our tests). A no-fit polygon reaches twice the
+ * largest coordinate, so scaled coordinates stay below 2e7.
+ */
+const SAFE_INT_RANGE = 2e7;
+
+/**
+ * Integer scale for outlines with coordinates up to `maxAbs` in magnitude: a power of ten, so
+ * decimal input (integer benchmark grids, millimetres to a few decimals) scales exactly and NFPs of
+ * exactly fitting pieces touch exactly.
+ */
+export function clipperScaleFor(maxAbs: number): number {
+  return 10 ** Math.floor(Math.log10(SAFE_INT_RANGE / Math.max(maxAbs, 1e-9)));
+}
+
+/** Polygon → Clipper path at `scale` (rounded to integers). */
+export function toClipperPath(ring: Polygon, scale: number): Path {
+  return ring.map((p) => ({ X: Math.round(p.x * scale), Y: Math.round(p.y * scale) }));
+}
+
+/** Clipper path → polygon in the caller's units. */
+export function fromClipperPath(path: Path, scale: number): Polygon {
+  return path.map((p) => ({ x: p.X / scale, y: p.Y / scale }));
+}
+
+/** Drop a repeated closing vertex (JSON rings repeat the first point at the end). */
+export function openRing(ring: Polygon): Polygon {
+  const n = ring.length;
+  if (n > 1 && ring[0].x === ring[n - 1].x && ring[0].y === ring[n - 1].y) return ring.slice(0, -1);
+  return ring;
+}
+
+/**
+ * Outward offset of a simple polygon by `delta` (≥ 0, caller units) with mitred corners (miter
+ * limit 2, so a sharp corner grows by at most 2·delta). delta = 0 returns the ring unchanged. The
+ * result contains the input; for a self-intersecting input Clipper's non-zero union is offset.
+ */
+export function polygonOffsetOutward(ring: Polygon, delta: number, scale: number): Polygon {
+  if (delta <= 0) return ring;
+  const co = new ClipperLib.ClipperOffset(2, 0.25);
+  co.AddPath(toClipperPath(ring, scale), ClipperLib.JoinType.jtMiter, ClipperLib.EndType.etClosedPolygon);
+  const out: Paths = [];
+  co.Execute(out, delta * scale);
+  let best: Path = out[0] ?? [];
+  for (const p of out) if (Math.abs(ClipperLib.Clipper.Area(p)) > Math.abs(ClipperLib.Clipper.Area(best))) best = p;
+  return fromClipperPath(best, scale);
+}
+
+/** Area of the intersection of two simple polygons (non-zero fill), via Clipper, caller units². */
+export function polygonIntersectionArea(a: Polygon, b: Polygon, scale: number): number {
+  const c = new ClipperLib.Clipper();
+  c.AddPath(toClipperPath(a, scale), ClipperLib.PolyType.ptSubject, true);
+  c.AddPath(toClipperPath(b, scale), ClipperLib.PolyType.ptClip, true);
+  const out: Paths = [];
+  c.Execute(ClipperLib.ClipType.ctIntersection, out, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
+  let area = 0;
+  for (const p of out) area += ClipperLib.Clipper.Area(p);
+  return Math.abs(area) / (scale * scale);
+}
+
+/**
+ * No-fit polygon NFP(A, B) = A ⊕ (−B): the reference positions of B (A fixed at the origin) where
+ * the interiors overlap. Returned as rings in caller units; holes (pockets where B fits inside a
+ * concavity of A) come out as extra rings, so "inside" is decided by the even-odd rule.
+ * Clipper's Minkowski sweep covers the positions where the outlines cross; the two translated
+ * copies fill the cases where one piece would sit wholly inside the other.
+ */
+export function polygonNoFitRings(a: Polygon, b: Polygon, scale: number): Polygon[] {
+  const pa = toClipperPath(a, scale);
+  const negB = toClipperPath(b.map((p: Point) => ({ x: -p.x, y: -p.y })), scale);
+  const quads = ClipperLib.Clipper.Minkowski(negB, pa, true, true);
+  const fillA = pa.map((p) => ({ X: p.X + negB[0].X, Y: p.Y + negB[0].Y }));
+  const fillB = negB.map((p) => ({ X: p.X + pa[0].X, Y: p.Y + pa[0].Y }));
+  const c = new ClipperLib.Clipper();
+  c.AddPaths(quads, ClipperLib.PolyType.ptSubject, true);
+  c.AddPath(fillA, ClipperLib.PolyType.ptClip, true);
+  c.AddPath(fillB, ClipperLib.PolyType.ptClip, true);
+  const out: Paths = [];
+  c.Execute(ClipperLib.ClipType.ctUnion, out, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
+  return out.filter((p) => p.length >= 3).map((p) => fromClipperPath(p, scale));
+}

@@ -1,0 +1,3 @@
+export * from './types';
+export { nestPieces } from './nest-pieces';
+export { checkLayout, type LayoutCheck, type LayoutCheckOptions } from './checker';

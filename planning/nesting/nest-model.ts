@@ -1,0 +1,112 @@
+import { polygonArea, polygonBBox, polygonMirrorX, polygonRotate, polygonToCounterClockwise } from '@shared/geometry/polygon';
+import type { Polygon } from '@shared/geometry/types';
+import { clipperScaleFor, openRing, polygonOffsetOutward } from './clipper-path';
+import { NfpCache } from './nfp-cache';
+import type { NestingInput } from './types';
+
+/** One piece in one mirror state and one rotation, precomputed once. */
+export interface Variant {
+  piece: number;
+  mirrored: boolean;
+  rotation: number;
+  /** Outline grown by gap/2: what the collision code packs. */
+  shape: Polygon;
+  /** Bounding box of the true outline: keeps the piece inside the strip. */
+  minX: number;
+  maxX: number;
+  minY: number;
+  maxY: number;
+  /** Bounding box of `shape`: the broad phase. */
+  sMinX: number;
+  sMaxX: number;
+  sMinY: number;
+  sMaxY: number;
+}
+
+/** One copy to place. */
+export interface Item {
+  piece: number;
+  copy: number;
+  mirrored: boolean;
+  /** Variants allowed for this copy (its mirror state × allowed rotations that fit the width). */
+  variants: number[];
+  area: number;
+}
+
+/** Immutable problem data shared by every search step. */
+export interface NestModel {
+  width: number;
+  variants: Variant[];
+  items: Item[];
+  totalArea: number;
+  /** Depths at or below this count as touching, not overlapping (see `buildNestModel`). */
+  touchTolerance: number;
+  nfps: NfpCache;
+}
+
+const DEFAULT_ORIENTATIONS = [0, 180];
+
+/** Counter-clockwise, starting at the lowest-then-leftmost vertex: winding and start never matter. */
+function canonicalRing(ring: Polygon): Polygon {
+  const ccw = polygonToCounterClockwise(openRing(ring));
+  let k = 0;
+  for (let i = 1; i < ccw.length; i++) if (ccw[i].y < ccw[k].y || (ccw[i].y === ccw[k].y && ccw[i].x < ccw[k].x)) k = i;
+  return [...ccw.slice(k), ...ccw.slice(0, k)];
+}
+
+function normaliseAngle(deg: number): number {
+  return ((deg % 360) + 360) % 360;
+}
+
+/**
+ * Validates the input and precomputes every variant. Each packed outline is grown by gap/2; pieces
+ * may touch exactly (so exact tilings stay feasible): depths up to half of Clipper's resolution
+ * (≈ 1e-7 of the largest coordinate) count as touching.
+ * Throws a RangeError on an empty or degenerate piece, a non-positive width, or a piece that fits
+ * the width in none of its orientations.
+ */
+export function buildNestModel(input: NestingInput): NestModel {
+  const width = input.stripWidth as number;
+  if (!(width > 0)) throw new RangeError('stripWidth must be positive');
+  const gap = (input.gap ?? 0) as number;
+  if (gap < 0) throw new RangeError('gap must be ≥ 0');
+  let maxDim = 0;
+  const rings = input.pieces.map((p) => {
+    const ring = canonicalRing(p.polygon);
+    if (ring.length < 3 || polygonArea(ring) <= 0) throw new RangeError(`piece ${p.id}: degenerate outline`);
+    for (const q of ring) maxDim = Math.max(maxDim, Math.abs(q.x), Math.abs(q.y));
+    return ring;
+  });
+  const scale = clipperScaleFor(maxDim + gap);
+  const variants: Variant[] = [];
+  const items: Item[] = [];
+  input.pieces.forEach((piece, pi) => {
+    const angles = [...new Set((piece.orientations ?? DEFAULT_ORIENTATIONS).map(normaliseAngle))].sort((a, b) => a - b);
+    const mirrors = piece.mirrored ? [false, true] : [false];
+    const byMirror = new Map<boolean, number[]>();
+    for (const m of mirrors) {
+      const base = m ? polygonMirrorX(rings[pi]) : rings[pi];
+      const grown = polygonOffsetOutward(base, gap / 2, scale);
+      const ids: number[] = [];
+      for (const rotation of angles) {
+        const outline = polygonRotate(base, rotation);
+        const shape = polygonRotate(grown, rotation);
+        const b = polygonBBox(outline);
+        const s = polygonBBox(shape);
+        if (b.maxY - b.minY > width) continue;
+        ids.push(variants.length);
+        variants.push({ piece: pi, mirrored: m, rotation, shape, ...b, sMinX: s.minX, sMaxX: s.maxX, sMinY: s.minY, sMaxY: s.maxY });
+      }
+      if (ids.length === 0) throw new RangeError(`piece ${piece.id}: wider than the strip in every orientation`);
+      byMirror.set(m, ids);
+    }
+    const area = polygonArea(rings[pi]);
+    const copies = piece.mirrored ? 2 * piece.quantity : piece.quantity;
+    for (let c = 0; c < copies; c++) {
+      const m = piece.mirrored ? c % 2 === 1 : false;
+      items.push({ piece: pi, copy: c, mirrored: m, variants: byMirror.get(m)!, area });
+    }
+  });
+  const totalArea = items.reduce((s, it) => s + it.area, 0);
+  return { width, variants, items, totalArea, touchTolerance: 0.5 / scale, nfps: new NfpCache(variants, scale) };
+}

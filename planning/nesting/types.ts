@@ -1,0 +1,88 @@
+import type { Polygon } from '@shared/geometry/types';
+import type { Millimetres } from '@shared/units/units';
+
+/**
+ * One pattern piece to nest. The outline is a simple polygon (the cutting line, seam allowance
+ * included) in piece-local millimetres, any winding, first vertex not repeated (a repeated closing
+ * vertex is tolerated). Its origin is the rotation centre of every placement.
+ */
+export interface NestingPiece {
+  /** Stable identifier; ties between otherwise equal choices break by this id. */
+  id: string;
+  /** Cutting outline, ≥ 3 vertices, non-zero area. */
+  polygon: Polygon;
+  /**
+   * Copies to cut. When `mirrored` is true this counts pairs: each pair is one normal copy and one
+   * mirrored copy (x → −x), so 2 × quantity copies are placed.
+   */
+  quantity: number;
+  /**
+   * Allowed rotations in degrees (counter-clockwise, y up). Default [0, 180]; [0] for one-way or
+   * napped fabric; any 90° steps where the grain allows. Values are taken modulo 360.
+   */
+  orientations?: number[];
+  /** Cut as left/right pairs (see `quantity`). Default false. */
+  mirrored?: boolean;
+}
+
+/** Everything the engine needs besides the options. */
+export interface NestingInput {
+  pieces: NestingPiece[];
+  /** Usable fabric width (selvedge trimmed): the strip spans y ∈ [0, stripWidth]. */
+  stripWidth: Millimetres;
+  /** Minimum clear distance between two pieces (not between a piece and the strip edge). Default 0. */
+  gap?: Millimetres;
+}
+
+/** Progress report, sent after each improvement and about every 50 separation iterations. */
+export interface NestingProgress {
+  bestLength: Millimetres;
+  elapsedMs: number;
+  iteration: number;
+}
+
+/** Run controls. All side effects come in through here: time, randomness (seed), progress, cancel. */
+export interface NestingOptions {
+  /** Seed of the internal mulberry32 generator: same seed + same iteration budget → same marker. */
+  seed: number;
+  /**
+   * Budget in separation iterations (one pass of moves over the overlapping pieces). Default 2000
+   * when neither this nor `timeBudgetMs` is given.
+   */
+  maxIterations?: number;
+  /** Wall-clock budget in milliseconds; needs `now`. */
+  timeBudgetMs?: number;
+  /** Millisecond clock (e.g. `performance.now`); without it the time budget is ignored. */
+  now?: () => number;
+  onProgress?: (progress: NestingProgress) => void;
+  /** Checked between moves; when aborted the best layout so far is returned with complete: false. */
+  signal?: AbortSignal;
+}
+
+/**
+ * Where one copy goes. To draw it: take the piece polygon, mirror it if `mirrored` (x → −x), rotate
+ * about its own origin by `rotation` degrees, then translate by (x, y).
+ */
+export interface NestingPlacement {
+  pieceId: string;
+  /** 0-based copy index. For mirrored pieces copy 2k is the normal and 2k + 1 the mirrored half of pair k. */
+  copy: number;
+  rotation: number;
+  mirrored: boolean;
+  x: Millimetres;
+  y: Millimetres;
+}
+
+/** A marker: the strip spans x ∈ [0, length] and y ∈ [0, stripWidth]. */
+export interface NestingResult {
+  /** One entry per copy, ordered by piece input order, then copy. */
+  placements: NestingPlacement[];
+  /** Used length: the largest x reached by any placed piece. */
+  length: Millimetres;
+  /** Total piece area ÷ (length × stripWidth), in [0, 1]. */
+  utilisation: number;
+  /** False when stopped by the signal before the budget ran out (the layout is still valid). */
+  complete: boolean;
+  /** Separation iterations run. */
+  iterations: number;
+}

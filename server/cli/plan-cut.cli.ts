@@ -1,0 +1,48 @@
+import { z } from 'zod';
+import { mm } from '@shared/units';
+import { allocateRolls, planCutOrder } from '@planning';
+import { readCliInput } from './cli-args';
+
+const inputSchema = z.object({
+  sizes: z.array(z.string()).min(1),
+  quantities: z.record(z.string(), z.number().int().nonnegative()),
+  maxPlies: z.number().int().positive(),
+  maxGarmentsPerMarker: z.number().int().positive(),
+  maxMarkerLength: z.number().positive().optional(),
+  overcutPercent: z.number().nonnegative().optional(),
+  endAllowance: z.number().nonnegative().optional(),
+  garmentLength: z.record(z.string(), z.number().positive()),
+  rolls: z.array(z.object({ id: z.string(), length: z.number().nonnegative(), shadeLot: z.string() })).optional(),
+});
+
+const { input, json } = readCliInput(process.argv.slice(2));
+const parsed = inputSchema.parse(input);
+const plan = planCutOrder({
+  ...parsed,
+  maxMarkerLength: parsed.maxMarkerLength === undefined ? undefined : mm(parsed.maxMarkerLength),
+  endAllowance: parsed.endAllowance === undefined ? undefined : mm(parsed.endAllowance),
+  garmentLength: Object.fromEntries(Object.entries(parsed.garmentLength).map(([k, v]) => [k, mm(v)])),
+});
+const allocation = parsed.rolls
+  ? allocateRolls({ lays: plan.lays, rolls: parsed.rolls.map((r) => ({ ...r, length: mm(r.length) })), endAllowance: plan.endAllowance })
+  : undefined;
+const out = {
+  lays: plan.lays.map((l) => ({ ratio: l.ratio, plies: l.plies, markerLength: l.markerLength })),
+  fabricUsed: plan.fabricUsed,
+  lowerBound: plan.lowerBound,
+  overcut: plan.overcut,
+  rolls: (allocation?.rolls ?? []).flatMap((r): { id: string; lay: number | null; plies: number; remnant: number }[] =>
+    r.segments.length === 0
+      ? [{ id: r.id, lay: null, plies: 0, remnant: r.remnant }]
+      : r.segments.map((s) => ({ id: r.id, lay: s.lay, plies: s.plies, remnant: s.remaining })),
+  ),
+  method: plan.method,
+  gap: plan.gap,
+  layLowerBound: plan.layLowerBound,
+  ...(allocation ? { shortfall: allocation.shortfall, splitLays: allocation.splitLays } : {}),
+};
+if (json) process.stdout.write(`${JSON.stringify(out)}\n`);
+else {
+  plan.lays.forEach((l, i) => process.stdout.write(`lay ${i + 1}: ${JSON.stringify(l.ratio)} × ${l.plies} plies, marker ${l.markerLength} mm\n`));
+  process.stdout.write(`fabric ${plan.fabricUsed} mm (lower bound ${plan.lowerBound} mm, ${plan.method})\n`);
+}

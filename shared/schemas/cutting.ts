@@ -1,0 +1,161 @@
+import { z } from 'zod';
+import { isoDate, safeText } from './common';
+
+const name = z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters');
+const positiveMm = (what: string) => z.number({ error: `${what} is required` }).positive(`${what} must be above 0`).max(1_000_000, `${what} is too large`);
+
+export const createFabricInput = z.object({
+  name,
+  composition: safeText(200).default(''),
+  widthMm: positiveMm('Cuttable width').max(5000, 'At most 5000 mm'),
+  shrinkagePercent: z.number().min(0, 'Cannot be negative').max(30, 'At most 30 %').default(0),
+  isDirectional: z.boolean().default(false),
+  pricePerMetreMinor: z.number().int('Whole minor units').min(0, 'Cannot be negative').default(0),
+  supplierId: z.number().int().positive().nullable().default(null),
+  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(300, 'At most 300 plies').default(40),
+});
+export type CreateFabricInput = z.input<typeof createFabricInput>;
+export const updateFabricInput = createFabricInput.partial();
+
+export interface FabricDto {
+  id: number;
+  name: string;
+  composition: string;
+  widthMm: number;
+  shrinkagePercent: number;
+  isDirectional: boolean;
+  maxPlies: number;
+  supplierId: number | null;
+  /** Present only for roles that may read costs. */
+  pricePerMetreMinor?: number;
+  rollCount: number;
+  totalRemainingMm: number;
+}
+
+export const rollInput = z.object({
+  label: z.string().trim().min(1, 'Roll label is required').max(40, 'At most 40 characters'),
+  lengthMm: positiveMm('Length'),
+  widthMm: positiveMm('Width').max(5000, 'At most 5000 mm'),
+  shadeLot: z.string().trim().min(1, 'Shade lot is required').max(40, 'At most 40 characters'),
+  receivedDate: isoDate,
+});
+export type RollInput = z.input<typeof rollInput>;
+/** Table entry: one or more rolls saved together (all or none). */
+export const createRollsInput = z.object({ rolls: z.array(rollInput).min(1, 'Enter at least one roll').max(500, 'At most 500 rolls') });
+
+export interface RollDto {
+  id: number;
+  fabricId: number;
+  label: string;
+  lengthMm: number;
+  widthMm: number;
+  shadeLot: string;
+  receivedDate: string;
+  remainingMm: number;
+  isRemnant: boolean;
+}
+
+/** One bad cell of an imported packing list: 1-based row as the spreadsheet shows it (header = row 1). */
+export interface ImportRowError {
+  row: number;
+  column: string;
+  message: string;
+}
+
+export const fabricParam = z.object({ id: z.coerce.number().int().positive() });
+
+export const createCutPlanInput = z.object({
+  fabricId: z.number({ error: 'Pick a fabric' }).int().positive('Pick a fabric'),
+  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(300, 'At most 300 plies'),
+  maxGarmentsPerMarker: z.number().int('Whole garments').min(1, 'At least 1 garment').max(12, 'At most 12 garments'),
+  maxMarkerLengthMm: z.number().positive('Must be above 0').max(100_000, 'At most 100 m').optional(),
+  overcutPercent: z.number().min(0, 'Cannot be negative').max(50, 'At most 50 %').optional(),
+  endAllowanceMm: z.number().min(0, 'Cannot be negative').max(500, 'At most 500 mm').optional(),
+  rollIds: z.array(z.number().int().positive()).optional(),
+});
+export type CreateCutPlanInput = z.input<typeof createCutPlanInput>;
+
+export interface LayRollDto {
+  rollId: number;
+  label: string;
+  shadeLot: string;
+  plies: number;
+  expectedRemnantMm: number;
+  actualPlies?: number;
+  actualRemnantMm?: number;
+  note?: string;
+}
+
+export interface LayDto {
+  id: number;
+  cutPlanId: number;
+  batchId: number;
+  batchCode: string;
+  seq: number;
+  ratio: Record<string, number>;
+  garmentsPerPly: number;
+  plies: number;
+  markerLengthMm: number;
+  endAllowanceMm: number;
+  markerId: number | null;
+  spreadingMode: string;
+  rolls: LayRollDto[];
+  status: 'planned' | 'cut';
+  flaws: string;
+  cutAt: string | null;
+  bundleCount: number;
+}
+
+export interface CutPlanDto {
+  id: number;
+  batchId: number;
+  fabricId: number;
+  fabricName: string;
+  status: string;
+  fabricUsedMm: number;
+  lowerBoundMm: number;
+  gap: number;
+  layLowerBound: number;
+  method: string;
+  overcut: Record<string, number>;
+  cut: Record<string, number>;
+  /** How each lay's marker length was found: stored marker or estimate. */
+  lengthSources: { ratio: Record<string, number>; source: 'marker' | 'estimate'; markerId?: number }[];
+  assumedUtilisation: number;
+  endOfRollWasteMm: number;
+  stockKeptMm: number;
+  shortfall: number[];
+  splitLays: number[];
+  lays: LayDto[];
+  createdAt: string;
+}
+
+export const recordLayInput = z.object({
+  rolls: z
+    .array(
+      z.object({
+        rollId: z.number().int().positive(),
+        actualPlies: z.number().int('Whole plies').min(0, 'Cannot be negative').max(300, 'At most 300 plies'),
+        actualRemnantMm: z.number().min(0, 'Cannot be negative').max(1_000_000, 'Too long'),
+        note: safeText(500).optional(),
+      }),
+    )
+    .min(1, 'Record at least one roll'),
+  flaws: safeText(2000).default(''),
+});
+export type RecordLayInput = z.input<typeof recordLayInput>;
+
+export interface BundleDto {
+  id: number;
+  number: number;
+  layId: number;
+  size: string;
+  shadeLot: string;
+  plyFrom: number;
+  plyTo: number;
+  pieces: number;
+  qrText: string;
+}
+
+/** Text of a bundle's QR code. */
+export const bundleQrText = (batchId: number, bundleNumber: number) => `SR-B:${batchId}:${bundleNumber}`;

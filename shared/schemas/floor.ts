@@ -1,0 +1,183 @@
+import { z } from 'zod';
+import { isoDate, safeText } from './common';
+
+/** Minutes after logging during which the person who logged may undo it. */
+export const UNDO_WINDOW_MS = 2 * 60 * 1000;
+
+/** Text a bundle ticket's QR code carries: `SR-B:<batchId>:<bundleNumber>`. */
+export const BUNDLE_QR_PREFIX = 'SR-B';
+
+/** Reads a bundle ticket's QR text; null when it is not one of ours. */
+export function parseBundleQr(text: string): { batchId: number; bundleNumber: number } | null {
+  const m = /^SR-B:(\d{1,9}):(\d{1,9})$/.exec(text.trim());
+  if (!m) return null;
+  return { batchId: Number(m[1]), bundleNumber: Number(m[2]) };
+}
+
+export const OPERATION_SECTIONS = ['cutting', 'sewing', 'finishing'] as const;
+export type OperationSection = (typeof OPERATION_SECTIONS)[number];
+
+/** Log one operation done on one bundle. A quality check also says pass or fail. */
+export const logWorkInput = z
+  .object({
+    bundleNumber: z.number({ error: 'Enter the bundle number' }).int('Whole numbers only').positive('Bundle numbers start at 1'),
+    batchId: z.number().int().positive().optional(),
+    operationId: z.number({ error: 'Pick an operation' }).int().positive('Pick an operation'),
+    idempotencyKey: z
+      .string()
+      .min(8, 'Key too short')
+      .max(80, 'Key too long')
+      .regex(/^[A-Za-z0-9_.:-]+$/, 'Letters, digits and - _ . : only'),
+    outcome: z.enum(['pass', 'fail']).optional(),
+    defect: safeText(200).optional(),
+    /** On a failed check: the operation to do again (rework). */
+    reworkOperationId: z.number().int().positive().optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.outcome === 'fail' && !v.defect) ctx.addIssue({ code: 'custom', path: ['defect'], message: 'Say what the defect is' });
+    if (v.outcome === 'fail' && !v.reworkOperationId)
+      ctx.addIssue({ code: 'custom', path: ['reworkOperationId'], message: 'Pick the operation to send back' });
+  });
+export type LogWorkInput = z.input<typeof logWorkInput>;
+
+export const bundleLookupQuery = z.object({
+  number: z.coerce.number().int('Whole numbers only').positive('Bundle numbers start at 1'),
+  batchId: z.coerce.number().int().positive().optional(),
+});
+
+export const batchIdParam = z.object({ batchId: z.coerce.number().int().positive() });
+
+export const periodQuery = z
+  .object({ from: isoDate, to: isoDate })
+  .refine((v) => v.from <= v.to, { path: ['to'], message: 'The end must not be before the start' });
+export type PeriodQuery = z.infer<typeof periodQuery>;
+
+/** An operation as the floor sees it; the piece rate is left out for floor roles. */
+export interface FloorOperationDto {
+  id: number;
+  code: string;
+  name: string;
+  section: OperationSection;
+  machineType: string;
+  sam: number;
+  predecessors: string[];
+  /** Operations this person does first (their section, then ones they logged before). */
+  isMine: boolean;
+  /** A quality check: logged with pass or fail. */
+  isCheck: boolean;
+}
+
+/** One operation's state on one bundle. */
+export interface BundleOperationState {
+  operationId: number;
+  done: boolean;
+  /** Current attempt (0 first time, counts up after rework). */
+  attempt: number;
+  doneBy: string | null;
+  doneAt: string | null;
+}
+
+export interface BundleDto {
+  id: number;
+  batchId: number;
+  batchCode: string;
+  number: number;
+  size: string;
+  shadeLot: string;
+  plyFrom: number;
+  plyTo: number;
+  pieces: number;
+  styleName: string;
+  operations: FloorOperationDto[];
+  states: BundleOperationState[];
+  /** The style's spec sheet points a checker measures against. */
+  specNotes: string[];
+}
+
+export interface WorkLogDto {
+  id: number;
+  bundleId: number;
+  bundleNumber: number;
+  batchId: number;
+  operationId: number;
+  operationCode: string;
+  operationName: string;
+  attempt: number;
+  pieces: number;
+  earnedMinutes: number;
+  /** What this log pays the person who logged it (0 for rework). */
+  payMinor: number;
+  currency: string;
+  outcome: string;
+  defect: string;
+  userId: number;
+  userName: string;
+  createdAt: string;
+  /** Until when the person who logged it may undo it. */
+  undoUntil: string;
+}
+
+export interface LogWorkResult {
+  log: WorkLogDto;
+  /** Predecessors not yet done on this bundle (logged anyway). */
+  warnings: string[];
+}
+
+export interface TodayDto {
+  day: string;
+  logs: WorkLogDto[];
+  pieces: number;
+  bundleOps: number;
+  earningsMinor: number;
+  currency: string;
+}
+
+export interface OperationProgress {
+  operationId: number;
+  code: string;
+  name: string;
+  section: OperationSection;
+  bundlesDone: number;
+  piecesDone: number;
+  /** Bundles whose predecessors are done but this operation is not: work waiting at this operation. */
+  bundlesReady: number;
+  bundlesTotal: number;
+}
+
+export interface SectionProgress {
+  section: OperationSection;
+  piecesDone: number;
+  piecesTotal: number;
+  percent: number;
+}
+
+export interface DailyOutput {
+  day: string;
+  pieces: number;
+}
+
+export interface PersonEfficiency {
+  userId: number;
+  name: string;
+  role: string;
+  pieces: number;
+  earnedMinutes: number;
+  attendedMinutes: number;
+  /** Earned ÷ attended minutes × 100; null without attendance. */
+  efficiencyPercent: number | null;
+  payMinor: number;
+}
+
+export interface ProgressDto {
+  batchId: number;
+  batchCode: string;
+  totalPieces: number;
+  bundles: number;
+  operations: OperationProgress[];
+  sections: SectionProgress[];
+  /** Bundles by stage: not started, in sewing, in finishing, packed. */
+  stages: { stage: 'cut' | 'sewing' | 'finishing' | 'packed'; bundles: number }[];
+  daily: { day: string; pieces: number; planned: number }[];
+  people: PersonEfficiency[];
+  packedPieces: number;
+}

@@ -1,0 +1,92 @@
+import { z } from 'zod';
+import { isoDate, safeText } from './common';
+
+export const PO_STATUSES = ['draft', 'sent', 'confirmed', 'received'] as const;
+export type PoStatus = (typeof PO_STATUSES)[number];
+
+export const createSupplierInput = z.object({
+  name: safeText(120).min(2, 'Name the supplier'),
+  contact: safeText(120).default(''),
+  email: z.string().trim().email('Enter an e-mail address').max(200),
+  leadTimeDays: z.number({ error: 'Enter a lead time' }).int('Whole days').min(0, 'Cannot be negative').max(365, 'At most 365 days').default(7),
+});
+export type CreateSupplierInput = z.input<typeof createSupplierInput>;
+export const updateSupplierInput = createSupplierInput.partial();
+
+export interface SupplierDto {
+  id: number;
+  name: string;
+  contact: string;
+  email: string;
+  leadTimeDays: number;
+}
+
+/** One material a batch needs, net of stock and of what is already on order. */
+export interface NeedDto {
+  kind: 'fabric' | 'trim';
+  refId: number;
+  item: string;
+  /** mm for fabric, the trim's unit otherwise. */
+  unit: string;
+  required: number;
+  inStock: number;
+  onOrder: number;
+  toOrder: number;
+  unitPriceMinor: number;
+  supplierId: number | null;
+  supplierName: string;
+}
+
+export interface PurchaseOrderLineDto {
+  kind: 'fabric' | 'trim';
+  refId: number;
+  item: string;
+  unit: string;
+  quantity: number;
+  unitPriceMinor: number;
+  lineTotalMinor: number;
+  receivedQuantity: number;
+}
+
+export interface PurchaseOrderDto {
+  id: number;
+  number: string;
+  supplierId: number;
+  supplierName: string;
+  supplierEmail: string;
+  batchId: number | null;
+  status: PoStatus;
+  deliveryDate: string;
+  lines: PurchaseOrderLineDto[];
+  totalMinor: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export const createOrdersInput = z.object({
+  /** Only needs of these kinds; both when omitted. */
+  kinds: z.array(z.enum(['fabric', 'trim'])).min(1).default(['fabric', 'trim']),
+});
+
+export const updateOrderStatusInput = z.object({ status: z.enum(['confirmed']) });
+
+const rollInput = z.object({
+  label: safeText(40).min(1, 'Label the roll'),
+  lengthMm: z.number({ error: 'Enter the roll length' }).positive('Must be longer than 0').max(1_000_000, 'Longer than 1 km?'),
+  shadeLot: safeText(40).min(1, 'Give the shade lot'),
+});
+
+export const receiveOrderInput = z.object({
+  receivedDate: isoDate.optional(),
+  lines: z
+    .array(
+      z.object({
+        index: z.number().int().min(0),
+        /** Trim lines: quantity received. Fabric lines: the rolls received. */
+        quantity: z.number().min(0, 'Cannot be negative').optional(),
+        rolls: z.array(rollInput).max(200).optional(),
+      }),
+    )
+    .min(1, 'Receive at least one line'),
+});
+export type ReceiveOrderInput = z.input<typeof receiveOrderInput>;

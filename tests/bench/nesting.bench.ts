@@ -1,0 +1,119 @@
+/**
+ * Marker-nesting benchmark on the public strip-packing instances in ../shared/datasets/nesting/json.
+ *
+ *   npm run bench:nesting -- --instance FILE --seconds N [--seed S] --json
+ *     one instance; prints ONE JSON line: {instance, stripWidth, length, density, seconds, valid,
+ *     placements: [{item, rotation, x, y}]} (rotate the item polygon about its origin, then translate).
+ *   npm run bench:nesting -- --all --seconds N [--seed S]
+ *     every instance in the folder; prints a table of density against the best known.
+ *
+ * Each run uses both cores: two workers (server/workers/nesting.worker.ts) with seeds S and S + 1,
+ * the better marker wins. "valid" is the independent checker (planning/nesting/checker.ts).
+ * Not a timed test; it never runs inside npm test.
+ */
+import { readdirSync } from 'node:fs';
+import path from 'node:path';
+import { Worker } from 'node:worker_threads';
+import { checkLayout, type NestingResult } from '../../planning/nesting';
+import { datasetDir, instanceToInput, readJsonInstance } from './nesting/json-instance';
+
+/**
+ * Best-known densities (%): sparrow's best-ever layouts, S1-rec in ../shared/reference/nesting-benchmarks.md
+ * (Gardeyn, Vanden Berghe & Wauters 2025, repository JeroenGar/sparrow data/records; density computed
+ * there on the JSON width, † = found on the padded strip for jakobs1, fu, shapes0, shapes1).
+ */
+const BEST_KNOWN: Record<string, number> = {
+  shirts: 90.92,
+  trousers: 92.61,
+  albano: 89.82,
+  dagli: 90.17,
+  jakobs1: 89.24,
+  fu: 92.39,
+  shapes0: 69.98,
+  shapes1: 76.72,
+};
+
+interface Args {
+  instance?: string;
+  all: boolean;
+  seconds: number;
+  seed: number;
+  json: boolean;
+}
+
+function parseArgs(argv: string[]): Args {
+  const a: Args = { all: false, seconds: 60, seed: 1, json: false };
+  for (let i = 0; i < argv.length; i++) {
+    const k = argv[i];
+    if (k === '--instance') a.instance = argv[++i];
+    else if (k === '--seconds') a.seconds = Number(argv[++i]);
+    else if (k === '--seed') a.seed = Number(argv[++i]);
+    else if (k === '--all') a.all = true;
+    else if (k === '--json') a.json = true;
+  }
+  if (!a.all && !a.instance) throw new Error('give --instance FILE or --all');
+  if (!(a.seconds > 0)) throw new Error('--seconds must be positive');
+  return a;
+}
+
+function runWorker(input: ReturnType<typeof instanceToInput>, seed: number, seconds: number): Promise<NestingResult> {
+  const entry = new URL('../../server/workers/nesting.worker.ts', import.meta.url).href;
+  const worker = new Worker(new URL('./nesting/ts-worker.mjs', import.meta.url), {
+    workerData: { entry, input, options: { seed, timeBudgetMs: seconds * 1000 } },
+  });
+  return new Promise((resolve, reject) => {
+    worker.on('message', (m: { type: string; result?: NestingResult; message?: string }) => {
+      if (m.type === 'result') resolve(m.result!);
+      if (m.type === 'error') reject(new Error(m.message));
+      if (m.type === 'result' || m.type === 'error') void worker.terminate();
+    });
+    worker.on('error', reject);
+  });
+}
+
+async function benchInstance(file: string, seconds: number, seed: number) {
+  const inst = readJsonInstance(file);
+  const input = instanceToInput(inst);
+  // Start-up and the final check come out of the allowance, so the wall clock stays near N s.
+  const budget = Math.max(0.5, seconds - 1.5);
+  const results = await Promise.all([runWorker(input, seed, budget), runWorker(input, seed + 1, budget)]);
+  const scored = results.map((r) => ({ r, check: checkLayout(input, r) }));
+  scored.sort((a, b) => Number(b.check.valid) - Number(a.check.valid) || a.r.length - b.r.length);
+  const { r, check } = scored[0];
+  return {
+    instance: inst.name,
+    stripWidth: inst.strip_height,
+    length: r.length,
+    density: r.utilisation, // total item area ÷ (length × strip_height)
+    seconds,
+    valid: check.valid,
+    placements: r.placements.map((p) => ({ item: Number(p.pieceId), rotation: p.rotation, x: p.x, y: p.y })),
+    errors: check.errors.slice(0, 5),
+  };
+}
+
+async function main(): Promise<void> {
+  const args = parseArgs(process.argv.slice(2));
+  if (args.instance) {
+    const { errors, ...out } = await benchInstance(path.resolve(args.instance), args.seconds, args.seed);
+    if (errors.length) process.stderr.write(errors.join('\n') + '\n');
+    process.stdout.write(JSON.stringify(out) + '\n');
+    return;
+  }
+  const dir = datasetDir('json');
+  const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
+  const rows: string[] = ['| instance | density % | best known % (sparrow S1-rec) | ratio | length | valid |', '|---|---|---|---|---|---|'];
+  process.stdout.write(rows.join('\n') + '\n');
+  for (const f of files) {
+    const r = await benchInstance(path.join(dir, f), args.seconds, args.seed);
+    const best = BEST_KNOWN[r.instance];
+    const d = r.density * 100;
+    const line = `| ${r.instance} | ${d.toFixed(2)} | ${best?.toFixed(2) ?? '–'} | ${best ? (d / best).toFixed(3) : '–'} | ${r.length.toFixed(3)} | ${r.valid} |`;
+    process.stdout.write(line + '\n');
+  }
+}
+
+main().catch((err: unknown) => {
+  process.stderr.write(String(err instanceof Error ? err.stack : err) + '\n');
+  process.exit(1);
+});
