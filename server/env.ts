@@ -6,6 +6,10 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   HOST: z.string().default('0.0.0.0'),
   DATABASE_PATH: z.string().default('data/seamrun.sqlite'),
+  /** postgres://… switches to PostgreSQL; empty keeps the embedded SQLite file. */
+  DATABASE_URL: z.string().default(''),
+  /** redis://… moves long jobs to BullMQ workers (`npm run worker`); empty keeps the in-process queue. */
+  REDIS_URL: z.string().default(''),
   SESSION_SECRET: z.string().min(16).default('dev-only-session-secret-change-me'),
   TRUST_PROXY: z
     .enum(['true', 'false'])

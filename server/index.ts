@@ -10,7 +10,7 @@ import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 /** env → data source → migrations → seed → listen. */
 export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
-  const ds = await openDatabase(env.DATABASE_PATH);
+  const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
   const seeded = env.SEED_DEMO
     ? await seedDemoStudio(ds, {
         password: env.DEMO_PASSWORD,

@@ -3,14 +3,16 @@
  * existing migrations. Usage: npm run db:generate -- PascalName. Read the file before committing.
  */
 import { writeFileSync } from 'node:fs';
-import { openDatabase } from './data-source';
+import { isPostgresUrl, openDatabase } from './data-source';
 
 const name = process.argv[2];
 if (!name || !/^[A-Z][A-Za-z0-9]+$/.test(name)) {
   console.error('Usage: npm run db:generate -- PascalName');
   process.exit(1);
 }
-const ds = await openDatabase(':memory:');
+const target = process.env.DATABASE_URL ?? ':memory:';
+const folder = isPostgresUrl(target) ? 'migrations-postgres' : 'migrations';
+const ds = await openDatabase(target);
 const log = await ds.driver.createSchemaBuilder().log();
 await ds.destroy();
 if (log.upQueries.length === 0) {
@@ -25,7 +27,7 @@ const down = log.downQueries
   .reverse()
   .map((x) => `    await queryRunner.query(${q(x.query)});`)
   .join('\n');
-const file = `server/db/migrations/${stamp}-${name}.ts`;
+const file = `server/db/${folder}/${stamp}-${name}.ts`;
 writeFileSync(
   file,
   `import type { MigrationInterface, QueryRunner } from 'typeorm';
@@ -43,4 +45,4 @@ ${down}
 }
 `,
 );
-console.log(`Wrote ${file}; add it to server/db/migrations/index.ts`);
+console.log(`Wrote ${file}; add it to server/db/${folder}/index.ts`);

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('audit_entries')
 @Index(['studioId', 'createdAt'])
@@ -31,6 +32,6 @@ export class AuditEntryEntity {
   @Column({ type: 'text', default: '' })
   after: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

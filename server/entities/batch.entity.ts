@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 import { StyleEntity } from './style.entity';
 
 @Entity('batches')
@@ -30,6 +31,6 @@ export class BatchEntity {
   @Column({ type: 'text', default: '' })
   notes: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

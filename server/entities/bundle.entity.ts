@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('bundles')
 @Index(['studioId', 'batchId', 'number'], { unique: true })
@@ -39,6 +40,6 @@ export class BundleEntity {
   @Column({ type: 'simple-json' })
   reopened: Record<string, number>;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('cut_plans')
 export class CutPlanEntity {
@@ -30,6 +31,6 @@ export class CutPlanEntity {
   @Column({ type: 'varchar', length: 12, default: 'draft' })
   status: 'draft' | 'released' | 'superseded';
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

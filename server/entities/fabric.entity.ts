@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('fabrics')
 export class FabricEntity {
@@ -35,6 +36,6 @@ export class FabricEntity {
   @Column({ type: 'integer', default: 40 })
   maxPlies: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

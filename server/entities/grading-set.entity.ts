@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 /** A style's size chart, base pieces and grade rules, stored as the grading core's plain data. */
 @Entity('grading_sets')
@@ -25,6 +26,6 @@ export class GradingSetEntity {
   @Column({ type: 'simple-json' })
   eases: unknown;
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn({ type: TIMESTAMP })
   updatedAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 export interface LayRollLine {
   rollId: number;
@@ -56,9 +57,9 @@ export class LayEntity {
   @Column({ type: 'text', default: '' })
   flaws: string;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   cutAt: Date | null;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 /** A message the studio sent, as received by the local SMTP server (the outbox) or relayed. */
 @Entity('mail_messages')
@@ -27,6 +28,6 @@ export class MailMessageEntity {
   @Column({ type: 'varchar', length: 12, default: 'sent' })
   status: 'sent' | 'failed';
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 export type MarkerStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
 
@@ -53,6 +54,6 @@ export class MarkerEntity {
   @Column({ type: 'text', default: '' })
   error: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('pay_periods')
 export class PayPeriodEntity {
@@ -24,6 +25,6 @@ export class PayPeriodEntity {
   @Column({ type: 'simple-json' })
   lines: { userId: number; name: string; pieces: number; amountMinor: number }[];
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('payouts')
 @Index(['payPeriodId', 'userId'], { unique: true })
@@ -37,9 +38,9 @@ export class PayoutEntity {
   @Column({ type: 'integer', default: 0 })
   attempts: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn({ type: TIMESTAMP })
   updatedAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 export interface PurchaseOrderLine {
   kind: 'fabric' | 'trim';
@@ -33,9 +34,9 @@ export class PurchaseOrderEntity {
   @Column({ type: 'varchar', length: 10 })
   deliveryDate: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn({ type: TIMESTAMP })
   updatedAt: Date;
 }

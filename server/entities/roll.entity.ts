@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 import { FabricEntity } from './fabric.entity';
 
 @Entity('rolls')
@@ -39,6 +40,6 @@ export class RollEntity {
   @Column({ type: 'boolean', default: false })
   isRemnant: boolean;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('studios')
 export class StudioEntity {
@@ -18,6 +19,6 @@ export class StudioEntity {
   @Column({ type: 'real', default: 8 })
   workingDayHours: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

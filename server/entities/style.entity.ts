@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('styles')
 @Index(['studioId', 'code'], { unique: true })
@@ -28,9 +29,9 @@ export class StyleEntity {
   @Column({ type: 'varchar', length: 16, default: 'draft' })
   status: 'draft' | 'sampling' | 'approved' | 'archived';
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn({ type: TIMESTAMP })
   updatedAt: Date;
 }

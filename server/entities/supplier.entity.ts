@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 @Entity('suppliers')
 export class SupplierEntity {
@@ -20,6 +21,6 @@ export class SupplierEntity {
   @Column({ type: 'integer', default: 7 })
   leadTimeDays: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 import type { Role } from '../../shared/auth/permissions';
 import { StudioEntity } from './studio.entity';
 
@@ -40,13 +41,13 @@ export class UserEntity {
   @Column({ type: 'integer', default: 0 })
   failedLogins: number;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   lockedUntil: Date | null;
 
   /** Bumped on password change or deactivation; sessions carrying an older value are dropped. */
   @Column({ type: 'integer', default: 1 })
   sessionVersion: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { TIMESTAMP } from './column-types';
 
 /** One operation done on one bundle. Unique per bundle, operation and attempt: logged once. */
 @Entity('work_logs')
@@ -45,6 +46,6 @@ export class WorkLogEntity {
   @Column({ type: 'varchar', length: 200, default: '' })
   defect: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isUniqueViolation } from '../db/data-source';
 import { AppError } from '../errors';
 
 export const notFoundHandler: RequestHandler = (_req, res) => {
@@ -23,7 +24,7 @@ export function errorHandler(isDevelopment: boolean): ErrorRequestHandler {
       res.status(400).json({ error: { code: 'validation', message: 'The body is not valid JSON', fields: { body: 'Invalid JSON' } } });
       return;
     }
-    if (String(e.code ?? '').startsWith('SQLITE_CONSTRAINT')) {
+    if (isUniqueViolation(err)) {
       res.status(409).json({ error: { code: 'conflict', message: 'That record conflicts with one already saved' } });
       return;
     }
