@@ -36,6 +36,9 @@ export async function loadCuttingPieces(ds: DataSource, studioId: number, styleI
 
 /** The same as {@link loadCuttingPieces} for a set already loaded (sizes in the chart's run order). */
 export function cuttingPiecesOf(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces' | 'gradeRules'>, baseSize: string): Record<string, CuttingPiece[]> {
+  const key = JSON.stringify([baseSize, set.sizeChart.sizes, set.pieces, set.gradeRules]);
+  const hit = memo.get(key);
+  if (hit) return structuredClone(hit);
   const sizes = set.sizeChart.sizes;
   const base = sizes.includes(baseSize) ? baseSize : sizes[Math.floor(sizes.length / 2)];
   const out: Record<string, CuttingPiece[]> = Object.fromEntries(sizes.map((s) => [s, [] as CuttingPiece[]]));
@@ -43,8 +46,13 @@ export function cuttingPiecesOf(set: Pick<StoredGradingSet, 'sizeChart' | 'piece
     const graded = gradePiece(piece, set.gradeRules[piece.id] ?? [], sizes, base);
     for (const size of sizes) out[size].push(cuttingPieceOf(graded.bySize[size]));
   }
-  return out;
+  if (memo.size >= 10) memo.delete(memo.keys().next().value as string);
+  memo.set(key, out);
+  return structuredClone(out);
 }
+
+/** Same content, same result: a small memo (cutting outlines take ~10 ms a piece). */
+const memo = new Map<string, Record<string, CuttingPiece[]>>();
 
 /** One graded piece → its cutting piece. */
 export function cuttingPieceOf(piece: Piece): CuttingPiece {

@@ -1,7 +1,23 @@
 import type { ApiModule } from '../module';
+import { createBatchRepository } from '../batches/batch.repository';
+import { createStyleRepository } from '../styles/style.repository';
+import { linePlanRoutes, operationRoutes } from './line.routes';
+import { createLineService } from './line.service';
+import { createOperationRepository, createStudioLookup } from './operation.repository';
 
-/** The line area. */
+/** The line area: operations per style, line balancing, capacity and the batch schedule. */
 export const lineModule: ApiModule = {
   name: 'line',
-  register() {},
+  register(api, ctx) {
+    const service = createLineService({
+      styles: createStyleRepository(ctx.ds),
+      batches: createBatchRepository(ctx.ds),
+      operations: createOperationRepository(ctx.ds),
+      studio: createStudioLookup(ctx.ds),
+      audit: ctx.audit,
+      now: ctx.now,
+    });
+    api.use('/styles', operationRoutes(service));
+    api.use('/line', linePlanRoutes(service));
+  },
 };

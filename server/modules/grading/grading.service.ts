@@ -1,0 +1,225 @@
+import {
+  cuttingOutline, demoSizeChart, draftShirtDress, en13402BustIntervals, gradeStyle, isPointOfMeasure, measurementsForSize,
+  parseSizeChartTable, sizeChartToRows, sizeMix, type BodyMeasurements, type GradeRule, type SizeChart, type TableError,
+} from '@grading';
+import { pieceToDxf } from '@exports/dxf/piece-dxf';
+import { tiledPiecePdf } from '@exports/pdf/tiled-piece';
+import { pieceToSvg } from '@exports/svg/piece-svg';
+import { mm } from '@shared/units/units';
+import type { GradingDto, PutGradeRuleInput, PutSizeChartInput, SizeMixDto } from '../../../shared/schemas/grading';
+import type { Actor } from '../../auth/require';
+import { badRequest, notFound } from '../../errors';
+import type { AuditRepository } from '../audit/audit.repository';
+import type { StyleRepository } from '../styles/style.repository';
+import { computeGrading } from './grading-compute';
+import type { GradingSetRepository, StoredGradingSet } from './grading-set.repository';
+import { presentChart, presentGrading } from './grading.presenter';
+import { readTable, rowsToCsv, rowsToXlsx, type UploadedTable } from './table-io';
+
+export interface GradingServiceDeps {
+  styles: StyleRepository;
+  sets: GradingSetRepository;
+  audit: AuditRepository;
+  now: () => Date;
+}
+
+export type GradingService = ReturnType<typeof createGradingService>;
+
+/** A file to send: bytes, content type and file name. */
+export interface Download {
+  body: Buffer | string;
+  type: string;
+  filename: string;
+}
+
+const tableErrorFields = (errors: TableError[]) =>
+  Object.fromEntries(errors.map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+
+/** Grading rules of a style: chart, rules, graded set, downloads and the size mix. */
+export function createGradingService({ styles, sets, audit, now }: GradingServiceDeps) {
+  async function styleOf(actor: Actor, styleId: number) {
+    const style = await styles.get(actor.studioId, styleId);
+    if (!style) throw notFound('Style');
+    return style;
+  }
+  async function setOf(actor: Actor, styleId: number): Promise<StoredGradingSet> {
+    const set = await sets.byStyle(actor.studioId, styleId);
+    if (!set || !set.sizeChart) throw notFound('Grading set');
+    return set;
+  }
+
+  function checkChart(chart: SizeChart, run: string[]): void {
+    if (chart.sizes.join('|') !== run.join('|')) {
+      throw badRequest(`sizes: the chart's sizes must be the style's size run (${run.join(', ')})`, { sizes: `Use the style's size run: ${run.join(', ')}` });
+    }
+  }
+
+  async function saveChart(actor: Actor, styleId: number, chart: SizeChart, eases: StoredGradingSet['eases'] | undefined, action: string) {
+    const style = await styleOf(actor, styleId);
+    checkChart(chart, style.sizeRun);
+    const before = await sets.byStyle(actor.studioId, styleId);
+    const saved = await sets.save(actor.studioId, styleId, { sizeChart: chart, ...(eases ? { eases } : {}) });
+    await audit.record(actor, action, 'grading_set', saved.id, before?.sizeChart ? presentChart(before.sizeChart) : undefined, presentChart(chart));
+    return get(actor, styleId);
+  }
+
+  async function get(actor: Actor, styleId: number): Promise<GradingDto> {
+    const style = await styleOf(actor, styleId);
+    const set = await sets.byStyle(actor.studioId, styleId);
+    const computed = set?.sizeChart ? computeGrading(set, style.baseSize) : null;
+    return presentGrading(style.id, style.sizeRun, style.baseSize, set, computed);
+  }
+
+  return {
+    get,
+
+    /** Replace the chart from the grid; unknown points of measure are field errors. */
+    async putChart(actor: Actor, styleId: number, input: PutSizeChartInput) {
+      const fields: Record<string, string> = {};
+      input.rows.forEach((r, i) => {
+        if (!isPointOfMeasure(r.pointOfMeasure)) fields[`rows.${i}.pointOfMeasure`] = 'Unknown point of measure';
+      });
+      for (const k of Object.keys(input.eases ?? {})) if (!isPointOfMeasure(k)) fields[`eases.${k}`] = 'Unknown point of measure';
+      if (Object.keys(fields).length) throw badRequest(`${Object.keys(fields)[0]}: ${Object.values(fields)[0]}`, fields);
+      const chart: SizeChart = { name: input.name, sizes: input.sizes, values: Object.fromEntries(input.rows.map((r) => [r.pointOfMeasure, r.values.map(mm)])) };
+      const eases = input.eases
+        ? Object.fromEntries(Object.entries(input.eases).map(([k, v]) => [k, { easeMm: mm(v.easeMm), toleranceMm: mm(v.toleranceMm) }]))
+        : undefined;
+      return saveChart(actor, styleId, chart, eases, 'update_chart');
+    },
+
+    /** Import a chart from CSV or XLSX: every bad cell reported (row, column, why), nothing saved on error. */
+    async importChart(actor: Actor, styleId: number, file: UploadedTable | undefined) {
+      if (!file) throw badRequest('file: attach a CSV or XLSX file', { file: 'Attach a CSV or XLSX file' });
+      const parsed = parseSizeChartTable(await readTable(file), file.originalname.replace(/\.(csv|xlsx)$/i, ''));
+      if (!parsed.ok) {
+        const first = parsed.errors[0];
+        throw badRequest(`row ${first.row}, column ${first.column}: ${first.message} (${parsed.errors.length} problem${parsed.errors.length > 1 ? 's' : ''}; nothing imported)`, tableErrorFields(parsed.errors));
+      }
+      return saveChart(actor, styleId, parsed.chart, undefined, 'import_chart');
+    },
+
+    async exportChart(actor: Actor, styleId: number, format: 'csv' | 'xlsx', unit: 'mm' | 'in'): Promise<Download> {
+      const style = await styleOf(actor, styleId);
+      const set = await setOf(actor, styleId);
+      const rows = sizeChartToRows(set.sizeChart, unit);
+      const base = `${style.code}-size-chart`;
+      if (format === 'csv') return { body: rowsToCsv(rows), type: 'text/csv; charset=utf-8', filename: `${base}.csv` };
+      return { body: await rowsToXlsx(rows, 'Size chart', now()), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${base}.xlsx` };
+    },
+
+    /** Set the movement per step of one grade point (replacing the rule on the same target, or adding one). */
+    async putRule(actor: Actor, styleId: number, pieceId: string, input: PutGradeRuleInput) {
+      await styleOf(actor, styleId);
+      const set = await setOf(actor, styleId);
+      const piece = set.pieces.find((p) => p.id === pieceId);
+      if (!piece) throw notFound('Piece');
+      const steps = set.sizeChart.sizes.length - 1;
+      if (input.steps.length !== steps) throw badRequest(`steps: give ${steps} movements, one per size step`, { steps: `Give ${steps} movements, one per size step` });
+      if (input.target.kind === 'vertex' && input.target.index >= piece.outline.length) {
+        throw badRequest('target.index: no such point on the outline', { 'target.index': `The outline has ${piece.outline.length} points` });
+      }
+      const same = (r: GradeRule) => JSON.stringify(r.target) === JSON.stringify(input.target);
+      const rules = set.gradeRules[pieceId] ?? [];
+      const before = rules.find(same);
+      const rule: GradeRule = { target: input.target, landmark: input.landmark ?? before?.landmark, steps: input.steps };
+      const next = before ? rules.map((r) => (same(r) ? rule : r)) : [...rules, rule];
+      const saved = await sets.save(actor.studioId, styleId, { gradeRules: { ...set.gradeRules, [pieceId]: next } });
+      await audit.record(actor, 'update_grade_rule', 'grading_set', saved.id, before ? { pieceId, ...before } : undefined, { pieceId, ...rule });
+      return get(actor, styleId);
+    },
+
+    /** Propose every piece's rules from the chart (trued against mating seams); drafts the demo blocks if no pieces. */
+    async proposeRules(actor: Actor, styleId: number) {
+      const style = await styleOf(actor, styleId);
+      const set = await setOf(actor, styleId);
+      const pieces = set.pieces.length ? set.pieces : draftShirtDress(measurementsForSize(set.sizeChart, style.baseSize) as BodyMeasurements);
+      const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize);
+      const saved = await sets.save(actor.studioId, styleId, { pieces, gradeRules: rules });
+      await audit.record(actor, 'propose_grade_rules', 'grading_set', saved.id, { pieces: set.pieces.length }, { pieces: pieces.length, rules: Object.values(rules).flat().length });
+      return get(actor, styleId);
+    },
+
+    /** A piece (one size) or its graded set (size 'all' or none) as SVG, DXF or the tiled PDF (one size). */
+    async pieceFile(actor: Actor, styleId: number, pieceId: string, kind: 'svg' | 'dxf' | 'pdf', q: { size?: string; paper: 'A4' | 'Letter' }): Promise<Download> {
+      const style = await styleOf(actor, styleId);
+      const set = await setOf(actor, styleId);
+      const computed = computeGrading(set, style.baseSize);
+      const graded = computed.graded[pieceId];
+      if (!graded) throw notFound('Piece');
+      const size = q.size && q.size !== 'all' ? q.size : kind === 'pdf' ? computed.baseSize : undefined;
+      if (size && !graded.sizes.includes(size)) throw badRequest(`size: not in the run (${graded.sizes.join(', ')})`, { size: 'Not in the size run' });
+      const piece = size ? graded.bySize[size] : undefined;
+      const name = `${style.code}-${pieceId}-${size ?? 'all-sizes'}`;
+      if (kind === 'svg') return { body: pieceToSvg(piece ?? graded, { cutting: cuttingOutline, label: true }), type: 'image/svg+xml', filename: `${name}.svg` };
+      if (kind === 'dxf') return { body: pieceToDxf(piece ?? graded, { cutting: cuttingOutline }), type: 'application/dxf', filename: `${name}.dxf` };
+      const p = piece ?? graded.bySize[computed.baseSize];
+      const body = await tiledPiecePdf(p, { paper: q.paper, cutting: cuttingOutline(p), title: `${style.code} ${style.name}: ${p.name}, size ${size}`, creationDate: now() });
+      return { body, type: 'application/pdf', filename: `${name}-${q.paper}.pdf` };
+    },
+
+    /** Split N garments over the run from customers' bust girths (CSV), with a minimum per size. */
+    async sizeMix(actor: Actor, styleId: number, file: UploadedTable | undefined, input: { total: number; minPerSize: number; column?: string; unit?: 'mm' | 'cm' | 'in' }): Promise<SizeMixDto> {
+      await styleOf(actor, styleId);
+      const set = await sets.byStyle(actor.studioId, styleId);
+      const chart = set?.sizeChart ?? demoSizeChart();
+      const bust = chart.values.bust;
+      if (!bust) throw badRequest('chart: the size chart has no bust row', { chart: 'Add a bust row to the size chart' });
+      if (!file) throw badRequest('file: attach a CSV of bust girths', { file: 'Attach a CSV of bust girths' });
+      const { values, column, unit } = readBusts(await readTable(file), input.column, input.unit);
+      const sizes = chart.sizes;
+      if (input.total < sizes.length * input.minPerSize) {
+        throw badRequest(`minPerSize: ${input.total} garments cannot give ${input.minPerSize} to each of ${sizes.length} sizes`, { minPerSize: `At most ${Math.floor(input.total / sizes.length)} for ${input.total} garments` });
+      }
+      const run = sizes.map((size, i) => ({
+        size,
+        fromMm: i === 0 ? bust[0] - (bust[1] - bust[0]) / 2 : (bust[i - 1] + bust[i]) / 2,
+        toMm: i === sizes.length - 1 ? bust[i] + (bust[i] - bust[i - 1]) / 2 : (bust[i] + bust[i + 1]) / 2,
+      }));
+      const mix = sizeMix(values, run, input.total, input.minPerSize);
+      const intervals = en13402BustIntervals();
+      const en13402 = [
+        { label: '< 74', count: values.filter((v) => v < intervals[0].lowerMm).length },
+        ...intervals.map((d) => ({ label: d.label, count: values.filter((v) => v >= d.lowerMm && v < d.upperMm).length })),
+        { label: '≥ 131', count: values.filter((v) => v >= intervals[intervals.length - 1].upperMm).length },
+      ];
+      return {
+        total: input.total, minPerSize: input.minPerSize, measured: values.length, outsideRun: mix.outsideRun, column, unit,
+        sizes: run.map((r) => ({ ...r, fromMm: Math.round(r.fromMm * 10) / 10, toMm: Math.round(r.toMm * 10) / 10, bodies: mix.bodies[r.size], garments: mix.counts[r.size] })),
+        en13402,
+      };
+    },
+  };
+}
+
+const UNIT_FACTOR = { mm: 1, cm: 10, in: 25.4 } as const;
+
+/** Bust girths (mm) from a customer table; every bad cell is reported, nothing is used on error. */
+function readBusts(rows: string[][], columnName?: string, unitGiven?: 'mm' | 'cm' | 'in') {
+  const header = rows[0] ?? [];
+  const hasHeader = header.some((c) => c !== '' && Number.isNaN(Number(c)));
+  let col = 0;
+  if (columnName) {
+    col = header.findIndex((c) => c.toLowerCase() === columnName.toLowerCase());
+    if (col < 0) throw badRequest(`column: no column "${columnName}" in the header`, { column: `No column "${columnName}"` });
+  } else if (hasHeader) {
+    col = Math.max(0, header.findIndex((c) => /bust|chest/i.test(c)));
+  }
+  const label = hasHeader ? header[col] : 'column 1';
+  const unit = unitGiven ?? (/\bcm\b|_cm/i.test(label) ? 'cm' : /\bin\b|_in|inch/i.test(label) ? 'in' : 'mm');
+  const values: number[] = [];
+  const errors: TableError[] = [];
+  rows.slice(hasHeader ? 1 : 0).forEach((row, i) => {
+    if (row.every((c) => c === '')) return;
+    const text = row[col] ?? '';
+    const v = Number(text.replace(',', '.'));
+    const rowNo = i + (hasHeader ? 2 : 1);
+    if (text === '' || !Number.isFinite(v) || v <= 0) errors.push({ row: rowNo, column: col + 1, message: `not a girth: "${text}"` });
+    else values.push(v * UNIT_FACTOR[unit]);
+  });
+  if (errors.length) {
+    throw badRequest(`row ${errors[0].row}, column ${errors[0].column}: ${errors[0].message} (${errors.length} problem${errors.length > 1 ? 's' : ''}; nothing used)`, tableErrorFields(errors.slice(0, 50)));
+  }
+  if (values.length === 0) throw badRequest('file: no measurements found', { file: 'No measurements found' });
+  return { values, column: label, unit };
+}

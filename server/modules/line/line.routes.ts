@@ -1,0 +1,47 @@
+import { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import { idParam } from '../../../shared/schemas/common';
+import { copyOperationsInput, linePlanQuery, putOperationsInput, type LinePlanQuery } from '../../../shared/schemas/line';
+import { actorOf, requirePermission } from '../../auth/require';
+import { badRequest } from '../../errors';
+import { validate } from '../../middleware/validate';
+import type { LineService } from './line.service';
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 1024 * 1024, files: 1 } });
+const singleFile: RequestHandler = (req, res, next) =>
+  upload.single('file')(req, res, (err: unknown) => (err ? next(badRequest(`file: ${(err as Error).message}`, { file: (err as Error).message })) : next()));
+
+/** /api/styles/:id/operations… (the table) — mounted on /styles. */
+export function operationRoutes(service: LineService) {
+  const r = Router();
+  const plan = requirePermission('line:plan');
+  const id = (p: unknown) => Number((p as { id: string }).id);
+  r.get('/:id/operations', plan, validate({ params: idParam }), async (req, res) => {
+    res.json({ operations: await service.list(actorOf(req), id(req.params)) });
+  });
+  r.put('/:id/operations', plan, validate({ params: idParam, body: putOperationsInput }), async (req, res) => {
+    res.json({ operations: await service.put(actorOf(req), id(req.params), req.body.operations) });
+  });
+  r.post('/:id/operations/copy', plan, validate({ params: idParam, body: copyOperationsInput }), async (req, res) => {
+    res.json({ operations: await service.copy(actorOf(req), id(req.params), req.body.fromStyleId) });
+  });
+  r.get('/:id/operations/export', plan, validate({ params: idParam }), async (req, res) => {
+    const f = await service.exportXlsx(actorOf(req), id(req.params));
+    res.setHeader('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+    res.setHeader('Content-Disposition', `attachment; filename="${f.filename}"`);
+    res.send(f.body);
+  });
+  r.post('/:id/operations/import', plan, singleFile, validate({ params: idParam }), async (req, res) => {
+    res.json({ operations: await service.importXlsx(actorOf(req), id(req.params), req.file?.buffer) });
+  });
+  return r;
+}
+
+/** /api/line/batches/:id/plan — the balance, capacity and schedule of a batch. */
+export function linePlanRoutes(service: LineService) {
+  const r = Router();
+  r.get('/batches/:id/plan', requirePermission('line:plan'), validate({ params: idParam, query: linePlanQuery }), async (req, res) => {
+    res.json({ plan: await service.plan(actorOf(req), Number(req.params.id), req.query as unknown as LinePlanQuery) });
+  });
+  return r;
+}

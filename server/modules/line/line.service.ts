@@ -1,0 +1,139 @@
+import { format } from 'date-fns';
+import { can } from '../../../shared/auth/permissions';
+import { putOperationsInput, type LinePlanDto, type LinePlanQuery, type OperationDto, type OperationInput } from '../../../shared/schemas/line';
+import type { OperationEntity } from '../../entities';
+import type { Actor } from '../../auth/require';
+import { badRequest, notFound } from '../../errors';
+import type { AuditRepository } from '../audit/audit.repository';
+import type { BatchRepository } from '../batches/batch.repository';
+import type { StyleRepository } from '../styles/style.repository';
+import { planLine } from './line-plan';
+import type { OperationRepository } from './operation.repository';
+import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
+
+export interface LineServiceDeps {
+  styles: StyleRepository;
+  batches: BatchRepository;
+  operations: OperationRepository;
+  studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number } | null>;
+  audit: AuditRepository;
+  now: () => Date;
+}
+
+/** Piece rates are pay data: only roles that manage pay or read costs see them. */
+export const maySeeRates = (actor: Pick<Actor, 'role'>) => can(actor.role, 'pay:manage') || can(actor.role, 'costs:read');
+
+/** An operation row as the client sees it; pieceRateMinor left out unless `withRates`. */
+export function presentOperation(o: OperationEntity, withRates: boolean): OperationDto {
+  const dto: OperationDto = { id: o.id, seq: o.seq, code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors };
+  if (withRates) dto.pieceRateMinor = o.pieceRateMinor;
+  return dto;
+}
+
+const toInput = (o: OperationEntity): OperationInput => ({ code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors, pieceRateMinor: o.pieceRateMinor });
+
+/** Codes on a precedence cycle, found by depth-first search (empty when the table is a proper order). */
+function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] {
+  const after = new Map(rows.map((r) => [r.code, r.predecessors]));
+  const state = new Map<string, 1 | 2>();
+  const onCycle = new Set<string>();
+  const visit = (c: string, stack: string[]) => {
+    if (state.get(c) === 2) return;
+    if (state.get(c) === 1) {
+      stack.slice(stack.indexOf(c)).forEach((x) => onCycle.add(x));
+      return;
+    }
+    state.set(c, 1);
+    for (const p of after.get(c) ?? []) visit(p, [...stack, c]);
+    state.set(c, 2);
+  };
+  rows.forEach((r) => visit(r.code, []));
+  return [...onCycle];
+}
+
+export type LineService = ReturnType<typeof createLineService>;
+
+/** Operations tables per style and the line plan per batch. */
+export function createLineService({ styles, batches, operations, studio, audit, now }: LineServiceDeps) {
+  async function styleOf(actor: Actor, styleId: number) {
+    const s = await styles.get(actor.studioId, styleId);
+    if (!s) throw notFound('Style');
+    return s;
+  }
+
+  async function save(actor: Actor, styleId: number, rows: OperationInput[], action: string) {
+    const parsed = putOperationsInput.safeParse({ operations: rows });
+    if (!parsed.success) {
+      const fields: Record<string, string> = {};
+      for (const i of parsed.error.issues) fields[i.path.join('.')] ??= i.message;
+      throw badRequest(`${Object.keys(fields)[0]}: ${Object.values(fields)[0]}`, fields);
+    }
+    const cycle = cycleCodes(parsed.data.operations);
+    if (cycle.length) {
+      const fields = Object.fromEntries(parsed.data.operations.flatMap((o, i) => (cycle.includes(o.code) ? [[`operations.${i}.predecessors`, `Loop in the order: ${cycle.join(' → ')}`]] : [])));
+      throw badRequest(`operations: the order loops (${cycle.join(', ')})`, fields);
+    }
+    const before = (await operations.list(actor.studioId, styleId)).map(toInput);
+    const withRates = maySeeRates(actor);
+    const prior = new Map(before.map((b) => [b.code, b.pieceRateMinor ?? null]));
+    const saved = await operations.replace(actor.studioId, styleId, parsed.data.operations.map((o) => ({
+      ...o,
+      // A role that cannot see rates cannot change them either: keep what was stored.
+      pieceRateMinor: withRates ? (o.pieceRateMinor ?? null) : (prior.get(o.code) ?? null),
+    })));
+    await audit.record(actor, action, 'operations', styleId, before, saved.map(toInput));
+    return saved.map((o) => presentOperation(o, withRates));
+  }
+
+  return {
+    async list(actor: Actor, styleId: number) {
+      await styleOf(actor, styleId);
+      return (await operations.list(actor.studioId, styleId)).map((o) => presentOperation(o, maySeeRates(actor)));
+    },
+    async put(actor: Actor, styleId: number, rows: OperationInput[]) {
+      await styleOf(actor, styleId);
+      return save(actor, styleId, rows, 'update_operations');
+    },
+    async copy(actor: Actor, styleId: number, fromStyleId: number) {
+      await styleOf(actor, styleId);
+      if (fromStyleId === styleId) throw badRequest('fromStyleId: choose another style', { fromStyleId: 'Choose another style' });
+      await styleOf(actor, fromStyleId);
+      const rows = (await operations.list(actor.studioId, fromStyleId)).map(toInput);
+      if (rows.length === 0) throw badRequest('fromStyleId: that style has no operations', { fromStyleId: 'That style has no operations' });
+      return save(actor, styleId, rows, 'copy_operations');
+    },
+    async exportXlsx(actor: Actor, styleId: number) {
+      const style = await styleOf(actor, styleId);
+      const st = await studio(actor.studioId);
+      const rows = (await operations.list(actor.studioId, styleId)).map(toInput);
+      return { body: await operationsToXlsx(rows, { currency: st?.currency ?? 'KES', withRates: maySeeRates(actor), created: now() }), filename: `${style.code}-operations.xlsx` };
+    },
+    async importXlsx(actor: Actor, styleId: number, buf: Buffer | undefined) {
+      await styleOf(actor, styleId);
+      if (!buf) throw badRequest('file: attach an XLSX file', { file: 'Attach an XLSX file' });
+      const st = await studio(actor.studioId);
+      const res = await operationsFromXlsx(buf, st?.currency ?? 'KES');
+      if (!res.ok) {
+        const fields = Object.fromEntries(res.errors.map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+        throw badRequest(`row ${res.errors[0].row}, column ${res.errors[0].column}: ${res.errors[0].message} (nothing imported)`, fields);
+      }
+      return save(actor, styleId, res.rows, 'import_operations');
+    },
+    async plan(actor: Actor, batchId: number, query: LinePlanQuery): Promise<LinePlanDto> {
+      const batch = await batches.get(actor.studioId, batchId);
+      if (!batch) throw notFound('Batch');
+      const ops = await operations.list(actor.studioId, batch.styleId);
+      const st = await studio(actor.studioId);
+      const quantity = Object.values(batch.quantities).reduce((a, b) => a + b, 0);
+      try {
+        return planLine({
+          batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today: format(now(), 'yyyy-MM-dd'),
+          minutesPerDay: Math.round((st?.workingDayHours ?? 8) * 60), operations: ops, query,
+        });
+      } catch (e) {
+        if (e instanceof RangeError) throw badRequest(`plan: ${e.message}`, { plan: e.message });
+        throw e;
+      }
+    },
+  };
+}

@@ -1,0 +1,36 @@
+import type { DataSource } from 'typeorm';
+import { OperationEntity, StudioEntity } from '../../entities';
+
+export type OperationRepository = ReturnType<typeof createOperationRepository>;
+type OperationRow = Omit<OperationEntity, 'id' | 'studioId' | 'styleId' | 'seq'>;
+
+/** Operation-breakdown queries, always scoped to one studio and style, in sequence order. */
+export function createOperationRepository(ds: DataSource) {
+  const repo = ds.getRepository(OperationEntity);
+  return {
+    list: (studioId: number, styleId: number) => repo.find({ where: { studioId, styleId }, order: { seq: 'ASC', id: 'ASC' } }),
+    /**
+     * Replace a style's table in one transaction, matching rows by code so an operation keeps its id (work logs
+     * point at it); rows whose code is gone are deleted.
+     */
+    replace: (studioId: number, styleId: number, rows: OperationRow[]) =>
+      ds.transaction(async (m) => {
+        const r = m.getRepository(OperationEntity);
+        const existing = new Map((await r.find({ where: { studioId, styleId } })).map((e) => [e.code, e]));
+        const keep = new Set(rows.map((x) => x.code));
+        const gone = [...existing.values()].filter((e) => !keep.has(e.code)).map((e) => e.id);
+        if (gone.length) await r.delete(gone);
+        await r.save(rows.map((row, i) => Object.assign(existing.get(row.code) ?? r.create({ studioId, styleId }), row, { seq: i + 1 })));
+        return r.find({ where: { studioId, styleId }, order: { seq: 'ASC' } });
+      }),
+  };
+}
+
+/** The studio's currency and working day, for sheets and the plan. */
+export function createStudioLookup(ds: DataSource) {
+  const repo = ds.getRepository(StudioEntity);
+  return async (studioId: number) => {
+    const s = await repo.findOne({ where: { id: studioId } });
+    return s ? { currency: s.currency, workingDayHours: s.workingDayHours } : null;
+  };
+}

@@ -1,0 +1,125 @@
+import { z } from 'zod';
+import { isoDate } from './common';
+
+export const LINE_SECTIONS = ['cutting', 'sewing', 'finishing'] as const;
+/** Machine types offered in the operations table (free text is accepted too, up to 24 characters). */
+export const MACHINE_TYPES = ['cutting', 'lockstitch', 'overlock', 'coverstitch', 'buttonhole', 'button sew', 'pressing', 'hand work', 'inspection'] as const;
+
+const code = z.string().trim().min(1, 'Code is required').max(12, 'At most 12 characters').regex(/^[A-Za-z0-9-_]+$/, 'Letters, digits, - and _ only');
+
+/** One row of the operations table. pieceRateMinor: integer minor units (pay data), optional. */
+export const operationInput = z.object({
+  code,
+  name: z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters'),
+  section: z.enum(LINE_SECTIONS, { error: 'Choose cutting, sewing or finishing' }),
+  machineType: z.string().trim().min(1, 'Machine type is required').max(24, 'At most 24 characters'),
+  sam: z.number({ error: 'Give minutes' }).finite().positive('Must be more than 0').max(600, 'At most 600 minutes'),
+  predecessors: z.array(code).default([]),
+  pieceRateMinor: z.number().int('Whole minor units only').min(0, 'Cannot be negative').max(100_000_000).nullable().optional(),
+});
+export type OperationInput = z.input<typeof operationInput>;
+
+/** PUT /styles/:id/operations: the whole table; codes unique, predecessors must name rows and form no cycle. */
+export const putOperationsInput = z
+  .object({ operations: z.array(operationInput).max(200, 'At most 200 operations') })
+  .superRefine((v, ctx) => {
+    const codes = v.operations.map((o) => o.code);
+    v.operations.forEach((o, i) => {
+      if (codes.indexOf(o.code) !== i) ctx.addIssue({ code: 'custom', path: ['operations', i, 'code'], message: 'Code used twice' });
+      o.predecessors.forEach((p, j) => {
+        if (!codes.includes(p)) ctx.addIssue({ code: 'custom', path: ['operations', i, 'predecessors', j], message: `No operation ${p}` });
+        if (p === o.code) ctx.addIssue({ code: 'custom', path: ['operations', i, 'predecessors', j], message: 'An operation cannot follow itself' });
+      });
+    });
+  });
+export type PutOperationsInput = z.input<typeof putOperationsInput>;
+
+/** POST /styles/:id/operations/copy. */
+export const copyOperationsInput = z.object({ fromStyleId: z.number().int().positive('Choose a style') });
+
+/** GET /line/batches/:id/plan query: balance for the due date (SALBP-1) or for the people present (SALBP-2). */
+export const linePlanQuery = z.object({
+  mode: z.enum(['due', 'people']).default('due'),
+  people: z.coerce.number().int('Whole people only').min(1, 'At least 1').max(200).optional(),
+  efficiency: z.coerce.number().min(0.2, 'At least 20 %').max(1.2, 'At most 120 %').default(0.7),
+  bundleSize: z.coerce.number().int().min(1).max(200).default(10),
+  start: isoDate.optional(),
+});
+export type LinePlanQuery = z.infer<typeof linePlanQuery>;
+
+export interface OperationDto {
+  id: number;
+  seq: number;
+  code: string;
+  name: string;
+  section: (typeof LINE_SECTIONS)[number];
+  machineType: string;
+  sam: number;
+  predecessors: string[];
+  /** Present only for roles that may see pay or costs. */
+  pieceRateMinor?: number | null;
+}
+
+export interface StationDto {
+  index: number;
+  label: string;
+  machineType: string;
+  operations: string[];
+  /** Standard minutes per garment at this station. */
+  timeMin: number;
+  idleMin: number;
+  /** Per working day at the plan's daily output: standard minutes of work and of capacity. */
+  loadPerDayMin: number;
+  capacityPerDayMin: number;
+  isBottleneck: boolean;
+}
+
+export interface LinePlanDto {
+  batchId: number;
+  styleId: number;
+  quantity: number;
+  dueDate: string;
+  start: string;
+  mode: 'due' | 'people';
+  efficiency: number;
+  minutesPerDay: number;
+  workdays: number[];
+  /** Demo assumptions the plan rests on (staff skills, calendar), in words. */
+  assumptions: string[];
+  balance: {
+    problem: 'salbp-1' | 'salbp-2';
+    method: 'exact' | 'rpw' | 'partial-search';
+    /** Largest station time (min per garment) of the balanced line. */
+    cycleTimeMin: number;
+    /** Due mode: the takt the due date allows (min per garment), else null. */
+    taktMin: number | null;
+    stationCount: number;
+    /** Balance efficiency at the bottleneck: Σ SAM ÷ (stations × largest station time) × 100. */
+    efficiencyPct: number;
+    /** Against the cycle time: Σ SAM ÷ (stations × cycle time) × 100 (low when the target is easy). */
+    utilisationPct: number;
+    balanceDelayPct: number;
+    bottleneck: number;
+    lowerBound: number;
+    sewingSam: number;
+    /** Garments per working day the balanced line can make at the plan's efficiency. */
+    outputPerDay: number;
+    peopleAvailable: number;
+  };
+  stations: StationDto[];
+  schedule: {
+    stages: { name: string; startDate: string; endDate: string; startMinute: number; endMinute: number; daysNeeded: number; people: number; samPerPiece: number }[];
+    finishDate: string;
+    workingDaysToDue: number | null;
+    risk: 'on-time' | 'at-risk' | 'late' | 'no-due-date';
+    overtimeMinutesPerDay: number;
+    hoursPerDay: number;
+    hoursPerWeek: number;
+    exceedsIlo: boolean;
+    caution: string | null;
+  };
+  /** Planned garments finished by the end of each working day, cumulative. */
+  plannedOutput: { day: string; pieces: number }[];
+  /** Load against capacity per section per working day (standard minutes). */
+  sectionLoad: { section: string; day: string; load: number; capacity: number }[];
+}

@@ -1,0 +1,60 @@
+import { useEffect, useState } from 'react';
+import type { GradedPieceDto, GradeRuleDto } from '@shared/schemas/grading';
+import { ErrorNote } from '@/components/ui/page';
+import { usePutGradeRule } from '../api/grading-queries';
+import { useLength } from '../hooks/use-length';
+
+const ruleKey = (r: GradeRuleDto) => (r.target.kind === 'vertex' ? `v${r.target.index}` : `f:${r.target.key}`);
+const ruleName = (r: GradeRuleDto) => r.landmark ?? (r.target.kind === 'vertex' ? `outline point ${r.target.index}` : r.target.key);
+
+/** Edit the movement (dx across, dy up; mm) of one grade point for every size step, then redraw. */
+export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelectPoint, canEdit }: {
+  styleId: number;
+  piece: GradedPieceDto;
+  sizes: string[];
+  selectedPoint?: number;
+  onSelectPoint: (vertex: number) => void;
+  canEdit: boolean;
+}) {
+  const { small } = useLength();
+  const rules = piece.rules;
+  const rule = rules.find((r) => r.target.kind === 'vertex' && r.target.index === selectedPoint) ?? rules[0];
+  const [steps, setSteps] = useState<{ dx: string; dy: string }[]>([]);
+  const save = usePutGradeRule(styleId);
+  useEffect(() => {
+    setSteps(rule ? rule.steps.map((s) => ({ dx: String(Number(s.dx.toFixed(2))), dy: String(Number(s.dy.toFixed(2))) })) : []);
+  }, [rule, piece.id]);
+  if (!rule) return <p className="text-sm text-ink-600">This piece does not grade (no grade points).</p>;
+  const bad = steps.some((s) => !Number.isFinite(Number(s.dx)) || !Number.isFinite(Number(s.dy)) || s.dx === '' || s.dy === '');
+  const submit = () =>
+    save.mutate({ pieceId: piece.id, rule: { target: rule.target, landmark: rule.landmark, steps: steps.map((s) => ({ dx: Number(s.dx), dy: Number(s.dy) })) } });
+  return (
+    <div className="space-y-3">
+      <label className="field-label" htmlFor="grade-point">Grade point</label>
+      <select id="grade-point" className="field-input" value={ruleKey(rule)} onChange={(e) => {
+        const r = rules.find((x) => ruleKey(x) === e.target.value);
+        if (r?.target.kind === 'vertex') onSelectPoint(r.target.index);
+      }}>
+        {rules.filter((r) => r.target.kind === 'vertex').map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
+      </select>
+      <p className="text-xs text-ink-600">Movement per size step in mm: across (+ to the right) and up (+ upwards). Tap a dot on the drawing to pick a point.</p>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <thead><tr className="text-left text-ink-600"><th className="py-1 pr-2">Step</th><th className="px-1">Across (mm)</th><th className="px-1">Up (mm)</th></tr></thead>
+          <tbody>
+            {steps.map((s, i) => (
+              <tr key={i}>
+                <td className="whitespace-nowrap py-1 pr-2 font-medium">{sizes[i]} → {sizes[i + 1]}</td>
+                <td className="px-1"><input aria-label={`Across ${sizes[i]} to ${sizes[i + 1]}`} className="field-input py-1" inputMode="decimal" disabled={!canEdit} value={s.dx} onChange={(e) => setSteps(steps.map((x, j) => (j === i ? { ...x, dx: e.target.value } : x)))} /></td>
+                <td className="px-1"><input aria-label={`Up ${sizes[i]} to ${sizes[i + 1]}`} className="field-input py-1" inputMode="decimal" disabled={!canEdit} value={s.dy} onChange={(e) => setSteps(steps.map((x, j) => (j === i ? { ...x, dy: e.target.value } : x)))} /></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="text-xs text-ink-600">Stored: {rule.steps.map((s) => `${small(s.dx)} / ${small(s.dy)}`).join(' · ')}</p>
+      {canEdit ? <button type="button" className="btn-primary" disabled={bad || save.isPending} onClick={submit}>{save.isPending ? 'Saving…' : 'Save grade rule'}</button> : null}
+      <ErrorNote error={save.error} />
+    </div>
+  );
+}

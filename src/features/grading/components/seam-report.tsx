@@ -1,0 +1,43 @@
+import type { GradingDto } from '@shared/schemas/grading';
+import { Badge } from '@/components/ui/page';
+import { useLength } from '../hooks/use-length';
+
+/** Seams sewn together, per size: both lengths, the difference against the intended ease, pass or error. */
+export function SeamReport({ grading }: { grading: GradingDto }) {
+  const { small, len } = useLength();
+  const names = [...new Set(grading.seams.map((s) => s.seam))];
+  return (
+    <div className="space-y-3">
+      {grading.errors.length ? (
+        <ul role="alert" className="space-y-1 rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
+          {grading.errors.map((e, i) => <li key={i}>{e.message}</li>)}
+        </ul>
+      ) : (
+        <p className="text-sm text-thread-800"><Badge tone="teal">All clear</Badge> Every seam matches in every size, and no graded piece crosses itself or flips.</p>
+      )}
+      <div className="overflow-x-auto">
+        <table className="w-full min-w-[560px] text-sm" data-testid="seam-report">
+          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1.5 pr-2">Seam</th>{grading.sizes.map((s) => <th key={s} className="px-2">{s}</th>)}</tr></thead>
+          <tbody>
+            {names.map((n) => (
+              <tr key={n} className="border-b border-calico-100 align-top">
+                <td className="py-1.5 pr-2 font-medium">{n}</td>
+                {grading.sizes.map((size) => {
+                  const c = grading.seams.find((x) => x.seam === n && x.size === size);
+                  if (!c) return <td key={size} />;
+                  return (
+                    <td key={size} className="px-2 py-1.5" title={`${len(c.lengthAMm)} against ${len(c.lengthBMm)}; wanted ${small(c.expectedMm)} ± ${small(c.toleranceMm)}`}>
+                      <Badge tone={c.ok ? 'teal' : 'red'}>{c.ok ? 'ok' : 'error'}</Badge>
+                      <div className="text-xs text-ink-600">{small(c.differenceMm)}</div>
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="text-xs text-ink-600">Each cell: second side minus first side (the sleeve cap carries its intended ease). Tolerances are common practice.</p>
+    </div>
+  );
+}

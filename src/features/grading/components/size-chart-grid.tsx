@@ -1,0 +1,99 @@
+import { useEffect, useRef, useState } from 'react';
+import type { GradingDto } from '@shared/schemas/grading';
+import { ErrorNote } from '@/components/ui/page';
+import { ApiError, downloadFile } from '@/lib/api-client';
+import { useImportChart, usePutChart } from '../api/grading-queries';
+import { useLength } from '../hooks/use-length';
+
+const label = (pom: string) => pom.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
+
+/** The body chart as an editable grid (studio units), the grade between neighbouring sizes, import and export. */
+export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; grading: GradingDto; canEdit: boolean }) {
+  const { cell, parseCell, cellUnit, small } = useLength();
+  const chart = grading.chart;
+  const [cells, setCells] = useState<string[][]>([]);
+  const [cellErrors, setCellErrors] = useState<Record<string, string>>({});
+  const put = usePutChart(styleId);
+  const imp = useImportChart(styleId);
+  const fileRef = useRef<HTMLInputElement>(null);
+  useEffect(() => setCells(chart ? chart.rows.map((r) => r.values.map(cell)) : []), [chart]);
+  if (!chart) return <p className="text-sm text-ink-600">No size chart yet: import one from CSV or XLSX.</p>;
+  const save = () => {
+    const errs: Record<string, string> = {};
+    const rows = chart.rows.map((r, i) => ({
+      pointOfMeasure: r.pointOfMeasure,
+      values: cells[i].map((t, j) => {
+        const v = parseCell(t.trim());
+        if (v === null || !(v > 0)) errs[`${i}.${j}`] = 'Not a length';
+        return v ?? 0;
+      }),
+    }));
+    setCellErrors(errs);
+    if (Object.keys(errs).length === 0) put.mutate({ name: chart.name, sizes: chart.sizes, rows, eases: grading.eases });
+  };
+  const importError = imp.error instanceof ApiError ? imp.error : null;
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap gap-2">
+        {canEdit ? <button type="button" className="btn-primary" onClick={save} disabled={put.isPending}>{put.isPending ? 'Saving…' : 'Save chart'}</button> : null}
+        {canEdit ? (
+          <>
+            <button type="button" className="btn-quiet" onClick={() => fileRef.current?.click()}>Import CSV or XLSX</button>
+            <input ref={fileRef} type="file" accept=".csv,.xlsx" className="hidden" aria-label="Size chart file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
+          </>
+        ) : null}
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.csv')}>Export CSV</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.xlsx')}>Export XLSX</button>
+      </div>
+      <ErrorNote error={put.error} />
+      {importError ? (
+        <div role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
+          <p className="font-medium">{importError.message}</p>
+          <ul className="mt-1 list-disc pl-5">{Object.entries(importError.fields).map(([k, m]) => <li key={k}>{k}: {m}</li>)}</ul>
+        </div>
+      ) : null}
+      <div className="overflow-x-auto">
+        <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
+          <thead>
+            <tr className="border-b border-calico-200 text-left">
+              <th className="py-1 pr-2 text-ink-600">Body ({cellUnit})</th>
+              {chart.sizes.map((s, j) => (
+                <th key={s} className="px-1 text-center" colSpan={j < chart.sizes.length - 1 ? 2 : 1}>
+                  {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">EN {grading.designations[s]}</span> : null}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {chart.rows.map((r, i) => (
+              <tr key={r.pointOfMeasure} className="border-b border-calico-100">
+                <th scope="row" className="whitespace-nowrap py-1 pr-2 text-left font-normal">{label(r.pointOfMeasure)}</th>
+                {chart.sizes.map((s, j) => (
+                  <FragmentCells key={s} last={j === chart.sizes.length - 1} grade={r.grades[j]} gradeText={r.grades[j] !== undefined ? small(r.grades[j]) : ''}>
+                    <input
+                      aria-label={`${label(r.pointOfMeasure)} ${s}`}
+                      className={`w-20 rounded border px-1.5 py-1 text-right tabular-nums ${cellErrors[`${i}.${j}`] ? 'border-madder-500 bg-madder-100' : 'border-calico-300'}`}
+                      disabled={!canEdit}
+                      value={cells[i]?.[j] ?? ''}
+                      onChange={(e) => setCells(cells.map((row, a) => (a === i ? row.map((c, b) => (b === j ? e.target.value : c)) : row)))}
+                    />
+                  </FragmentCells>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <p className="text-xs text-ink-600">Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval (cm) under each size.</p>
+    </div>
+  );
+}
+
+function FragmentCells({ children, last, gradeText }: { children: React.ReactNode; last: boolean; grade?: number; gradeText: string }) {
+  return (
+    <>
+      <td className="px-1 py-1 text-center">{children}</td>
+      {last ? null : <td className="px-0.5 text-center text-[11px] text-ink-400 tabular-nums" aria-label="grade">{gradeText}</td>}
+    </>
+  );
+}

@@ -1,0 +1,128 @@
+import ExcelJS from 'exceljs';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
+
+type Agent = Awaited<ReturnType<typeof signIn>>;
+let owner: Agent, cutter: Agent, machinist: Agent;
+const asBytes = (res: unknown, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  const stream = res as NodeJS.ReadableStream;
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+beforeAll(async () => {
+  const { app } = await buildTestApp();
+  owner = await signIn(app, DEMO.owner);
+  cutter = await signIn(app, DEMO.cutter);
+  machinist = await signIn(app, DEMO.machinist);
+}, 60_000);
+
+describe('operations table', () => {
+  it('lists the demo breakdown with stable codes and piece rates for the owner', async () => {
+    const res = await owner.get('/api/styles/1/operations');
+    expect(res.status).toBe(200);
+    const ops = res.body.operations;
+    expect(ops).toHaveLength(22);
+    expect(ops.map((o: { code: string }) => o.code).slice(0, 3)).toEqual(['OP01', 'OP02', 'OP03']);
+    expect(ops[0]).toMatchObject({ section: 'cutting', pieceRateMinor: 2000 });
+    expect(new Set(ops.map((o: { machineType: string }) => o.machineType))).toEqual(new Set(['cutting', 'hand work', 'pressing', 'lockstitch', 'overlock', 'buttonhole', 'button sew', 'inspection']));
+  });
+
+  it('is for the owner only', async () => {
+    expect((await cutter.get('/api/styles/1/operations')).status).toBe(403);
+    expect((await machinist.get('/api/line/batches/1/plan')).status).toBe(403);
+    expect((await cutter.get('/api/line/batches/1/plan')).status).toBe(403);
+  });
+
+  it('reports bad rows by field, a loop in the order, and saves nothing', async () => {
+    const before = (await owner.get('/api/styles/1/operations')).body.operations;
+    const bad = await owner.put('/api/styles/1/operations').send({ operations: [
+      { code: 'A1', name: 'x', section: 'sewing', machineType: 'lockstitch', sam: 0, predecessors: ['ZZ'] },
+      { code: 'A1', name: '', section: 'ironing', machineType: 'lockstitch', sam: 1, predecessors: [] },
+    ] });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toMatchObject({ 'operations.0.sam': 'Must be more than 0', 'operations.1.name': 'Name is required', 'operations.1.section': 'Choose cutting, sewing or finishing' });
+    const refs = await owner.put('/api/styles/1/operations').send({ operations: [
+      { code: 'A1', name: 'x', section: 'sewing', machineType: 'lockstitch', sam: 1, predecessors: ['ZZ'] },
+      { code: 'A1', name: 'y', section: 'sewing', machineType: 'lockstitch', sam: 1, predecessors: [] },
+    ] });
+    expect(refs.body.error.fields).toMatchObject({ 'operations.0.predecessors.0': 'No operation ZZ', 'operations.1.code': 'Code used twice' });
+    const loop = await owner.put('/api/styles/1/operations').send({ operations: [
+      { code: 'A', name: 'a', section: 'sewing', machineType: 'lockstitch', sam: 1, predecessors: ['B'] },
+      { code: 'B', name: 'b', section: 'sewing', machineType: 'lockstitch', sam: 1, predecessors: ['A'] },
+    ] });
+    expect(loop.status).toBe(400);
+    expect(loop.body.error.fields['operations.0.predecessors']).toMatch(/Loop/);
+    expect((await owner.get('/api/styles/1/operations')).body.operations).toEqual(before);
+  });
+
+  it('exports XLSX, imports it back unchanged, and copies to another style keeping ids by code', async () => {
+    const x = await owner.get('/api/styles/1/operations/export').buffer(true).parse(asBytes);
+    expect(x.status).toBe(200);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(x.body as unknown as ArrayBuffer);
+    expect(wb.worksheets[0].getRow(1).getCell(7).value).toBe('Piece rate (KES)');
+    expect(wb.worksheets[0].getRow(2).getCell(7).value).toBe(20);
+    const before = (await owner.get('/api/styles/1/operations')).body.operations;
+    const back = await owner.post('/api/styles/1/operations/import').set('X-Seamrun-Csrf', '1').attach('file', x.body as Buffer, 'ops.xlsx');
+    expect(back.status).toBe(200);
+    expect(back.body.operations).toEqual(before);
+    const style = await owner.post('/api/styles').send({ code: 'SR-102', name: 'Copy test', sizeRun: ['S', 'M'], baseSize: 'M' });
+    const copy = await owner.post(`/api/styles/${style.body.style.id}/operations/copy`).send({ fromStyleId: 1 });
+    expect(copy.status).toBe(200);
+    expect(copy.body.operations.map((o: { code: string }) => o.code)).toEqual(before.map((o: { code: string }) => o.code));
+    const ws = wb.worksheets[0];
+    ws.getRow(3).getCell(5).value = 'fast';
+    ws.getRow(4).getCell(3).value = 'packing';
+    const broken = Buffer.from(await wb.xlsx.writeBuffer());
+    const bad = await owner.post('/api/styles/1/operations/import').set('X-Seamrun-Csrf', '1').attach('file', broken, 'ops.xlsx');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toMatchObject({ 'row 3, column 5': expect.stringMatching(/SAM/), 'row 4, column 3': expect.stringMatching(/section/) });
+  });
+});
+
+describe('line plan of the demo batch', () => {
+  it('balances for the due date with the fewest stations and marks the bottleneck', async () => {
+    const res = await owner.get('/api/line/batches/1/plan');
+    expect(res.status).toBe(200);
+    const p = res.body.plan;
+    expect(p.quantity).toBe(40);
+    expect(p.balance.problem).toBe('salbp-1');
+    // One machine type per station: overlock → lockstitch → overlock → lockstitch → buttonhole → button sew.
+    expect(p.balance.stationCount).toBe(6);
+    expect(p.stations.filter((s: { isBottleneck: boolean }) => s.isBottleneck)).toHaveLength(1);
+    const sam = p.stations.reduce((a: number, s: { timeMin: number }) => a + s.timeMin, 0);
+    expect(sam).toBeCloseTo(p.balance.sewingSam, 6);
+    // Line efficiency = Σ SAM ÷ (stations × bottleneck time) × 100 (production-and-costing.md, line efficiency).
+    expect(p.balance.efficiencyPct).toBeCloseTo((100 * p.balance.sewingSam) / (6 * p.balance.cycleTimeMin), 1);
+    expect(p.schedule.stages.map((s: { name: string }) => s.name)).toEqual(['cutting', 'sewing', 'finishing']);
+    expect(p.schedule.risk).toBe('on-time');
+    expect(p.plannedOutput.at(-1).pieces).toBe(40);
+  });
+
+  it('balances for the people present and says when too few are there', async () => {
+    const six = await owner.get('/api/line/batches/1/plan?mode=people&people=6');
+    expect(six.status).toBe(200);
+    expect(six.body.plan.balance.problem).toBe('salbp-2');
+    const eight = await owner.get('/api/line/batches/1/plan?mode=people&people=8');
+    expect(eight.body.plan.balance.cycleTimeMin).toBeLessThan(six.body.plan.balance.cycleTimeMin);
+    const five = await owner.get('/api/line/batches/1/plan?mode=people&people=5');
+    expect(five.status).toBe(400);
+    expect(five.body.error.fields.people).toBe('At least 6 people for this breakdown');
+    const bad = await owner.get('/api/line/batches/1/plan?efficiency=3&people=0');
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['efficiency', 'people']));
+  });
+
+  it('shows overtime and the ILO C1 caution when the due date is too close', async () => {
+    await owner.patch('/api/batches/1').send({ dueDate: '2026-12-02' });
+    const res = await owner.get('/api/line/batches/1/plan?mode=people&people=6&efficiency=0.4');
+    const s = res.body.plan.schedule;
+    expect(s.risk).toBe('late');
+    expect(s.overtimeMinutesPerDay).toBeGreaterThan(0);
+    // ILO Hours of Work (Industry) Convention, 1919 (No. 1): 8 hours a day, 48 a week.
+    expect(s.exceedsIlo).toBe(true);
+    expect(s.caution).toMatch(/ILO/);
+  });
+});
