@@ -159,3 +159,6 @@ export interface BundleDto {
 
 /** Text of a bundle's QR code. */
 export const bundleQrText = (batchId: number, bundleNumber: number) => `SR-B:${batchId}:${bundleNumber}`;
+
+/** Mark a lay cut; without rolls the planned plies count as spread. */
+export const cutLayInput = recordLayInput.partial({ rolls: true });

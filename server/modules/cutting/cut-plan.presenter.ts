@@ -1,0 +1,63 @@
+import type { BundleDto, CutPlanDto, LayDto } from '../../../shared/schemas/cutting';
+import { bundleQrText } from '../../../shared/schemas/cutting';
+import type { BundleEntity, CutPlanEntity, LayEntity } from '../../entities';
+import { batchCode } from '../batches/batch.routes';
+import type { StoredCutPlanResult } from './cut-plan.service';
+
+export const presentLay = (l: LayEntity, bundleCount = 0): LayDto => ({
+  id: l.id,
+  cutPlanId: l.cutPlanId,
+  batchId: l.batchId,
+  batchCode: batchCode(l.batchId),
+  seq: l.seq,
+  ratio: l.ratio,
+  garmentsPerPly: Object.values(l.ratio).reduce((a, b) => a + b, 0),
+  plies: l.plies,
+  markerLengthMm: l.markerLengthMm,
+  endAllowanceMm: l.endAllowanceMm,
+  markerId: l.markerId,
+  spreadingMode: l.spreadingMode,
+  rolls: l.rolls,
+  status: l.status,
+  flaws: l.flaws,
+  cutAt: l.cutAt ? new Date(l.cutAt).toISOString() : null,
+  bundleCount,
+});
+
+export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>): CutPlanDto {
+  const r = p.result as StoredCutPlanResult;
+  return {
+    id: p.id,
+    batchId: p.batchId,
+    fabricId: p.fabricId,
+    fabricName,
+    status: p.status,
+    fabricUsedMm: p.fabricUsedMm,
+    lowerBoundMm: p.lowerBoundMm,
+    gap: r.plan.gap,
+    layLowerBound: r.plan.layLowerBound,
+    method: r.plan.method,
+    overcut: r.plan.overcut,
+    cut: r.plan.cut,
+    lengthSources: r.lengthSources,
+    assumedUtilisation: r.assumedUtilisation,
+    endOfRollWasteMm: r.allocation.endOfRollWaste,
+    stockKeptMm: r.allocation.stockKept,
+    shortfall: r.allocation.shortfall,
+    splitLays: r.allocation.splitLays,
+    lays: lays.map((l) => presentLay(l, counts.get(l.id) ?? 0)),
+    createdAt: new Date(p.createdAt).toISOString(),
+  };
+}
+
+export const presentBundle = (b: BundleEntity): BundleDto => ({
+  id: b.id,
+  number: b.number,
+  layId: b.layId,
+  size: b.size,
+  shadeLot: b.shadeLot,
+  plyFrom: b.plyFrom,
+  plyTo: b.plyTo,
+  pieces: b.pieces,
+  qrText: bundleQrText(b.batchId, b.number),
+});

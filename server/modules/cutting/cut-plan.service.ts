@@ -1,0 +1,144 @@
+import { allocateRolls, planCutOrder, type SizeRatio } from '@planning';
+import { mm } from '@shared/units/units';
+import type { DataSource } from 'typeorm';
+import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
+import { CutPlanEntity, LayEntity, type FabricEntity, type RollEntity } from '../../entities';
+import type { LayRollLine } from '../../entities/lay.entity';
+import { badRequest, conflict, notFound } from '../../errors';
+import { createBatchRepository } from '../batches/batch.repository';
+import { garmentAreas } from '../markers/marker-input';
+import { createMarkerRepository } from '../markers/marker.repository';
+import { loadStylePieces } from '../markers/style-pieces';
+import type { CutPlanRepository } from './cut-plan.repository';
+import { createFabricRepository } from './fabric.repository';
+
+/**
+ * Utilisation assumed when a ratio has no stored marker: length ≈ piece area ÷ (width × 0.75). Common
+ * practice for a first estimate of a mixed-size garment marker (no published figure is used); the owner
+ * sees which lays rest on it and can build the real marker.
+ */
+export const ASSUMED_UTILISATION = 0.75;
+
+/** What the plan result stores beside the core's output. */
+export interface StoredCutPlanResult {
+  plan: ReturnType<typeof planCutOrder>;
+  allocation: ReturnType<typeof allocateRolls>;
+  lengthSources: { ratio: SizeRatio; source: 'marker' | 'estimate'; markerId?: number }[];
+  assumedUtilisation: number;
+}
+
+const ratioKey = (ratio: SizeRatio, sizes: string[]) => sizes.map((s) => `${s}${ratio[s] ?? 0}`).join('|');
+
+/**
+ * Spreading mode of a lay: one-way (napped or directional) fabric is spread face up, one way, so every
+ * ply runs in one direction; otherwise face up both ways, because our markers already hold both halves
+ * of every mirrored pair (a face-to-face spread is for half markers, where facing plies give the pairs).
+ */
+export function spreadingModeFor(fabric: Pick<FabricEntity, 'isDirectional'>): string {
+  return fabric.isDirectional ? 'face-up-one-way' : 'face-up-both-ways';
+}
+
+/**
+ * Plans the cut of a batch: marker length per candidate ratio (a stored marker of that ratio on this
+ * width, else the estimate above), the cut-order core for lays with its lower bound, then roll
+ * allocation (shade lots kept apart) for the marker list per roll. Earlier unstarted plans of the batch
+ * are superseded; a plan with a cut lay cannot be replaced.
+ */
+export async function planBatchCut(ds: DataSource, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput) {
+  const batch = await createBatchRepository(ds).get(studioId, batchId);
+  if (!batch?.style) throw notFound('Batch');
+  const sizes = batch.style.sizeRun;
+  const fabrics = createFabricRepository(ds);
+  const fabric = await fabrics.get(studioId, input.fabricId);
+  if (!fabric) throw badRequest('fabricId: no such fabric in this studio', { fabricId: 'No such fabric' });
+  const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
+  const pieces = await loadStylePieces(ds, studioId, batch.styleId);
+  if (!Object.keys(pieces).length) throw conflict('This style has no graded pieces yet: grade it first');
+  const live = await plans.livePlans(studioId, batchId);
+  const cutLays = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'cut');
+  const remaining = remainingQuantities(batch.quantities, cutLays);
+  if (Object.values(remaining).every((q) => q === 0)) throw conflict('Every garment of this batch is already cut');
+
+  const areas = garmentAreas(pieces);
+  const stored = new Map<string, { id: number; length: number }>();
+  for (const m of await createMarkerRepository(ds).doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
+    const k = ratioKey(m.ratio, sizes);
+    const prev = stored.get(k);
+    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm });
+  }
+  const estimate = (ratio: SizeRatio) => sizes.reduce((a, s) => a + (ratio[s] ?? 0) * (areas[s] ?? 0), 0) / (fabric.widthMm * ASSUMED_UTILISATION);
+  const markerLength = (ratio: SizeRatio) => mm(stored.get(ratioKey(ratio, sizes))?.length ?? estimate(ratio));
+  let plan: ReturnType<typeof planCutOrder>;
+  try {
+    plan = planCutOrder({
+      sizes, quantities: remaining, maxPlies: Math.min(input.maxPlies, fabric.maxPlies), maxGarmentsPerMarker: input.maxGarmentsPerMarker,
+      maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
+      overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
+      markerLength, nodeBudget: 200_000,
+    });
+  } catch (err) {
+    if (err instanceof RangeError) throw badRequest(`maxMarkerLengthMm: ${err.message}`, { maxMarkerLengthMm: err.message });
+    throw err;
+  }
+  const allocation = allocateRolls({
+    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength })),
+    rolls: rolls.map((r) => ({ id: String(r.id), length: mm(r.remainingMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
+    endAllowance: plan.endAllowance,
+  });
+  const lengthSources = plan.lays.map((l) => {
+    const hit = stored.get(ratioKey(l.ratio, sizes));
+    return hit ? { ratio: l.ratio, source: 'marker' as const, markerId: hit.id } : { ratio: l.ratio, source: 'estimate' as const };
+  });
+  const result: StoredCutPlanResult = { plan, allocation, lengthSources, assumedUtilisation: ASSUMED_UTILISATION };
+  const byId = new Map(rolls.map((r) => [String(r.id), r]));
+  const firstSeq = cutLays.reduce((a, l) => Math.max(a, l.seq), 0) + 1;
+  return plans.transaction(async (m) => {
+    for (const p of live) await m.getRepository(CutPlanEntity).update({ studioId, id: p.id }, { status: 'superseded' });
+    const saved = await m.getRepository(CutPlanEntity).save({
+      studioId, batchId, fabricId: fabric.id, input: { ...input, maxPlies: Math.min(input.maxPlies, fabric.maxPlies) }, result,
+      fabricUsedMm: plan.fabricUsed, lowerBoundMm: plan.lowerBound, status: 'draft',
+    });
+    const lays = plan.lays.map((l, i) => {
+      const lines: LayRollLine[] = allocation.rolls.flatMap((u) =>
+        u.segments.filter((s) => s.lay === i).map((s) => {
+          const r = byId.get(u.id)!;
+          return { rollId: r.id, label: r.label, shadeLot: r.shadeLot, plies: s.plies, expectedRemnantMm: Math.round(s.remaining) };
+        }),
+      );
+      return m.getRepository(LayEntity).create({
+        studioId, cutPlanId: saved.id, batchId, seq: firstSeq + i, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
+        endAllowanceMm: plan.endAllowance, markerId: lengthSources[i].markerId ?? null, spreadingMode: spreadingModeFor(fabric),
+        rolls: lines, status: 'planned', flaws: '', cutAt: null,
+      });
+    });
+    await m.getRepository(LayEntity).save(lays);
+    // Lays already cut move to the new plan unchanged; the new lays cover only what is left to cut.
+    for (const l of cutLays) await m.getRepository(LayEntity).update({ studioId, id: l.id }, { cutPlanId: saved.id });
+    return saved;
+  });
+}
+
+async function pickRolls(fabrics: ReturnType<typeof createFabricRepository>, studioId: number, fabric: FabricEntity, rollIds?: number[]): Promise<RollEntity[]> {
+  if (rollIds?.length) {
+    const found = await fabrics.rollsById(studioId, rollIds);
+    const fields: Record<string, string> = {};
+    rollIds.forEach((id, i) => {
+      const r = found.find((x) => x.id === id);
+      if (!r) fields[`rollIds.${i}`] = 'No such roll';
+      else if (r.fabricId !== fabric.id) fields[`rollIds.${i}`] = `Roll ${r.label} is another fabric`;
+    });
+    if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+    return found.filter((r) => r.remainingMm > 0);
+  }
+  return (await fabrics.rolls(studioId, fabric.id)).filter((r) => r.remainingMm > 0);
+}
+
+/** Garments still to cut: the order less what cut lays produced (plies actually spread where recorded). */
+export function remainingQuantities(quantities: Record<string, number>, cutLays: Pick<LayEntity, 'ratio' | 'plies' | 'rolls'>[]): Record<string, number> {
+  const out = { ...quantities };
+  for (const l of cutLays) {
+    const plies = l.rolls.reduce((a, r) => a + (r.actualPlies ?? r.plies), 0) || l.plies;
+    for (const [s, n] of Object.entries(l.ratio)) out[s] = Math.max(0, (out[s] ?? 0) - n * plies);
+  }
+  return out;
+}

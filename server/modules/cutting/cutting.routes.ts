@@ -1,0 +1,154 @@
+import { Router, type Response } from 'express';
+import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
+import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
+import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
+import { buildBundleRegisterXlsx } from '@exports/xlsx/bundle-register.xlsx';
+import { buildMarkerListXlsx } from '@exports/xlsx/marker-list.xlsx';
+import type { DataSource } from 'typeorm';
+import { idParam } from '../../../shared/schemas/common';
+import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
+import { actorOf, requirePermission } from '../../auth/require';
+import { notFound } from '../../errors';
+import { validate } from '../../middleware/validate';
+import type { AuditRepository } from '../audit/audit.repository';
+import { createBatchRepository } from '../batches/batch.repository';
+import { presentBundle, presentCutPlan, presentLay } from './cut-plan.presenter';
+import type { CutPlanRepository } from './cut-plan.repository';
+import { planBatchCut } from './cut-plan.service';
+import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
+import type { FabricRepository } from './fabric.repository';
+import { markLayCut, recordLay } from './lay.service';
+
+const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+const send = (res: Response, bytes: Buffer, type: string, name: string) => res.type(type).attachment(name).send(bytes);
+
+/** Cut plans of batches, the cutter's lays and their documents. */
+export function cuttingRoutes(ds: DataSource, plans: CutPlanRepository, fabrics: FabricRepository, audit: AuditRepository, now: () => Date) {
+  const batches = Router();
+  const lays = Router();
+  const batchRepo = createBatchRepository(ds);
+  const loadBatch = async (studioId: number, id: number) => {
+    const b = await batchRepo.get(studioId, id);
+    if (!b) throw notFound('Batch');
+    return b;
+  };
+  const planDto = async (studioId: number, batchId: number) => {
+    const p = await plans.currentPlan(studioId, batchId);
+    if (!p) return null;
+    const list = await plans.laysOf(studioId, p.id);
+    const fabric = await fabrics.get(studioId, p.fabricId);
+    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)));
+  };
+  const docsFor = async (studioId: number, batchId: number, only?: number) => {
+    const batch = await loadBatch(studioId, batchId);
+    const p = await plans.currentPlan(studioId, batchId);
+    if (!p) throw notFound('Cut plan');
+    const fabric = await fabrics.get(studioId, p.fabricId);
+    if (!fabric) throw notFound('Fabric');
+    const list = (await plans.laysOf(studioId, p.id)).filter((l) => only === undefined || l.id === only);
+    return markerListInput(await plans.studio(studioId), batch, fabric, list, now());
+  };
+
+  batches.get('/:id/cut-plan', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    await loadBatch(studioId, Number(req.params.id));
+    res.json({ cutPlan: await planDto(studioId, Number(req.params.id)) });
+  });
+  batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const batchId = Number(req.params.id);
+    const saved = await planBatchCut(ds, plans, actor.studioId, batchId, req.body);
+    const dto = (await planDto(actor.studioId, batchId))!;
+    await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
+    res.status(201).json({ cutPlan: dto });
+  });
+  batches.get('/:id/marker-list.xlsx', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const input = await docsFor(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildMarkerListXlsx(input), XLSX, `marker-list-${input.batch.code}.xlsx`);
+  });
+  batches.get('/:id/marker-list.pdf', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const input = await docsFor(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildMarkerListPdf(input), 'application/pdf', `marker-list-${input.batch.code}.pdf`);
+  });
+  batches.get('/:id/bundles', requirePermission('bundles:read'), validate({ params: idParam }), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    await loadBatch(studioId, Number(req.params.id));
+    res.json({ bundles: (await plans.bundlesOfBatch(studioId, Number(req.params.id))).map(presentBundle) });
+  });
+  const registerFor = async (studioId: number, batchId: number, layId?: number) => {
+    const batch = await loadBatch(studioId, batchId);
+    const all = await plans.bundlesOfBatch(studioId, batchId);
+    const p = await plans.currentPlan(studioId, batchId);
+    const list = p ? await plans.laysOf(studioId, p.id) : [];
+    const chosen = layId === undefined ? all : all.filter((b) => b.layId === layId);
+    return bundleRegisterInput(await plans.studio(studioId), batch, chosen, list, await plans.operations(studioId, batch.styleId), now());
+  };
+  batches.get('/:id/bundle-register.xlsx', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const input = await registerFor(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildBundleRegisterXlsx(input), XLSX, `bundle-register-${input.batch.code}.xlsx`);
+  });
+  batches.get('/:id/bundle-tickets.pdf', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const batchId = Number(req.params.id);
+    const input = await registerFor(actorOf(req).studioId, batchId);
+    send(res, await buildBundleTicketsPdf(withQr(input, batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}.pdf`);
+  });
+
+  lays.get('/', requirePermission('cutting:work'), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    const list = await plans.liveLays(studioId);
+    const counts = await plans.bundleCounts(studioId, list.map((l) => l.id));
+    res.json({ lays: list.map((l) => presentLay(l, counts.get(l.id) ?? 0)) });
+  });
+  lays.get('/:id', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    const lay = await plans.getLay(studioId, Number(req.params.id));
+    if (!lay) throw notFound('Lay');
+    const plan = await plans.getPlan(studioId, lay.cutPlanId);
+    const fabric = plan ? await fabrics.get(studioId, plan.fabricId) : null;
+    const bundles = await plans.bundlesOfLay(studioId, lay.id);
+    res.json({
+      lay: presentLay(lay, bundles.length),
+      fabric: fabric ? { id: fabric.id, name: fabric.name, composition: fabric.composition, widthMm: fabric.widthMm, isDirectional: fabric.isDirectional, maxPlies: fabric.maxPlies } : null,
+      bundles: bundles.map(presentBundle),
+    });
+  });
+  lays.put('/:id', requirePermission('cutting:work'), validate({ params: idParam, body: recordLayInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const before = await plans.getLay(actor.studioId, Number(req.params.id));
+    const after = await recordLay(plans, actor.studioId, Number(req.params.id), req.body);
+    await audit.record(actor, 'record', 'lay', after.id, before ? presentLay(before) : undefined, presentLay(after));
+    res.json({ lay: presentLay(after) });
+  });
+  lays.post('/:id/cut', requirePermission('cutting:work'), validate({ params: idParam, body: cutLayInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const hasBody = req.body && Array.isArray(req.body.rolls);
+    const { lay, bundles } = await markLayCut(plans, actor.studioId, Number(req.params.id), hasBody ? { rolls: req.body.rolls, flaws: req.body.flaws ?? '' } : undefined, now());
+    await audit.record(actor, 'cut', 'lay', lay.id, { status: 'planned' }, { status: 'cut', bundles });
+    res.json({ lay: presentLay(lay, bundles), bundles: (await plans.bundlesOfLay(actor.studioId, lay.id)).map(presentBundle) });
+  });
+  const layDoc = async (studioId: number, id: number) => {
+    const lay = await plans.getLay(studioId, id);
+    if (!lay) throw notFound('Lay');
+    return { lay, input: await docsFor(studioId, lay.batchId, lay.id) };
+  };
+  lays.get('/:id/cut-ticket.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildCutTicketPdf(input), 'application/pdf', `cut-ticket-${input.batch.code}-lay-${lay.seq}.pdf`);
+  });
+  lays.get('/:id/marker-list.xlsx', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildMarkerListXlsx(input), XLSX, `marker-list-${input.batch.code}-lay-${lay.seq}.xlsx`);
+  });
+  lays.get('/:id/marker-list.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
+    send(res, await buildMarkerListPdf(input), 'application/pdf', `marker-list-${input.batch.code}-lay-${lay.seq}.pdf`);
+  });
+  lays.get('/:id/bundle-tickets.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    const lay = await plans.getLay(studioId, Number(req.params.id));
+    if (!lay) throw notFound('Lay');
+    const input = await registerFor(studioId, lay.batchId, lay.id);
+    send(res, await buildBundleTicketsPdf(withQr(input, lay.batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}-lay-${lay.seq}.pdf`);
+  });
+  return { batches, lays };
+}

@@ -1,0 +1,32 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import { FabricEntity, RollEntity } from '../../entities';
+
+export type FabricRepository = ReturnType<typeof createFabricRepository>;
+
+/** Fabric and roll queries, always scoped to one studio. */
+export function createFabricRepository(ds: DataSource) {
+  const fabrics = ds.getRepository(FabricEntity);
+  const rolls = ds.getRepository(RollEntity);
+  return {
+    list: (studioId: number) => fabrics.find({ where: { studioId }, order: { name: 'ASC' } }),
+    get: (studioId: number, id: number) => fabrics.findOne({ where: { studioId, id } }),
+    insert: (f: Partial<FabricEntity>) => fabrics.save(fabrics.create(f)),
+    async update(studioId: number, id: number, patch: Partial<FabricEntity>) {
+      await fabrics.update({ studioId, id }, patch);
+      return fabrics.findOneOrFail({ where: { studioId, id } });
+    },
+    async remove(studioId: number, id: number) {
+      await fabrics.delete({ studioId, id });
+    },
+    rolls: (studioId: number, fabricId: number) => rolls.find({ where: { studioId, fabricId }, order: { shadeLot: 'ASC', label: 'ASC' } }),
+    allRolls: (studioId: number) => rolls.find({ where: { studioId } }),
+    rollsById: (studioId: number, ids: number[]) => rolls.find({ where: { studioId, id: In(ids) } }),
+    labelsTaken: async (studioId: number, labels: string[]) =>
+      (await rolls.find({ where: { studioId, label: In(labels) }, select: { label: true } })).map((r) => r.label),
+    /** Insert rolls in one transaction: all or none. */
+    insertRolls: (list: Partial<RollEntity>[]) => ds.transaction((m) => m.getRepository(RollEntity).save(list.map((r) => m.getRepository(RollEntity).create(r)))),
+    async updateRoll(studioId: number, id: number, patch: Partial<RollEntity>, m: EntityManager = ds.manager) {
+      await m.getRepository(RollEntity).update({ studioId, id }, patch);
+    },
+  };
+}

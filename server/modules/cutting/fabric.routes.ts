@@ -1,0 +1,117 @@
+import { format } from 'date-fns';
+import { Router } from 'express';
+import multer from 'multer';
+import { can } from '../../../shared/auth/permissions';
+import { createFabricInput, createRollsInput, updateFabricInput, type RollInput } from '../../../shared/schemas/cutting';
+import { idParam } from '../../../shared/schemas/common';
+import { actorOf, requirePermission, type Actor } from '../../auth/require';
+import { badRequest, conflict, forbidden, notFound } from '../../errors';
+import { validate } from '../../middleware/validate';
+import type { AuditRepository } from '../audit/audit.repository';
+import type { FabricRepository } from './fabric.repository';
+import { presentFabric, presentRoll } from './fabric.presenter';
+import { parsePackingList } from './packing-list';
+
+export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, opts: { maxUploadBytes: number; now: () => Date }) {
+  const r = Router();
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: opts.maxUploadBytes, files: 1 } });
+  const load = async (actor: Actor, id: number) => {
+    const f = await fabrics.get(actor.studioId, id);
+    if (!f) throw notFound('Fabric');
+    return f;
+  };
+  const noPriceForCutter = (actor: Actor, body: { pricePerMetreMinor?: number }) => {
+    if (body.pricePerMetreMinor !== undefined && !can(actor.role, 'costs:write')) throw forbidden('Your role cannot set prices');
+  };
+
+  r.get('/', requirePermission('fabric:read'), async (req, res) => {
+    const actor = actorOf(req);
+    const rolls = await fabrics.allRolls(actor.studioId);
+    res.json({ fabrics: (await fabrics.list(actor.studioId)).map((f) => presentFabric(f, actor.role, rolls)) });
+  });
+  r.get('/:id', requirePermission('fabric:read'), validate({ params: idParam }), async (req, res) => {
+    const actor = actorOf(req);
+    const f = await load(actor, Number(req.params.id));
+    const rolls = await fabrics.rolls(actor.studioId, f.id);
+    res.json({ fabric: presentFabric(f, actor.role, rolls), rolls: rolls.map(presentRoll) });
+  });
+  r.post('/', requirePermission('fabric:write'), validate({ body: createFabricInput }), async (req, res) => {
+    const actor = actorOf(req);
+    noPriceForCutter(actor, req.body);
+    const f = await fabrics.insert({ ...req.body, studioId: actor.studioId });
+    await audit.record(actor, 'create', 'fabric', f.id, undefined, presentFabric(f, 'owner'));
+    res.status(201).json({ fabric: presentFabric(f, actor.role) });
+  });
+  r.put('/:id', requirePermission('fabric:write'), validate({ params: idParam, body: updateFabricInput }), async (req, res) => {
+    const actor = actorOf(req);
+    noPriceForCutter(actor, req.body);
+    const before = await load(actor, Number(req.params.id));
+    const after = await fabrics.update(actor.studioId, before.id, req.body);
+    await audit.record(actor, 'update', 'fabric', before.id, presentFabric(before, 'owner'), presentFabric(after, 'owner'));
+    res.json({ fabric: presentFabric(after, actor.role, await fabrics.rolls(actor.studioId, after.id)) });
+  });
+  r.delete('/:id', requirePermission('fabric:write'), validate({ params: idParam }), async (req, res) => {
+    const actor = actorOf(req);
+    const f = await load(actor, Number(req.params.id));
+    if ((await fabrics.rolls(actor.studioId, f.id)).length) throw conflict('This fabric still has rolls; it cannot be deleted');
+    await fabrics.remove(actor.studioId, f.id);
+    await audit.record(actor, 'delete', 'fabric', f.id, presentFabric(f, 'owner'), undefined);
+    res.status(204).end();
+  });
+
+  r.get('/:id/rolls', requirePermission('fabric:read'), validate({ params: idParam }), async (req, res) => {
+    const actor = actorOf(req);
+    const f = await load(actor, Number(req.params.id));
+    res.json({ rolls: (await fabrics.rolls(actor.studioId, f.id)).map(presentRoll) });
+  });
+
+  /** Save rolls after checking labels are new; all or none. */
+  const saveRolls = async (actor: Actor, fabricId: number, list: RollInput[], fieldOf: (i: number) => string) => {
+    const fields: Record<string, string> = {};
+    const seen = new Map<string, number>();
+    list.forEach((roll, i) => {
+      const prev = seen.get(roll.label);
+      if (prev !== undefined) fields[fieldOf(i)] = `Roll ${roll.label} is entered twice (also ${fieldOf(prev)})`;
+      else seen.set(roll.label, i);
+    });
+    const taken = new Set(await fabrics.labelsTaken(actor.studioId, list.map((x) => x.label)));
+    list.forEach((roll, i) => {
+      if (taken.has(roll.label)) fields[fieldOf(i)] ??= `Roll ${roll.label} is already in stock`;
+    });
+    if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+    const saved = await fabrics.insertRolls(
+      list.map((roll) => ({ ...roll, studioId: actor.studioId, fabricId, remainingMm: roll.lengthMm, isRemnant: false })),
+    );
+    await audit.record(actor, 'create', 'rolls', fabricId, undefined, { labels: saved.map((s) => s.label) });
+    return saved;
+  };
+
+  r.post('/:id/rolls', requirePermission('fabric:write'), validate({ params: idParam, body: createRollsInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const f = await load(actor, Number(req.params.id));
+    const saved = await saveRolls(actor, f.id, req.body.rolls, (i) => `rolls.${i}.label`);
+    res.status(201).json({ rolls: saved.map(presentRoll) });
+  });
+
+  r.post('/:id/rolls/import', requirePermission('fabric:write'), validate({ params: idParam }), upload.single('file'), async (req, res) => {
+    const actor = actorOf(req);
+    const f = await load(actor, Number(req.params.id));
+    if (!req.file) throw badRequest('file: attach the packing list (CSV or XLSX)', { file: 'Attach the packing list' });
+    const { rolls, errors } = await parsePackingList(req.file, { widthMm: f.widthMm, receivedDate: format(opts.now(), 'yyyy-MM-dd') });
+    if (errors.length) {
+      const fields = Object.fromEntries(errors.map((e) => [`row ${e.row}${e.column ? ` · ${e.column}` : ''}`, e.message]));
+      res.status(400).json({ error: { code: 'validation', message: `${errors.length} problem${errors.length > 1 ? 's' : ''} in the packing list; nothing was imported`, fields }, rows: errors });
+      return;
+    }
+    try {
+      const saved = await saveRolls(actor, f.id, rolls, (i) => `row ${i + 2}`);
+      res.status(201).json({ rolls: saved.map(presentRoll) });
+    } catch (err) {
+      const fields = (err as { fields?: Record<string, string> }).fields;
+      if (!fields) throw err;
+      const rows = Object.entries(fields).map(([k, message]) => ({ row: Number(k.replace('row ', '')), column: 'roll', message }));
+      res.status(400).json({ error: { code: 'validation', message: `${rows.length} problem${rows.length > 1 ? 's' : ''} in the packing list; nothing was imported`, fields }, rows });
+    }
+  });
+  return r;
+}

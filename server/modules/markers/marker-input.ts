@@ -1,0 +1,76 @@
+import { createHash } from 'node:crypto';
+import type { NestingInput, NestingPiece } from '@planning';
+import { polygonArea, polygonRotate } from '@shared/geometry/polygon';
+import { mm } from '@shared/units/units';
+import type { CuttingPiece } from './style-pieces';
+
+/** Clear distance kept between pieces (mm): room for the knife between neighbours (common practice). */
+export const MARKER_GAP_MM = 2;
+/** Seed of every product marker: same inputs, same marker. */
+export const MARKER_SEED = 1;
+
+/** What the engine gets and what the marker view needs to draw and label each piece. */
+export interface MarkerJobInput {
+  engine: NestingInput;
+  seed: number;
+  seconds: number;
+  /** Piece key ("M:front") → size and piece name. */
+  labels: Record<string, { size: string; name: string }>;
+}
+
+/**
+ * Engine input for a size ratio: one nesting piece per size and piece, outlines turned so the grain runs
+ * along the fabric length (x), quantities multiplied by the ratio (mirrored pieces count pairs), rotations
+ * 0° and 180° (0° only on one-way or napped fabric), the fabric's cuttable width and a 2 mm gap.
+ */
+export function buildMarkerInput(
+  pieces: Record<string, CuttingPiece[]>,
+  ratio: Record<string, number>,
+  opts: { widthMm: number; isDirectional: boolean; seconds: number; gapMm?: number },
+): MarkerJobInput {
+  const out: NestingPiece[] = [];
+  const labels: MarkerJobInput['labels'] = {};
+  for (const [size, n] of Object.entries(ratio).sort(([a], [b]) => a.localeCompare(b))) {
+    if (!(n > 0)) continue;
+    for (const p of pieces[size] ?? []) {
+      const id = `${size}:${p.pieceId}`;
+      const perGarment = p.mirrored ? Math.max(1, Math.round(p.quantity / 2)) : p.quantity;
+      const outline = p.grainAngle ? polygonRotate(p.outline, -p.grainAngle) : p.outline;
+      out.push({
+        id,
+        polygon: outline.map((q) => ({ x: round(q.x), y: round(q.y) })),
+        quantity: perGarment * n,
+        mirrored: p.mirrored,
+        orientations: opts.isDirectional ? [0] : [0, 180],
+      });
+      labels[id] = { size, name: p.name };
+    }
+  }
+  return {
+    engine: { pieces: out, stripWidth: mm(opts.widthMm), gap: mm(opts.gapMm ?? MARKER_GAP_MM) },
+    seed: MARKER_SEED,
+    seconds: opts.seconds,
+    labels,
+  };
+}
+
+const round = (n: number) => Math.round(n * 1000) / 1000;
+
+/** SHA-256 of everything that decides the marker: pieces, quantities, width, orientations, gap, budget, seed. */
+export function markerInputHash(job: MarkerJobInput): string {
+  const canonical = JSON.stringify({
+    pieces: job.engine.pieces.map((p) => [p.id, p.polygon.map((q) => [q.x, q.y]), p.quantity, p.orientations, p.mirrored]),
+    width: job.engine.stripWidth,
+    gap: job.engine.gap,
+    seconds: job.seconds,
+    seed: job.seed,
+  });
+  return createHash('sha256').update(canonical).digest('hex');
+}
+
+/** Area of one garment of each size (mm²), from its cutting pieces and their copies. */
+export function garmentAreas(pieces: Record<string, CuttingPiece[]>): Record<string, number> {
+  return Object.fromEntries(
+    Object.entries(pieces).map(([size, list]) => [size, list.reduce((a, p) => a + polygonArea(p.outline) * p.quantity, 0)]),
+  );
+}

@@ -1,0 +1,111 @@
+import PQueue from 'p-queue';
+import type { NestingResult } from '@planning';
+import { checkLayout } from '@planning';
+import { runNestingWorker, type NestingRunHandle } from '../../workers/nesting-runner';
+import type { MarkerJobInput } from './marker-input';
+import type { MarkerRepository } from './marker.repository';
+
+/** What is known about a running job between its progress reports. */
+export interface LiveProgress {
+  bestLength: number;
+  elapsedMs: number;
+  iteration: number;
+}
+
+/** Stored result of a marker run: the engine's result plus the label of every piece. */
+export interface StoredMarkerResult extends NestingResult {
+  check: { valid: boolean; errors: string[] };
+}
+
+export interface MarkerQueueOptions {
+  /** Grace past the budget before a run counts as overrun (the engine's first layout is not interruptible). */
+  overrunMs?: number;
+  /** Worker entry override, for tests. */
+  workerEntry?: string;
+  /** Called after a marker is stored as done (the cutting area links it to planned lays of that ratio). */
+  onDone?: (studioId: number, markerId: number) => Promise<void>;
+}
+
+/**
+ * The marker job queue: one nesting run at a time (p-queue, concurrency 1: the machine has 2 cores and
+ * the request thread keeps one). Each job runs on a worker thread; progress is kept in memory for
+ * GET /api/markers/:id; the finished marker is checked by the independent layout checker and stored.
+ */
+export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOptions = {}) {
+  const queue = new PQueue({ concurrency: 1 });
+  const live = new Map<number, LiveProgress>();
+  const running = new Map<number, NestingRunHandle>();
+  const cancelledBeforeStart = new Set<number>();
+  let stopped = false;
+
+  async function run(studioId: number, id: number, job: MarkerJobInput) {
+    if (stopped || cancelledBeforeStart.delete(id)) return;
+    await markers.update(studioId, id, { status: 'running' });
+    const started = performance.now();
+    const handle = runNestingWorker(job.engine, {
+      seed: job.seed,
+      timeBudgetMs: job.seconds * 1000,
+      overrunMs: opts.overrunMs ?? Math.max(60_000, job.seconds * 1000),
+      entry: opts.workerEntry,
+      onProgress: (p) => live.set(id, p),
+    });
+    running.set(id, handle);
+    const outcome = await handle.done;
+    running.delete(id);
+    live.delete(id);
+    const elapsedMs = performance.now() - started;
+    if (stopped) return;
+    if (outcome.kind === 'result') {
+      const check = checkLayout(job.engine, outcome.result);
+      const result: StoredMarkerResult = { ...outcome.result, check: { valid: check.valid, errors: check.errors.slice(0, 10) } };
+      await markers.update(studioId, id, {
+        status: check.valid ? (outcome.cancelled ? 'cancelled' : 'done') : 'failed',
+        lengthMm: outcome.result.length,
+        utilisation: outcome.result.utilisation,
+        elapsedMs,
+        result,
+        error: check.valid ? (outcome.cancelled ? 'Stopped early: the best marker so far is kept.' : '') : `The layout checker refused the marker: ${check.errors[0]}`,
+      });
+      if (check.valid && !outcome.cancelled) await opts.onDone?.(studioId, id);
+    } else if (outcome.kind === 'cancelled') {
+      await markers.update(studioId, id, { status: 'cancelled', elapsedMs, error: 'Cancelled before a marker was found.' });
+    } else {
+      await markers.update(studioId, id, { status: 'failed', elapsedMs, error: outcome.message });
+    }
+  }
+
+  return {
+    /** Queue a marker row already stored as 'queued'. */
+    enqueue(studioId: number, id: number, job: MarkerJobInput) {
+      stopped = false;
+      void queue.add(() =>
+        run(studioId, id, job).catch(async (err: unknown) => {
+          const message = err instanceof Error ? err.message : String(err);
+          await markers.update(studioId, id, { status: 'failed', error: `The marker job failed: ${message}` }).catch(() => undefined);
+        }),
+      );
+    },
+    progress: (id: number) => live.get(id),
+    isRunning: (id: number) => running.has(id),
+    /** Cancel a queued or running job; true when there was one. */
+    cancel(id: number): boolean {
+      const h = running.get(id);
+      if (h) {
+        h.cancel();
+        return true;
+      }
+      cancelledBeforeStart.add(id);
+      return false;
+    },
+    /** Resolves when every queued job has finished (tests). */
+    idle: () => queue.onIdle(),
+    async stop() {
+      stopped = true;
+      queue.clear();
+      for (const h of running.values()) h.cancel();
+      running.clear();
+    },
+  };
+}
+
+export type MarkerQueue = ReturnType<typeof createMarkerQueue>;

@@ -1,0 +1,92 @@
+import type { DataSource } from 'typeorm';
+import type { CreateMarkerInput } from '../../../shared/schemas/markers';
+import type { Actor } from '../../auth/require';
+import type { MarkerEntity } from '../../entities';
+import { badRequest, conflict, notFound } from '../../errors';
+import type { AuditRepository } from '../audit/audit.repository';
+import { createBatchRepository } from '../batches/batch.repository';
+import { createFabricRepository } from '../cutting/fabric.repository';
+import { createStyleRepository } from '../styles/style.repository';
+import { buildMarkerInput, markerInputHash } from './marker-input';
+import { presentMarker } from './marker.presenter';
+import type { MarkerQueue } from './marker-queue';
+import type { MarkerRepository } from './marker.repository';
+import { loadStylePieces } from './style-pieces';
+
+export interface MarkerServiceDeps {
+  ds: DataSource;
+  markers: MarkerRepository;
+  queue: () => MarkerQueue;
+  audit: AuditRepository;
+  /** Default budget (NESTING_SECONDS). */
+  defaultSeconds: number;
+}
+
+export type MarkerService = ReturnType<typeof createMarkerService>;
+
+/** Starting, reading and cancelling markers; the hash of the inputs makes an unchanged marker free. */
+export function createMarkerService(deps: MarkerServiceDeps) {
+  const { ds, markers, audit } = deps;
+  const styles = createStyleRepository(ds);
+  const batches = createBatchRepository(ds);
+  const fabrics = createFabricRepository(ds);
+
+  /** Build, hash and store a marker job; returns the stored marker when one with the same inputs exists. */
+  async function start(studioId: number, input: CreateMarkerInput): Promise<{ marker: MarkerEntity; reused: boolean }> {
+    const style = await styles.get(studioId, input.styleId);
+    if (!style) throw badRequest('styleId: no such style in this studio', { styleId: 'No such style' });
+    if (input.batchId !== undefined) {
+      const batch = await batches.get(studioId, input.batchId);
+      if (!batch || batch.styleId !== style.id) throw badRequest('batchId: no such batch of this style', { batchId: 'No such batch of this style' });
+    }
+    const fabric = await fabrics.get(studioId, input.fabricId);
+    if (!fabric) throw badRequest('fabricId: no such fabric in this studio', { fabricId: 'No such fabric' });
+    const fields: Record<string, string> = {};
+    for (const size of Object.keys(input.ratio)) if (!style.sizeRun.includes(size)) fields[`ratio.${size}`] = `Size ${size} is not in the style's size run`;
+    if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+    const pieces = await loadStylePieces(ds, studioId, style.id);
+    if (Object.keys(pieces).length === 0) throw conflict('This style has no graded pieces yet: grade it first');
+    const ratio = Object.fromEntries(style.sizeRun.filter((s) => (input.ratio[s] ?? 0) > 0).map((s) => [s, input.ratio[s]]));
+    const job = buildMarkerInput(pieces, ratio, {
+      widthMm: fabric.widthMm,
+      isDirectional: fabric.isDirectional,
+      seconds: input.seconds ?? deps.defaultSeconds,
+    });
+    const inputHash = markerInputHash(job);
+    const existing = await markers.byHash(studioId, inputHash);
+    if (existing) return { marker: existing, reused: true };
+    const marker = await markers.insert({
+      studioId, styleId: style.id, batchId: input.batchId ?? null, fabricId: fabric.id, ratio,
+      widthMm: fabric.widthMm, inputHash, status: 'queued', input: job, result: null, error: '',
+    });
+    deps.queue().enqueue(studioId, marker.id, job);
+    return { marker, reused: false };
+  }
+
+  return {
+    async create(actor: Actor, input: CreateMarkerInput) {
+      const { marker, reused } = await start(actor.studioId, input);
+      if (!reused) await audit.record(actor, 'create', 'marker', marker.id, undefined, { ratio: marker.ratio, fabricId: marker.fabricId, inputHash: marker.inputHash });
+      return { marker: presentMarker(marker, deps.queue().progress(marker.id)), reused };
+    },
+    start,
+    async get(studioId: number, id: number, withDrawing = true) {
+      const m = await markers.get(studioId, id);
+      if (!m) throw notFound('Marker');
+      return { entity: m, dto: presentMarker(m, deps.queue().progress(id), withDrawing) };
+    },
+    async list(studioId: number, where: { styleId?: number; batchId?: number }) {
+      return (await markers.list(studioId, where)).map((m) => presentMarker(m, deps.queue().progress(m.id)));
+    },
+    async cancel(actor: Actor, id: number) {
+      const m = await markers.get(actor.studioId, id);
+      if (!m) throw notFound('Marker');
+      if (m.status !== 'queued' && m.status !== 'running') throw conflict(`This marker is ${m.status}; only a queued or running marker can be cancelled`);
+      const wasRunning = deps.queue().cancel(id);
+      if (!wasRunning) await markers.update(actor.studioId, id, { status: 'cancelled', error: 'Cancelled before it started.' });
+      await audit.record(actor, 'cancel', 'marker', id, { status: m.status }, { status: wasRunning ? 'cancelling' : 'cancelled' });
+      const after = (await markers.get(actor.studioId, id))!;
+      return presentMarker(after, deps.queue().progress(id));
+    },
+  };
+}

@@ -1,0 +1,70 @@
+import { queryOptions, useMutation } from '@tanstack/react-query';
+import type { BundleDto, CreateCutPlanInput, CutPlanDto, FabricDto, LayDto, RecordLayInput, RollDto, RollInput } from '@shared/schemas/cutting';
+import { api } from '@/lib/api-client';
+import { queryClient } from '@/lib/query-client';
+
+export interface LayDetail {
+  lay: LayDto;
+  fabric: { id: number; name: string; composition: string; widthMm: number; isDirectional: boolean; maxPlies: number } | null;
+  bundles: BundleDto[];
+}
+
+export const fabricQueries = {
+  all: () => ({ queryKey: ['fabrics'] as const }),
+  list: () => queryOptions({ queryKey: ['fabrics', 'list'], queryFn: async () => (await api.get<{ fabrics: FabricDto[] }>('/fabrics')).fabrics }),
+  detail: (id: number) =>
+    queryOptions({ queryKey: ['fabrics', 'detail', id], queryFn: async () => api.get<{ fabric: FabricDto; rolls: RollDto[] }>(`/fabrics/${id}`) }),
+};
+
+export const cutPlanQueries = {
+  all: () => ({ queryKey: ['cut-plans'] as const }),
+  ofBatch: (batchId: number) =>
+    queryOptions({ queryKey: ['cut-plans', 'batch', batchId], queryFn: async () => (await api.get<{ cutPlan: CutPlanDto | null }>(`/batches/${batchId}/cut-plan`)).cutPlan }),
+};
+
+export const layQueries = {
+  all: () => ({ queryKey: ['lays'] as const }),
+  list: () => queryOptions({ queryKey: ['lays', 'list'], queryFn: async () => (await api.get<{ lays: LayDto[] }>('/lays')).lays }),
+  detail: (id: number) => queryOptions({ queryKey: ['lays', 'detail', id], queryFn: async () => api.get<LayDetail>(`/lays/${id}`) }),
+};
+
+const invalidateCutting = () =>
+  Promise.all([
+    queryClient.invalidateQueries({ queryKey: fabricQueries.all().queryKey }),
+    queryClient.invalidateQueries({ queryKey: cutPlanQueries.all().queryKey }),
+    queryClient.invalidateQueries({ queryKey: layQueries.all().queryKey }),
+  ]);
+
+export const useAddRolls = (fabricId: number) =>
+  useMutation({
+    mutationFn: async (rolls: RollInput[]) => (await api.post<{ rolls: RollDto[] }>(`/fabrics/${fabricId}/rolls`, { rolls })).rolls,
+    onSuccess: invalidateCutting,
+  });
+
+export const useImportRolls = (fabricId: number) =>
+  useMutation({
+    mutationFn: async (file: File) => {
+      const form = new FormData();
+      form.append('file', file);
+      return (await api.post<{ rolls: RollDto[] }>(`/fabrics/${fabricId}/rolls/import`, form)).rolls;
+    },
+    onSuccess: invalidateCutting,
+  });
+
+export const usePlanCut = (batchId: number) =>
+  useMutation({
+    mutationFn: async (v: CreateCutPlanInput) => (await api.post<{ cutPlan: CutPlanDto }>(`/batches/${batchId}/cut-plan`, v)).cutPlan,
+    onSuccess: invalidateCutting,
+  });
+
+export const useRecordLay = (id: number) =>
+  useMutation({
+    mutationFn: async (v: RecordLayInput) => (await api.put<{ lay: LayDto }>(`/lays/${id}`, v)).lay,
+    onSuccess: invalidateCutting,
+  });
+
+export const useCutLay = (id: number) =>
+  useMutation({
+    mutationFn: async (v: RecordLayInput) => api.post<{ lay: LayDto; bundles: BundleDto[] }>(`/lays/${id}/cut`, v),
+    onSuccess: invalidateCutting,
+  });

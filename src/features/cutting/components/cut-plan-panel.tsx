@@ -1,0 +1,85 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
+import type { BatchDto } from '@shared/schemas/batches';
+import { Badge, Card, ErrorNote } from '@/components/ui/page';
+import { ApiError, downloadFile } from '@/lib/api-client';
+import { cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
+import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
+
+/** The batch page's cut plan: plan settings, lays with rolls, fabric used against the lower bound. */
+export function CutPlanPanel({ batch }: { batch: BatchDto }) {
+  const { data: plan } = useQuery(cutPlanQueries.ofBatch(batch.id));
+  const { data: fabrics = [] } = useQuery(fabricQueries.list());
+  const planCut = usePlanCut(batch.id);
+  const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: '6', overcutPercent: '0' });
+  const fields = planCut.error instanceof ApiError ? planCut.error.fields : {};
+  const handleSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    planCut.mutate({
+      fabricId: Number(form.fabricId || fabrics[0]?.id), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
+      maxMarkerLengthMm: form.maxMarkerLengthM ? Number(form.maxMarkerLengthM) * 1000 : undefined, overcutPercent: Number(form.overcutPercent || 0),
+    });
+  };
+  const num = (key: keyof typeof form, label: string, err?: string) => (
+    <div>
+      <label className="field-label" htmlFor={`cp-${key}`}>{label}</label>
+      <input id={`cp-${key}`} className="field-input" type="number" step="any" value={form[key]} onChange={(e) => setForm({ ...form, [key]: e.target.value })} aria-invalid={Boolean(err)} />
+      {err ? <p className="field-error">{err}</p> : null}
+    </div>
+  );
+  return (
+    <Card title="Cut plan">
+      <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
+        <div>
+          <label className="field-label" htmlFor="cp-fabric">Fabric</label>
+          <select id="cp-fabric" className="field-input" value={form.fabricId || String(fabrics[0]?.id ?? '')} onChange={(e) => setForm({ ...form, fabricId: e.target.value })}>
+            {fabrics.map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
+          </select>
+        </div>
+        {num('maxPlies', 'Most plies', fields.maxPlies)}
+        {num('maxGarmentsPerMarker', 'Garments per marker', fields.maxGarmentsPerMarker)}
+        {num('maxMarkerLengthM', 'Table length (m)', fields.maxMarkerLengthMm)}
+        {num('overcutPercent', 'Over-cut allowed (%)', fields.overcutPercent)}
+        <button type="submit" className="btn-primary" disabled={planCut.isPending}>{planCut.isPending ? 'Planning…' : 'Plan the cut'}</button>
+      </form>
+      {planCut.error && !Object.keys(fields).length ? <div className="mt-3"><ErrorNote error={planCut.error} /></div> : null}
+      {plan ? (
+        <div className="mt-4 space-y-3">
+          <div className="flex flex-wrap gap-3 text-sm" aria-label="Plan figures">
+            <span className="rounded-lg bg-calico-50 px-3 py-2">Fabric used <b>{metres(plan.fabricUsedMm)}</b></span>
+            <span className="rounded-lg bg-calico-50 px-3 py-2">Lower bound <b>{metres(plan.lowerBoundMm)}</b></span>
+            <span className="rounded-lg bg-calico-50 px-3 py-2">Gap <b>{(plan.gap * 100).toFixed(2)} %</b></span>
+            <span className="rounded-lg bg-calico-50 px-3 py-2">{plan.lays.length} lays (at least {plan.layLowerBound})</span>
+            <Badge tone={plan.method === 'exact' ? 'teal' : 'gold'}>{plan.method === 'exact' ? 'proven best' : 'best found'}</Badge>
+          </div>
+          {plan.lengthSources.some((s) => s.source === 'estimate') ? (
+            <p className="text-xs text-ink-600">Lays without a stored marker use an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). Build the marker to replace it.</p>
+          ) : null}
+          <div className="overflow-x-auto">
+            <table className="w-full text-sm">
+              <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Lay</th><th>Sizes per ply</th><th>Plies</th><th>Marker</th><th>Spreading</th><th>Rolls (plies, expected remnant)</th><th>Status</th></tr></thead>
+              <tbody>
+                {plan.lays.map((l) => (
+                  <tr key={l.id} className="border-t border-calico-200 align-top">
+                    <td className="py-1 font-semibold">{l.seq}</td><td>{ratioLabel(l.ratio)}</td><td>{l.plies}</td>
+                    <td>{metres(l.markerLengthMm)} {l.markerId ? <Badge tone="teal">marker</Badge> : <Badge>estimate</Badge>}</td>
+                    <td>{SPREADING_LABELS[l.spreadingMode] ?? l.spreadingMode}</td>
+                    <td>{l.rolls.map((r) => <div key={r.rollId}>{r.label} ({r.shadeLot}): {r.plies} plies, {metres(r.expectedRemnantMm)}</div>)}</td>
+                    <td><Badge tone={l.status === 'cut' ? 'teal' : 'grey'}>{l.status}</Badge> <Link className="underline" to={`/lays/${l.id}`}>open</Link></td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+          {plan.shortfall.some((s) => s > 0) ? <p role="alert" className="text-sm text-madder-700">Not enough fabric in the chosen rolls: {plan.shortfall.reduce((a, b) => a + b, 0)} plies short.</p> : null}
+          <div className="flex flex-wrap gap-2">
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.xlsx`, `marker-list-${batch.code}.xlsx`)}>Marker list per roll (XLSX)</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.pdf`, `marker-list-${batch.code}.pdf`)}>Marker list per roll (PDF)</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/bundle-register.xlsx`, `bundle-register-${batch.code}.xlsx`)}>Bundle register (XLSX)</button>
+          </div>
+        </div>
+      ) : <p className="mt-3 text-sm text-ink-600">No cut plan yet.</p>}
+    </Card>
+  );
+}

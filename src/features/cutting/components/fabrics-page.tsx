@@ -1,0 +1,106 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState, type FormEvent } from 'react';
+import type { RollDto } from '@shared/schemas/cutting';
+import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
+import { useCan } from '@/lib/auth';
+import { formatMoney } from '@/lib/format';
+import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
+import { metres } from './cutting-format';
+
+function RollTable({ rolls }: { rolls: RollDto[] }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full text-sm">
+        <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Width</th><th>Received</th></tr></thead>
+        <tbody>
+          {rolls.map((r) => (
+            <tr key={r.id} className="border-t border-calico-200">
+              <td className="py-1 font-medium">{r.label} {r.isRemnant ? <Badge tone="gold">remnant</Badge> : null}</td>
+              <td>{r.shadeLot}</td><td>{metres(r.lengthMm)}</td><td>{metres(r.remainingMm)}</td><td>{Math.round(r.widthMm / 10)} cm</td><td>{r.receivedDate}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number }) {
+  const add = useAddRolls(fabricId);
+  const [f, setF] = useState({ label: '', lengthM: '', widthCm: String(Math.round(widthMm / 10) + 2), shadeLot: '', receivedDate: new Date().toISOString().slice(0, 10) });
+  const fields = add.error instanceof ApiError ? add.error.fields : {};
+  const handleSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * 1000), widthMm: Math.round(Number(f.widthCm) * 10), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
+      onSuccess: () => setF({ ...f, label: '', lengthM: '' }),
+    });
+  };
+  const input = (key: keyof typeof f, label: string, type = 'text', err?: string) => (
+    <div>
+      <label className="field-label" htmlFor={`roll-${key}`}>{label}</label>
+      <input id={`roll-${key}`} className="field-input" type={type} step="any" value={f[key]} onChange={(e) => setF({ ...f, [key]: e.target.value })} aria-invalid={Boolean(err)} />
+      {err ? <p className="field-error">{err}</p> : null}
+    </div>
+  );
+  return (
+    <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
+      {input('label', 'Roll label', 'text', fields['rolls.0.label'])}
+      {input('lengthM', 'Length (m)', 'number', fields['rolls.0.lengthMm'])}
+      {input('widthCm', 'Width (cm)', 'number', fields['rolls.0.widthMm'])}
+      {input('shadeLot', 'Shade lot', 'text', fields['rolls.0.shadeLot'])}
+      {input('receivedDate', 'Received', 'date', fields['rolls.0.receivedDate'])}
+      <button type="submit" className="btn-primary" disabled={add.isPending}>Add roll</button>
+      {add.error && !Object.keys(fields).length ? <div className="col-span-full"><ErrorNote error={add.error} /></div> : null}
+    </form>
+  );
+}
+
+function ImportForm({ fabricId }: { fabricId: number }) {
+  const imp = useImportRolls(fabricId);
+  const [file, setFile] = useState<File | null>(null);
+  const rows = imp.error instanceof ApiError ? Object.entries(imp.error.fields) : [];
+  return (
+    <div className="space-y-2">
+      <p className="text-sm text-ink-600">Supplier packing list as CSV or XLSX with columns <b>Roll</b>, <b>Length m</b> (or Length mm / Length yd), <b>Width cm</b>, <b>Shade lot</b>, <b>Received</b> (YYYY-MM-DD). Nothing is saved unless every row is right.</p>
+      <div className="flex flex-wrap items-center gap-2">
+        <input aria-label="Packing list file" type="file" accept=".csv,.xlsx" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
+        <button type="button" className="btn-quiet" disabled={!file || imp.isPending} onClick={() => file && imp.mutate(file)}>Import packing list</button>
+      </div>
+      {imp.isSuccess ? <p className="text-sm text-thread-800">{imp.data.length} rolls imported.</p> : null}
+      {imp.error ? <ErrorNote error={imp.error} /> : null}
+      {rows.length ? <ul className="list-disc pl-5 text-sm text-madder-700">{rows.map(([k, v]) => <li key={k}>{k}: {v}</li>)}</ul> : null}
+    </div>
+  );
+}
+
+export function FabricsPage() {
+  const { data: fabrics, isLoading } = useQuery(fabricQueries.list());
+  const [openId, setOpenId] = useState<number | null>(null);
+  const id = openId ?? fabrics?.[0]?.id ?? null;
+  const detail = useQuery({ ...fabricQueries.detail(id ?? 0), enabled: id !== null });
+  const canWrite = useCan('fabric:write');
+  if (isLoading || !fabrics) return <Spinner />;
+  return (
+    <>
+      <PageHeader title="Fabric and rolls" subtitle="Cuttable width excludes the selvedges. Short ends are kept as remnant rolls." />
+      <div className="grid gap-4 md:grid-cols-3">
+        {fabrics.map((f) => (
+          <button type="button" key={f.id} onClick={() => setOpenId(f.id)} className={`card p-4 text-left ${f.id === id ? 'ring-2 ring-thread-700' : ''}`}>
+            <p className="font-semibold text-thread-800">{f.name}</p>
+            <p className="text-sm text-ink-600">{f.composition} · {Math.round(f.widthMm / 10)} cm cuttable {f.isDirectional ? '· one way' : ''}</p>
+            <p className="mt-1 text-sm">{f.rollCount} rolls · {metres(f.totalRemainingMm)} in stock</p>
+            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(f.pricePerMetreMinor, 'KES')} per metre</p> : null}
+          </button>
+        ))}
+      </div>
+      {id !== null && detail.data ? (
+        <div className="mt-5 space-y-5">
+          <Card title={`Rolls of ${detail.data.fabric.name}`}><RollTable rolls={detail.data.rolls} /></Card>
+          {canWrite ? <Card title="Enter a roll"><AddRollForm fabricId={id} widthMm={detail.data.fabric.widthMm} /></Card> : null}
+          {canWrite ? <Card title="Import a packing list"><ImportForm fabricId={id} /></Card> : null}
+        </div>
+      ) : null}
+    </>
+  );
+}

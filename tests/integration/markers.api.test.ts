@@ -1,0 +1,106 @@
+import request from 'supertest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '../../server/app';
+import { openDatabase } from '../../server/db/data-source';
+import { loadEnv } from '../../server/env';
+import type { ModuleContext } from '../../server/modules/module';
+import { MARKER_QUEUE_OPTIONS_KEY } from '../../server/modules/markers/markers.module';
+import { seedDemoStudio } from '../../server/seed/demo-studio';
+import { DEMO, DEMO_PASSWORD, TEST_TODAY } from '../fixtures/test-app';
+
+type Agent = ReturnType<typeof request.agent>;
+const login = async (app: Parameters<typeof request.agent>[0], email: string) => {
+  const a = request.agent(app);
+  await a.post('/api/auth/login').send({ email, password: DEMO_PASSWORD });
+  return a;
+};
+const poll = async (agent: Agent, id: number, until: (m: { status: string }) => boolean, ms = 120_000) => {
+  const end = Date.now() + ms;
+  for (;;) {
+    const m = (await agent.get(`/api/markers/${id}?drawing=false`)).body.marker;
+    if (until(m) || Date.now() > end) return m;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+};
+
+let ds: Awaited<ReturnType<typeof openDatabase>>;
+const env = loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000', NESTING_SECONDS: '1' });
+let owner: Agent, cutter: Agent, machinist: Agent;
+let app: ReturnType<typeof createApp>;
+beforeAll(async () => {
+  ds = await openDatabase(':memory:');
+  await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
+  app = createApp({ ds, env, clientDir: '/nonexistent' });
+  [owner, cutter, machinist] = await Promise.all([login(app, DEMO.owner), login(app, DEMO.cutter), login(app, DEMO.machinist)]);
+});
+
+/** A second app on the same database whose queue runs a test double of the worker. */
+async function appWithWorker(entry: string, overrunMs: number) {
+  const holder: { current?: ModuleContext } = {};
+  const a = createApp({ ds, env, clientDir: '/nonexistent', moduleContext: holder });
+  holder.current!.services.set(MARKER_QUEUE_OPTIONS_KEY, { workerEntry: new URL(entry, import.meta.url).href, overrunMs });
+  return login(a, DEMO.owner);
+}
+
+describe('markers', () => {
+  it('runs a marker on a worker thread, reports progress, stores a checked layout and its SVG', async () => {
+    const res = await owner.post('/api/markers').send({ styleId: 1, batchId: 1, fabricId: 1, ratio: { XS: 1 }, seconds: 1 });
+    expect(res.status).toBe(202);
+    expect(res.body.marker.status).toMatch(/queued|running/);
+    expect((await owner.get('/api/health')).status).toBe(200);
+    const done = await poll(owner, res.body.marker.id, (m) => m.status === 'done' || m.status === 'failed');
+    expect(done.status).toBe('done');
+    expect(done.utilisation).toBeGreaterThan(0.3);
+    expect(done.lengthMm).toBeGreaterThan(0);
+    const full = (await cutter.get(`/api/markers/${done.id}`)).body.marker;
+    expect(full.drawing.placements.length).toBe(full.pieceCount);
+    const svg = await cutter.get(`/api/markers/${done.id}/svg`).buffer(true).parse((r, cb) => { let s = ''; r.on('data', (c: Buffer) => (s += c)); r.on('end', () => cb(null, s)); });
+    expect(svg.headers['content-type']).toMatch(/image\/svg\+xml/);
+    expect((svg.body as string).match(/class="piece"/g)?.length).toBe(full.pieceCount);
+    expect(svg.body).toContain('XS Front');
+  }, 180_000);
+
+  it('never recomputes an unchanged marker: the same inputs return the stored one', async () => {
+    const again = await owner.post('/api/markers').send({ styleId: 1, batchId: 1, fabricId: 1, ratio: { XS: 1 }, seconds: 1 });
+    expect(again.status).toBe(200);
+    expect(again.body.reused).toBe(true);
+    expect(again.body.marker.status).toBe('done');
+  });
+
+  it('checks permissions and fields', async () => {
+    expect((await cutter.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { M: 1 } })).status).toBe(403);
+    expect((await machinist.get('/api/markers')).status).toBe(403);
+    expect((await cutter.get('/api/markers')).status).toBe(200);
+    const bad = await owner.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { M: -1, XXL: 2 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['ratio.M']).toBe('Cannot be negative');
+    const size = await owner.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { XXL: 2 } });
+    expect(size.body.error.fields['ratio.XXL']).toMatch(/not in the style's size run/);
+  });
+
+  it('cancels a queued marker', async () => {
+    const a = await appWithWorker('../../server/workers/testing/hanging.worker.ts', 60_000);
+    const first = (await a.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { S: 1 }, seconds: 2 })).body.marker;
+    const second = (await a.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { L: 1 }, seconds: 2 })).body.marker;
+    const c2 = await a.post(`/api/markers/${second.id}/cancel`);
+    expect(c2.body.marker.status).toBe('cancelled');
+    await a.post(`/api/markers/${first.id}/cancel`);
+    const m = await poll(a, first.id, (x) => x.status !== 'queued' && x.status !== 'running', 10_000);
+    expect(m.status).toBe('cancelled');
+    expect((await a.post(`/api/markers/${first.id}/cancel`)).status).toBe(409);
+  }, 30_000);
+
+  it('marks a crashed or overrunning worker failed and keeps serving', async () => {
+    const crash = await appWithWorker('../../server/workers/testing/crashing.worker.ts', 60_000);
+    const c = (await crash.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { XL: 1 }, seconds: 1 })).body.marker;
+    const failed = await poll(crash, c.id, (x) => x.status === 'failed', 20_000);
+    expect(failed.status).toBe('failed');
+    expect(failed.error).toMatch(/crash/);
+    const hang = await appWithWorker('../../server/workers/testing/hanging.worker.ts', 300);
+    const h = (await hang.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { XL: 2 }, seconds: 1 })).body.marker;
+    const over = await poll(hang, h.id, (x) => x.status === 'failed', 20_000);
+    expect(over.error).toMatch(/overran its 1 s budget/);
+    expect((await owner.get('/api/markers')).status).toBe(200);
+  }, 60_000);
+});
+
