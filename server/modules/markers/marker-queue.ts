@@ -1,7 +1,7 @@
 import PQueue from 'p-queue';
 import type { NestingResult } from '@planning';
-import { checkLayout } from '@planning';
-import { runNestingWorker, type NestingRunHandle } from '../../workers/nesting-runner';
+import type { NestingRunHandle } from '../../workers/nesting-runner';
+import { executeMarkerJob } from './marker-job';
 import type { MarkerJobInput } from './marker-input';
 import type { MarkerRepository } from './marker.repository';
 
@@ -40,37 +40,18 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
 
   async function run(studioId: number, id: number, job: MarkerJobInput) {
     if (stopped || cancelledBeforeStart.delete(id)) return;
-    await markers.update(studioId, id, { status: 'running' });
-    const started = performance.now();
-    const handle = runNestingWorker(job.engine, {
-      seed: job.seed,
-      timeBudgetMs: job.seconds * 1000,
-      overrunMs: opts.overrunMs ?? Math.max(60_000, job.seconds * 1000),
-      entry: opts.workerEntry,
-      onProgress: (p) => live.set(id, p),
-    });
-    running.set(id, handle);
-    const outcome = await handle.done;
-    running.delete(id);
-    live.delete(id);
-    const elapsedMs = performance.now() - started;
-    if (stopped) return;
-    if (outcome.kind === 'result') {
-      const check = checkLayout(job.engine, outcome.result);
-      const result: StoredMarkerResult = { ...outcome.result, check: { valid: check.valid, errors: check.errors.slice(0, 10) } };
-      await markers.update(studioId, id, {
-        status: check.valid ? (outcome.cancelled ? 'cancelled' : 'done') : 'failed',
-        lengthMm: outcome.result.length,
-        utilisation: outcome.result.utilisation,
-        elapsedMs,
-        result,
-        error: check.valid ? (outcome.cancelled ? 'Stopped early: the best marker so far is kept.' : '') : `The layout checker refused the marker: ${check.errors[0]}`,
+    try {
+      await executeMarkerJob(markers, studioId, id, job, {
+        overrunMs: opts.overrunMs,
+        workerEntry: opts.workerEntry,
+        onDone: opts.onDone,
+        onProgress: (p) => live.set(id, p),
+        onStart: (h) => running.set(id, h),
+        isStopped: () => stopped,
       });
-      if (check.valid && !outcome.cancelled) await opts.onDone?.(studioId, id);
-    } else if (outcome.kind === 'cancelled') {
-      await markers.update(studioId, id, { status: 'cancelled', elapsedMs, error: 'Cancelled before a marker was found.' });
-    } else {
-      await markers.update(studioId, id, { status: 'failed', elapsedMs, error: outcome.message });
+    } finally {
+      running.delete(id);
+      live.delete(id);
     }
   }
 

@@ -1,5 +1,6 @@
 import type { ApiModule, ModuleContext } from '../module';
 import { createMarkerQueue, type MarkerQueue, type MarkerQueueOptions } from './marker-queue';
+import { createRedisMarkerQueue } from './marker-queue-redis';
 import type { MarkerJobInput } from './marker-input';
 import { createMarkerRepository } from './marker.repository';
 import { linkMarkerToLays } from './link-lays';
@@ -23,7 +24,10 @@ export const markersModule: ApiModule = {
     let queue: MarkerQueue | undefined;
     const getQueue = () => {
       const extra = ctx.services.get(MARKER_QUEUE_OPTIONS_KEY) as MarkerQueueOptions | undefined;
-      queue ??= createMarkerQueue(markers, { onDone: (studioId, id) => linkMarkerToLays(ctx.ds, studioId, id), ...extra });
+      // REDIS_URL moves the runs to worker processes (`npm run worker`); otherwise they run in-process.
+      queue ??= ctx.env.REDIS_URL
+        ? createRedisMarkerQueue(ctx.env.REDIS_URL)
+        : createMarkerQueue(markers, { onDone: (studioId, id) => linkMarkerToLays(ctx.ds, studioId, id), ...extra });
       ctx.services.set(MARKER_QUEUE_KEY, queue);
       current = { queue, ctx };
       return queue;
