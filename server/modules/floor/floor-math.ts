@@ -1,23 +1,28 @@
 /**
- * Earned minutes, efficiency and piece-rate pay of one log. Kept here until the planning core's floor
- * module (planning/floor) lands; the service calls only these three functions, so the swap is local.
+ * Earned minutes, efficiency and piece-rate pay of one log, through the planning core's floor module
+ * (planning/floor via @planning). The service calls only these three functions.
  */
+import { computePiecePay, earnedMinutes, operatorEfficiency } from '@planning';
+import { minor } from '@shared/units';
 
 /** Earned (standard) minutes of a log: pieces × SAM; a rework attempt earns nothing again. */
 export function logEarnedMinutes(pieces: number, samMinutes: number, attempt: number): number {
-  return attempt > 0 ? 0 : pieces * samMinutes;
+  return attempt > 0 ? 0 : earnedMinutes([{ pieces, sam: samMinutes }]);
 }
 
 /** Piece-rate pay of a log in minor units: pieces × rate; rework (attempt > 0) is not paid twice. */
 export function logPayMinor(pieces: number, rateMinor: number | null, attempt: number): number {
-  return attempt > 0 || !rateMinor ? 0 : pieces * rateMinor;
+  if (!rateMinor) return 0;
+  const record = { personId: 'p', bundleId: 'b', operationId: 'o', pieces, date: '2000-01-01', isRework: attempt > 0 };
+  return computePiecePay({ records: [record], rates: { o: minor(rateMinor) }, from: '2000-01-01', to: '2000-01-01' }).total;
 }
 
 /**
- * Operator efficiency, percent: earned minutes ÷ attended minutes × 100 (onlineclothingstudy.com 2017/01,
- * "Efficiency formula"). Null when nobody recorded attended minutes (no division by zero).
+ * Operator efficiency, percent to two decimals: earned ÷ attended minutes × 100 (onlineclothingstudy.com
+ * 2017/01, "Efficiency formula"). Null when no attended minutes were recorded.
  */
-export function efficiencyPercent(earnedMinutes: number, attendedMinutes: number): number | null {
+export function efficiencyPercent(earned: number, attendedMinutes: number): number | null {
   if (!(attendedMinutes > 0)) return null;
-  return Math.round((earnedMinutes / attendedMinutes) * 10000) / 100;
+  // The core takes pieces × SAM; earned minutes are passed as one piece of `earned` minutes.
+  return Math.round(operatorEfficiency({ pieces: 1, sam: earned, attendedMinutes }) * 100) / 100;
 }

@@ -65,7 +65,11 @@ export function createFloorRepository(ds: DataSource) {
       if (userId !== undefined) q.andWhere('l.userId = :userId', { userId });
       return q.orderBy('l.id', 'ASC').getMany();
     },
-    insertLog: async (l: Partial<WorkLogEntity>) => logs.save(logs.create(l)),
+    /** One INSERT (no save(): that would wrap a transaction and re-select around it). */
+    async insertLog(l: Omit<WorkLogEntity, 'id'>): Promise<WorkLogEntity> {
+      const r = await logs.insert(l);
+      return { ...l, id: Number(r.identifiers[0].id) };
+    },
     deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
       attendance.find({ where: { studioId, day: Between(fromDay, toDay) } }),

@@ -1,7 +1,54 @@
-import type { ApiModule } from '../module';
+import { FLOOR_PROGRESS_SERVICE } from '../floor/floor.module';
+import type { FloorProgressService } from '../floor/floor-progress.service';
+import type { ApiModule, ModuleContext } from '../module';
+import { createPaymentsClient, type PaymentsClient } from './payments-client';
+import { createPaymentsFake, type PaymentsFake } from './payments-fake';
+import { createPayRepository } from './pay.repository';
+import { payRoutes } from './pay.routes';
+import { createPayService } from './pay.service';
 
-/** The pay area. */
+/** ctx.services key of the local payments fake (tests tell it to refuse an account). */
+export const PAYMENTS_FAKE_SERVICE = 'pay.fake';
+
+const fakes = new WeakMap<ModuleContext, PaymentsFake>();
+const started = new Set<PaymentsFake>();
+
+/** The fake of this app; started by start() or, in tests built with createApp, on first use (port 0). */
+async function ensureFake(ctx: ModuleContext) {
+  let fake = fakes.get(ctx);
+  if (!fake) fakes.set(ctx, (fake = createPaymentsFake()));
+  if (!fake.running) {
+    await fake.start(ctx.env.NODE_ENV === 'test' ? 0 : (ctx.env.LOCAL_PAYMENTS_PORT ?? 0));
+    started.add(fake);
+  }
+  return fake;
+}
+
+/** The pay area: approve a period, pay each person through the payments SDK, export the pay sheet. */
 export const payModule: ApiModule = {
   name: 'pay',
-  register() {},
+  register(api, ctx) {
+    const secretKey = ctx.env.PAYMENTS_SECRET_KEY ?? '';
+    let client: PaymentsClient | null = null;
+    const payments = async () => (client ??= createPaymentsClient({ secretKey, fakePort: async () => (await ensureFake(ctx)).port }));
+    if (!secretKey) ctx.services.set(PAYMENTS_FAKE_SERVICE, () => ensureFake(ctx));
+    const pay = createPayService({
+      repo: createPayRepository(ctx.ds),
+      audit: ctx.audit,
+      floor: () => ctx.services.get(FLOOR_PROGRESS_SERVICE) as FloorProgressService,
+      payments,
+    });
+    const mode = () =>
+      secretKey
+        ? { testMode: false, message: 'Live payments: money moves to each person’s account.' }
+        : { testMode: true, message: 'Test payments: no money moves.' };
+    api.use('/pay', payRoutes(pay, mode));
+  },
+  async start(ctx) {
+    if (!ctx.env.PAYMENTS_SECRET_KEY) await ensureFake(ctx);
+  },
+  async stop() {
+    for (const f of started) await f.stop();
+    started.clear();
+  },
 };

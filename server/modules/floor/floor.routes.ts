@@ -1,0 +1,34 @@
+import { Router } from 'express';
+import { batchIdParam, bundleLookupQuery, logWorkInput } from '../../../shared/schemas/floor';
+import { idParam } from '../../../shared/schemas/common';
+import { actorOf, requirePermission } from '../../auth/require';
+import { validate } from '../../middleware/validate';
+import type { FloorProgressService } from './floor-progress.service';
+import type { FloorService } from './floor.service';
+
+/** Routes under /api/floor: logging from the floor, and the owner's progress. */
+export function floorRoutes(floor: FloorService, progress: FloorProgressService) {
+  const r = Router();
+  r.get('/bundles/lookup', requirePermission('bundles:log'), validate({ query: bundleLookupQuery }), async (req, res) => {
+    const q = req.query as unknown as { number: number; batchId?: number };
+    res.json({ bundle: await floor.lookup(actorOf(req), q.number, q.batchId) });
+  });
+  r.post('/logs', requirePermission('bundles:log'), validate({ body: logWorkInput }), async (req, res) => {
+    const { status, result } = await floor.log(actorOf(req), req.body);
+    res.status(status).json(result);
+  });
+  r.delete('/logs/:id', requirePermission('bundles:log'), validate({ params: idParam }), async (req, res) => {
+    await floor.undo(actorOf(req), Number(req.params.id));
+    res.status(204).end();
+  });
+  r.get('/me/today', requirePermission('pay:own'), async (req, res) => {
+    res.json(await floor.today(actorOf(req)));
+  });
+  r.get('/progress/:batchId', requirePermission('progress:read'), validate({ params: batchIdParam }), async (req, res) => {
+    res.json({ progress: await progress.progress(actorOf(req).studioId, Number(req.params.batchId)) });
+  });
+  r.get('/progress/:batchId/daily', requirePermission('progress:read'), validate({ params: batchIdParam }), async (req, res) => {
+    res.json(await progress.daily(actorOf(req).studioId, Number(req.params.batchId)));
+  });
+  return r;
+}

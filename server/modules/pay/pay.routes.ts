@@ -1,0 +1,54 @@
+import { Router } from 'express';
+import { buildPaySheetXlsx } from '../../../exports/xlsx/pay-sheet.xlsx';
+import { periodQuery } from '../../../shared/schemas/floor';
+import { approvePayPeriodInput, payoutParams, payPersonInput, type PayModeDto } from '../../../shared/schemas/pay';
+import { actorOf, requirePermission } from '../../auth/require';
+import { validate } from '../../middleware/validate';
+import type { PayService } from './pay.service';
+
+/** Routes under /api/pay: the owner's pay periods and payouts, and each person's own pay. */
+export function payRoutes(pay: PayService, mode: () => PayModeDto) {
+  const r = Router();
+  r.get('/mode', requirePermission('pay:manage'), (_req, res) => {
+    res.json(mode());
+  });
+  r.get('/me', requirePermission('pay:own'), validate({ query: periodQuery }), async (req, res) => {
+    const q = req.query as unknown as { from: string; to: string };
+    res.json({ pay: await pay.mine(actorOf(req), q.from, q.to) });
+  });
+  r.get('/preview', requirePermission('pay:manage'), validate({ query: periodQuery }), async (req, res) => {
+    const q = req.query as unknown as { from: string; to: string };
+    res.json({ preview: await pay.preview(actorOf(req).studioId, q.from, q.to) });
+  });
+  r.get('/periods', requirePermission('pay:manage'), async (req, res) => {
+    res.json({ periods: await pay.periods(actorOf(req).studioId) });
+  });
+  r.post('/periods', requirePermission('pay:manage'), validate({ body: approvePayPeriodInput }), async (req, res) => {
+    res.status(201).json({ period: await pay.approve(actorOf(req), req.body.fromDay, req.body.toDay) });
+  });
+  r.get('/periods/:id', requirePermission('pay:manage'), validate({ params: payoutParams }), async (req, res) => {
+    res.json({ period: await pay.period(actorOf(req).studioId, Number(req.params.id)) });
+  });
+  r.post('/periods/:id/payouts', requirePermission('pay:manage'), validate({ params: payoutParams, body: payPersonInput }), async (req, res) => {
+    res.json({ payout: await pay.pay(actorOf(req), Number(req.params.id), req.body.userId) });
+  });
+  r.get('/periods/:id/sheet.xlsx', requirePermission('pay:manage'), validate({ params: payoutParams }), async (req, res) => {
+    const { period, studio, lines, approver } = await pay.sheetInput(actorOf(req).studioId, Number(req.params.id));
+    const bytes = await buildPaySheetXlsx({
+      studioName: studio.name,
+      dateIso: new Date(period.createdAt).toISOString(),
+      locale: 'en-GB',
+      currency: studio.currency,
+      periodStartIso: period.fromDay,
+      periodEndIso: period.toDay,
+      entries: lines.map((l) => ({ person: l.name, operation: `${l.operationCode} ${l.operationName}`, pieces: l.pieces, ratePerPieceMinor: l.rateMinor as never })),
+      approvedBy: approver,
+      approvedAtIso: new Date(period.createdAt).toISOString(),
+    });
+    res
+      .type('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet')
+      .attachment(`pay-${period.fromDay}-to-${period.toDay}.xlsx`)
+      .send(bytes);
+  });
+  return r;
+}

@@ -1,0 +1,143 @@
+import { useQuery } from '@tanstack/react-query';
+import { useCallback, useEffect, useState, type FormEvent } from 'react';
+import type { LogWorkResult } from '@shared/schemas/floor';
+import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
+import { api } from '@/lib/api-client';
+import { useMe } from '@/lib/auth';
+import { queryClient } from '@/lib/query-client';
+import { floorQueries } from '../api/floor-queries';
+import { flushOutbox, newIdempotencyKey, readOutbox, sendLog } from '../lib/outbox';
+import { BundleLogPanel, type LogChoice } from './bundle-log-panel';
+import { LogConfirmation } from './log-confirmation';
+import { QrScanner } from './qr-scanner';
+import { TodayCard } from './today-card';
+
+/** Logs waiting on the phone; sent again when the network is back and every 15 s. */
+function useOutbox() {
+  const [count, setCount] = useState(() => readOutbox().length);
+  const [note, setNote] = useState('');
+  useEffect(() => {
+    const update = () => setCount(readOutbox().length);
+    const flush = async () => {
+      if (!readOutbox().length) return;
+      const r = await flushOutbox();
+      if (r.sent) setNote(`${r.sent} saved log${r.sent > 1 ? 's' : ''} sent.`);
+      if (r.refused.length) setNote(`Refused: ${r.refused.join('; ')}`);
+      if (r.sent || r.refused.length) await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
+    };
+    window.addEventListener('seamrun-outbox', update);
+    window.addEventListener('online', flush);
+    const t = setInterval(flush, 15_000);
+    void flush();
+    return () => {
+      window.removeEventListener('seamrun-outbox', update);
+      window.removeEventListener('online', flush);
+      clearInterval(t);
+    };
+  }, []);
+  return { count, note };
+}
+
+/** The machinist's and finisher's phone home: find a bundle, log an operation, see today's count. */
+export function FloorHome({ name }: { name: string }) {
+  const me = useMe().data;
+  const [typed, setTyped] = useState('');
+  const [target, setTarget] = useState<{ bundleNumber: number; batchId?: number } | null>(null);
+  const [scanning, setScanning] = useState(false);
+  const [result, setResult] = useState<LogWorkResult | null>(null);
+  const [queued, setQueued] = useState('');
+  const [error, setError] = useState<unknown>(null);
+  const [busy, setBusy] = useState(false);
+  const outbox = useOutbox();
+  const bundle = useQuery({ ...floorQueries.bundle(target?.bundleNumber ?? 0, target?.batchId), enabled: Boolean(target) });
+
+  const handleFind = (e: FormEvent) => {
+    e.preventDefault();
+    const n = Number(typed);
+    if (!Number.isInteger(n) || n < 1) return setError(new Error('Type the bundle number from the ticket'));
+    setError(null);
+    setResult(null);
+    setQueued('');
+    setTarget({ bundleNumber: n });
+  };
+
+  const handleScanned = useCallback((v: { batchId: number; bundleNumber: number }) => {
+    setScanning(false);
+    setTyped(String(v.bundleNumber));
+    setResult(null);
+    setQueued('');
+    setError(null);
+    setTarget(v);
+  }, []);
+
+  const handleLog = async (choice: LogChoice) => {
+    if (!bundle.data || !me) return;
+    setBusy(true);
+    setError(null);
+    const input = { bundleNumber: bundle.data.number, batchId: bundle.data.batchId, idempotencyKey: newIdempotencyKey(me.id), ...choice };
+    const op = bundle.data.operations.find((o) => o.id === choice.operationId);
+    try {
+      const r = await sendLog(input, `Bundle ${bundle.data.number} · ${op?.code ?? ''}`);
+      if (r.kind === 'sent') setResult(r.result);
+      else setQueued(`No network: bundle ${bundle.data.number} · ${op?.code} ${op?.name} is saved on this phone and will be sent when the network is back.`);
+      await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
+    } catch (e) {
+      setError(e);
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  const handleUndo = async () => {
+    if (!result) return;
+    setBusy(true);
+    try {
+      await api.del(`/floor/logs/${result.log.id}`);
+      setResult(null);
+      await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
+    } catch (e) {
+      setError(e);
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <div className="mx-auto max-w-md space-y-4">
+      <PageHeader title={`Hello, ${name.split(' ')[0]}`} subtitle="Scan or type a bundle, pick the operation, log it done." />
+      {outbox.count ? (
+        <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">
+          {outbox.count} log{outbox.count > 1 ? 's' : ''} waiting on this phone for the network.
+        </p>
+      ) : null}
+      {outbox.note ? <p className="rounded-lg bg-calico-50 px-3 py-2 text-sm">{outbox.note}</p> : null}
+      <Card title="Find a bundle">
+        {scanning ? (
+          <QrScanner onBundle={handleScanned} onClose={() => setScanning(false)} />
+        ) : (
+          <div className="space-y-3">
+            <button type="button" className="btn-accent w-full py-3 text-base" onClick={() => setScanning(true)}>
+              Scan the ticket’s QR code
+            </button>
+            <form onSubmit={handleFind} className="flex items-end gap-2">
+              <div className="flex-1">
+                <label className="field-label" htmlFor="bundle-number">Bundle number</label>
+                <input id="bundle-number" className="field-input text-lg" inputMode="numeric" pattern="[0-9]*" autoComplete="off" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} />
+              </div>
+              <button type="submit" className="btn-primary py-2.5">Find bundle</button>
+            </form>
+          </div>
+        )}
+      </Card>
+      <ErrorNote error={error ?? (bundle.error && target ? bundle.error : null)} />
+      {queued ? <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">{queued}</p> : null}
+      {result ? <LogConfirmation result={result} onUndo={handleUndo} undoing={busy} /> : null}
+      {bundle.data && target ? (
+        <Card>
+          <BundleLogPanel key={`${bundle.data.id}-${bundle.dataUpdatedAt}`} bundle={bundle.data} busy={busy} onLog={handleLog} />
+        </Card>
+      ) : null}
+      <TodayCard />
+    </div>
+  );
+}

@@ -1,0 +1,126 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import QRCode from 'qrcode';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { baseUrl, shot, signInAs } from './browser';
+
+const PHONE = { width: 390, height: 844 };
+let browser: Browser;
+let dir: string;
+
+/** A still camera feed (Y4M, 4:2:0, grey) showing the bundle ticket QR `text`, for Chromium's fake camera. */
+function qrVideo(text: string, file: string) {
+  const W = 480, H = 480, scale = 10;
+  const qr = QRCode.create(text, { errorCorrectionLevel: 'M' }).modules;
+  const y = Buffer.alloc(W * H, 235);
+  const side = qr.size * scale;
+  const x0 = (W - side) >> 1, y0 = (H - side) >> 1;
+  for (let r = 0; r < qr.size; r++)
+    for (let c = 0; c < qr.size; c++)
+      if (qr.get(r, c)) for (let dy = 0; dy < scale; dy++) y.fill(16, (y0 + r * scale + dy) * W + x0 + c * scale, (y0 + r * scale + dy) * W + x0 + (c + 1) * scale);
+  const uv = Buffer.alloc((W / 2) * (H / 2) * 2, 128);
+  const frame = Buffer.concat([Buffer.from('FRAME\n'), y, uv]);
+  writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${W} H${H} F10:1 Ip A1:1 C420jpeg\n`), frame, frame, frame]));
+}
+
+beforeAll(async () => {
+  dir = mkdtempSync(join(tmpdir(), 'seamrun-floor-e2e-'));
+  const video = join(dir, 'ticket.y4m');
+  qrVideo('SR-B:1:2', video);
+  // Debian's Chromium with a fake camera that films the bundle ticket (same flags as browser.ts, plus the camera).
+  browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update',
+      '--disable-sync', '--no-first-run', '--disable-quic',
+      '--use-fake-device-for-media-stream', '--use-fake-ui-for-media-stream', `--use-file-for-fake-video-capture=${video}`,
+    ],
+  });
+});
+afterAll(async () => {
+  await browser?.close();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+async function pinSignIn(page: Page, email: string, pin: string) {
+  await page.goto(`${baseUrl()}/signin`);
+  await page.getByRole('tab', { name: 'Floor PIN' }).click();
+  await page.getByLabel('Email').fill(email);
+  await page.getByLabel('PIN').fill(pin);
+  await page.getByRole('button', { name: 'Sign in with PIN' }).click();
+  await page.waitForURL(`${baseUrl()}/`);
+}
+
+const progressOf = (page: Page) =>
+  page.evaluate(async () => (await (await fetch('/api/floor/progress/1')).json()).progress as { operations: { operationId: number; bundlesDone: number }[] });
+
+describe('journey: a machinist logs a bundle from a phone and the owner sees it move', () => {
+  it('signs in with a PIN, logs by typed number, sees today’s count, is refused a second log; the owner sees progress and approves pay', async () => {
+    const ownerCtx = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const owner = await ownerCtx.newPage();
+    await signInAs(owner, 'owner@tamarind.example');
+    const before = await progressOf(owner);
+
+    const ctx = await browser.newContext({ viewport: PHONE, hasTouch: true, isMobile: true });
+    const page = await ctx.newPage();
+    await pinSignIn(page, 'machinist1@tamarind.example', '4011');
+    await expect.poll(() => page.getByRole('heading', { name: 'Hello, Achieng' }).isVisible()).toBe(true);
+    await expect.poll(async () => /^\d+$/.test((await page.getByTestId('today-ops').textContent()) ?? '')).toBe(true);
+    const opsBefore = Number(await page.getByTestId('today-ops').textContent());
+    await shot(page, 'floor-phone-home');
+
+    await page.getByLabel('Bundle number').fill('3');
+    await page.getByRole('button', { name: 'Find bundle' }).click();
+    await expect.poll(() => page.getByText('Bundle 3 · size').isVisible()).toBe(true);
+    const picked = page.locator('input[name="operation"]:checked');
+    const opLabel = (await picked.getAttribute('aria-label'))!;
+    await shot(page, 'floor-phone-typed-bundle');
+    await page.getByRole('button', { name: 'Log done' }).click();
+    const confirmation = page.getByRole('status', { name: 'Logged' });
+    await expect.poll(() => confirmation.isVisible()).toBe(true);
+    const confirmText = (await confirmation.textContent())!;
+    expect(confirmText).toContain('Bundle 3');
+    expect(confirmText).toContain(opLabel);
+    expect(confirmText).toMatch(/\d+ pieces · pays Ksh/);
+    await expect.poll(async () => Number(await page.getByTestId('today-ops').textContent())).toBe(opsBefore + 1);
+    await shot(page, 'floor-phone-logged');
+
+    // The same operation again: refused with who logged it.
+    await page.getByRole('radio', { name: opLabel }).check();
+    await page.getByRole('button', { name: 'Log done' }).click();
+    await expect.poll(() => page.getByRole('alert').textContent()).toContain('already logged by Achieng Mwende');
+    await shot(page, 'floor-phone-refused');
+
+    // Scanning: the fake camera films the ticket of bundle 2.
+    await page.getByRole('button', { name: 'Scan the ticket’s QR code' }).click();
+    await expect.poll(() => page.getByText('Bundle 2 · size').isVisible(), { timeout: 20_000 }).toBe(true);
+    await shot(page, 'floor-phone-scanned-bundle');
+    await page.getByRole('button', { name: 'Log done' }).click();
+    await expect.poll(() => page.getByRole('status', { name: 'Logged' }).textContent()).toContain('Bundle 2');
+    await shot(page, 'floor-phone-scanned-logged');
+    await ctx.close();
+
+    const after = await progressOf(owner);
+    const done = (p: typeof before) => p.operations.reduce((a, o) => a + o.bundlesDone, 0);
+    expect(done(after)).toBe(done(before) + 2);
+    await owner.getByRole('link', { name: 'Floor' }).click();
+    await expect.poll(() => owner.getByRole('heading', { name: 'Floor progress' }).isVisible()).toBe(true);
+    await expect.poll(() => owner.getByText('Work in progress per operation').isVisible()).toBe(true);
+    await shot(owner, 'floor-owner-progress');
+
+    await owner.getByRole('link', { name: 'Pay' }).click();
+    await expect.poll(() => owner.getByText('Test payments: no money moves.').isVisible()).toBe(true);
+    await expect.poll(() => owner.getByRole('table', { name: 'Pay preview' }).textContent()).toContain('Achieng Mwende');
+    await owner.getByRole('button', { name: 'Approve pay period' }).click();
+    const payout = owner.getByRole('listitem', { name: 'Payout Achieng Mwende' });
+    await expect.poll(() => payout.isVisible()).toBe(true);
+    await payout.getByRole('button', { name: 'Pay' }).click();
+    await expect.poll(() => payout.textContent(), { timeout: 20_000 }).toContain('Reference tr_');
+    expect(await payout.textContent()).not.toContain('not paid');
+    await shot(owner, 'floor-owner-pay');
+    await ownerCtx.close();
+  });
+});

@@ -1,0 +1,120 @@
+import ExcelJS from 'exceljs';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '../../server/app';
+import { openDatabase } from '../../server/db/data-source';
+import { AttendanceEntity, OperationEntity, UserEntity, WorkLogEntity } from '../../server/entities';
+import { loadEnv } from '../../server/env';
+import { logEarnedMinutes } from '../../server/modules/floor/floor-math';
+import type { ModuleContext } from '../../server/modules/module';
+import { PAYMENTS_FAKE_SERVICE } from '../../server/modules/pay/pay.module';
+import type { PaymentsFake } from '../../server/modules/pay/payments-fake';
+import { payeeAccount } from '../../server/modules/pay/pay.service';
+import { seedDemoStudio } from '../../server/seed/demo-studio';
+import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
+
+type Agent = Awaited<ReturnType<typeof signIn>>;
+let owner: Agent, machinist: Agent;
+let fake: PaymentsFake;
+let ds: Awaited<ReturnType<typeof openDatabase>>;
+// The demo seed logs work on the three working days before TEST_TODAY (1 Dec 2026): 26, 27 and 30 Nov.
+const PERIOD = { fromDay: '2026-11-23', toDay: '2026-11-30' };
+
+beforeAll(async () => {
+  ds = await openDatabase(':memory:');
+  await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
+  const holder: { current?: ModuleContext } = {};
+  const app = createApp({ ds, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' }), clientDir: '/nonexistent', moduleContext: holder });
+  fake = await (holder.current!.services.get(PAYMENTS_FAKE_SERVICE) as () => Promise<PaymentsFake>)();
+  owner = await signIn(app, DEMO.owner);
+  machinist = await signIn(app, DEMO.machinist);
+});
+
+describe('pay periods', () => {
+  it('says payments are in test mode without a secret key', async () => {
+    expect((await owner.get('/api/pay/mode')).body).toEqual({ testMode: true, message: 'Test payments: no money moves.' });
+  });
+
+  it('previews pieces × rate per person and refuses floor roles', async () => {
+    const res = await owner.get(`/api/pay/preview?from=${PERIOD.fromDay}&to=${PERIOD.toDay}`);
+    expect(res.status).toBe(200);
+    const { people, totalMinor } = res.body.preview;
+    expect(people.length).toBeGreaterThan(0);
+    for (const p of people) expect(p.amountMinor).toBe(p.operations.reduce((a: number, o: { pieces: number; rateMinor: number }) => a + o.pieces * o.rateMinor, 0));
+    expect(totalMinor).toBe(people.reduce((a: number, p: { amountMinor: number }) => a + p.amountMinor, 0));
+    expect((await machinist.get(`/api/pay/preview?from=${PERIOD.fromDay}&to=${PERIOD.toDay}`)).status).toBe(403);
+    expect((await machinist.get('/api/pay/periods')).status).toBe(403);
+    const bad = await owner.get('/api/pay/preview?from=2026-11-30&to=2026-11-01');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.to).toBeTruthy();
+  });
+
+  it('shows a machinist their own pay only', async () => {
+    const me = (await machinist.get(`/api/pay/me?from=${PERIOD.fromDay}&to=${PERIOD.toDay}`)).body.pay;
+    const me1 = await ds.getRepository(UserEntity).findOneByOrFail({ email: DEMO.machinist });
+    const logs = await ds.getRepository(WorkLogEntity).findBy({ userId: me1.id });
+    expect(me.amountMinor).toBe(logs.reduce((a, l) => a + l.payMinor, 0));
+  });
+
+  it('computes efficiency as earned ÷ attended minutes on the textbook example', async () => {
+    // Source: ../shared/reference/production-and-costing.md §2.2 E2 (onlineclothingstudy.com 2017/01):
+    // 400 pieces of a 0.5 min job in 480 min → 200 min produced → 41.67 %.
+    const user = await ds.getRepository(UserEntity).findOneByOrFail({ email: 'machinist6@tamarind.example' });
+    const op = (await ds.getRepository(OperationEntity).find())[0];
+    await ds.getRepository(AttendanceEntity).save({ studioId: 1, userId: user.id, day: '2026-10-05', minutes: 480 });
+    await ds.getRepository(WorkLogEntity).save({
+      studioId: 1, bundleId: 9999, operationId: op.id, attempt: 0, userId: user.id, pieces: 400,
+      earnedMinutes: logEarnedMinutes(400, 0.5, 0), payMinor: 0, idempotencyKey: 'textbook-e2', createdAt: new Date('2026-10-05T10:00:00Z'),
+    });
+    const p = (await owner.get('/api/pay/preview?from=2026-10-05&to=2026-10-05')).body.preview.people;
+    expect(p.find((x: { userId: number }) => x.userId === user.id)).toMatchObject({ earnedMinutes: 200, attendedMinutes: 480, efficiencyPercent: 41.67 });
+  });
+
+  it('approves a period once, pays each person once however often the button is pressed', async () => {
+    const res = await owner.post('/api/pay/periods').send(PERIOD);
+    expect(res.status).toBe(201);
+    const period = res.body.period;
+    expect(period.status).toBe('approved');
+    expect((await owner.post('/api/pay/periods').send({ fromDay: '2026-11-30', toDay: '2026-12-02' })).status).toBe(409);
+    const bad = await owner.post('/api/pay/periods').send({ fromDay: '2026-12-09', toDay: '2026-12-01' });
+    expect(bad.body.error.fields.toDay).toBe('The end must not be before the start');
+
+    const [first, ...rest] = period.lines;
+    const clicks = await Promise.all(Array.from({ length: 6 }, () => owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: first.userId })));
+    expect(clicks.every((c) => c.status === 200 && c.body.payout.status === 'paid')).toBe(true);
+    expect(new Set(clicks.map((c) => c.body.payout.providerRef)).size).toBe(1);
+    const later = await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: first.userId });
+    expect(later.body.payout.providerRef).toBe(clicks[0].body.payout.providerRef);
+    expect(fake.transfers.filter((t) => t.destination === payeeAccount(1, first.userId))).toHaveLength(1);
+    expect(fake.transfers[0].amount).toBe(first.amountMinor);
+
+    // A refused payout says why and can be retried; the retry pays exactly once.
+    const second = rest[0];
+    fake.failFor(payeeAccount(1, second.userId), 'Account details are incomplete');
+    const failed = (await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: second.userId })).body.payout;
+    expect(failed).toMatchObject({ status: 'failed', error: expect.stringContaining('Account details are incomplete') });
+    fake.clearFailures();
+    const retried = (await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: second.userId })).body.payout;
+    expect(retried).toMatchObject({ status: 'paid', attempts: 2, error: '' });
+    expect(fake.transfers.filter((t) => t.destination === payeeAccount(1, second.userId))).toHaveLength(1);
+
+    for (const l of rest.slice(1)) await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: l.userId });
+    const done = (await owner.get(`/api/pay/periods/${period.id}`)).body.period;
+    expect(done.status).toBe('paid');
+    expect(done.payouts.every((p: { status: string }) => p.status === 'paid')).toBe(true);
+  });
+
+  it('exports the approved pay sheet as XLSX with the period total', async () => {
+    const period = (await owner.get('/api/pay/periods')).body.periods[0];
+    const res = await owner.get(`/api/pay/periods/${period.id}/sheet.xlsx`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toContain('spreadsheetml');
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(res.body);
+    const text = JSON.stringify(wb.worksheets[0].getSheetValues());
+    for (const l of period.lines) expect(text).toContain(l.name);
+  });
+});
