@@ -1,6 +1,6 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
-import { computeCostingFigures, type CostingFigures } from '../../../exports/xlsx/costing-figures';
+import { costGarment, priceFromMargin, roundMinor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
@@ -117,14 +117,76 @@ export function createCostingService(repo: CostingRepository) {
     if (settings.labourCostPerMinuteMinor === 0 && basis === 'sam') notes.push('Enter a labour cost per minute in the settings.');
 
     const scale = 10 ** digits;
-    const labour: CostingLabourLine[] =
+    const sizeLabels = sizes.map((x) => x.size);
+    const perSize = (v: number) => Object.fromEntries(sizeLabels.map((x) => [x, v]));
+    const trimLines = trims.map((t) => ({ name: t.name, quantityPerGarment: t.quantityPerGarment, unitPrice: t.unitPriceMinor }));
+    const labourLine =
       basis === 'sam'
-        ? [{ operation: `Sewing and finishing (${garmentSam} SAM)`, samMinutes: garmentSam, rate: { perMinute: (settings.labourCostPerMinuteMinor / scale).toFixed(digits) } }]
-        : [];
-    const overheads: CostingOverheadLine[] = [];
-    if (basis === 'piece-rates') overheads.push({ kind: 'per-garment', description: `Labour at piece rates (${operations.length} operations)`, amountMinor: minor(pieceRateMinor) });
-    if (settings.overheadPercent > 0) overheads.push({ kind: 'percent', description: `Overheads ${settings.overheadPercent} %`, percent: settings.overheadPercent });
+        ? { name: `Sewing and finishing (${garmentSam} SAM)`, minutes: garmentSam, costPerMinute: settings.labourCostPerMinuteMinor }
+        : { name: `Labour at piece rates (${operations.length} operations)`, pieceRate: pieceRateMinor };
+    // The pure core (planning/costing) prices every size; the workbook gets the same rounded inputs.
+    const sheet = costGarment({
+      sizes: sizeLabels,
+      quantities: batch.quantities,
+      fabrics: fab ? [{ name: fab.fabric.name, pricePerMetre: fab.fabric.pricePerMetreMinor, lengthPerGarment: fabricMm }] : [],
+      trims: trimLines,
+      labour: [labourLine],
+      overheads: settings.overheadPercent > 0 ? { percentOfPrimeCost: settings.overheadPercent } : undefined,
+      marginPercent: settings.marginPercent,
+      retailMultiplier: settings.retailMultiplier,
+    });
+    const lines: CostingLineDto[] = [];
+    if (fab) lines.push({ kind: 'fabric', refId: fab.fabric.id, description: fab.fabric.name, unit: 'm', priceMinor: fab.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, fabricMm[x] / 1000])), costMinor: {} });
+    for (const t of trims) lines.push({ kind: 'trim', refId: t.id, description: t.name, unit: t.unit, priceMinor: t.unitPriceMinor, percent: null, quantities: perSize(t.quantityPerGarment), costMinor: {} });
+    lines.push('pieceRate' in labourLine
+      ? { kind: 'labour', refId: null, description: labourLine.name, unit: 'per garment', priceMinor: pieceRateMinor, percent: null, quantities: perSize(1), costMinor: {} }
+      : { kind: 'labour', refId: null, description: labourLine.name, unit: 'min', priceMinor: settings.labourCostPerMinuteMinor, percent: null, quantities: perSize(garmentSam), costMinor: {} });
+    if (settings.overheadPercent > 0) lines.push({ kind: 'overhead', refId: null, description: `Overheads ${settings.overheadPercent} % of materials and labour`, unit: '%', priceMinor: null, percent: settings.overheadPercent, quantities: perSize(0), costMinor: {} });
+    sheet.sizes.forEach((sc) => sc.lines.forEach((l, i) => (lines[i].costMinor[sc.size] = l.amount)));
 
+    // The headline prices follow the sheet's own formulas: wholesale from the average unit cost.
+    const averageUnitCostMinor = sheet.average.unitCost;
+    const wholesaleMinor = priceFromMargin(averageUnitCostMinor, settings.marginPercent);
+    const retailMinor = roundMinor(wholesaleMinor * settings.retailMultiplier);
+    const garments = sheet.batch.quantity;
+    const dto: CostingSheetDto = {
+      batch: { id: batch.id, code: batchCode(batch.id), total: garments },
+      style: { id: style.id, code: style.code, name: style.name },
+      studioName: studio.name,
+      currency: studio.currency,
+      locale,
+      unitSystem: studio.unitSystem,
+      settings,
+      fabric: null,
+      labour: { basis, samMinutes: garmentSam, pieceRateMinor, operations: operations.length, isEstimate },
+      lines,
+      sizes: sheet.sizes.map((sc, i) => ({
+        size: sc.size,
+        quantity: sizes[i].quantity,
+        unitCostMinor: sc.unitCost,
+        batchCostMinor: sc.unitCost * sizes[i].quantity,
+        wholesaleMinor: sc.wholesale,
+        retailMinor: sc.retail,
+        fabricMmPerGarment: fabricMm[sc.size],
+      })),
+      totals: {
+        garments,
+        batchCostMinor: sheet.batch.cost,
+        averageUnitCostMinor,
+        wholesaleMinor,
+        retailMinor,
+        batchWholesaleMinor: wholesaleMinor * garments,
+        batchRetailMinor: retailMinor * garments,
+      },
+      actual: actualFigures(fab?.planned ?? [], fab?.cutLays ?? [], logs, garmentSam, garments),
+      notes,
+    };
+
+    const labour: CostingLabourLine[] =
+      basis === 'sam' ? [{ operation: labourLine.name, samMinutes: garmentSam, rate: { perMinute: (settings.labourCostPerMinuteMinor / scale).toFixed(digits) } }] : [];
+    const overheads: CostingOverheadLine[] = [];
+    if (basis === 'piece-rates') overheads.push({ kind: 'per-garment', description: labourLine.name, amountMinor: minor(pieceRateMinor) });
+    if (settings.overheadPercent > 0) overheads.push({ kind: 'percent', description: lines[lines.length - 1].description, percent: settings.overheadPercent });
     const perLength = (perMetre: number) => (studio.unitSystem === 'imperial' ? Math.round((perMetre * MM_PER_YARD) / 1000) : perMetre);
     const input: CostingSheetInput = {
       studioName: studio.name,
@@ -142,89 +204,13 @@ export function createCostingService(repo: CostingRepository) {
       marginPercent: settings.marginPercent,
       retailMultiplier: settings.retailMultiplier,
     };
-    const figures = computeCostingFigures(input);
-    const refs: { kind: CostingLineDto['kind']; refId: number | null; priceMinor: number | null; percent: number | null }[] = [
-      ...(fab ? [{ kind: 'fabric' as const, refId: fab.fabric.id, priceMinor: fab.fabric.pricePerMetreMinor, percent: null }] : []),
-      ...trims.map((t) => ({ kind: 'trim' as const, refId: t.id, priceMinor: t.unitPriceMinor, percent: null })),
-      ...labour.map(() => ({ kind: 'labour' as const, refId: null, priceMinor: settings.labourCostPerMinuteMinor, percent: null })),
-      ...overheads.map((o) =>
-        o.kind === 'percent'
-          ? { kind: 'overhead' as const, refId: null, priceMinor: null, percent: o.percent }
-          : { kind: 'labour' as const, refId: null, priceMinor: o.amountMinor, percent: null },
-      ),
-    ];
-    const dto = present(figures, refs, { batch, studio, settings, sizes, locale, notes });
     dto.fabric = fab
       ? { id: fab.fabric.id, name: fab.fabric.name, pricePerMetreMinor: fab.fabric.pricePerMetreMinor, basis: fab.basis, batchFabricMm: round1(sizes.reduce((a, s) => a + fabricMm[s.size] * s.quantity, 0)) }
       : null;
-    dto.labour = { basis, samMinutes: garmentSam, pieceRateMinor, operations: operations.length, isEstimate };
-    dto.sizes.forEach((s) => (s.fabricMmPerGarment = fabricMm[s.size]));
-    dto.actual = actualFigures(fab?.planned ?? [], fab?.cutLays ?? [], logs, garmentSam, dto.totals.garments);
     return { dto, input };
   }
 
   return { build };
-}
-
-function present(
-  figures: CostingFigures,
-  refs: { kind: CostingLineDto['kind']; refId: number | null; priceMinor: number | null; percent: number | null }[],
-  ctx: {
-    batch: BatchEntity;
-    studio: { name: string; currency: string; unitSystem: 'metric' | 'imperial' };
-    settings: CostingSettingsDto;
-    sizes: { size: string; quantity: number }[];
-    locale: string;
-    notes: string[];
-  },
-): CostingSheetDto {
-  const bySize = (values: number[]) => Object.fromEntries(ctx.sizes.map((s, i) => [s.size, values[i]]));
-  const garments = figures.totalQuantity;
-  return {
-    batch: { id: ctx.batch.id, code: batchCode(ctx.batch.id), total: garments },
-    style: { id: ctx.batch.styleId, code: ctx.batch.style!.code, name: ctx.batch.style!.name },
-    studioName: ctx.studio.name,
-    currency: ctx.studio.currency,
-    locale: ctx.locale,
-    unitSystem: ctx.studio.unitSystem,
-    settings: ctx.settings,
-    fabric: null,
-    labour: { basis: 'sam', samMinutes: 0, pieceRateMinor: 0, operations: 0, isEstimate: true },
-    lines: figures.lines.map((l, i) => ({
-      kind: refs[i].kind,
-      refId: refs[i].refId,
-      description: l.description,
-      unit: l.unit,
-      priceMinor: refs[i].priceMinor,
-      percent: refs[i].percent,
-      quantities: bySize(l.quantities),
-      costMinor: bySize(l.costsMinor),
-    })),
-    sizes: ctx.sizes.map((s, i) => ({
-      size: s.size,
-      quantity: s.quantity,
-      unitCostMinor: figures.unitCostMinor[i],
-      batchCostMinor: figures.batchCostMinor[i],
-      fabricMmPerGarment: 0,
-    })),
-    totals: {
-      garments,
-      batchCostMinor: figures.totalBatchCostMinor,
-      averageUnitCostMinor: figures.averageUnitCostMinor,
-      wholesaleMinor: figures.wholesaleMinor,
-      retailMinor: figures.suggestedRetailMinor,
-      batchWholesaleMinor: figures.wholesaleMinor * garments,
-      batchRetailMinor: figures.suggestedRetailMinor * garments,
-    },
-    actual: {
-      layPlies: { planned: 0, cut: 0 },
-      fabricMmPerGarment: { planned: 0, actual: null },
-      labourMinutesPerGarment: { planned: 0, actual: null },
-      labourPaidMinor: 0,
-      piecesLogged: 0,
-    },
-    notes: ctx.notes,
-  };
 }
 
 function actualFigures(

@@ -10,8 +10,12 @@ export function createSessionRepository(ds: DataSource) {
       const row = await repo.findOne({ where: { id, expiresAt: MoreThan(now) } });
       return row?.data ?? null;
     },
+    /** One INSERT … ON CONFLICT statement (SQLite and PostgreSQL), not a read-then-write. */
     async save(id: string, data: string, expiresAt: number) {
-      await repo.save({ id, data, expiresAt });
+      await repo.upsert({ id, data, expiresAt }, ['id']);
+    },
+    async extend(id: string, expiresAt: number) {
+      await repo.update({ id }, { expiresAt });
     },
     async remove(id: string) {
       await repo.delete({ id });

@@ -9,7 +9,7 @@ export function createUserRepository(ds: DataSource) {
   return {
     findByEmail: (email: string) => users.findOne({ where: { email } }),
     /** Unscoped lookup by id: only for the session layer, which owns the id it stored. */
-    findForSession: (id: number) => users.findOne({ where: { id }, relations: { studio: true } }),
+    findForSession: (id: number) => users.findOne({ where: { id } }),
     get: (studioId: number, id: number) => users.findOne({ where: { studioId, id } }),
     list: (studioId: number) => users.find({ where: { studioId }, order: { role: 'ASC', name: 'ASC' } }),
     insert: (u: Partial<UserEntity>) => users.save(users.create(u)),

@@ -1,0 +1,55 @@
+import { Not, type DataSource } from 'typeorm';
+import { FabricEntity, PurchaseOrderEntity, RollEntity, StudioEntity, SupplierEntity, TrimEntity } from '../../entities';
+
+export type PurchasingRepository = ReturnType<typeof createPurchasingRepository>;
+
+/** Suppliers, purchase orders and the stock they fill; every query scoped by studio. */
+export function createPurchasingRepository(ds: DataSource) {
+  const suppliers = ds.getRepository(SupplierEntity);
+  const orders = ds.getRepository(PurchaseOrderEntity);
+  return {
+    studio: (id: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id }),
+    suppliers: (studioId: number) => suppliers.find({ where: { studioId }, order: { name: 'ASC' } }),
+    supplier: (studioId: number, id: number) => suppliers.findOneBy({ studioId, id }),
+    insertSupplier: (s: Partial<SupplierEntity>) => suppliers.save(suppliers.create(s)),
+    async updateSupplier(studioId: number, id: number, patch: Partial<SupplierEntity>) {
+      await suppliers.update({ studioId, id }, patch);
+      return suppliers.findOneByOrFail({ studioId, id });
+    },
+    fabric: (studioId: number, id: number) => ds.getRepository(FabricEntity).findOneBy({ studioId, id }),
+    allFabrics: (studioId: number) => ds.getRepository(FabricEntity).find({ where: { studioId }, order: { name: 'ASC' } }),
+    allTrims: (studioId: number) => ds.getRepository(TrimEntity).find({ where: { studioId }, order: { name: 'ASC' } }),
+    trim: (studioId: number, id: number) => ds.getRepository(TrimEntity).findOneBy({ studioId, id }),
+    batchExists: async (studioId: number, id: number) =>
+      (await ds.query('SELECT 1 FROM batches WHERE studioId = ? AND id = ?', [studioId, id])).length > 0,
+    trims: (studioId: number, styleId: number) => ds.getRepository(TrimEntity).find({ where: { studioId, styleId }, order: { id: 'ASC' } }),
+    /** Fabric on hand: what is left on every roll of the fabric. */
+    async fabricStockMm(studioId: number, fabricId: number) {
+      const rolls = await ds.getRepository(RollEntity).find({ where: { studioId, fabricId }, select: { remainingMm: true } });
+      return rolls.reduce((a, r) => a + r.remainingMm, 0);
+    },
+    openOrders: (studioId: number) => orders.find({ where: { studioId, status: Not('received') } }),
+    orders: (studioId: number, batchId?: number) =>
+      orders.find({ where: batchId ? { studioId, batchId } : { studioId }, order: { id: 'DESC' } }),
+    order: (studioId: number, id: number) => orders.findOneBy({ studioId, id }),
+    insertOrder: (o: Partial<PurchaseOrderEntity>) => orders.save(orders.create(o)),
+    async setStatus(studioId: number, id: number, status: PurchaseOrderEntity['status']) {
+      await orders.update({ studioId, id }, { status });
+      return orders.findOneByOrFail({ studioId, id });
+    },
+    /** Receiving in one transaction: rolls for fabric lines, stock for trims, the order's lines and status. */
+    receive(
+      studioId: number,
+      order: PurchaseOrderEntity,
+      rolls: Partial<RollEntity>[],
+      trimStock: { trimId: number; add: number }[],
+    ) {
+      return ds.transaction(async (m) => {
+        if (rolls.length) await m.getRepository(RollEntity).save(rolls.map((r) => m.getRepository(RollEntity).create({ ...r, studioId })));
+        for (const t of trimStock) await m.getRepository(TrimEntity).increment({ studioId, id: t.trimId }, 'inStock', t.add);
+        await m.getRepository(PurchaseOrderEntity).update({ studioId, id: order.id }, { lines: order.lines, status: order.status });
+        return m.getRepository(PurchaseOrderEntity).findOneByOrFail({ studioId, id: order.id });
+      });
+    },
+  };
+}

@@ -1,0 +1,102 @@
+import { randomUUID } from 'node:crypto';
+import { mkdir, readFile, unlink, writeFile } from 'node:fs/promises';
+import { basename, dirname, join, resolve } from 'node:path';
+import { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import { idParam } from '../../../shared/schemas/common';
+import { uploadFields, uploadListQuery, type UploadDto, type UploadKind } from '../../../shared/schemas/uploads';
+import type { UploadEntity } from '../../entities';
+import { actorOf, requirePermission } from '../../auth/require';
+import { AppError, badRequest, notFound } from '../../errors';
+import { validate } from '../../middleware/validate';
+import type { ModuleContext } from '../module';
+import { ACCEPTED, sniffUpload, svgProblems } from './upload-sniff';
+import type { UploadsRepository } from './uploads.repository';
+
+export const presentUpload = (u: UploadEntity): UploadDto => ({
+  id: u.id,
+  kind: u.kind,
+  styleId: u.styleId,
+  originalName: u.originalName,
+  mimeType: u.mimeType,
+  size: u.size,
+  uploadedBy: u.uploadedBy,
+  createdAt: new Date(u.createdAt).toISOString(),
+  url: `/api/uploads/${u.id}/file`,
+});
+
+/** data/uploads beside the database file (an in-memory database uses ./data/uploads). */
+export function uploadsDir(databasePath: string | undefined): string {
+  const db = databasePath && databasePath !== ':memory:' ? databasePath : 'data/seamrun.sqlite';
+  return join(dirname(resolve(db)), 'uploads');
+}
+
+const megabytes = (n: number) => `${(n / (1024 * 1024)).toFixed(n < 1024 * 1024 ? 2 : 1)} MB`;
+/** A display name only: no folders, no control characters, at most 200 characters. */
+// eslint-disable-next-line no-control-regex
+const safeName = (name: string) => basename(name.replace(/\\/g, '/')).replace(/[\x00-\x1F\x7F]/g, '').slice(0, 200) || 'file';
+
+/** /api/uploads: sketches, photos, swatches, packing lists, measurement files (owner only). */
+export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
+  const r = Router();
+  const maxBytes = ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024;
+  const dir = uploadsDir(ctx.env.DATABASE_PATH);
+  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 10 } }).single('file');
+  const receive: RequestHandler = (req, res, next) =>
+    single(req, res, (err: unknown) => {
+      const code = (err as { code?: string } | undefined)?.code;
+      if (code === 'LIMIT_FILE_SIZE') return next(new AppError(413, 'too_large', `The file is larger than the ${megabytes(maxBytes)} limit; make it smaller and try again`));
+      if (err) return next(badRequest(`file: ${(err as Error).message}`, { file: (err as Error).message }));
+      next();
+    });
+  const owner = requirePermission('styles:write', 'suppliers:manage');
+
+  r.post('/', owner, receive, validate({ body: uploadFields }), async (req, res) => {
+    const actor = actorOf(req);
+    const { kind, styleId } = req.body as { kind: UploadKind; styleId?: number };
+    const file = req.file;
+    if (!file || file.size === 0) throw badRequest('file: choose a file to upload', { file: 'Choose a file to upload' });
+    if (styleId && !(await repo.styleExists(actor.studioId, styleId))) throw badRequest('styleId: no such style', { styleId: 'No such style' });
+    const sniffed = await sniffUpload(file.buffer);
+    const accepted = ACCEPTED[kind];
+    if (!sniffed || !accepted.includes(sniffed.ext)) {
+      throw badRequest(`file: a ${kind} must be ${accepted.join(', ')}; this file's content is ${sniffed?.ext ?? 'not a type we accept'}`, { file: `Accepted for ${kind}: ${accepted.join(', ')}` });
+    }
+    if (sniffed.ext === 'svg') {
+      const problems = svgProblems(file.buffer.toString('utf8'));
+      if (problems.length) throw badRequest(`file: this SVG carries ${problems.join(', ')}; export it again as a plain drawing`, { file: `SVG refused: ${problems.join(', ')}` });
+    }
+    const storedName = `${randomUUID()}.${sniffed.ext}`;
+    await mkdir(dir, { recursive: true });
+    await writeFile(join(dir, storedName), file.buffer, { flag: 'wx' });
+    const u = await repo.insert({ studioId: actor.studioId, kind, styleId: styleId ?? null, originalName: safeName(file.originalname), mimeType: sniffed.mime, size: file.size, storedName, uploadedBy: actor.id });
+    await ctx.audit.record(actor, 'create', 'upload', u.id, undefined, presentUpload(u));
+    res.status(201).json({ upload: presentUpload(u) });
+  });
+  r.get('/', owner, validate({ query: uploadListQuery }), async (req, res) => {
+    const q = req.query as { kind?: UploadKind; styleId?: number };
+    res.json({ uploads: (await repo.list(actorOf(req).studioId, q)).map(presentUpload) });
+  });
+  r.get('/:id/file', owner, validate({ params: idParam }), async (req, res) => {
+    const u = await repo.get(actorOf(req).studioId, Number(req.params.id));
+    if (!u) throw notFound('Upload');
+    const bytes = await readFile(join(dir, basename(u.storedName))).catch(() => null);
+    if (!bytes) throw notFound('Upload file');
+    res.setHeader('Content-Type', u.mimeType);
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; sandbox");
+    const inline = u.mimeType.startsWith('image/');
+    res.setHeader('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${u.originalName.replace(/["\\]/g, '_')}"`);
+    res.send(bytes);
+  });
+  r.delete('/:id', owner, validate({ params: idParam }), async (req, res) => {
+    const actor = actorOf(req);
+    const u = await repo.get(actor.studioId, Number(req.params.id));
+    if (!u) throw notFound('Upload');
+    await repo.remove(actor.studioId, u.id);
+    await unlink(join(dir, basename(u.storedName))).catch(() => undefined);
+    await ctx.audit.record(actor, 'delete', 'upload', u.id, presentUpload(u), undefined);
+    res.status(204).end();
+  });
+  return r;
+}
