@@ -67,8 +67,9 @@ export function polygonIntersectionArea(a: Polygon, b: Polygon, scale: number): 
  * No-fit polygon NFP(A, B) = A ⊕ (−B): the reference positions of B (A fixed at the origin) where
  * the interiors overlap. Returned as rings in caller units; holes (pockets where B fits inside a
  * concavity of A) come out as extra rings, so "inside" is decided by the even-odd rule.
- * Clipper's Minkowski sweep covers the positions where the outlines cross; the two translated
- * copies fill the cases where one piece would sit wholly inside the other.
+ * Clipper's Minkowski sweep covers the positions where the outlines cross and costs one quad per
+ * (edge of A, edge of B) pair, so callers keep vertex counts low (simplify-outline.ts); the two
+ * translated copies fill the cases where one piece would sit wholly inside the other.
  */
 export function polygonNoFitRings(a: Polygon, b: Polygon, scale: number): Polygon[] {
   const pa = toClipperPath(a, scale);

@@ -1,7 +1,8 @@
 import { polygonArea, polygonBBox, polygonMirrorX, polygonRotate, polygonToCounterClockwise } from '@shared/geometry/polygon';
 import type { Polygon } from '@shared/geometry/types';
-import { clipperScaleFor, openRing, polygonOffsetOutward } from './clipper-path';
+import { clipperScaleFor, openRing } from './clipper-path';
 import { NfpCache } from './nfp-cache';
+import { defaultSimplifyTolerance, simplifiedPackingShape } from './simplify-outline';
 import type { NestingInput } from './types';
 
 /** One piece in one mirror state and one rotation, precomputed once. */
@@ -9,7 +10,7 @@ export interface Variant {
   piece: number;
   mirrored: boolean;
   rotation: number;
-  /** Outline grown by gap/2: what the collision code packs. */
+  /** Outline grown by gap/2 (simplified, see `buildNestModel`): what the collision code packs. */
   shape: Polygon;
   /** Bounding box of the true outline: keeps the piece inside the strip. */
   minX: number;
@@ -61,11 +62,14 @@ function normaliseAngle(deg: number): number {
 /**
  * Validates the input and precomputes every variant. Each packed outline is grown by gap/2; pieces
  * may touch exactly (so exact tilings stay feasible): depths up to half of Clipper's resolution
- * (≈ 1e-7 of the largest coordinate) count as touching.
+ * (≈ 1e-7 of the largest coordinate) count as touching. Outlines with many vertices (flattened
+ * curves) are packed as a simplified shape that contains them (`simplifiedPackingShape`, tolerance
+ * `simplifyTolerance`, default `defaultSimplifyTolerance(stripWidth)`; 0 disables); the bounding
+ * boxes that keep pieces inside the strip stay those of the true outlines.
  * Throws a RangeError on an empty or degenerate piece, a non-positive width, or a piece that fits
  * the width in none of its orientations.
  */
-export function buildNestModel(input: NestingInput): NestModel {
+export function buildNestModel(input: NestingInput, simplifyTolerance?: number): NestModel {
   const width = input.stripWidth as number;
   if (!(width > 0)) throw new RangeError('stripWidth must be positive');
   const gap = (input.gap ?? 0) as number;
@@ -77,7 +81,12 @@ export function buildNestModel(input: NestingInput): NestModel {
     for (const q of ring) maxDim = Math.max(maxDim, Math.abs(q.x), Math.abs(q.y));
     return ring;
   });
-  const scale = clipperScaleFor(maxDim + gap);
+  const eps = simplifyTolerance ?? defaultSimplifyTolerance(width);
+  const scale = clipperScaleFor(maxDim + gap + 2 * eps);
+  // One packing shape per piece; every mirror state and rotation is an exact transform of it, so the
+  // NFP cache can derive one pair's NFPs from another's.
+  const packed = rings.map((ring) => simplifiedPackingShape(ring, gap / 2, eps, scale));
+  const shapeOf = (pi: number, mirrored: boolean, rotation: number) => polygonRotate(mirrored ? polygonMirrorX(packed[pi]) : packed[pi], rotation);
   const variants: Variant[] = [];
   const items: Item[] = [];
   input.pieces.forEach((piece, pi) => {
@@ -86,11 +95,10 @@ export function buildNestModel(input: NestingInput): NestModel {
     const byMirror = new Map<boolean, number[]>();
     for (const m of mirrors) {
       const base = m ? polygonMirrorX(rings[pi]) : rings[pi];
-      const grown = polygonOffsetOutward(base, gap / 2, scale);
       const ids: number[] = [];
       for (const rotation of angles) {
         const outline = polygonRotate(base, rotation);
-        const shape = polygonRotate(grown, rotation);
+        const shape = shapeOf(pi, m, rotation);
         const b = polygonBBox(outline);
         const s = polygonBBox(shape);
         if (b.maxY - b.minY > width) continue;
@@ -108,5 +116,5 @@ export function buildNestModel(input: NestingInput): NestModel {
     }
   });
   const totalArea = items.reduce((s, it) => s + it.area, 0);
-  return { width, variants, items, totalArea, touchTolerance: 0.5 / scale, nfps: new NfpCache(variants, scale) };
+  return { width, variants, items, totalArea, touchTolerance: 0.5 / scale, nfps: new NfpCache(variants, shapeOf, scale) };
 }

@@ -10,6 +10,8 @@ import { parseEsicupXml } from './testing/esicup-xml';
 import type { NestingInput } from './types';
 
 const rect = (w: number, h: number) => [{ x: 0, y: 0 }, { x: w, y: 0 }, { x: w, y: h }, { x: 0, y: h }];
+const garment = (name: string) =>
+  (JSON.parse(readFileSync(path.resolve(__dirname, '../../tests/bench/nesting/fixtures', name), 'utf8')) as { input: NestingInput }).input;
 const esicup = (...p: string[]) => path.resolve(__dirname, '../../../shared/datasets/nesting/esicup', ...p);
 
 // Iteration budgets, never time: the timeout only guards a loaded CI machine.
@@ -108,4 +110,27 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     expect(nestPieces({ stripWidth: mm(10), pieces: [] }, { seed: 1 })).toMatchObject({ placements: [], length: 0, complete: true });
     expect(() => nestPieces({ stripWidth: mm(1), pieces: [{ id: 'x', polygon: rect(2, 2), quantity: 1 }] }, { seed: 1 })).toThrow(RangeError);
   });
+
+  // Seamrun's own demo shirt dress, size XS, 1450 mm fabric, gap 2 mm (tests/bench/nesting/fixtures,
+  // written by garment-fixtures.ts): 13 copies with outlines flattened from curves.
+  it('nests one real garment validly above a utilisation floor on an iteration budget', () => {
+    const input = garment('garment-XS1.json');
+    const r = nestPieces(input, { seed: 1, maxIterations: 150 });
+    expect(checkLayout(input, r).errors).toEqual([]);
+    expect(r.complete).toBe(true);
+    // Chosen floor (the bottom-left start alone gives ≈ 0.50).
+    expect(r.utilisation).toBeGreaterThan(0.6);
+    console.info(`garment XS1: L = ${r.length.toFixed(1)} mm, utilisation ${(r.utilisation * 100).toFixed(2)} %`);
+  }, 120_000);
+
+  it('returns a valid marker with complete: false when a tiny time budget runs out during construction (fake clock)', () => {
+    const input = garment('garment-L1-M2.json');
+    let t = 0;
+    const r = nestPieces(input, { seed: 1, timeBudgetMs: 5, now: () => (t += 1) });
+    expect(r.complete).toBe(false);
+    expect(r.iterations).toBe(0);
+    expect(r.placements).toHaveLength(39);
+    expect(checkLayout(input, r).errors).toEqual([]);
+  });
 });
+

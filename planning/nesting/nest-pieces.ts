@@ -73,18 +73,23 @@ function toResult(model: NestModel, layout: LayoutState, snap: LayoutSnapshot, i
  * that creates are removed by guided local search over penetration depths; a failed length is
  * retried after swapping two large pieces, then the step shrinks; the best feasible marker is kept.
  *
+ * The constructive start polls the budget and the signal before each piece; when either runs out
+ * there, the remaining pieces go into bounding-box columns and the marker (valid, but loose) comes
+ * back with complete: false. Pieces with many vertices are packed as simplified shapes that contain
+ * them (`options.simplifyTolerance`); placements are always those of the original outlines.
+ *
  * Units are those of the input (millimetres); any winding; the result is overlap-free with at least
  * `gap` between pieces (up to a 1e-6 relative safety margin, which only adds clearance). An empty
  * piece list gives length 0. Throws RangeError on degenerate pieces or pieces wider than the strip.
  */
 export function nestPieces(input: NestingInput, options: NestingOptions): NestingResult {
-  const model = buildNestModel(input);
+  const model = buildNestModel(input, options.simplifyTolerance);
   const maxIterations = options.maxIterations ?? (options.timeBudgetMs !== undefined && options.now ? Infinity : DEFAULT_MAX_ITERATIONS);
   const budget = new RunBudget(maxIterations, options.now, options.timeBudgetMs, options.signal);
   const layout = new LayoutState(model);
   if (model.items.length === 0) return { placements: [], length: mm(0), utilisation: 0, complete: true, iterations: 0 };
   const rng = createRng(options.seed);
-  placeBottomLeft(layout);
+  const constructed = placeBottomLeft(layout, () => budget.exhausted());
   let best = layout.snapshot();
   let bestLength = layout.usedLength();
   const report = () => options.onProgress?.({ bestLength: mm(bestLength), elapsedMs: budget.elapsedMs(), iteration: budget.iterations });
@@ -92,7 +97,7 @@ export function nestPieces(input: NestingInput, options: NestingOptions): Nestin
   const floor = minimumLength(model);
   let shrink = INITIAL_SHRINK;
   let lastReport = 0;
-  while (!budget.exhausted()) {
+  while (constructed && !budget.exhausted()) {
     const step = budget.fraction() > 0.8 ? Math.min(shrink, COMPRESSION_SHRINK) : shrink;
     const target = Math.max(floor, bestLength * (1 - step));
     if (target >= bestLength - 1e-12 * bestLength) break;
@@ -115,5 +120,5 @@ export function nestPieces(input: NestingInput, options: NestingOptions): Nestin
       report();
     }
   }
-  return toResult(model, layout, best, input, !budget.aborted, budget.iterations);
+  return toResult(model, layout, best, input, constructed && !budget.aborted, budget.iterations);
 }

@@ -12,44 +12,86 @@ export interface Nfp {
   maxY: number;
 }
 
-interface ShapeSource {
-  shape: { x: number; y: number }[];
+/** What the cache needs to know of a variant: which piece, mirror state and rotation it is. */
+export interface VariantKey {
+  piece: number;
+  mirrored: boolean;
+  rotation: number;
 }
+
+/** Packed shape of a piece in a mirror state (x → −x first) and rotation (degrees, exact quarter turns). */
+export type ShapeOf = (piece: number, mirrored: boolean, rotation: number) => { x: number; y: number }[];
 
 function flatten(rings: { x: number; y: number }[][]): Nfp {
   const total = rings.reduce((s, r) => s + r.length, 0);
   const coords = new Float64Array(total * 2);
   const ringStarts = new Int32Array(rings.length + 1);
   let k = 0;
-  let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
   rings.forEach((r, ri) => {
     ringStarts[ri] = k;
     for (const p of r) {
       coords[2 * k] = p.x;
       coords[2 * k + 1] = p.y;
       k++;
-      if (p.x < minX) minX = p.x;
-      if (p.x > maxX) maxX = p.x;
-      if (p.y < minY) minY = p.y;
-      if (p.y > maxY) maxY = p.y;
     }
   });
   ringStarts[rings.length] = k;
+  return withBounds(coords, ringStarts);
+}
+
+function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
+  let minX = Infinity, maxX = -Infinity, minY = Infinity, maxY = -Infinity;
+  for (let k = 0; k < coords.length; k += 2) {
+    const x = coords[k], y = coords[k + 1];
+    if (x < minX) minX = x;
+    if (x > maxX) maxX = x;
+    if (y < minY) minY = y;
+    if (y > maxY) maxY = y;
+  }
   return { coords, ringStarts, minX, maxX, minY, maxY };
+}
+
+const normalise = (deg: number) => ((deg % 360) + 360) % 360;
+
+/**
+ * p ↦ Rot(rotation) · Mirror^mirrored · (sign · p), applied to every NFP vertex (quarter turns exact).
+ * Orthogonal maps commute with Minkowski sums and negation, so this carries an NFP to the NFP of
+ * the transformed pair.
+ */
+function transformNfp(src: Nfp, mirrored: boolean, rotation: number, sign: 1 | -1): Nfp {
+  const q = normalise(rotation);
+  const r = (rotation * Math.PI) / 180;
+  const cos = q === 0 ? 1 : q === 90 ? 0 : q === 180 ? -1 : q === 270 ? 0 : Math.cos(r);
+  const sin = q === 0 ? 0 : q === 90 ? 1 : q === 180 ? 0 : q === 270 ? -1 : Math.sin(r);
+  const c = src.coords;
+  const out = new Float64Array(c.length);
+  for (let k = 0; k < c.length; k += 2) {
+    const x = (mirrored ? -c[k] : c[k]) * sign, y = c[k + 1] * sign;
+    out[k] = x * cos - y * sin;
+    out[k + 1] = x * sin + y * cos;
+  }
+  return withBounds(out, src.ringStarts);
 }
 
 /**
  * Lazily computed NFPs between variant shapes: `get(a, b)` holds the positions of b's origin,
  * relative to a's origin, where the two shapes overlap. Computed on first use and kept.
+ * Only one NFP per piece pair, relative mirror state and relative rotation is ever computed by
+ * Clipper: NFP(T·A, T·B) = T·NFP(A, B) for a mirror/rotation T, and NFP(B, A) = −NFP(A, B); every
+ * copy of a piece shares its variants, so copies share NFPs too.
  */
 export class NfpCache {
   private readonly table: (Nfp | undefined)[];
   private readonly count: number;
+  private readonly canonical = new Map<string, Nfp>();
+  /** Clipper NFP computations so far (diagnostics). */
+  computed = 0;
   constructor(
-    private readonly shapes: ShapeSource[],
+    private readonly variants: VariantKey[],
+    private readonly shapeOf: ShapeOf,
     private readonly scale: number,
   ) {
-    this.count = shapes.length;
+    this.count = variants.length;
     this.table = new Array(this.count * this.count);
   }
 
@@ -57,8 +99,29 @@ export class NfpCache {
     const k = a * this.count + b;
     let nfp = this.table[k];
     if (!nfp) {
-      nfp = flatten(polygonNoFitRings(this.shapes[a].shape, this.shapes[b].shape, this.scale));
+      nfp = this.derive(this.variants[a], this.variants[b]);
       this.table[k] = nfp;
+    }
+    return nfp;
+  }
+
+  /** NFP(A, B) = T_A · NFP(base A, T_A⁻¹ · B), with the lower piece index first. */
+  private derive(a: VariantKey, b: VariantKey): Nfp {
+    if (a.piece > b.piece) return transformNfp(this.derive(b, a), false, 0, -1);
+    // T_A⁻¹ · B = Mirror^ma · Rot(φb − θa) · Mirror^mb · base B = Rot(±(φb − θa)) · Mirror^(ma⊕mb) · base B.
+    const mirrored = a.mirrored !== b.mirrored;
+    const rotation = normalise(a.mirrored ? a.rotation - b.rotation : b.rotation - a.rotation);
+    const base = this.base(a.piece, b.piece, mirrored, rotation);
+    return a.mirrored || a.rotation !== 0 ? transformNfp(base, a.mirrored, a.rotation, 1) : base;
+  }
+
+  private base(pa: number, pb: number, mirrored: boolean, rotation: number): Nfp {
+    const key = `${pa}|${pb}|${mirrored ? 1 : 0}|${rotation}`;
+    let nfp = this.canonical.get(key);
+    if (!nfp) {
+      nfp = flatten(polygonNoFitRings(this.shapeOf(pa, false, 0), this.shapeOf(pb, mirrored, rotation), this.scale));
+      this.canonical.set(key, nfp);
+      this.computed++;
     }
     return nfp;
   }

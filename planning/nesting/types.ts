@@ -55,8 +55,14 @@ export interface NestingOptions {
   /** Millisecond clock (e.g. `performance.now`); without it the time budget is ignored. */
   now?: () => number;
   onProgress?: (progress: NestingProgress) => void;
-  /** Checked between moves; when aborted the best layout so far is returned with complete: false. */
+  /** Checked between pieces and moves; when aborted the best layout so far is returned with complete: false. */
   signal?: AbortSignal;
+  /**
+   * Simplification tolerance ε (input units) for outlines with many vertices: they are packed as a
+   * Douglas–Peucker simplification grown by ε, which contains the outline, so NFPs stay small.
+   * Default `defaultSimplifyTolerance(stripWidth)` = min(1 mm, 1e-3 × stripWidth); 0 disables.
+   */
+  simplifyTolerance?: number;
 }
 
 /**
@@ -81,7 +87,11 @@ export interface NestingResult {
   length: Millimetres;
   /** Total piece area ÷ (length × stripWidth), in [0, 1]. */
   utilisation: number;
-  /** False when stopped by the signal before the budget ran out (the layout is still valid). */
+  /**
+   * False when stopped by the signal before the budget ran out, or when the budget (or signal) ran out
+   * during the constructive start so that some pieces were placed by the bounding-box fallback. The
+   * layout is valid either way.
+   */
   complete: boolean;
   /** Separation iterations run. */
   iterations: number;

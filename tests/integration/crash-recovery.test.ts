@@ -55,7 +55,8 @@ async function signInByPin(base: string, email: string, pin: string) {
   return res.headers.get('set-cookie')!.split(';')[0];
 }
 
-describe('fault: SIGKILL while bundle logs are written', () => {
+// Reads the SQLite file after the crash; the PostgreSQL run relies on the server's own durability.
+describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('fault: SIGKILL while bundle logs are written', () => {
   it('keeps every acknowledged log and passes the integrity check after a restart', async () => {
     const first = await startServerProcess();
     child = first.proc;

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
+import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { BundleEntity, OperationEntity, WorkLogEntity } from '../../server/entities';
 import { loadEnv } from '../../server/env';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
@@ -11,7 +12,7 @@ type Agent = Awaited<ReturnType<typeof signIn>>;
 
 /** The demo studio with a clock the test moves (for the undo window). */
 async function buildFloorApp() {
-  const ds = await openDatabase(':memory:');
+  const ds = await openDatabase(await freshDatabaseTarget());
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
   const clock = { t: TEST_TODAY.getTime() + 3 * 3600_000 };
   const env = loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' });

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
+import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { loadEnv } from '../../server/env';
 import type { ModuleContext } from '../../server/modules/module';
 import { MARKER_QUEUE_OPTIONS_KEY } from '../../server/modules/markers/markers.module';
@@ -28,7 +29,7 @@ const env = loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000', NESTING_SECOND
 let owner: Agent, cutter: Agent, machinist: Agent;
 let app: ReturnType<typeof createApp>;
 beforeAll(async () => {
-  ds = await openDatabase(':memory:');
+  ds = await openDatabase(await freshDatabaseTarget());
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
   app = createApp({ ds, env, clientDir: '/nonexistent' });
   [owner, cutter, machinist] = await Promise.all([login(app, DEMO.owner), login(app, DEMO.cutter), login(app, DEMO.machinist)]);

@@ -2,6 +2,7 @@ import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
+import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { AttendanceEntity, OperationEntity, UserEntity, WorkLogEntity } from '../../server/entities';
 import { loadEnv } from '../../server/env';
 import { logEarnedMinutes } from '../../server/modules/floor/floor-math';
@@ -20,7 +21,7 @@ let ds: Awaited<ReturnType<typeof openDatabase>>;
 const PERIOD = { fromDay: '2026-11-23', toDay: '2026-11-30' };
 
 beforeAll(async () => {
-  ds = await openDatabase(':memory:');
+  ds = await openDatabase(await freshDatabaseTarget());
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
   const holder: { current?: ModuleContext } = {};
   const app = createApp({ ds, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' }), clientDir: '/nonexistent', moduleContext: holder });
