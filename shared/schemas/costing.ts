@@ -16,17 +16,24 @@ const percent = (max: number) =>
 
 export const costingQuery = z.object({ labourBasis: z.enum(LABOUR_BASES).default('sam') });
 
-export const createTrimInput = z.object({
+const trimFields = {
   name: safeText(120).min(1, 'Name the trim'),
   unit: safeText(16).min(1, 'Give a unit, e.g. pcs or m'),
   quantityPerGarment: z.number({ error: 'Enter a quantity' }).min(0, 'Cannot be negative').max(10000, 'Too many'),
   unitPriceMinor: minorAmount('Unit price'),
-  supplierId: z.number().int().positive().nullable().default(null),
-  inStock: z.number().min(0, 'Cannot be negative').default(0),
+  supplierId: z.number().int().positive().nullable(),
+  inStock: z.number().min(0, 'Cannot be negative'),
+};
+
+export const createTrimInput = z.object({
+  ...trimFields,
+  supplierId: trimFields.supplierId.default(null),
+  inStock: trimFields.inStock.default(0),
 });
 export type CreateTrimInput = z.input<typeof createTrimInput>;
 
-export const updateTrimInput = createTrimInput.partial();
+/** Only the fields sent change (no defaults here: a price edit must not clear the supplier). */
+export const updateTrimInput = z.object(trimFields).partial();
 export type UpdateTrimInput = z.input<typeof updateTrimInput>;
 
 export const updateCostingSettingsInput = z.object({

@@ -68,6 +68,33 @@ export const createOrdersInput = z.object({
   kinds: z.array(z.enum(['fabric', 'trim'])).min(1).default(['fabric', 'trim']),
 });
 
+/** An order made by hand: the supplier, optionally a batch, and quantities of known fabrics and trims. */
+export const createOrderInput = z.object({
+  supplierId: z.number({ error: 'Pick a supplier' }).int().positive('Pick a supplier'),
+  batchId: z.number().int().positive().nullable().default(null),
+  lines: z
+    .array(
+      z.object({
+        kind: z.enum(['fabric', 'trim']),
+        refId: z.number().int().positive(),
+        /** mm for fabric, the trim's unit otherwise. */
+        quantity: z.number({ error: 'Enter a quantity' }).positive('Must be more than 0').max(10_000_000, 'Too much'),
+      }),
+    )
+    .min(1, 'Add at least one line'),
+});
+export type CreateOrderInput = z.input<typeof createOrderInput>;
+
+/** Something the studio buys: a fabric or a trim, with its price and usual supplier. */
+export interface OrderableItemDto {
+  kind: 'fabric' | 'trim';
+  refId: number;
+  item: string;
+  unit: string;
+  unitPriceMinor: number;
+  supplierId: number | null;
+}
+
 export const updateOrderStatusInput = z.object({ status: z.enum(['confirmed']) });
 
 const rollInput = z.object({

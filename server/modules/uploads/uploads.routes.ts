@@ -31,7 +31,7 @@ export function uploadsDir(databasePath: string | undefined): string {
   return join(dirname(resolve(db)), 'uploads');
 }
 
-const megabytes = (n: number) => `${(n / (1024 * 1024)).toFixed(n < 1024 * 1024 ? 2 : 1)} MB`;
+const megabytes = (n: number) => (n < 1024 * 1024 ? `${Math.round(n / 1024)} KB` : `${(n / (1024 * 1024)).toFixed(1)} MB`);
 /** A display name only: no folders, no control characters, at most 200 characters. */
 // eslint-disable-next-line no-control-regex
 const safeName = (name: string) => basename(name.replace(/\\/g, '/')).replace(/[\x00-\x1F\x7F]/g, '').slice(0, 200) || 'file';

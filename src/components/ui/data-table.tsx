@@ -49,6 +49,9 @@ export function DataTable<T>({
       else p.delete('q');
       setParams(p, { replace: true });
     },
+    // No pagination here; without this, each re-render (a new `sorting` array) resets the page index,
+    // which re-renders again: an endless loop that starves React Router's navigation transitions.
+    autoResetPageIndex: false,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),

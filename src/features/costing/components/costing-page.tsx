@@ -1,0 +1,127 @@
+import { useQuery } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router';
+import type { CostingSheetDto, LabourBasis } from '@shared/schemas/costing';
+import { DataTable } from '@/components/ui/data-table';
+import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
+import { downloadFile } from '@/lib/api-client';
+import { useCan } from '@/lib/auth';
+import { costingQueries } from '../api/costing-queries';
+import { sizeColumns } from './costing-columns';
+import { CostingSettingsForm } from './costing-settings-form';
+import { money } from './money';
+import { TrimPriceEditor } from './trim-price-editor';
+
+const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;
+
+function Figure({ label, value, testId, strong }: { label: string; value: string; testId: string; strong?: boolean }) {
+  return (
+    <div className={`rounded-card px-4 py-3 ${strong ? 'bg-thread-700 text-calico-50' : 'border border-calico-200 bg-white'}`}>
+      <div className={`text-xs ${strong ? 'text-calico-100' : 'text-ink-600'}`}>{label}</div>
+      <output data-testid={testId} className="text-xl font-bold">{value}</output>
+    </div>
+  );
+}
+
+function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
+  const a = sheet.actual;
+  const rows: [string, string, string][] = [
+    ['Fabric per garment', a.fabricMmPerGarment.planned ? `${(a.fabricMmPerGarment.planned / 1000).toFixed(3)} m` : '—', a.fabricMmPerGarment.actual !== null ? `${(a.fabricMmPerGarment.actual / 1000).toFixed(3)} m` : 'not cut yet'],
+    ['Plies spread', String(a.layPlies.planned || '—'), a.layPlies.cut ? String(a.layPlies.cut) : 'not cut yet'],
+    ['Standard minutes per garment', String(a.labourMinutesPerGarment.planned), a.labourMinutesPerGarment.actual !== null ? `${a.labourMinutesPerGarment.actual} so far` : 'no work logged'],
+    ['Piece-rate pay logged', '—', money(a.labourPaidMinor, sheet.currency, sheet.locale)],
+  ];
+  return (
+    <dl className="grid gap-2 text-sm sm:grid-cols-2">
+      {rows.map(([k, p, x]) => (
+        <div key={k} className="rounded-lg bg-calico-50 px-3 py-2">
+          <dt className="font-medium text-thread-800">{k}</dt>
+          <dd className="text-ink-700">Planned {p} · actual {x}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+export function CostingPage() {
+  const id = Number(useParams().id);
+  const [basis, setBasis] = useState<LabourBasis>('sam');
+  const { data: sheet, isLoading, error, isFetching } = useQuery({ ...costingQueries.sheet(id, basis), placeholderData: (prev) => prev });
+  const canEdit = useCan('costs:write');
+  // A stable array: the table resets its state whenever `data` changes identity.
+  const sizeRows = useMemo(() => (sheet ? sheet.sizes.map((s) => ({ ...s, currency: sheet.currency, locale: sheet.locale })) : []), [sheet]);
+  const [downloadError, setDownloadError] = useState<unknown>(null);
+  if (error) return <ErrorNote error={error} />;
+  if (isLoading || !sheet) return <Spinner />;
+  const fmt = (v: number) => money(v, sheet.currency, sheet.locale);
+  const handleDownload = async () => {
+    setDownloadError(null);
+    try {
+      await downloadFile(`/batches/${id}/costing.xlsx?labourBasis=${basis}`, `costing-${sheet.batch.code}.xlsx`);
+    } catch (e) {
+      setDownloadError(e);
+    }
+  };
+  return (
+    <>
+      <PageHeader
+        title={`Costing · ${sheet.batch.code}`}
+        subtitle={<>{sheet.style.code} {sheet.style.name} · {sheet.batch.total} garments · prices in {sheet.currency}</>}
+        actions={
+          <>
+            <Link className="btn-quiet" to={`/batches/${id}`}>Back to batch</Link>
+            <button type="button" className="btn-primary" onClick={handleDownload}>Download XLSX</button>
+          </>
+        }
+      />
+      <ErrorNote error={downloadError} />
+      <div className="mb-5 grid grid-cols-2 gap-3 lg:grid-cols-4" aria-busy={isFetching}>
+        <Figure label="Average cost per garment" value={fmt(sheet.totals.averageUnitCostMinor)} testId="average-unit-cost" />
+        <Figure label={`Wholesale (${sheet.settings.marginPercent} % margin)`} value={fmt(sheet.totals.wholesaleMinor)} testId="wholesale" strong />
+        <Figure label={`Suggested retail (× ${sheet.settings.retailMultiplier})`} value={fmt(sheet.totals.retailMinor)} testId="retail" />
+        <Figure label="Batch cost" value={fmt(sheet.totals.batchCostMinor)} testId="batch-cost" />
+      </div>
+      {sheet.notes.length ? (
+        <ul className="mb-5 space-y-1 rounded-card border border-saffron-500/40 bg-saffron-100 px-4 py-3 text-sm text-ink-800">
+          {sheet.notes.map((n) => <li key={n}>{n}</li>)}
+        </ul>
+      ) : null}
+      <div className="space-y-5">
+        <Card title="Cost per garment by size">
+          <DataTable data={sizeRows} columns={sizeColumns} filterPlaceholder="Filter sizes…" />
+          {sheet.fabric ? (
+            <p className="mt-2 text-xs text-ink-600">
+              Fabric: {sheet.fabric.name} at {fmt(sheet.fabric.pricePerMetreMinor)} a metre, {BASIS_LABEL[sheet.fabric.basis]}, {sheet.settings.wastagePercent} % wastage included; {(sheet.fabric.batchFabricMm / 1000).toFixed(1)} m for the batch.
+            </p>
+          ) : null}
+        </Card>
+        <Card
+          title={
+            <span className="flex flex-wrap items-center justify-between gap-2">
+              <span>Cost lines (bill of materials, labour, overheads)</span>
+              <label className="flex items-center gap-2 text-sm font-normal text-ink-700">
+                Labour costed by
+                <select aria-label="Labour costed by" className="field-input w-auto py-1" value={basis} onChange={(e) => setBasis(e.target.value as LabourBasis)}>
+                  <option value="sam">standard minutes × cost per minute</option>
+                  <option value="piece-rates">piece rates</option>
+                </select>
+                {sheet.labour.isEstimate ? <Badge tone="gold">estimate</Badge> : null}
+              </label>
+            </span>
+          }
+        >
+          <TrimPriceEditor sheet={sheet} canEdit={canEdit} />
+          <p className="mt-2 text-xs text-ink-600">Change a unit price and press Enter: every total follows. Costs are shown for the middle size; the XLSX has every size.</p>
+        </Card>
+        {canEdit ? (
+          <Card title="Costing settings for this style">
+            <CostingSettingsForm key={JSON.stringify(sheet.settings)} sheet={sheet} />
+          </Card>
+        ) : null}
+        <Card title="Planned against actual">
+          <PlannedActual sheet={sheet} />
+        </Card>
+      </div>
+    </>
+  );
+}
