@@ -1,6 +1,6 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { CostingSizeDto } from '@shared/schemas/costing';
-import { money } from './money';
+import { formatMoney as money } from '@/lib/format';
 
 const c = createColumnHelper<CostingSizeDto & { currency: string; locale: string }>();
 const cash = (v: number, r: { currency: string; locale: string }) => money(v, r.currency, r.locale);

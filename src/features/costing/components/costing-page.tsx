@@ -9,7 +9,7 @@ import { useCan } from '@/lib/auth';
 import { costingQueries } from '../api/costing-queries';
 import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
-import { money } from './money';
+import { formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
 
 const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;

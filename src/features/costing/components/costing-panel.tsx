@@ -4,7 +4,7 @@ import type { BatchDto } from '@shared/schemas/batches';
 import { Card } from '@/components/ui/page';
 import { useCan } from '@/lib/auth';
 import { costingQueries } from '../api/costing-queries';
-import { money } from './money';
+import { formatMoney as money } from '@/lib/format';
 
 /** On the batch page: the headline prices and a link to the full sheet (owner only). */
 export function CostingPanel({ batch }: { batch: BatchDto }) {

@@ -5,7 +5,7 @@ import { Field } from '@/components/ui/form';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useUpdateCostingSettings } from '../api/costing-queries';
-import { parseMajor, toMajorText } from './money';
+import { parseMajor, toMajorText } from '@shared/units/money';
 
 /** Labour cost per minute, overheads, wastage, margin and the retail multiplier of the style. */
 export function CostingSettingsForm({ sheet }: { sheet: CostingSheetDto }) {

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import type { CostingLineDto, CostingSheetDto } from '@shared/schemas/costing';
 import { ErrorNote } from '@/components/ui/page';
 import { useUpdateTrim } from '../api/costing-queries';
-import { money, parseMajor, toMajorText } from './money';
+import { parseMajor, toMajorText } from '@shared/units/money';
+import { formatMoney as money } from '@/lib/format';
 
 function PriceInput({ line, sheet }: { line: CostingLineDto; sheet: CostingSheetDto }) {
   const update = useUpdateTrim();

@@ -3,7 +3,7 @@ import { useState, type FormEvent } from 'react';
 import type { RollDto } from '@shared/schemas/cutting';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
-import { useCan } from '@/lib/auth';
+import { useCan, useMe } from '@/lib/auth';
 import { formatMoney } from '@/lib/format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
 import { metres } from './cutting-format';
@@ -80,6 +80,7 @@ export function FabricsPage() {
   const id = openId ?? fabrics?.[0]?.id ?? null;
   const detail = useQuery({ ...fabricQueries.detail(id ?? 0), enabled: id !== null });
   const canWrite = useCan('fabric:write');
+  const currency = useMe().data?.currency ?? 'KES';
   if (isLoading || !fabrics) return <Spinner />;
   return (
     <>
@@ -90,7 +91,7 @@ export function FabricsPage() {
             <p className="font-semibold text-thread-800">{f.name}</p>
             <p className="text-sm text-ink-600">{f.composition} · {Math.round(f.widthMm / 10)} cm cuttable {f.isDirectional ? '· one way' : ''}</p>
             <p className="mt-1 text-sm">{f.rollCount} rolls · {metres(f.totalRemainingMm)} in stock</p>
-            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(f.pricePerMetreMinor, 'KES')} per metre</p> : null}
+            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(f.pricePerMetreMinor, currency)} per metre</p> : null}
           </button>
         ))}
       </div>

@@ -4,7 +4,7 @@ import type { BatchDto } from '@shared/schemas/batches';
 import { Card, ErrorNote } from '@/components/ui/page';
 import { useCan } from '@/lib/auth';
 import { purchasingQueries, useCreateOrders } from '../api/purchasing-queries';
-import { quantityText } from './money';
+import { quantityText } from './quantity-text';
 
 /** On the batch page: fabric and trims still to order, net of stock and open orders. */
 export function NeedsPanel({ batch }: { batch: BatchDto }) {

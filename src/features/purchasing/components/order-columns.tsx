@@ -1,7 +1,8 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { PurchaseOrderDto } from '@shared/schemas/purchasing';
 import { Badge } from '@/components/ui/page';
-import { money, quantityText } from './money';
+import { formatMoney as money } from '@/lib/format';
+import { quantityText } from './quantity-text';
 
 const c = createColumnHelper<PurchaseOrderDto & { currency: string; actions: React.ReactNode }>();
 export const statusTone = { draft: 'grey', sent: 'blue', confirmed: 'gold', received: 'teal' } as const;

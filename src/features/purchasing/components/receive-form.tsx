@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { PurchaseOrderDto } from '@shared/schemas/purchasing';
 import { ErrorNote } from '@/components/ui/page';
 import { useReceiveOrder } from '../api/purchasing-queries';
-import { quantityText } from './money';
+import { quantityText } from './quantity-text';
 
 /** Receive an order into stock: one roll per fabric line (label, length, shade lot), counts for trims. */
 export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone: () => void }) {
