@@ -1,5 +1,4 @@
 import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { mm } from '@shared/units/units';
 import { demoSizeChart, DEMO_SIZE_RUN } from './demo-size-chart';
@@ -8,6 +7,7 @@ import { computeGrades } from './size-chart';
 import { parseSizeChartTable, sizeChartToRows } from './size-chart-table';
 import { sizeMix } from './size-mix';
 import { buildSpecSheet } from './spec-sheet';
+import { datasetPath, hasDatasets } from '../../tests/fixtures/reference-data';
 
 // ASTM D5585-11e1, Table 1 (inch-pound), sizes 00–20, girth rows as printed [quoted]
 const ASTM_SIZES = ['00', '0', '2', '4', '6', '8', '10', '12', '14', '16', '18', '20'];
@@ -120,8 +120,8 @@ describe('EN 13402-3 designation', () => {
     expect(designateByBust(1310)).toBeNull();
   });
 
-  it('counts ANSUR II female chest girths per interval as the reference table (Paquette et al. 2012, ANSUR_II_FEMALE_Public.csv)', () => {
-    const file = path.resolve(__dirname, '../../../shared/datasets/anthropometry/ANSUR_II_FEMALE_Public.csv');
+  it.skipIf(!hasDatasets)('counts ANSUR II female chest girths per interval as the reference table (Paquette et al. 2012, ANSUR_II_FEMALE_Public.csv)', () => {
+    const file = datasetPath('anthropometry', 'ANSUR_II_FEMALE_Public.csv');
     const lines = readFileSync(file, 'latin1').trim().split(/\r?\n/);
     const col = lines[0].split(',').indexOf('chestcircumference');
     const chest = lines.slice(1).map((l) => Number(l.split(',')[col]));

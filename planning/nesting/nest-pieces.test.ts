@@ -8,11 +8,12 @@ import { polygonOffsetOutward } from './clipper-path';
 import { nestPieces } from './nest-pieces';
 import { parseEsicupXml } from './testing/esicup-xml';
 import type { NestingInput } from './types';
+import { datasetPath, hasDatasets } from '../../tests/fixtures/reference-data';
 
 const rect = (w: number, h: number) => [{ x: 0, y: 0 }, { x: w, y: 0 }, { x: w, y: h }, { x: 0, y: h }];
 const garment = (name: string) =>
   (JSON.parse(readFileSync(path.resolve(__dirname, '../../tests/bench/nesting/fixtures', name), 'utf8')) as { input: NestingInput }).input;
-const esicup = (...p: string[]) => path.resolve(__dirname, '../../../shared/datasets/nesting/esicup', ...p);
+const esicup = (...p: string[]) => datasetPath('nesting', 'esicup', ...p);
 
 // Iteration budgets, never time: the timeout only guards a loaded CI machine.
 describe('nestPieces', { timeout: 30_000 }, () => {
@@ -24,7 +25,7 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     expect(r.utilisation).toBeCloseTo(1, 9);
   });
 
-  it('recovers a dense dighe1 layout (Hopper after Dighe & Jakiela 1996; optimum L = 100, density 100 %)', () => {
+  it.skipIf(!hasDatasets)('recovers a dense dighe1 layout (Hopper after Dighe & Jakiela 1996; optimum L = 100, density 100 %)', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('dighe', 'dighe1.xml'), 'utf8'));
     const r = nestPieces(input, { seed: 3, maxIterations: 1500 });
     expect(checkLayout(input, r).errors).toEqual([]);
@@ -33,7 +34,7 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     console.info(`dighe1: L = ${r.length.toFixed(3)}, density ${(r.utilisation * 100).toFixed(2)} %`);
   });
 
-  it('recovers the dighe2 optimum L = 100 (Hopper after Dighe & Jakiela 1996, esicup/dighe/dighe2.xml) for seed 1', () => {
+  it.skipIf(!hasDatasets)('recovers the dighe2 optimum L = 100 (Hopper after Dighe & Jakiela 1996, esicup/dighe/dighe2.xml) for seed 1', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('dighe', 'dighe2.xml'), 'utf8'));
     const r = nestPieces(input, { seed: 1, maxIterations: 6000 });
     expect(checkLayout(input, r).errors).toEqual([]);
