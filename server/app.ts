@@ -6,6 +6,7 @@ import session from 'express-session';
 import helmet from 'helmet';
 import type { DataSource } from 'typeorm';
 import { configurePassport } from './auth/passport';
+import { requirePasswordChanged } from './auth/require';
 import { DatabaseSessionStore } from './auth/session-store';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
@@ -98,6 +99,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(csrfGuard);
+  api.use(requirePasswordChanged);
 
   api.use('/auth', authRoutes(auth, passport, { loginLimit: env.LOGIN_RATE_LIMIT }));
   api.use('/users', userRoutes(createUserService({ users, audit })));

@@ -1,6 +1,6 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { can, type Permission, type Role } from '../../shared/auth/permissions';
-import { forbidden, unauthenticated } from '../errors';
+import { AppError, forbidden, unauthenticated } from '../errors';
 
 /** The signed-in person as the server sees them on every request. */
 export interface Actor {
@@ -9,6 +9,8 @@ export interface Actor {
   role: Role;
   name: string;
   email: string;
+  /** Signed in with a temporary password: only the auth routes answer until it is changed. */
+  mustChangePassword?: boolean;
 }
 
 declare global {
@@ -23,6 +25,14 @@ export function actorOf(req: Request): Actor {
   if (!req.user) throw unauthenticated();
   return req.user;
 }
+
+/** Someone on a temporary password may only reach /api/auth/* (to change it) until they do. */
+export const requirePasswordChanged: RequestHandler = (req, _res, next) => {
+  if (req.user?.mustChangePassword && !req.path.startsWith('/auth/')) {
+    return next(new AppError(403, 'password_change_required', 'Choose your own password first (Account page)'));
+  }
+  next();
+};
 
 export const requireAuth: RequestHandler = (req, _res, next) =>
   req.user ? next() : next(unauthenticated());

@@ -13,6 +13,7 @@ export const ERROR_CODES = [
   'rate_limited',
   'csrf',
   'locked',
+  'password_change_required',
   'internal',
 ] as const;
 export type ErrorCode = (typeof ERROR_CODES)[number];

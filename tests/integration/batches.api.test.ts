@@ -71,6 +71,9 @@ describe('people', () => {
     expect(add.body.user.mustChangePassword).toBe(true);
     const pendo = await signIn(app, 'pendo@tamarind.example', 'temporary-123');
     expect((await pendo.get('/api/auth/me')).body.user.mustChangePassword).toBe(true);
+    const blocked = await pendo.get('/api/batches');
+    expect(blocked.status).toBe(403);
+    expect(blocked.body.error.code).toBe('password_change_required');
     await boss.patch(`/api/users/${add.body.user.id}`).send({ active: false });
     expect((await pendo.get('/api/auth/me')).status).toBe(401);
   });

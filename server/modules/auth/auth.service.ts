@@ -27,6 +27,7 @@ export function createAuthService(deps: {
     name: u.name,
     email: u.email,
     sessionVersion: u.sessionVersion,
+    mustChangePassword: Boolean(u.mustChangePassword),
   });
 
   /** Shared check for password and PIN: lock after repeated failures, never say which part was wrong. */
@@ -76,7 +77,7 @@ export function createAuthService(deps: {
         sessionVersion,
       });
       await audit.record(actor, 'change_password', 'user', actor.id);
-      return { ...toActor(u), sessionVersion };
+      return { ...toActor(u), sessionVersion, mustChangePassword: false };
     },
 
     /** Anyone may open a new studio; they become its owner. */

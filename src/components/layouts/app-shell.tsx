@@ -1,5 +1,5 @@
 import { useState, type ComponentType, type SVGProps } from 'react';
-import { NavLink, Outlet, useNavigate } from 'react-router';
+import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router';
 import { can, ROLE_LABELS, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
 import { useLogout, useMe } from '@/lib/auth';
@@ -28,6 +28,7 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
   const logout = useLogout();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
+  const location = useLocation();
   const items = [...NAV_ITEMS.slice(0, 3), ...extraNav, ...NAV_ITEMS.slice(3)].filter((i) => !i.permission || can(me?.role, i.permission));
 
   const links = (
@@ -54,6 +55,10 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
     await logout.mutateAsync();
     navigate(paths.signIn.getHref());
   };
+
+  if (me?.mustChangePassword && location.pathname !== paths.account.getHref()) {
+    return <Navigate to={paths.account.getHref()} replace />;
+  }
 
   return (
     <div className="min-h-screen md:flex">
