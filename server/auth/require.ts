@@ -34,14 +34,18 @@ export const requirePasswordChanged: RequestHandler = (req, _res, next) => {
   next();
 };
 
-export const requireAuth: RequestHandler = (req, _res, next) =>
-  req.user ? next() : next(unauthenticated());
+export const requireAuth: RequestHandler = Object.assign(
+  ((req, _res, next) => (req.user ? next() : next(unauthenticated()))) as RequestHandler,
+  { requiresAuth: true },
+);
 
 /** Gate a route on the permission map in shared/auth; 401 when signed out, 403 when not allowed. */
 export function requirePermission(...permissions: Permission[]): RequestHandler {
-  return (req: Request, _res: Response, next: NextFunction) => {
+  const gate = (req: Request, _res: Response, next: NextFunction) => {
     if (!req.user) return next(unauthenticated());
     if (!permissions.some((p) => can(req.user!.role, p))) return next(forbidden());
     next();
   };
+  // The route-by-role matrix test reads the permissions off the handler.
+  return Object.assign(gate, { permissions, requiresAuth: true });
 }

@@ -32,7 +32,7 @@ export function createCostingRepository(ds: DataSource) {
     settings: (studioId: number, styleId: number) => settings.findOneBy({ studioId, styleId }),
     async saveSettings(studioId: number, styleId: number, patch: Partial<CostingSettingsEntity>) {
       const existing = await settings.findOneBy({ studioId, styleId });
-      if (existing) await settings.update({ id: existing.id }, patch);
+      if (existing && Object.keys(patch).length) await settings.update({ id: existing.id }, patch);
       else await settings.save(settings.create({ labourCostPerMinuteMinor: 0, ...patch, studioId, styleId }));
       return settings.findOneByOrFail({ studioId, styleId });
     },
@@ -40,7 +40,7 @@ export function createCostingRepository(ds: DataSource) {
     trim: (studioId: number, id: number) => trims.findOneBy({ studioId, id }),
     insertTrim: (t: Partial<TrimEntity>) => trims.save(trims.create(t)),
     async updateTrim(studioId: number, id: number, patch: Partial<TrimEntity>) {
-      await trims.update({ studioId, id }, patch);
+      if (Object.keys(patch).length) await trims.update({ studioId, id }, patch);
       return trims.findOneByOrFail({ studioId, id });
     },
     deleteTrim: (studioId: number, id: number) => trims.delete({ studioId, id }),

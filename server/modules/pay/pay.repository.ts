@@ -16,7 +16,7 @@ export function createPayRepository(ds: DataSource) {
     payout: (studioId: number, payPeriodId: number, userId: number) => payouts.findOneBy({ studioId, payPeriodId, userId }),
     insertPayout: (p: Partial<PayoutEntity>) => payouts.save(payouts.create(p)),
     updatePayout: async (studioId: number, id: number, patch: Partial<PayoutEntity>) => {
-      await payouts.update({ studioId, id }, patch);
+      if (Object.keys(patch).length) await payouts.update({ studioId, id }, patch);
       return payouts.findOneByOrFail({ studioId, id });
     },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),

@@ -13,7 +13,7 @@ export function createPurchasingRepository(ds: DataSource) {
     supplier: (studioId: number, id: number) => suppliers.findOneBy({ studioId, id }),
     insertSupplier: (s: Partial<SupplierEntity>) => suppliers.save(suppliers.create(s)),
     async updateSupplier(studioId: number, id: number, patch: Partial<SupplierEntity>) {
-      await suppliers.update({ studioId, id }, patch);
+      if (Object.keys(patch).length) await suppliers.update({ studioId, id }, patch);
       return suppliers.findOneByOrFail({ studioId, id });
     },
     fabric: (studioId: number, id: number) => ds.getRepository(FabricEntity).findOneBy({ studioId, id }),
