@@ -1,51 +1,9 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { can, ROLES, type Permission, type Role } from '../../shared/auth/permissions';
+import { can, ROLES, type Role } from '../../shared/auth/permissions';
+import { listApiRoutes, type RouteInfo } from '../fixtures/route-list';
 import { buildTestApp, signIn } from '../fixtures/test-app';
-
-interface RouteInfo {
-  method: string;
-  path: string;
-  permissions: Permission[] | null;
-  requiresAuth: boolean;
-}
-
-type Layer = {
-  route?: { path: string; stack: { method?: string; handle: Gate }[]; _methods(all?: boolean): string[] };
-  handle: Gate & { stack?: Layer[] };
-  rawPath?: string;
-};
-type Gate = { permissions?: Permission[]; requiresAuth?: boolean };
-
-/** Every API route with the permissions its handlers demand, read off the live Express router. */
-function listRoutes(app: Express): RouteInfo[] {
-  const out: RouteInfo[] = [];
-  const walk = (stack: Layer[], prefix: string, inherited: Gate[]) => {
-    const gates = [...inherited];
-    for (const layer of stack) {
-      if (layer.route) {
-        const chain = [...gates, ...layer.route.stack.map((s) => s.handle)];
-        const perms = chain.flatMap((g) => g.permissions ?? []);
-        for (const method of layer.route._methods(true).map((m) => m.toLowerCase())) {
-          if (method === 'head' || method === 'options') continue;
-          out.push({
-            method,
-            path: (prefix + layer.route.path).replace(/(.)\/$/, '$1'),
-            permissions: perms.length ? [...new Set(perms)] : null,
-            requiresAuth: chain.some((g) => g.requiresAuth),
-          });
-        }
-      } else if (Array.isArray(layer.handle.stack)) {
-        walk(layer.handle.stack, prefix + (layer.rawPath && layer.rawPath !== '/' ? layer.rawPath : ''), gates);
-      } else if (layer.handle.requiresAuth) {
-        gates.push(layer.handle);
-      }
-    }
-  };
-  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '', []);
-  return out.filter((r) => r.path.startsWith('/api'));
-}
 
 // Routes that end the caller's own session are tried in the auth tests instead.
 const SKIP = new Set(['post /api/auth/logout', 'post /api/auth/password']);
@@ -57,7 +15,7 @@ const agents = {} as Record<Role | 'stranger', Awaited<ReturnType<typeof signIn>
 
 beforeAll(async () => {
   ({ app } = await buildTestApp());
-  routes = listRoutes(app).filter((r) => !SKIP.has(`${r.method} ${r.path}`));
+  routes = listApiRoutes(app).filter((r) => !SKIP.has(`${r.method} ${r.path}`));
   agents.owner = await signIn(app, 'owner@tamarind.example');
   agents.cutter = await signIn(app, 'cutter@tamarind.example');
   agents.machinist = await signIn(app, 'machinist3@tamarind.example');
