@@ -58,7 +58,7 @@ export function runNestingWorker(input: NestingInput, opts: NestingRunOptions): 
   );
   worker.on('message', (m: NestingWorkerMessage) => {
     if (m.type === 'progress') opts.onProgress?.(m);
-    else if (m.type === 'result') settle({ kind: 'result', result: m.result, cancelled: cancelled || !m.result.complete });
+    else if (m.type === 'result') settle({ kind: 'result', result: m.result, cancelled });
     else if (m.type === 'error') settle({ kind: 'failed', message: `The nesting engine failed: ${m.message}` });
   });
   worker.on('error', (err) => settle({ kind: 'failed', message: `The nesting worker crashed: ${err.message}` }));

@@ -52,10 +52,13 @@ export async function executeMarkerJob(
       utilisation: outcome.result.utilisation,
       elapsedMs,
       result,
+      // A run that used up its budget before improving is still a valid marker, only a longer one.
       error: check.valid
         ? outcome.cancelled
           ? 'Stopped early: the best marker so far is kept.'
-          : ''
+          : outcome.result.complete
+            ? ''
+            : 'The time budget ran out early; a longer budget gives a shorter marker.'
         : `The layout checker refused the marker: ${check.errors[0]}`,
     });
     if (check.valid && !outcome.cancelled) await hooks.onDone?.(studioId, id);
