@@ -28,7 +28,7 @@ export function errorHandler(isDevelopment: boolean): ErrorRequestHandler {
       res.status(409).json({ error: { code: 'conflict', message: 'That record conflicts with one already saved' } });
       return;
     }
-    if (process.env.NODE_ENV !== 'test') console.error(err);
+    if (process.env.NODE_ENV !== 'test' || process.env.SEAMRUN_LOG_ERRORS) console.error(err);
     res.status(500).json({
       error: {
         code: 'internal',

@@ -12,6 +12,7 @@ import {
   SupplierEntity,
   TrimEntity,
   WorkLogEntity,
+  StyleEntity,
 } from '../../entities';
 
 export type CostingRepository = ReturnType<typeof createCostingRepository>;
@@ -28,7 +29,7 @@ export function createCostingRepository(ds: DataSource) {
     batch: (studioId: number, id: number) =>
       ds.getRepository(BatchEntity).findOne({ where: { studioId, id }, relations: { style: true } }),
     styleExists: async (studioId: number, styleId: number) =>
-      (await ds.query('SELECT 1 FROM styles WHERE studioId = ? AND id = ?', [studioId, styleId])).length > 0,
+      ds.getRepository(StyleEntity).exists({ where: { studioId, id: styleId } }),
     settings: (studioId: number, styleId: number) => settings.findOneBy({ studioId, styleId }),
     async saveSettings(studioId: number, styleId: number, patch: Partial<CostingSettingsEntity>) {
       const existing = await settings.findOneBy({ studioId, styleId });

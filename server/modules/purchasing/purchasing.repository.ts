@@ -1,5 +1,5 @@
 import { Not, type DataSource } from 'typeorm';
-import { FabricEntity, PurchaseOrderEntity, RollEntity, StudioEntity, SupplierEntity, TrimEntity } from '../../entities';
+import { FabricEntity, PurchaseOrderEntity, RollEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
 
 export type PurchasingRepository = ReturnType<typeof createPurchasingRepository>;
 
@@ -21,7 +21,7 @@ export function createPurchasingRepository(ds: DataSource) {
     allTrims: (studioId: number) => ds.getRepository(TrimEntity).find({ where: { studioId }, order: { name: 'ASC' } }),
     trim: (studioId: number, id: number) => ds.getRepository(TrimEntity).findOneBy({ studioId, id }),
     batchExists: async (studioId: number, id: number) =>
-      (await ds.query('SELECT 1 FROM batches WHERE studioId = ? AND id = ?', [studioId, id])).length > 0,
+      ds.getRepository(BatchEntity).exists({ where: { studioId, id } }),
     trims: (studioId: number, styleId: number) => ds.getRepository(TrimEntity).find({ where: { studioId, styleId }, order: { id: 'ASC' } }),
     /** Fabric on hand: what is left on every roll of the fabric. */
     async fabricStockMm(studioId: number, fabricId: number) {

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { UploadEntity } from '../../entities';
+import { UploadEntity, StyleEntity } from '../../entities';
 
 export type UploadsRepository = ReturnType<typeof createUploadsRepository>;
 
@@ -13,6 +13,6 @@ export function createUploadsRepository(ds: DataSource) {
     get: (studioId: number, id: number) => repo.findOneBy({ studioId, id }),
     remove: (studioId: number, id: number) => repo.delete({ studioId, id }),
     styleExists: async (studioId: number, styleId: number) =>
-      (await ds.query('SELECT 1 FROM styles WHERE studioId = ? AND id = ?', [studioId, styleId])).length > 0,
+      ds.getRepository(StyleEntity).exists({ where: { studioId, id: styleId } }),
   };
 }
