@@ -9,7 +9,8 @@ import {
   formatShortLength,
   spreadingModeLabel,
 } from './document-format';
-import { drawCautions, drawHeading, drawTable, startPdf, type PdfOptions } from './pdf-layout';
+import { drawCautions, drawHeading, startPdf, type PdfOptions } from './pdf-layout';
+import { drawRollTable } from './roll-table';
 
 /** Document title of a cut ticket. */
 export const CUT_TICKET_TITLE = 'Cut ticket';
@@ -52,22 +53,6 @@ function drawLayTicket(doc: PDFKit.PDFDocument, input: CutTicketInput, lay: LayP
   ]);
   doc.font('Helvetica-Bold').fontSize(10).text('Plies per roll');
   doc.moveDown(0.3);
-  drawTable(
-    doc,
-    [
-      { header: 'Roll', width: 100 },
-      { header: 'Shade lot', width: 110 },
-      { header: 'Roll length', width: 100 },
-      { header: 'Plies to spread', width: 95 },
-      { header: 'Expected remnant', width: 110 },
-    ],
-    lay.rolls.map((roll) => [
-      roll.rollLabel,
-      roll.shadeLot,
-      formatLongLength(roll.lengthMm, u),
-      String(roll.pliesToSpread),
-      formatLongLength(roll.expectedRemnantMm, u),
-    ]),
-  );
+  drawRollTable(doc, lay.rolls, u);
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
 }

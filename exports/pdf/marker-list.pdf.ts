@@ -11,6 +11,7 @@ import {
   spreadingModeLabel,
 } from './document-format';
 import { drawCautions, drawHeading, drawTable, startPdf, type PdfOptions } from './pdf-layout';
+import { drawRollTable } from './roll-table';
 
 /** Document title of the marker list. */
 export const MARKER_LIST_TITLE = 'Marker list per roll';
@@ -55,23 +56,7 @@ export async function buildMarkerListPdf(
   for (const lay of input.lays) {
     doc.font('Helvetica-Bold').fontSize(10).text(`Lay ${lay.layNo}: rolls`);
     doc.moveDown(0.3);
-    drawTable(
-      doc,
-      [
-        { header: 'Roll', width: 90 },
-        { header: 'Shade lot', width: 100 },
-        { header: 'Roll length', width: 100 },
-        { header: 'Plies to spread', width: 95 },
-        { header: 'Expected remnant', width: 110 },
-      ],
-      lay.rolls.map((roll) => [
-        roll.rollLabel,
-        roll.shadeLot,
-        formatLongLength(roll.lengthMm, u),
-        String(roll.pliesToSpread),
-        formatLongLength(roll.expectedRemnantMm, u),
-      ]),
-    );
+    drawRollTable(doc, lay.rolls, u);
   }
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
   doc.end();
