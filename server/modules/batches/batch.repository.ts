@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
 import { BatchEntity } from '../../entities';
 
@@ -13,7 +14,7 @@ export function createBatchRepository(ds: DataSource) {
       repo.findOne({ where: { studioId, id }, relations: { style: true } }),
     insert: (b: Partial<BatchEntity>) => repo.save(repo.create(b)),
     async update(studioId: number, id: number, patch: Partial<BatchEntity>) {
-      if (Object.keys(patch).length) await repo.update({ studioId, id }, patch);
+      await updateIfChanged(repo, { studioId, id }, patch);
       return repo.findOneOrFail({ where: { studioId, id }, relations: { style: true } });
     },
   };

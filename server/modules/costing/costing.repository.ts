@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import { In, Not, type DataSource } from 'typeorm';
 import {
   BatchEntity,
@@ -33,7 +34,7 @@ export function createCostingRepository(ds: DataSource) {
     settings: (studioId: number, styleId: number) => settings.findOneBy({ studioId, styleId }),
     async saveSettings(studioId: number, styleId: number, patch: Partial<CostingSettingsEntity>) {
       const existing = await settings.findOneBy({ studioId, styleId });
-      if (existing && Object.keys(patch).length) await settings.update({ id: existing.id }, patch);
+      if (existing) await updateIfChanged(settings, { id: existing.id }, patch);
       else await settings.save(settings.create({ labourCostPerMinuteMinor: 0, ...patch, studioId, styleId }));
       return settings.findOneByOrFail({ studioId, styleId });
     },
@@ -41,7 +42,7 @@ export function createCostingRepository(ds: DataSource) {
     trim: (studioId: number, id: number) => trims.findOneBy({ studioId, id }),
     insertTrim: (t: Partial<TrimEntity>) => trims.save(trims.create(t)),
     async updateTrim(studioId: number, id: number, patch: Partial<TrimEntity>) {
-      if (Object.keys(patch).length) await trims.update({ studioId, id }, patch);
+      await updateIfChanged(trims, { studioId, id }, patch);
       return trims.findOneByOrFail({ studioId, id });
     },
     deleteTrim: (studioId: number, id: number) => trims.delete({ studioId, id }),

@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import { FabricEntity, RollEntity } from '../../entities';
 
@@ -12,7 +13,7 @@ export function createFabricRepository(ds: DataSource) {
     get: (studioId: number, id: number) => fabrics.findOne({ where: { studioId, id } }),
     insert: (f: Partial<FabricEntity>) => fabrics.save(fabrics.create(f)),
     async update(studioId: number, id: number, patch: Partial<FabricEntity>) {
-      if (Object.keys(patch).length) await fabrics.update({ studioId, id }, patch);
+      await updateIfChanged(fabrics, { studioId, id }, patch);
       return fabrics.findOneOrFail({ where: { studioId, id } });
     },
     async remove(studioId: number, id: number) {
@@ -26,7 +27,7 @@ export function createFabricRepository(ds: DataSource) {
     /** Insert rolls in one transaction: all or none. */
     insertRolls: (list: Partial<RollEntity>[]) => ds.transaction((m) => m.getRepository(RollEntity).save(list.map((r) => m.getRepository(RollEntity).create(r)))),
     async updateRoll(studioId: number, id: number, patch: Partial<RollEntity>, m: EntityManager = ds.manager) {
-      if (Object.keys(patch).length) await m.getRepository(RollEntity).update({ studioId, id }, patch);
+      await updateIfChanged(m.getRepository(RollEntity), { studioId, id }, patch);
     },
   };
 }

@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
 import { PayoutEntity, PayPeriodEntity, StudioEntity, UserEntity } from '../../entities';
 
@@ -16,7 +17,7 @@ export function createPayRepository(ds: DataSource) {
     payout: (studioId: number, payPeriodId: number, userId: number) => payouts.findOneBy({ studioId, payPeriodId, userId }),
     insertPayout: (p: Partial<PayoutEntity>) => payouts.save(payouts.create(p)),
     updatePayout: async (studioId: number, id: number, patch: Partial<PayoutEntity>) => {
-      if (Object.keys(patch).length) await payouts.update({ studioId, id }, patch);
+      await updateIfChanged(payouts, { studioId, id }, patch);
       return payouts.findOneByOrFail({ studioId, id });
     },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),

@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import { Not, type DataSource } from 'typeorm';
 import { FabricEntity, PurchaseOrderEntity, RollEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
 
@@ -13,7 +14,7 @@ export function createPurchasingRepository(ds: DataSource) {
     supplier: (studioId: number, id: number) => suppliers.findOneBy({ studioId, id }),
     insertSupplier: (s: Partial<SupplierEntity>) => suppliers.save(suppliers.create(s)),
     async updateSupplier(studioId: number, id: number, patch: Partial<SupplierEntity>) {
-      if (Object.keys(patch).length) await suppliers.update({ studioId, id }, patch);
+      await updateIfChanged(suppliers, { studioId, id }, patch);
       return suppliers.findOneByOrFail({ studioId, id });
     },
     fabric: (studioId: number, id: number) => ds.getRepository(FabricEntity).findOneBy({ studioId, id }),

@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { updateStudioInput, type StudioDto } from '../../../shared/schemas/studio';
@@ -19,7 +20,7 @@ export function createStudioRepository(ds: DataSource) {
   return {
     get: (id: number) => repo.findOneByOrFail({ id }),
     update: async (id: number, patch: Partial<StudioEntity>) => {
-      if (Object.keys(patch).length) await repo.update({ id }, patch);
+      await updateIfChanged(repo, { id }, patch);
     },
   };
 }

@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
 import { StyleEntity } from '../../entities';
 
@@ -12,7 +13,7 @@ export function createStyleRepository(ds: DataSource) {
     byCode: (studioId: number, code: string) => repo.findOne({ where: { studioId, code } }),
     insert: (s: Partial<StyleEntity>) => repo.save(repo.create(s)),
     async update(studioId: number, id: number, patch: Partial<StyleEntity>) {
-      if (Object.keys(patch).length) await repo.update({ studioId, id }, patch);
+      await updateIfChanged(repo, { studioId, id }, patch);
       return repo.findOneOrFail({ where: { studioId, id } });
     },
   };

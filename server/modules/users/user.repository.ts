@@ -1,3 +1,4 @@
+import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
 import { StudioEntity, UserEntity } from '../../entities';
 
@@ -15,7 +16,7 @@ export function createUserRepository(ds: DataSource) {
     insert: (u: Partial<UserEntity>) => users.save(users.create(u)),
     update: async (studioId: number, id: number, patch: Partial<UserEntity>) => {
       // An empty patch is a no-op, not an error.
-      if (Object.keys(patch).length) await users.update({ studioId, id }, patch);
+      await updateIfChanged(users, { studioId, id }, patch);
     },
     recordFailure: (id: number, failedLogins: number, lockedUntil: Date | null) =>
       users.update({ id }, { failedLogins, lockedUntil }),
