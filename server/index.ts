@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { openDatabase } from './db/data-source';
+import { startWalCheckpointer } from './db/wal-checkpointer';
 import { createApp } from './app';
 import { loadEnv, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
@@ -11,6 +12,7 @@ import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
   const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
+  const checkpointer = env.DATABASE_URL ? null : await startWalCheckpointer(ds, env.DATABASE_PATH);
   const seeded = env.SEED_DEMO
     ? await seedDemoStudio(ds, {
         password: env.DEMO_PASSWORD,
@@ -30,6 +32,7 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const stop = async () => {
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
     await new Promise((r) => server.close(r));
+    await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();
   };
   return { server, ds, env, port, seeded, stop };

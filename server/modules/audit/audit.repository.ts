@@ -1,4 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { createStatements } from '../../db/statements';
 import { AuditEntryEntity } from '../../entities';
 import type { Actor } from '../../auth/require';
 
@@ -7,6 +8,7 @@ export type AuditRepository = ReturnType<typeof createAuditRepository>;
 const summarise = (v: unknown) => (v === undefined ? '' : JSON.stringify(v).slice(0, 4000));
 
 export function createAuditRepository(ds: DataSource) {
+  const sql = createStatements(ds);
   return {
     /** Record who did what; pass the transaction's manager so the entry commits with the change. */
     async record(
@@ -18,7 +20,7 @@ export function createAuditRepository(ds: DataSource) {
       after?: unknown,
       manager: EntityManager = ds.manager,
     ) {
-      await manager.getRepository(AuditEntryEntity).insert({
+      const entry = {
         studioId: actor.studioId,
         userId: actor.id,
         userName: actor.name,
@@ -27,7 +29,10 @@ export function createAuditRepository(ds: DataSource) {
         entityId,
         before: summarise(before),
         after: summarise(after),
-      });
+      };
+      // Outside a transaction (every floor log) one constant prepared INSERT; inside one, the transaction's manager.
+      if (manager === ds.manager) await sql.insert(AuditEntryEntity, entry);
+      else await manager.getRepository(AuditEntryEntity).insert(entry);
     },
     list(studioId: number, limit = 200) {
       return ds.getRepository(AuditEntryEntity).find({

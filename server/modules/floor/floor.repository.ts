@@ -1,4 +1,5 @@
 import { Between, In, type DataSource } from 'typeorm';
+import { createStatements } from '../../db/statements';
 import {
   AttendanceEntity,
   BatchEntity,
@@ -12,12 +13,7 @@ import {
 
 export type FloorRepository = ReturnType<typeof createFloorRepository>;
 
-/** True when a driver error is a UNIQUE constraint failure (SQLite says SQLITE_CONSTRAINT_UNIQUE). */
-export function isUniqueViolation(e: unknown): boolean {
-  const err = e as { code?: string; message?: string; driverError?: { code?: string } };
-  const code = err?.driverError?.code ?? err?.code ?? '';
-  return code === 'SQLITE_CONSTRAINT_UNIQUE' || /UNIQUE constraint failed/.test(err?.message ?? '');
-}
+export { isUniqueViolation } from '../../db/data-source';
 
 /** The text SQLite holds for a UTC datetime column ('YYYY-MM-DD HH:MM:SS.SSS'). */
 const sqlTime = (d: Date) => d.toISOString().replace('T', ' ').replace('Z', '');
@@ -30,30 +26,36 @@ export function createFloorRepository(ds: DataSource) {
   const attendance = ds.getRepository(AttendanceEntity);
   const users = ds.getRepository(UserEntity);
   const batches = ds.getRepository(BatchEntity);
+  // The statements a floor log runs every time are hand-written (see server/db/statements.ts).
+  const sql = createStatements(ds);
   return {
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneBy({ id: studioId }),
     batch: (studioId: number, id: number) => batches.findOne({ where: { studioId, id }, relations: { style: true } }),
     /** Open batches that hold a bundle with this number, newest first. */
     async bundleByNumber(studioId: number, number: number, batchId?: number) {
-      if (batchId) return bundles.findOneBy({ studioId, batchId, number });
-      const found = await bundles.find({ where: { studioId, number }, order: { batchId: 'DESC' } });
+      if (batchId) {
+        return sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "batchId" = ? AND "number" = ?', [studioId, batchId, number]);
+      }
+      const found = await sql.all(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "number" = ? ORDER BY "batchId" DESC', [studioId, number]);
       if (found.length <= 1) return found[0] ?? null;
       const open = await batches.find({ where: { studioId, id: In(found.map((b) => b.batchId)) } });
       const openIds = new Set(open.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
       return found.find((b) => openIds.has(b.batchId)) ?? found[0];
     },
-    bundle: (studioId: number, id: number) => bundles.findOneBy({ studioId, id }),
+    bundle: (studioId: number, id: number) => sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "id" = ?', [studioId, id]),
     bundlesOfBatch: (studioId: number, batchId: number) => bundles.find({ where: { studioId, batchId }, order: { number: 'ASC' } }),
     saveReopened: (studioId: number, id: number, reopened: Record<string, number>) =>
       bundles.update({ studioId, id }, { reopened }),
     operationsOfStyle: (studioId: number, styleId: number) =>
       ops.find({ where: { studioId, styleId }, order: { seq: 'ASC', id: 'ASC' } }),
     operation: (studioId: number, id: number) => ops.findOneBy({ studioId, id }),
-    logByKey: (studioId: number, idempotencyKey: string) => logs.findOneBy({ studioId, idempotencyKey }),
+    logByKey: (studioId: number, idempotencyKey: string) =>
+      sql.first(WorkLogEntity, 'SELECT * FROM "work_logs" WHERE "studioId" = ? AND "idempotencyKey" = ?', [studioId, idempotencyKey]),
     logAttempt: (studioId: number, bundleId: number, operationId: number, attempt: number) =>
-      logs.findOneBy({ studioId, bundleId, operationId, attempt }),
+      sql.first(WorkLogEntity, 'SELECT * FROM "work_logs" WHERE "studioId" = ? AND "bundleId" = ? AND "operationId" = ? AND "attempt" = ?', [studioId, bundleId, operationId, attempt]),
     log: (studioId: number, id: number) => logs.findOneBy({ studioId, id }),
-    logsOfBundle: (studioId: number, bundleId: number) => logs.find({ where: { studioId, bundleId }, order: { id: 'ASC' } }),
+    logsOfBundle: (studioId: number, bundleId: number) =>
+      sql.all(WorkLogEntity, 'SELECT * FROM "work_logs" WHERE "studioId" = ? AND "bundleId" = ? ORDER BY "id" ASC', [studioId, bundleId]),
     logsOfBundles: (studioId: number, bundleIds: number[]) =>
       bundleIds.length ? logs.find({ where: { studioId, bundleId: In(bundleIds) }, order: { id: 'ASC' } }) : Promise.resolve([]),
     /** Logs stamped in [from, to); QueryBuilder because SQLite compares the stored UTC text, not Date objects. */
@@ -65,17 +67,16 @@ export function createFloorRepository(ds: DataSource) {
       if (userId !== undefined) q.andWhere('l.userId = :userId', { userId });
       return q.orderBy('l.id', 'ASC').getMany();
     },
-    /** One INSERT (no save(): that would wrap a transaction and re-select around it). */
+    /** One INSERT … RETURNING (no save(): that would wrap a transaction and re-select around it). */
     async insertLog(l: Omit<WorkLogEntity, 'id'>): Promise<WorkLogEntity> {
-      const r = await logs.insert(l);
-      return { ...l, id: Number(r.identifiers[0].id) };
+      return { ...l, id: await sql.insert(WorkLogEntity, l) };
     },
     deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
       attendance.find({ where: { studioId, day: Between(fromDay, toDay) } }),
     usersByIds: (studioId: number, ids: number[]) =>
       ids.length ? users.find({ where: { studioId, id: In(ids) } }) : Promise.resolve([]),
-    user: (studioId: number, id: number) => users.findOneBy({ studioId, id }),
+    user: (studioId: number, id: number) => sql.first(UserEntity, 'SELECT * FROM "users" WHERE "studioId" = ? AND "id" = ?', [studioId, id]),
     gradingSet: (studioId: number, styleId: number) => ds.getRepository(GradingSetEntity).findOneBy({ studioId, styleId }),
   };
 }

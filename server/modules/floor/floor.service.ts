@@ -195,14 +195,18 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       }
       if (rework) await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
       const dto = presentLog(saved, bundle, op, actor.name, await currency(actor.studioId));
-      await audit.record(actor, input.outcome === 'fail' ? 'fail-check' : 'log', 'work_log', saved.id, undefined, {
-        bundle: bundle.number,
-        operation: op.code,
-        attempt,
-        outcome: saved.outcome,
-        defect: saved.defect,
-        rework: rework?.code,
-      });
+      // The work log is itself the record of who did what and when; the audit trail adds the exceptions
+      // (a failed check that sent work back, an undo), so hundreds of logs a day do not bury them.
+      if (rework) {
+        await audit.record(actor, 'fail-check', 'work_log', saved.id, undefined, {
+          bundle: bundle.number,
+          operation: op.code,
+          attempt,
+          outcome: saved.outcome,
+          defect: saved.defect,
+          rework: rework.code,
+        });
+      }
       return { status: 201, result: { log: dto, warnings } };
     },
 

@@ -1,14 +1,17 @@
-import { LessThan, MoreThan, type DataSource } from 'typeorm';
+import { LessThan, type DataSource } from 'typeorm';
+import { createStatements } from '../../db/statements';
 import { SessionEntity } from '../../entities';
 
 export type SessionRepository = ReturnType<typeof createSessionRepository>;
 
 export function createSessionRepository(ds: DataSource) {
   const repo = ds.getRepository(SessionEntity);
+  const sql = createStatements(ds);
   return {
+    /** Read on every signed-in request, so one constant prepared statement (server/db/statements.ts). */
     async find(id: string, now: number): Promise<string | null> {
-      const row = await repo.findOne({ where: { id, expiresAt: MoreThan(now) } });
-      return row?.data ?? null;
+      const data = await sql.value('SELECT "data" FROM "sessions" WHERE "id" = ? AND "expiresAt" > ?', [id, now]);
+      return typeof data === 'string' ? data : null;
     },
     /** One INSERT … ON CONFLICT statement (SQLite and PostgreSQL), not a read-then-write. */
     async save(id: string, data: string, expiresAt: number) {
