@@ -26,6 +26,7 @@ import { userRoutes } from './modules/users/user.routes';
 import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
 import { createUserService } from './modules/users/user.service';
+import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
 
 export interface AppDeps {
   ds: DataSource;
@@ -36,6 +37,8 @@ export interface AppDeps {
   clientDir?: string;
   /** Filled by createApp so the caller can start and stop the modules' services. */
   moduleContext?: { current?: ModuleContext };
+  /** Job runner override; by default in-process, or BullMQ on Redis with REDIS_URL. */
+  jobs?: JobRunner;
 }
 
 /** Build the Express app. Never listens: server/index.ts does, tests use supertest. */
@@ -107,7 +110,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/styles', styleRoutes(styles, audit));
   api.use('/batches', batchRoutes(batches, styles, audit));
   api.use('/audit', auditRoutes(audit));
-  const ctx: ModuleContext = { ds, env, audit, now, services: new Map() };
+  const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined), services: new Map() };
   for (const m of FEATURE_MODULES) m.register(api, ctx);
   if (deps.moduleContext) deps.moduleContext.current = ctx;
   api.use(notFoundHandler);

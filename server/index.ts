@@ -31,6 +31,7 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   const stop = async () => {
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
+    await holder.current?.jobs.stop();
     await new Promise((r) => server.close(r));
     await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();

@@ -1,11 +1,15 @@
 /**
  * `npm run worker`: a job worker process for many-studio hosts. With REDIS_URL set it consumes the
- * marker (nesting) jobs the API queues in Redis; start as many as you like, on any machine that reaches
- * the same database and Redis. Stops cleanly on SIGTERM.
+ * marker (nesting) jobs and the other long jobs (cut-order solves, exported documents, mail; see
+ * server/jobs/handlers.ts) the API queues in Redis; start as many as you like, on any machine that reaches
+ * the same database and Redis. Mail goes to SMTP_URL, or to the local outbox of the web process when it
+ * runs on the same machine. Stops cleanly on SIGTERM.
  */
 import 'reflect-metadata';
 import { openDatabase } from './db/data-source';
 import { loadEnv } from './env';
+import { startJobWorker } from './jobs/job-runner';
+import { closeMailTransports } from './modules/mail/mail-job';
 import { linkMarkerToLays } from './modules/markers/link-lays';
 import { startMarkerWorker } from './modules/markers/marker-queue-redis';
 import { createMarkerRepository } from './modules/markers/marker.repository';
@@ -22,10 +26,16 @@ const worker = startMarkerWorker(env.REDIS_URL, createMarkerRepository(ds), {
   stalledIntervalMs: Number(process.env.WORKER_STALLED_MS ?? 30_000),
   name: `worker-${process.pid}`,
 });
-await worker.waitUntilReady();
-console.log(JSON.stringify({ worker: `worker-${process.pid}`, queue: 'markers', ready: true }));
+const jobs = startJobWorker(env.REDIS_URL, {
+  name: `worker-${process.pid}`,
+  lockDurationMs: Number(process.env.WORKER_LOCK_MS ?? 30_000),
+  stalledIntervalMs: Number(process.env.WORKER_STALLED_MS ?? 30_000),
+});
+await Promise.all([worker.waitUntilReady(), jobs.waitUntilReady()]);
+console.log(JSON.stringify({ worker: `worker-${process.pid}`, queues: ['markers', 'jobs'], ready: true }));
 const shutdown = async () => {
-  await worker.close();
+  await Promise.all([worker.close(), jobs.close()]);
+  closeMailTransports();
   await ds.destroy();
   process.exit(0);
 };

@@ -1,6 +1,7 @@
 import type { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import type { Env } from '../env';
+import type { JobRunner } from '../jobs/job-runner';
 import type { AuditRepository } from './audit/audit.repository';
 
 /** What every feature module receives from createApp. */
@@ -9,6 +10,8 @@ export interface ModuleContext {
   env: Partial<Env> & Pick<Env, 'NODE_ENV'>;
   audit: AuditRepository;
   now: () => Date;
+  /** Runs the long jobs (cut-order solve, documents, mail) in-process or on `npm run worker` processes. */
+  jobs: JobRunner;
   /** Services other modules expose (e.g. 'mail', 'jobs'); set in register, read lazily. */
   services: Map<string, unknown>;
 }

@@ -1,3 +1,4 @@
+import { createLocalJobRunner } from '../jobs/job-runner';
 import { addDays, format, subDays } from 'date-fns';
 import { FabricEntity, MarkerEntity, RollEntity } from '../entities';
 import { createCutPlanRepository } from '../modules/cutting/cut-plan.repository';
@@ -44,7 +45,7 @@ export async function seedCutting(ctx: SeedContext): Promise<void> {
     DEMO_ROLLS.map((r) => ({ studioId, fabricId: fabric.id, ...r, widthMm: DEMO_FABRIC.widthMm + 20, receivedDate: received, remainingMm: r.lengthMm, isRemnant: false })),
   );
   const plans = createCutPlanRepository(ds);
-  const plan = await planBatchCut(ds, plans, studioId, ctx.batchId, { fabricId: fabric.id, ...DEMO_CUT_SETTINGS });
+  const plan = await planBatchCut(ds, createLocalJobRunner(), plans, studioId, ctx.batchId, { fabricId: fabric.id, ...DEMO_CUT_SETTINGS });
   const lays = await plans.laysOf(studioId, plan.id);
   if (lays[0]) await markLayCut(plans, studioId, lays[0].id, undefined, addDays(subDays(ctx.today, 1), 0));
   if (process.env.NODE_ENV === 'test') return;

@@ -1,7 +1,7 @@
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { cachedOf, evaluateCell, findRow, formulaOf } from '../../exports/xlsx/workbook-reader.testing';
-import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
+import { buildTestApp, DEMO, signIn, binary } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 let app: Awaited<ReturnType<typeof buildTestApp>>['app'];
@@ -12,11 +12,6 @@ beforeAll(async () => {
 });
 
 const costing = async (agent: Agent = owner) => (await agent.get('/api/batches/1/costing')).body.costing;
-const binary = (res: { on: (e: string, f: (c?: Buffer) => void) => void }, cb: (e: Error | null, b: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c?: Buffer) => chunks.push(c!));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 
 describe('costing sheet: who may see it', () => {
   it.each([DEMO.cutter, DEMO.machinist, DEMO.finisher])('refuses %s with 403 on the sheet, workbook, trims and settings', async (email) => {

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import { RollEntity, TrimEntity } from '../../server/entities';
 import { cachedOf, findRow, formulaOf } from '../../exports/xlsx/workbook-reader.testing';
-import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
+import { buildTestApp, DEMO, signIn, binary } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 let app: Awaited<ReturnType<typeof buildTestApp>>['app'];
@@ -13,11 +13,6 @@ beforeAll(async () => {
   ({ app, ds } = await buildTestApp());
   owner = await signIn(app, DEMO.owner);
 });
-const binary = (res: { on: (e: string, f: (c?: Buffer) => void) => void }, cb: (e: Error | null, b: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c?: Buffer) => chunks.push(c!));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 
 describe('suppliers and purchase orders', () => {
   it('is owner-only: the cutter gets 403 on suppliers, needs, orders and the outbox', async () => {

@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { QueueEvents } from 'bullmq';
+import { Queue, QueueEvents } from 'bullmq';
 import { afterAll, describe, expect, it } from 'vitest';
 import { openDatabase } from '../../server/db/data-source';
 import { MarkerEntity } from '../../server/entities';
@@ -10,6 +10,9 @@ import type { MarkerJobInput } from '../../server/modules/markers/marker-input';
 import { createRedisMarkerQueue, MARKER_QUEUE_NAME, markerJobId, redisConnection } from '../../server/modules/markers/marker-queue-redis';
 import { mm } from '../../shared/units/units';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
+import { createRedisJobRunner, JOB_QUEUE_NAME } from '../../server/jobs/job-runner';
+import { binary, buildTestApp, DEMO, signIn } from '../fixtures/test-app';
+
 
 const redisUrl = process.env.TEST_REDIS_URL;
 const dir = mkdtempSync(join(tmpdir(), 'seamrun-queue-'));
@@ -62,6 +65,52 @@ const job: MarkerJobInput = {
 };
 
 describe.skipIf(!redisUrl)('job queue on Redis with two worker processes', () => {
+  it('runs the cut-order solve, the documents and mail on a worker process, with the same answers', async () => {
+    const target = process.env.TEST_DATABASE_URL ? await freshDatabaseTarget() : join(dir, 'jobs.sqlite');
+    const w = await startWorker(target);
+    const jobs = createRedisJobRunner(redisUrl!);
+    const { app, ds: appDs } = await buildTestApp({ jobs });
+    const owner = await signIn(app, DEMO.owner);
+
+    const b = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 2, S: 4, M: 6, L: 5, XL: 3 }, dueDate: '2027-01-15' });
+    const planned = await owner.post(`/api/batches/${b.body.batch.id}/cut-plan`).send({ fabricId: 1, maxPlies: 10, maxGarmentsPerMarker: 3, overcutPercent: 0 });
+    expect(planned.status).toBe(201);
+    // The same solve in this process gives the same lays (the core is deterministic).
+    const local = await buildTestApp();
+    const localOwner = await signIn(local.app, DEMO.owner);
+    const b2 = await localOwner.post('/api/batches').send({ styleId: 1, quantities: { XS: 2, S: 4, M: 6, L: 5, XL: 3 }, dueDate: '2027-01-15' });
+    const plannedHere = await localOwner.post(`/api/batches/${b2.body.batch.id}/cut-plan`).send({ fabricId: 1, maxPlies: 10, maxGarmentsPerMarker: 3, overcutPercent: 0 });
+    const shape = (p: { lays: { ratio: unknown; plies: number }[]; fabricUsedMm: number }) => ({ lays: p.lays.map((l) => [l.ratio, l.plies]), used: p.fabricUsedMm });
+    expect(shape(planned.body.cutPlan)).toEqual(shape(plannedHere.body.cutPlan));
+    await local.ds.destroy();
+
+    const xlsx = await owner.get(`/api/batches/${b.body.batch.id}/marker-list.xlsx`).buffer(true).parse(binary);
+    expect(xlsx.status).toBe(200);
+    expect((xlsx.body as Buffer).subarray(0, 2).toString()).toBe('PK');
+    const costing = await owner.get('/api/batches/1/costing.xlsx').buffer(true).parse(binary);
+    expect(costing.status).toBe(200);
+    const made = await owner.post('/api/purchasing/batches/1/orders').send({});
+    expect(made.status).toBe(201);
+    const po = made.body.orders[0];
+    expect((await owner.post(`/api/purchasing/orders/${po.id}/send`)).status).toBe(200);
+    // The worker handed the message to this process's local outbox, which filed it.
+    const { messages } = (await owner.get('/api/mail/outbox')).body;
+    expect(messages.length).toBeGreaterThan(0);
+
+    const q = new Queue(JOB_QUEUE_NAME, { connection: redisConnection(redisUrl!) });
+    const done = await q.getJobs(['completed']);
+    const ranOnWorker = new Set(done.filter((j) => j.processedBy?.endsWith(String(w.pid))).map((j) => j.name));
+    expect(ranOnWorker).toContain('cut-order');
+    expect(ranOnWorker).toContain('marker-list.xlsx');
+    expect(ranOnWorker).toContain('costing-sheet.xlsx');
+    expect(ranOnWorker).toContain('mail');
+    expect(ranOnWorker).toContain('purchase-order.xlsx');
+    await q.close();
+    await jobs.stop();
+    await appDs.destroy();
+    w.kill('SIGTERM');
+  }, 120_000);
+
   it('retries a job whose worker is killed mid-run and finishes it once', async () => {
     const target = process.env.TEST_DATABASE_URL ? await freshDatabaseTarget() : join(dir, 'queue.sqlite');
     const ds = await openDatabase(target);

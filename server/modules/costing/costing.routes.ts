@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import { costingQuery, createTrimInput, updateCostingSettingsInput, updateTrimInput, type LabourBasis, type TrimDto } from '../../../shared/schemas/costing';
 import { idParam } from '../../../shared/schemas/common';
-import { buildCostingSheetXlsx } from '../../../exports/xlsx/costing-sheet.xlsx';
 import type { SupplierEntity, TrimEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
@@ -32,7 +31,7 @@ export function batchCostingRoutes(service: CostingService, ctx: ModuleContext) 
   r.get('/:id/costing.xlsx', requirePermission('costs:read'), validate({ params: idParam, query: costingQuery }), async (req, res) => {
     const basis = (req.query as { labourBasis: LabourBasis }).labourBasis;
     const { dto, input } = await service.build(actorOf(req).studioId, Number(req.params.id), basis, ctx.now());
-    const buffer = await buildCostingSheetXlsx(input);
+    const buffer = await ctx.jobs.run('costing-sheet.xlsx', input);
     res.setHeader('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
     res.setHeader('Content-Disposition', `attachment; filename="costing-${dto.batch.code}.xlsx"`);
     res.send(buffer);

@@ -1,4 +1,4 @@
-import { allocateRolls, planCutOrder, type SizeRatio } from '@planning';
+import type { allocateRolls, planCutOrder, SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
 import type { DataSource } from 'typeorm';
 import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
@@ -11,6 +11,8 @@ import { createMarkerRepository } from '../markers/marker.repository';
 import { loadStylePieces } from '../markers/style-pieces';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { createFabricRepository } from './fabric.repository';
+import { ratioKey } from './cut-order-job';
+import type { JobRunner } from '../../jobs/job-runner';
 
 /**
  * Utilisation assumed when a ratio has no stored marker: length ≈ piece area ÷ (width × 0.75). Common
@@ -27,7 +29,6 @@ export interface StoredCutPlanResult {
   assumedUtilisation: number;
 }
 
-const ratioKey = (ratio: SizeRatio, sizes: string[]) => sizes.map((s) => `${s}${ratio[s] ?? 0}`).join('|');
 
 /**
  * Spreading mode of a lay: one-way (napped or directional) fabric is spread face up, one way, so every
@@ -44,7 +45,7 @@ export function spreadingModeFor(fabric: Pick<FabricEntity, 'isDirectional'>): s
  * allocation (shade lots kept apart) for the marker list per roll. Earlier unstarted plans of the batch
  * are superseded; a plan with a cut lay cannot be replaced.
  */
-export async function planBatchCut(ds: DataSource, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput) {
+export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput) {
   const batch = await createBatchRepository(ds).get(studioId, batchId);
   if (!batch?.style) throw notFound('Batch');
   const sizes = batch.style.sizeRun;
@@ -66,25 +67,22 @@ export async function planBatchCut(ds: DataSource, plans: CutPlanRepository, stu
     const prev = stored.get(k);
     if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm });
   }
-  const estimate = (ratio: SizeRatio) => sizes.reduce((a, s) => a + (ratio[s] ?? 0) * (areas[s] ?? 0), 0) / (fabric.widthMm * ASSUMED_UTILISATION);
-  const markerLength = (ratio: SizeRatio) => mm(stored.get(ratioKey(ratio, sizes))?.length ?? estimate(ratio));
-  let plan: ReturnType<typeof planCutOrder>;
-  try {
-    plan = planCutOrder({
+  // The solve is pure: it runs here, or on a job worker when REDIS_URL is set (server/jobs).
+  const solved = await jobs.run('cut-order', {
+    order: {
       sizes, quantities: remaining, maxPlies: Math.min(input.maxPlies, fabric.maxPlies), maxGarmentsPerMarker: input.maxGarmentsPerMarker,
       maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
       overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
-      markerLength, nodeBudget: 200_000,
-    });
-  } catch (err) {
-    if (err instanceof RangeError) throw badRequest(`maxMarkerLengthMm: ${err.message}`, { maxMarkerLengthMm: err.message });
-    throw err;
-  }
-  const allocation = allocateRolls({
-    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength })),
-    rolls: rolls.map((r) => ({ id: String(r.id), length: mm(r.remainingMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
-    endAllowance: plan.endAllowance,
+      nodeBudget: 200_000,
+    },
+    storedLengthsMm: Object.fromEntries([...stored].map(([k, v]) => [k, v.length])),
+    garmentAreasMm2: areas,
+    widthMm: fabric.widthMm,
+    assumedUtilisation: ASSUMED_UTILISATION,
+    rolls: rolls.map((r) => ({ id: String(r.id), lengthMm: r.remainingMm, shadeLot: r.shadeLot, widthMm: r.widthMm })),
   });
+  if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
+  const { plan, allocation } = solved;
   const lengthSources = plan.lays.map((l) => {
     const hit = stored.get(ratioKey(l.ratio, sizes));
     return hit ? { ratio: l.ratio, source: 'marker' as const, markerId: hit.id } : { ratio: l.ratio, source: 'estimate' as const };

@@ -11,7 +11,7 @@ export const cuttingModule: ApiModule = {
     const fabrics = createFabricRepository(ctx.ds);
     const plans = createCutPlanRepository(ctx.ds);
     api.use('/fabrics', fabricRoutes(fabrics, ctx.audit, { maxUploadBytes: ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024, now: ctx.now }));
-    const { batches, lays } = cuttingRoutes(ctx.ds, plans, fabrics, ctx.audit, ctx.now);
+    const { batches, lays } = cuttingRoutes(ctx.ds, ctx.jobs, plans, fabrics, ctx.audit, ctx.now);
     api.use('/batches', batches);
     api.use('/lays', lays);
   },

@@ -1,10 +1,6 @@
 import { Router, type Response } from 'express';
-import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
-import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
-import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
-import { buildBundleRegisterXlsx } from '@exports/xlsx/bundle-register.xlsx';
-import { buildMarkerListXlsx } from '@exports/xlsx/marker-list.xlsx';
 import type { DataSource } from 'typeorm';
+import type { JobRunner } from '../../jobs/job-runner';
 import { idParam } from '../../../shared/schemas/common';
 import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
@@ -23,7 +19,7 @@ const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
 const send = (res: Response, bytes: Buffer, type: string, name: string) => res.type(type).attachment(name).send(bytes);
 
 /** Cut plans of batches, the cutter's lays and their documents. */
-export function cuttingRoutes(ds: DataSource, plans: CutPlanRepository, fabrics: FabricRepository, audit: AuditRepository, now: () => Date) {
+export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, fabrics: FabricRepository, audit: AuditRepository, now: () => Date) {
   const batches = Router();
   const lays = Router();
   const batchRepo = createBatchRepository(ds);
@@ -57,18 +53,18 @@ export function cuttingRoutes(ds: DataSource, plans: CutPlanRepository, fabrics:
   batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
     const actor = actorOf(req);
     const batchId = Number(req.params.id);
-    const saved = await planBatchCut(ds, plans, actor.studioId, batchId, req.body);
+    const saved = await planBatchCut(ds, jobs, plans, actor.studioId, batchId, req.body);
     const dto = (await planDto(actor.studioId, batchId))!;
     await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
     res.status(201).json({ cutPlan: dto });
   });
   batches.get('/:id/marker-list.xlsx', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const input = await docsFor(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildMarkerListXlsx(input), XLSX, `marker-list-${input.batch.code}.xlsx`);
+    send(res, await jobs.run('marker-list.xlsx', input), XLSX, `marker-list-${input.batch.code}.xlsx`);
   });
   batches.get('/:id/marker-list.pdf', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const input = await docsFor(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildMarkerListPdf(input), 'application/pdf', `marker-list-${input.batch.code}.pdf`);
+    send(res, await jobs.run('marker-list.pdf', input), 'application/pdf', `marker-list-${input.batch.code}.pdf`);
   });
   batches.get('/:id/bundles', requirePermission('bundles:read'), validate({ params: idParam }), async (req, res) => {
     const studioId = actorOf(req).studioId;
@@ -85,12 +81,12 @@ export function cuttingRoutes(ds: DataSource, plans: CutPlanRepository, fabrics:
   };
   batches.get('/:id/bundle-register.xlsx', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const input = await registerFor(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildBundleRegisterXlsx(input), XLSX, `bundle-register-${input.batch.code}.xlsx`);
+    send(res, await jobs.run('bundle-register.xlsx', input), XLSX, `bundle-register-${input.batch.code}.xlsx`);
   });
   batches.get('/:id/bundle-tickets.pdf', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const batchId = Number(req.params.id);
     const input = await registerFor(actorOf(req).studioId, batchId);
-    send(res, await buildBundleTicketsPdf(withQr(input, batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}.pdf`);
+    send(res, await jobs.run('bundle-tickets.pdf', withQr(input, batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}.pdf`);
   });
 
   lays.get('/', requirePermission('cutting:work'), async (req, res) => {
@@ -133,22 +129,22 @@ export function cuttingRoutes(ds: DataSource, plans: CutPlanRepository, fabrics:
   };
   lays.get('/:id/cut-ticket.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
     const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildCutTicketPdf(input), 'application/pdf', `cut-ticket-${input.batch.code}-lay-${lay.seq}.pdf`);
+    send(res, await jobs.run('cut-ticket.pdf', input), 'application/pdf', `cut-ticket-${input.batch.code}-lay-${lay.seq}.pdf`);
   });
   lays.get('/:id/marker-list.xlsx', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
     const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildMarkerListXlsx(input), XLSX, `marker-list-${input.batch.code}-lay-${lay.seq}.xlsx`);
+    send(res, await jobs.run('marker-list.xlsx', input), XLSX, `marker-list-${input.batch.code}-lay-${lay.seq}.xlsx`);
   });
   lays.get('/:id/marker-list.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
     const { lay, input } = await layDoc(actorOf(req).studioId, Number(req.params.id));
-    send(res, await buildMarkerListPdf(input), 'application/pdf', `marker-list-${input.batch.code}-lay-${lay.seq}.pdf`);
+    send(res, await jobs.run('marker-list.pdf', input), 'application/pdf', `marker-list-${input.batch.code}-lay-${lay.seq}.pdf`);
   });
   lays.get('/:id/bundle-tickets.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
     const studioId = actorOf(req).studioId;
     const lay = await plans.getLay(studioId, Number(req.params.id));
     if (!lay) throw notFound('Lay');
     const input = await registerFor(studioId, lay.batchId, lay.id);
-    send(res, await buildBundleTicketsPdf(withQr(input, lay.batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}-lay-${lay.seq}.pdf`);
+    send(res, await jobs.run('bundle-tickets.pdf', withQr(input, lay.batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}-lay-${lay.seq}.pdf`);
   });
   return { batches, lays };
 }

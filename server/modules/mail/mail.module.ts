@@ -14,7 +14,7 @@ export const mailModule: ApiModule = {
   name: 'mail',
   register(api, ctx) {
     const repo = createMailRepository(ctx.ds);
-    const service = createMailService(repo, { smtpUrl: ctx.env.SMTP_URL || undefined, from: ctx.env.MAIL_FROM ?? 'Seamrun <no-reply@seamrun.local>' });
+    const service = createMailService(repo, { smtpUrl: ctx.env.SMTP_URL || undefined, from: ctx.env.MAIL_FROM ?? 'Seamrun <no-reply@seamrun.local>', jobs: ctx.jobs });
     ctx.services.set('mail', service);
     api.use('/mail', mailRoutes(repo, service, ctx));
   },

@@ -1,7 +1,8 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
-import nodemailer, { type Transporter } from 'nodemailer';
 import { SMTPServer } from 'smtp-server';
+import type { JobRunner } from '../../jobs/job-runner';
+import { closeMailTransports, type MailTarget } from './mail-job';
 import type { MailRepository } from './mail.repository';
 
 /** What another module hands to ctx.services.get('mail').send. */
@@ -31,11 +32,10 @@ const addressText = (a: AddressObject | AddressObject[] | undefined) =>
  * it, a local SMTP server (smtp-server, 127.0.0.1 only) receives every message, parses it with mailparser
  * and stores it in the outbox, so development, the demo and tests never reach anyone's inbox.
  */
-export function createMailService(repo: MailRepository, opts: { smtpUrl?: string; from: string }): MailService {
+export function createMailService(repo: MailRepository, opts: { smtpUrl?: string; from: string; jobs: JobRunner }): MailService {
   let server: SMTPServer | null = null;
   let port: number | null = null;
   let starting: Promise<number> | null = null;
-  let transport: Transporter | null = null;
 
   function startLocal(wanted: number): Promise<number> {
     if (starting) return starting;
@@ -75,25 +75,21 @@ export function createMailService(repo: MailRepository, opts: { smtpUrl?: string
     return starting;
   }
 
-  async function transporter(): Promise<Transporter> {
-    if (transport) return transport;
-    if (opts.smtpUrl) {
-      transport = nodemailer.createTransport(opts.smtpUrl);
-    } else {
-      if (!starting) {
-        await startLocal(0);
-        // Started lazily (tests, createApp without start): never keep the process alive for it.
-        server?.server.unref();
-      }
-      const p = await starting!;
-      transport = nodemailer.createTransport({ host: '127.0.0.1', port: p, secure: false, ignoreTLS: true });
+  /** Where messages go: SMTP_URL, or the local outbox server (started on first use when not yet). */
+  async function target(): Promise<MailTarget> {
+    if (opts.smtpUrl) return { url: opts.smtpUrl };
+    if (!starting) {
+      await startLocal(0);
+      // Started lazily (tests, createApp without start): never keep the process alive for it.
+      server?.server.unref();
     }
-    return transport;
+    return { host: '127.0.0.1', port: await starting! };
   }
 
   async function send(mail: OutgoingMail) {
-    const t = await transporter();
-    const info = await t.sendMail({
+    // Handing the message over is a job: in this process, or on a job worker with REDIS_URL.
+    const { messageId } = await opts.jobs.run('mail', {
+      target: await target(),
       from: opts.from,
       to: mail.to,
       subject: mail.subject,
@@ -101,7 +97,6 @@ export function createMailService(repo: MailRepository, opts: { smtpUrl?: string
       attachments: mail.attachments,
       headers: { [STUDIO_HEADER]: String(mail.studioId) },
     });
-    const messageId = String(info.messageId ?? '');
     if (!opts.smtpUrl) {
       const stored = await repo.byMessageId(messageId);
       if (stored) return { id: stored.id, messageId };
@@ -119,8 +114,7 @@ export function createMailService(repo: MailRepository, opts: { smtpUrl?: string
   }
 
   async function close() {
-    transport?.close();
-    transport = null;
+    closeMailTransports();
     const s = server;
     server = null;
     starting = null;

@@ -42,7 +42,7 @@ export const payModule: ApiModule = {
       secretKey
         ? { testMode: false, message: 'Live payments: money moves to each person’s account.' }
         : { testMode: true, message: 'Test payments: no money moves.' };
-    api.use('/pay', payRoutes(pay, mode));
+    api.use('/pay', payRoutes(pay, mode, ctx.jobs));
   },
   async start(ctx) {
     if (!ctx.env.PAYMENTS_SECRET_KEY) await ensureFake(ctx);

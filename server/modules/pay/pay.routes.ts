@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { buildPaySheetXlsx } from '../../../exports/xlsx/pay-sheet.xlsx';
+import type { JobRunner } from '../../jobs/job-runner';
 import { periodQuery } from '../../../shared/schemas/floor';
 import { approvePayPeriodInput, payoutParams, payPersonInput, type PayModeDto } from '../../../shared/schemas/pay';
 import { actorOf, requirePermission } from '../../auth/require';
@@ -7,7 +7,7 @@ import { validate } from '../../middleware/validate';
 import type { PayService } from './pay.service';
 
 /** Routes under /api/pay: the owner's pay periods and payouts, and each person's own pay. */
-export function payRoutes(pay: PayService, mode: () => PayModeDto) {
+export function payRoutes(pay: PayService, mode: () => PayModeDto, jobs: JobRunner) {
   const r = Router();
   r.get('/mode', requirePermission('pay:manage'), (_req, res) => {
     res.json(mode());
@@ -34,7 +34,7 @@ export function payRoutes(pay: PayService, mode: () => PayModeDto) {
   });
   r.get('/periods/:id/sheet.xlsx', requirePermission('pay:manage'), validate({ params: payoutParams }), async (req, res) => {
     const { period, studio, lines, approver } = await pay.sheetInput(actorOf(req).studioId, Number(req.params.id));
-    const bytes = await buildPaySheetXlsx({
+    const bytes = await jobs.run('pay-sheet.xlsx', {
       studioName: studio.name,
       dateIso: new Date(period.createdAt).toISOString(),
       locale: 'en-GB',

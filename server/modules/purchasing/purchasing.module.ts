@@ -18,6 +18,7 @@ export const purchasingModule: ApiModule = {
       repo,
       costing: () => ctx.services.get('costing') as CostingService,
       mail: () => ctx.services.get('mail') as MailService,
+      jobs: ctx.jobs,
       now: ctx.now,
     });
     api.use('/purchasing', purchasingRoutes(repo, service, ctx));

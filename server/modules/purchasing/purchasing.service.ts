@@ -1,6 +1,6 @@
 import { addDays, format } from 'date-fns';
 import type { CreateOrderInput, NeedDto, OrderableItemDto, ReceiveOrderInput } from '../../../shared/schemas/purchasing';
-import { buildPurchaseOrderXlsx } from '../../../exports/xlsx/purchase-order.xlsx';
+import type { JobRunner } from '../../jobs/job-runner';
 import type { PurchaseOrderEntity, RollEntity } from '../../entities';
 import type { PurchaseOrderLine } from '../../entities/purchase-order.entity';
 import { badRequest, conflict, notFound } from '../../errors';
@@ -23,6 +23,7 @@ export function createPurchasingService(deps: {
   repo: PurchasingRepository;
   costing: () => CostingService;
   mail: () => MailService;
+  jobs: JobRunner;
   now: () => Date;
 }) {
   const { repo } = deps;
@@ -108,7 +109,7 @@ export function createPurchasingService(deps: {
 
   async function workbook(studioId: number, order: PurchaseOrderEntity) {
     const [studio, supplier] = await Promise.all([repo.studio(studioId), repo.supplier(studioId, order.supplierId)]);
-    return buildPurchaseOrderXlsx({
+    return deps.jobs.run('purchase-order.xlsx', {
       studioName: studio.name,
       dateIso: deps.now().toISOString(),
       locale: localeForCurrency(studio.currency),
