@@ -299,11 +299,14 @@ async function main() {
         const batchId = info.batches[b++];
         const rate = mode === 'paced' ? PACED_RATE : undefined;
         const cpu0 = cpuMs(child.pid);
+        const client0 = process.cpuUsage();
         const r = await drive(info.port, cookies, batchId, info.ops, { concurrency, seconds: SECONDS_PER_LEVEL, rate });
         const cpu1 = cpuMs(child.pid);
+        const client1 = process.cpuUsage(client0);
+        const clientCpuMsPerLog = Number(((client1.user + client1.system) / 1000 / r.requests).toFixed(3));
         const serverCpuMsPerLog = cpu0 === null || cpu1 === null ? null : Number(((cpu1 - cpu0) / r.requests).toFixed(3));
         const { lost, doubled } = await compare(target, batchId, r.acked);
-        console.log(JSON.stringify({ database, mode, concurrency, ...(rate ? { offered: rate } : {}), requests: r.requests, rps: Math.round(r.rps), p50: Number(r.p50.toFixed(2)), p99: Number(r.p99.toFixed(2)), errors: r.errors, lost, doubled, replays: r.replays, serverCpuMsPerLog }));
+        console.log(JSON.stringify({ database, mode, concurrency, ...(rate ? { offered: rate } : {}), requests: r.requests, rps: Math.round(r.rps), p50: Number(r.p50.toFixed(2)), p99: Number(r.p99.toFixed(2)), errors: r.errors, lost, doubled, replays: r.replays, serverCpuMsPerLog, clientCpuMsPerLog }));
       }
     }
   } finally {

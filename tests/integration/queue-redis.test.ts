@@ -108,7 +108,11 @@ describe.skipIf(!redisUrl)('job queue on Redis with two worker processes', () =>
     await q.close();
     await jobs.stop();
     await appDs.destroy();
-    w.kill('SIGTERM');
+    // Gone before the next test: a closing worker still holding a blocking fetch would take its job.
+    await new Promise((r) => {
+      w.once('exit', r);
+      w.kill('SIGTERM');
+    });
   }, 120_000);
 
   it('retries a job whose worker is killed mid-run and finishes it once', async () => {
@@ -149,6 +153,14 @@ describe.skipIf(!redisUrl)('job queue on Redis with two worker processes', () =>
     expect(done.utilisation).toBeGreaterThan(0.5);
     expect(completed.filter((id) => id === markerJobId(marker.id))).toHaveLength(1);
     expect(active.filter((id) => id === markerJobId(marker.id)).length).toBeGreaterThanOrEqual(2);
+
+    // Queued again (a resumed or re-run marker): the finished job kept for the same row must not swallow it.
+    completed.length = 0;
+    await ds.getRepository(MarkerEntity).update({ id: marker.id }, { status: 'queued' });
+    queue.enqueue(1, marker.id, { ...job, seconds: 1 });
+    const again = Date.now();
+    while (!completed.includes(markerJobId(marker.id)) && Date.now() - again < 60_000) await new Promise((r) => setTimeout(r, 200));
+    expect(completed).toContain(markerJobId(marker.id));
     await q.close();
     await events.close();
     await queue.stop();

@@ -38,13 +38,18 @@ export function createRedisMarkerQueue(redisUrl: string): MarkerQueue {
   events.on('failed', forget);
   return {
     enqueue(studioId, id, job) {
-      void queue.add('marker', { studioId, id, job }, {
-        jobId: markerJobId(id),
-        removeOnComplete: 1000,
-        removeOnFail: 1000,
-        attempts: 3,
-        backoff: { type: 'fixed', delay: 1000 },
-      });
+      void (async () => {
+        // A finished run of the same marker row, kept for inspection, would make BullMQ ignore this one.
+        const previous = await queue.getJob(markerJobId(id));
+        if (previous && ((await previous.isCompleted()) || (await previous.isFailed()))) await previous.remove();
+        await queue.add('marker', { studioId, id, job }, {
+          jobId: markerJobId(id),
+          removeOnComplete: 1000,
+          removeOnFail: 1000,
+          attempts: 3,
+          backoff: { type: 'fixed', delay: 1000 },
+        });
+      })().catch((e: unknown) => console.error(`Could not queue marker ${id}: ${e instanceof Error ? e.message : String(e)}`));
     },
     progress: (id) => live.get(id),
     isRunning: (id) => live.has(id),
