@@ -103,13 +103,15 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await shot(page, 'floor-phone-scanned-logged');
 
     // The network drops: the log waits on the phone with its key, and goes once the network is back.
-    await page.getByLabel('Bundle number').fill('1');
+    await page.getByLabel('Bundle number').fill('3');
     await page.getByRole('button', { name: 'Find bundle' }).click();
-    await expect.poll(() => page.getByText('Bundle 1 · size').isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('Bundle 3 · size').isVisible()).toBe(true);
     const opsOnline = Number(await page.getByTestId('today-ops').textContent());
+    // An operation nobody has logged on this bundle yet.
+    await page.locator('label:not(:has-text("Done by")) input[name="operation"]').first().check();
     await ctx.setOffline(true);
     await page.getByRole('button', { name: 'Log done' }).click();
-    await expect.poll(() => page.getByText(/No network: bundle 1 .* saved on this phone/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/No network: bundle 3 .* saved on this phone/).isVisible()).toBe(true);
     await expect.poll(() => page.getByText('1 log waiting on this phone for the network.').isVisible()).toBe(true);
     expect(await page.evaluate(() => JSON.parse(localStorage.getItem('seamrun.floor.outbox') ?? '[]').length)).toBe(1);
     await shot(page, 'floor-phone-offline-queued');
@@ -122,7 +124,7 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
 
     const after = await progressOf(owner);
     const done = (p: typeof before) => p.operations.reduce((a, o) => a + o.bundlesDone, 0);
-    // Bundles 3 and 2, and 1 sent after the network came back: three logs, none doubled.
+    // Bundles 3 and 2, and bundle 3 again, sent after the network came back: three logs, none doubled.
     expect(done(after)).toBe(done(before) + 3);
     await owner.getByRole('link', { name: 'Floor' }).click();
     await expect.poll(() => owner.getByRole('heading', { name: 'Floor progress' }).isVisible()).toBe(true);
