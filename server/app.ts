@@ -41,6 +41,20 @@ export interface AppDeps {
   jobs?: JobRunner;
 }
 
+/** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
+const RENEW_SESSION_EVERY_MS = 5 * 60 * 1000;
+
+/** Mark a signed-in session changed once per renewal period, so express-session re-issues its cookie. */
+const renewSession: express.RequestHandler = (req, _res, next) => {
+  const s = req.session as (typeof req.session & { passport?: { user?: unknown }; renewal?: number }) | undefined;
+  const period = Math.floor(Date.now() / RENEW_SESSION_EVERY_MS);
+  if (s?.passport?.user && s.renewal !== period) {
+    s.renewal = period;
+    s.touch();
+  }
+  next();
+};
+
 /** Build the Express app. Never listens: server/index.ts does, tests use supertest. */
 export function createApp(deps: AppDeps): Express {
   const { ds, env } = deps;
@@ -89,7 +103,9 @@ export function createApp(deps: AppDeps): Express {
       store: new DatabaseSessionStore(createSessionRepository(ds)),
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      // Rolling expiry, renewed once per RENEW_SESSION_EVERY_MS of use (below) rather than a new signed
+      // cookie on every answer: a phone logging bundles all day stays signed in at a fraction of the cost.
+      rolling: false,
       proxy: env.TRUST_PROXY,
       cookie: {
         httpOnly: true,
@@ -99,6 +115,7 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
+  api.use(renewSession);
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(csrfGuard);

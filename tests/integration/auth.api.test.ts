@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { buildTestApp, DEMO, DEMO_PASSWORD, signIn } from '../fixtures/test-app';
 
 let app: Awaited<ReturnType<typeof buildTestApp>>['app'];
@@ -23,6 +23,27 @@ describe('auth contract', () => {
     expect(cookie).toMatch(/seamrun\.sid=/);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
+  });
+
+  it('moves a signed-in session on every five minutes of use, not with a new cookie on every answer', async () => {
+    const agent = await signIn(app, DEMO.machinist);
+    const first = await agent.get('/api/auth/me');
+    const second = await agent.get('/api/auth/me');
+    expect(first.status).toBe(200);
+    expect(second.headers['set-cookie']).toBeUndefined();
+    const later = Date.now() + 5 * 60 * 1000;
+    const clock = vi.spyOn(Date, 'now').mockReturnValue(later);
+    try {
+      const renewed = await agent.get('/api/auth/me');
+      expect(renewed.status).toBe(200);
+      const cookie = String(renewed.headers['set-cookie']);
+      expect(cookie).toMatch(/seamrun\.sid=/);
+      const expires = new Date(/Expires=([^;]+)/i.exec(cookie)![1]).getTime();
+      // The 12-hour expiry counts from this request, to the second of the cookie's date.
+      expect(Math.abs(expires - (later + 12 * 60 * 60 * 1000))).toBeLessThan(2000);
+    } finally {
+      clock.mockRestore();
+    }
   });
 
   it('refuses bad credentials with 401 and the error envelope', async () => {
