@@ -59,7 +59,7 @@ describe('database session store with a one-second memory', () => {
 
   it('never answers an expired session from memory, and reads every time with cacheMs 0', async () => {
     let t = 1_000_000;
-    const { repo, reads } = fakeRepo();
+    const { repo } = fakeRepo();
     const store = new DatabaseSessionStore(repo, () => t, 1000);
     await set(store, 'a', cookie(t + 500));
     t += 600;
