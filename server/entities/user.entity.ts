@@ -48,6 +48,13 @@ export class UserEntity {
   @Column({ type: 'integer', default: 1 })
   sessionVersion: number;
 
+  /**
+   * The person's connected account at the payments service (e.g. `acct_…`), set by the owner; live
+   * payouts go there. Empty: test payouts use a derived one, live payouts are refused until it is set.
+   */
+  @Column({ type: 'varchar', length: 64, default: '' })
+  payoutAccount: string;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

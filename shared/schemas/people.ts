@@ -21,10 +21,18 @@ export const createPersonInput = z
   });
 export type CreatePersonInput = z.infer<typeof createPersonInput>;
 
+/** A payments-service connected account id: letters, digits and _ (e.g. acct_1AbC…); empty clears it. */
+export const payoutAccountField = z
+  .string()
+  .trim()
+  .max(64, 'At most 64 characters')
+  .regex(/^([A-Za-z0-9_]{3,64})?$/, 'Letters, digits and _ only, as the payments service gives it');
+
 export const updatePersonInput = z.object({
   role: z.enum(ROLES).optional(),
   active: z.boolean().optional(),
   name: z.string().trim().min(1).max(120).optional(),
+  payoutAccount: payoutAccountField.optional(),
 });
 export type UpdatePersonInput = z.infer<typeof updatePersonInput>;
 
@@ -36,5 +44,6 @@ export const personSchema = z.object({
   active: z.boolean(),
   hasPin: z.boolean(),
   mustChangePassword: z.boolean(),
+  payoutAccount: z.string(),
 });
 export type PersonDto = z.infer<typeof personSchema>;

@@ -131,6 +131,19 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await expect.poll(() => owner.getByText('Work in progress per operation').isVisible()).toBe(true);
     await shot(owner, 'floor-owner-progress');
 
+    // The owner records where Achieng is paid; a bad account id is refused with the reason.
+    await owner.getByRole('link', { name: 'People' }).click();
+    const account = owner.getByLabel('Payments account of Achieng Mwende');
+    await account.fill('acct 1');
+    await owner.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => owner.getByRole('alert').first().textContent()).toContain('Letters, digits and _ only');
+    await account.fill('acct_1AchiengDemo');
+    await owner.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => owner.getByRole('button', { name: 'Save' }).count()).toBe(0);
+    await owner.reload();
+    await expect.poll(() => owner.getByLabel('Payments account of Achieng Mwende').inputValue()).toBe('acct_1AchiengDemo');
+    await shot(owner, 'owner-people-payments-account');
+
     await owner.getByRole('link', { name: 'Pay' }).click();
     await expect.poll(() => owner.getByText('Test payments: no money moves.').isVisible()).toBe(true);
     await expect.poll(() => owner.getByRole('table', { name: 'Pay preview' }).textContent()).toContain('Achieng Mwende');

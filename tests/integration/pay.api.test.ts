@@ -98,10 +98,36 @@ describe('pay periods', () => {
     expect(retried).toMatchObject({ status: 'paid', attempts: 2, error: '' });
     expect(fake.transfers.filter((t) => t.destination === payeeAccount(1, second.userId))).toHaveLength(1);
 
-    for (const l of rest.slice(1)) await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: l.userId });
+    // A person whose own payments account the owner has set is paid into it.
+    const third = rest[1];
+    const badAccount = await owner.patch(`/api/users/${third.userId}`).send({ payoutAccount: 'acct 1; DROP' });
+    expect(badAccount.status).toBe(400);
+    expect(badAccount.body.error.fields.payoutAccount).toMatch(/Letters, digits and _/);
+    expect((await owner.patch(`/api/users/${third.userId}`).send({ payoutAccount: 'acct_1TamarindTest' })).status).toBe(200);
+    expect((await machinist.patch(`/api/users/${third.userId}`).send({ payoutAccount: 'acct_mine' })).status).toBe(403);
+    await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: third.userId });
+    expect(fake.transfers.filter((t) => t.destination === 'acct_1TamarindTest')).toHaveLength(1);
+
+    for (const l of rest.slice(2)) await owner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: l.userId });
     const done = (await owner.get(`/api/pay/periods/${period.id}`)).body.period;
     expect(done.status).toBe('paid');
     expect(done.payouts.every((p: { status: string }) => p.status === 'paid')).toBe(true);
+  });
+
+  it('refuses a live payout to a person with no payments account, before anything is sent', async () => {
+    const live = await openDatabase(await freshDatabaseTarget());
+    await seedDemoStudio(live, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
+    const app = createApp({ ds: live, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000', PAYMENTS_SECRET_KEY: 'sk_test_not_a_real_key' }), clientDir: '/nonexistent' });
+    const liveOwner = await signIn(app, DEMO.owner);
+    expect((await liveOwner.get('/api/pay/mode')).body.testMode).toBe(false);
+    const period = (await liveOwner.post('/api/pay/periods').send(PERIOD)).body.period;
+    const line = period.lines[0];
+    const res = await liveOwner.post(`/api/pay/periods/${period.id}/payouts`).send({ userId: line.userId });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ payoutAccount: 'Not set for this person' });
+    expect(res.body.error.message).toContain('People page');
+    expect((await liveOwner.get(`/api/pay/periods/${period.id}`)).body.period.payouts).toEqual([]);
+    await live.destroy();
   });
 
   it('exports the approved pay sheet as XLSX with the period total', async () => {

@@ -37,10 +37,11 @@ export const payModule: ApiModule = {
       audit: ctx.audit,
       floor: () => ctx.services.get(FLOOR_PROGRESS_SERVICE) as FloorProgressService,
       payments,
+      live: Boolean(secretKey),
     });
     const mode = () =>
       secretKey
-        ? { testMode: false, message: 'Live payments: money moves to each person’s account.' }
+        ? { testMode: false, message: 'Live payments: money moves to each person’s payments account, set on the People page.' }
         : { testMode: true, message: 'Test payments: no money moves.' };
     api.use('/pay', payRoutes(pay, mode, ctx.jobs));
   },

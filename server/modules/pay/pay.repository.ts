@@ -22,5 +22,6 @@ export function createPayRepository(ds: DataSource) {
     },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
     userName: async (studioId: number, id: number) => (await ds.getRepository(UserEntity).findOneBy({ studioId, id }))?.name ?? '',
+    payoutAccount: async (studioId: number, id: number) => (await ds.getRepository(UserEntity).findOneBy({ studioId, id }))?.payoutAccount ?? '',
   };
 }

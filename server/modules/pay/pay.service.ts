@@ -10,7 +10,7 @@ import type { PayRepository } from './pay.repository';
 
 export type PayService = ReturnType<typeof createPayService>;
 
-/** The payments account a person is paid into. Test mode derives one; real accounts are not stored yet. */
+/** The account a test payout goes to when the owner has not set the person's own (test mode only). */
 export const payeeAccount = (studioId: number, userId: number) => `acct_seamrun_${studioId}_${userId}`;
 
 const presentPayout = (p: PayoutEntity, name: string): PayoutDto => ({
@@ -31,6 +31,8 @@ export function createPayService(deps: {
   audit: AuditRepository;
   floor: () => FloorProgressService;
   payments: () => Promise<PaymentsClient>;
+  /** Live keys: money moves, so every person needs their own account set. */
+  live?: boolean;
 }) {
   const { repo, audit, floor } = deps;
   const inFlight = new Map<string, Promise<PayoutDto>>();
@@ -110,6 +112,10 @@ export function createPayService(deps: {
     const period = await getPeriod(actor.studioId, periodId);
     const line = period.lines.find((l) => l.userId === userId);
     if (!line || line.amountMinor <= 0) throw badRequest('userId: nothing to pay this person in this period', { userId: 'Nothing to pay in this period' });
+    const account = await repo.payoutAccount(actor.studioId, userId);
+    if (!account && deps.live) {
+      throw badRequest(`payoutAccount: ${line.name} has no payments account yet; add it on the People page`, { payoutAccount: 'Not set for this person' });
+    }
     const studio = await repo.studio(actor.studioId);
     let row = await payoutRow(actor, period, userId, line.amountMinor, studio.currency);
     if (row.status === 'paid') return presentPayout(row, line.name);
@@ -121,7 +127,7 @@ export function createPayService(deps: {
     const outcome = await payments.transfer({
       amountMinor: row.amountMinor,
       currency: row.currency,
-      destination: payeeAccount(actor.studioId, userId),
+      destination: account || payeeAccount(actor.studioId, userId),
       description: `Piece-rate pay ${period.fromDay} to ${period.toDay}: ${line.name}`,
       idempotencyKey: row.idempotencyKey,
     });

@@ -10,6 +10,7 @@ export const presentPerson = (u: UserEntity): PersonDto => ({
   active: Boolean(u.active),
   hasPin: Boolean(u.pinHash),
   mustChangePassword: Boolean(u.mustChangePassword),
+  payoutAccount: u.payoutAccount ?? '',
 });
 
 export const presentMe = (u: UserEntity, studio: StudioEntity): UserDto => ({

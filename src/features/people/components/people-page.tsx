@@ -2,7 +2,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import { ROLE_LABELS, ROLES, type Role } from '@shared/auth/permissions';
-import { createPersonInput, type PersonDto } from '@shared/schemas/people';
+import { createPersonInput, payoutAccountField, type PersonDto } from '@shared/schemas/people';
 import { DataTable } from '@/components/ui/data-table';
 import { Field } from '@/components/ui/form';
 import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
@@ -39,12 +39,46 @@ function ActiveCell({ person }: { person: PersonDto }) {
   );
 }
 
+/** The person's payments account, where live piece-rate payouts go; checked here and on the server. */
+function PayoutAccountCell({ person }: { person: PersonDto }) {
+  const update = useUpdatePerson();
+  const [value, setValue] = useState(person.payoutAccount);
+  const [error, setError] = useState('');
+  const changed = value.trim() !== person.payoutAccount;
+  const save = async (e: React.FormEvent) => {
+    e.preventDefault();
+    const parsed = payoutAccountField.safeParse(value);
+    if (!parsed.success) return setError(parsed.error.issues[0].message);
+    setError('');
+    try {
+      await update.mutateAsync({ id: person.id, payoutAccount: parsed.data });
+    } catch (err) {
+      setError(err instanceof ApiError ? (err.fields?.payoutAccount ?? err.message) : 'Could not save');
+    }
+  };
+  return (
+    <form onSubmit={save} className="flex items-center gap-1">
+      <input
+        aria-label={`Payments account of ${person.name}`}
+        className="w-36 rounded border border-calico-300 bg-white px-2 py-1 font-mono text-xs"
+        placeholder="acct_…"
+        value={value}
+        onChange={(e) => setValue(e.target.value)}
+        aria-invalid={Boolean(error)}
+      />
+      {changed ? <button type="submit" className="text-sm underline" disabled={update.isPending}>Save</button> : null}
+      {error ? <span role="alert" className="text-xs text-madder-700">{error}</span> : null}
+    </form>
+  );
+}
+
 const columns = [
   c.accessor('name', { header: 'Name' }),
   c.accessor('email', { header: 'Sign-in' }),
   c.accessor('role', { header: 'Role', cell: (i) => <RoleCell person={i.row.original} /> }),
   c.accessor('active', { header: 'Status', cell: (i) => (i.getValue() ? <Badge tone="teal">active</Badge> : <Badge tone="red">inactive</Badge>) }),
   c.accessor('hasPin', { header: 'PIN', cell: (i) => (i.getValue() ? 'yes' : '—') }),
+  c.accessor('payoutAccount', { header: 'Payments account', enableSorting: false, cell: (i) => <PayoutAccountCell person={i.row.original} /> }),
   c.display({ id: 'actions', header: '', cell: (i) => <ActiveCell person={i.row.original} /> }),
 ];
 
