@@ -44,6 +44,11 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
         <button type="submit" className="btn-primary" disabled={planCut.isPending}>{planCut.isPending ? 'Planning…' : 'Plan the cut'}</button>
       </form>
       {planCut.error && !Object.keys(fields).length ? <div className="mt-3"><ErrorNote error={planCut.error} /></div> : null}
+      {plan?.lays.some((l) => l.status === 'cut') ? (
+        <p className="mt-3 rounded-lg bg-calico-50 px-3 py-2 text-sm">
+          Lays already cut stay as they are; planning again covers only the garments still to cut, with the rolls as they are now.
+        </p>
+      ) : null}
       {plan ? (
         <div className="mt-4 space-y-3">
           <div className="flex flex-wrap gap-3 text-sm" aria-label="Plan figures">

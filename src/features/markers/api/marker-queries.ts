@@ -11,6 +11,8 @@ export const markerQueries = {
     queryOptions({
       queryKey: ['markers', 'list', filters],
       queryFn: async () => (await api.get<{ markers: MarkerDto[] }>(`/markers${filters.batchId ? `?batchId=${filters.batchId}` : ''}`)).markers,
+      // While any marker in the list is queued or running, keep its status and length current.
+      refetchInterval: (q) => (q.state.data?.some(live) ? 2000 : false),
     }),
   detail: (id: number) =>
     queryOptions({
