@@ -120,10 +120,5 @@ export function createStatements(ds: DataSource) {
       const rows = (await query(sql, params)) as { id: number | string }[];
       return Number(rows[0].id);
     },
-
-    /** A statement run for its effect (UPDATE, DELETE). */
-    async run(sql: string, params: unknown[]): Promise<void> {
-      await query(sql, params);
-    },
   };
 }

@@ -13,8 +13,6 @@ import {
 
 export type FloorRepository = ReturnType<typeof createFloorRepository>;
 
-export { isUniqueViolation } from '../../db/data-source';
-
 /** The text SQLite holds for a UTC datetime column ('YYYY-MM-DD HH:MM:SS.SSS'). */
 const sqlTime = (d: Date) => d.toISOString().replace('T', ' ').replace('Z', '');
 

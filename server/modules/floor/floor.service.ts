@@ -7,7 +7,8 @@ import { AppError, badRequest, conflict, forbidden, notFound } from '../../error
 import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
-import { isUniqueViolation, type FloorRepository } from './floor.repository';
+import { isUniqueViolation } from '../../db/data-source';
+import type { FloorRepository } from './floor.repository';
 
 export type FloorService = ReturnType<typeof createFloorService>;
 

@@ -4,7 +4,7 @@ import type { PayoutEntity, PayPeriodEntity } from '../../entities';
 import { badRequest, conflict, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { FloorProgressService } from '../floor/floor-progress.service';
-import { isUniqueViolation } from '../floor/floor.repository';
+import { isUniqueViolation } from '../../db/data-source';
 import type { PaymentsClient } from './payments-client';
 import type { PayRepository } from './pay.repository';
 

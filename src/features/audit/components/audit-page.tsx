@@ -32,7 +32,7 @@ export function AuditPage() {
   const { data } = useSuspenseQuery(auditQueries.list());
   return (
     <>
-      <PageHeader title="Audit trail" subtitle="Who changed what and when: batches, plans, logs, pay and prices." />
+      <PageHeader title="Audit trail" subtitle="Who changed what and when: batches, plans, pay and prices, failed checks and undone floor logs. Ordinary floor logs carry their own who and when, and count in floor progress and pay." />
       <DataTable data={data} columns={columns} filterPlaceholder="Filter the trail…" />
     </>
   );
