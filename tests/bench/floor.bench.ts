@@ -14,7 +14,9 @@
  * One request in 20 re-sends an already answered idempotency key (a phone retrying), which must replay,
  * not double. Afterwards the acknowledged logs are compared with the database: `lost` = acknowledged keys
  * missing from it, `doubled` = rows beyond one per bundle operation or rows no acknowledgement accounts for.
- * Prints one JSON object per run. BENCH_LEVELS, BENCH_MODES, BENCH_SECONDS and BENCH_RATE override.
+ * Prints one JSON object per run. BENCH_LEVELS, BENCH_MODES, BENCH_SECONDS and BENCH_RATE override;
+ * BENCH_DEBUG, BENCH_PROFILE, BENCH_QUERIES and BENCH_HEAP_SAMPLE=file turn on diagnostics (slow
+ * requests and GC pauses, a CPU profile, time per SQL text, allocations that outlive young collections).
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -60,7 +62,20 @@ async function serve(target: string) {
     for (let i = 0; i < rows.length; i += 300) await ds.getRepository(BundleEntity).insert(rows.slice(i, i + 300));
   }
   const ops = (await ds.getRepository(OperationEntity).findBy({ styleId: style.id })).map((o) => o.id);
-  if (process.env.BENCH_QUERIES) {
+  if (process.env.BENCH_HEAP_SAMPLE) {
+    // Sample allocations that outlive young-generation collections (kept until a full GC or still live):
+    // what the server promotes to the old generation while logging.
+    const { Session } = await import('node:inspector/promises');
+    const inspector = new Session();
+    inspector.connect();
+    await inspector.post('HeapProfiler.startSampling', { samplingInterval: 16384, includeObjectsCollectedByMajorGC: true, includeObjectsCollectedByMinorGC: false });
+    process.on('SIGTERM', async () => {
+      const { profile } = (await inspector.post('HeapProfiler.stopSampling')) as { profile: unknown };
+      const { writeFileSync } = await import('node:fs');
+      writeFileSync(process.env.BENCH_HEAP_SAMPLE!, JSON.stringify(profile));
+      process.exit(0);
+    });
+  } else if (process.env.BENCH_QUERIES) {
     // Time each SQL text the server runs (BENCH_QUERIES=1): which statements the log path spends on.
     const runner = ds.createQueryRunner() as unknown as { query: (q: string, p?: unknown[], s?: boolean) => Promise<unknown> };
     const stats = new Map<string, { n: number; ms: number; max: number }>();
