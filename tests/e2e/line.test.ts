@@ -49,4 +49,41 @@ describe('journey: the owner balances the demo line for the due date', () => {
     await shot(page, 'line-batch-panel-phone');
     await ctx.close();
   });
+
+  it('edits the operations table in place: each bad cell says why, nothing is saved until all are right', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, 'owner@tamarind.example');
+    await page.goto(`${baseUrl()}/line`);
+    const table = page.getByTestId('operations');
+    await expect.poll(() => table.locator('tbody tr').count()).toBeGreaterThan(10);
+    const before = await table.textContent();
+
+    await page.getByRole('button', { name: 'Edit operations' }).click();
+    const name1 = page.getByLabel('Operation, row 1', { exact: true });
+    const original = await name1.inputValue();
+    const sam1 = page.getByLabel('SAM, row 1', { exact: true });
+    const samOriginal = await sam1.inputValue();
+    await sam1.fill('0');
+    await page.getByLabel('After, row 2', { exact: true }).fill('ZZ9');
+    await page.getByRole('button', { name: 'Save operations' }).click();
+    await expect.poll(() => page.getByText('Must be more than 0').isVisible()).toBe(true);
+    expect(await page.getByText('No operation ZZ9').isVisible()).toBe(true);
+    await shot(page, 'line-operations-edit-errors');
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    expect(await page.getByTestId('operations').textContent()).toBe(before);
+
+    // A real change is saved and kept; then put back.
+    await page.getByRole('button', { name: 'Edit operations' }).click();
+    await page.getByLabel('Operation, row 1', { exact: true }).fill(`${original} (checked)`);
+    expect(await page.getByLabel('SAM, row 1', { exact: true }).inputValue()).toBe(samOriginal);
+    await page.getByRole('button', { name: 'Save operations' }).click();
+    await expect.poll(() => page.getByTestId('operations').getByText(`${original} (checked)`).isVisible()).toBe(true);
+    await page.reload();
+    await expect.poll(() => page.getByTestId('operations').getByText(`${original} (checked)`).isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Edit operations' }).click();
+    await page.getByLabel('Operation, row 1', { exact: true }).fill(original);
+    await page.getByRole('button', { name: 'Save operations' }).click();
+    await expect.poll(async () => (await page.getByTestId('operations').textContent()) === before).toBe(true);
+    await page.close();
+  });
 });

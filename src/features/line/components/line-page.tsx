@@ -9,6 +9,7 @@ import { useMe } from '@/lib/auth';
 import { formatMoney } from '@/lib/format';
 import { operationQueries, useCopyOperations, useImportOperations } from '../api/line-queries';
 import { LinePlanPanel } from './line-plan-panel';
+import { OperationsEditor } from './operations-editor';
 
 const batchList = { queryKey: ['batches', 'list'] as const, queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches };
 const styleList = { queryKey: ['styles', 'list'] as const, queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles };
@@ -48,12 +49,22 @@ function OperationsCard({ styleId }: { styleId: number }) {
   const imp = useImportOperations(styleId);
   const copy = useCopyOperations(styleId);
   const [from, setFrom] = useState('');
+  const [editing, setEditing] = useState(false);
   const fileRef = useRef<HTMLInputElement>(null);
   const rows = ops.data ?? [];
   const sections = ['cutting', 'sewing', 'finishing'] as const;
+  const withRates = rows.some((r) => r.pieceRateMinor !== undefined);
+  if (editing) {
+    return (
+      <Card title="Edit operations">
+        <OperationsEditor styleId={styleId} rows={rows} currency={currency} withRates={withRates} onDone={() => setEditing(false)} />
+      </Card>
+    );
+  }
   return (
     <Card title="Operations (minutes are demo estimates)">
       <div className="mb-3 flex flex-wrap items-end gap-2">
+        <button type="button" className="btn-primary" disabled={!ops.data} onClick={() => setEditing(true)}>Edit operations</button>
         <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/operations/export`, 'operations.xlsx')}>Export XLSX</button>
         <button type="button" className="btn-quiet" onClick={() => fileRef.current?.click()}>Import XLSX</button>
         <input ref={fileRef} type="file" accept=".xlsx" className="hidden" aria-label="Operations file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
