@@ -115,6 +115,22 @@ describe('line plan of the demo batch', () => {
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['efficiency', 'people']));
   });
 
+  it('plans with the people on the People page: a machinist deactivated is one fewer at the line', async () => {
+    const before = (await owner.get('/api/line/batches/1/plan')).body.plan;
+    expect(before.balance.peopleAvailable).toBe(6);
+    expect(before.assumptions[0]).toBe('Staff from the People page: 6 machinists, each taken to run every sewing machine type; 1 cutter; 2 finishers.');
+    const people = (await owner.get('/api/users')).body.users as { id: number; email: string }[];
+    const sixth = people.find((u) => u.email === 'machinist6@tamarind.example')!;
+    expect((await owner.patch(`/api/users/${sixth.id}`).send({ active: false })).status).toBe(200);
+    try {
+      const after = (await owner.get('/api/line/batches/1/plan')).body.plan;
+      expect(after.balance.peopleAvailable).toBe(5);
+      expect(after.assumptions[0]).toContain('5 machinists');
+    } finally {
+      await owner.patch(`/api/users/${sixth.id}`).send({ active: true });
+    }
+  });
+
   it('shows overtime and the ILO C1 caution when the due date is too close', async () => {
     await owner.patch('/api/batches/1').send({ dueDate: '2026-12-02' });
     const res = await owner.get('/api/line/batches/1/plan?mode=people&people=6&efficiency=0.4');

@@ -12,12 +12,18 @@ export interface PlanOperation {
   predecessors: string[];
 }
 
+/** Active people per floor section, from the People page. */
+export interface StaffCount {
+  sewing: number;
+  cutting: number;
+  finishing: number;
+}
+
 /**
- * Demo floor assumptions (documented on the page): six machinists who each run every sewing machine type, one
- * cutter, two finishers; Monday to Friday; breaks already out of the studio's working day.
+ * Floor assumptions (listed on the page): every machinist runs every sewing machine type; Monday to
+ * Friday; breaks already out of the studio's working day.
  */
-export const DEMO_STAFF = { sewing: 6, cutting: 1, finishing: 2 } as const;
-export const DEMO_WORKDAYS = [1, 2, 3, 4, 5];
+export const WORKDAYS = [1, 2, 3, 4, 5];
 
 export interface PlanInput {
   batchId: number;
@@ -28,9 +34,11 @@ export interface PlanInput {
   minutesPerDay: number;
   operations: PlanOperation[];
   query: LinePlanQuery;
+  staff: StaffCount;
 }
 
 const r2 = (n: number) => Math.round(n * 100) / 100;
+const people = (n: number, role: string) => `${n} ${role}${n === 1 ? '' : 's'}`;
 
 /**
  * Balance the sewing operations and schedule the batch. Due mode (SALBP-1): the sewing window is the working days
@@ -39,7 +47,7 @@ const r2 = (n: number) => Math.round(n * 100) / 100;
  */
 export function planLine(input: PlanInput): LinePlanDto {
   const { query: q, quantity } = input;
-  const calendar: WorkingCalendar = { workdays: DEMO_WORKDAYS, minutesPerDay: input.minutesPerDay, holidays: [] };
+  const calendar: WorkingCalendar = { workdays: WORKDAYS, minutesPerDay: input.minutesPerDay, holidays: [] };
   const start = q.start ?? workingDays(calendar, format(addDays(parseISO(input.today), 1), 'yyyy-MM-dd'), 1)[0];
   const sewing = input.operations.filter((o) => o.section === 'sewing');
   if (sewing.length === 0) throw badRequest('operations: the style has no sewing operations to balance', { operations: 'Add sewing operations first' });
@@ -48,7 +56,9 @@ export function planLine(input: PlanInput): LinePlanDto {
   const sewingSam = sewing.reduce((s, o) => s + o.sam, 0);
   const samOf = (section: string) => input.operations.filter((o) => o.section === section).reduce((s, o) => s + o.sam, 0);
   const daysToDue = countWorkingDays(calendar, start, input.dueDate);
-  const peopleAvailable = q.people ?? DEMO_STAFF.sewing;
+  // A section with nobody on the People page is planned with one person, and the page says so.
+  const crew = { sewing: Math.max(1, input.staff.sewing), cutting: Math.max(1, input.staff.cutting), finishing: Math.max(1, input.staff.finishing) };
+  const peopleAvailable = q.people ?? crew.sewing;
   let balance: LineBalance;
   let taktMin: number | null = null;
   if (q.mode === 'people') {
@@ -86,10 +96,10 @@ export function planLine(input: PlanInput): LinePlanDto {
   }));
   const stationCount = balance.count;
   const stages = [
-    { name: 'cutting', samPerPiece: samOf('cutting'), people: DEMO_STAFF.cutting, efficiency: q.efficiency },
+    { name: 'cutting', samPerPiece: samOf('cutting'), people: crew.cutting, efficiency: q.efficiency },
     // The line runs at its bottleneck: stations × bottleneck time per garment over `stations` people.
     { name: 'sewing', samPerPiece: maxStation * stationCount, people: stationCount, efficiency: q.efficiency },
-    { name: 'finishing', samPerPiece: samOf('finishing'), people: DEMO_STAFF.finishing, efficiency: q.efficiency },
+    { name: 'finishing', samPerPiece: samOf('finishing'), people: crew.finishing, efficiency: q.efficiency },
   ].filter((s) => s.samPerPiece > 0);
   const schedule = scheduleBatch({ quantity, bundleSize: q.bundleSize, stages, calendar, start, due: input.dueDate });
   const last = schedule.stages[schedule.stages.length - 1];
@@ -113,9 +123,12 @@ export function planLine(input: PlanInput): LinePlanDto {
     mode: q.mode,
     efficiency: q.efficiency,
     minutesPerDay: input.minutesPerDay,
-    workdays: DEMO_WORKDAYS,
+    workdays: WORKDAYS,
     assumptions: [
-      `Demo staff: ${DEMO_STAFF.sewing} machinists who each run every sewing machine type, ${DEMO_STAFF.cutting} cutter, ${DEMO_STAFF.finishing} finishers.`,
+      `Staff from the People page: ${people(input.staff.sewing, 'machinist')}, each taken to run every sewing machine type; ${people(input.staff.cutting, 'cutter')}; ${people(input.staff.finishing, 'finisher')}.`,
+      ...(['sewing', 'cutting', 'finishing'] as const)
+        .filter((s) => input.staff[s] === 0)
+        .map((s) => `Nobody active for ${s} on the People page: planned with one person.`),
       `Working week Monday to Friday, ${input.minutesPerDay / 60} h a day (the studio's working day), no holidays entered.`,
       `Operator efficiency ${Math.round(q.efficiency * 100)} %; one machine type per station; bundles of ${q.bundleSize}.`,
       'Minutes (SAM) are the demo estimates of the operations table, not published standard times.',

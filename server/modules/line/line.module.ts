@@ -3,7 +3,7 @@ import { createBatchRepository } from '../batches/batch.repository';
 import { createStyleRepository } from '../styles/style.repository';
 import { linePlanRoutes, operationRoutes } from './line.routes';
 import { createLineService } from './line.service';
-import { createOperationRepository, createStudioLookup } from './operation.repository';
+import { createOperationRepository, createStaffLookup, createStudioLookup } from './operation.repository';
 
 /** The line area: operations per style, line balancing, capacity and the batch schedule. */
 export const lineModule: ApiModule = {
@@ -14,6 +14,7 @@ export const lineModule: ApiModule = {
       batches: createBatchRepository(ctx.ds),
       operations: createOperationRepository(ctx.ds),
       studio: createStudioLookup(ctx.ds),
+      staff: createStaffLookup(ctx.ds),
       audit: ctx.audit,
       now: ctx.now,
     });

@@ -7,7 +7,7 @@ import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { planLine } from './line-plan';
+import { planLine, type StaffCount } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 
@@ -16,6 +16,8 @@ export interface LineServiceDeps {
   batches: BatchRepository;
   operations: OperationRepository;
   studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number } | null>;
+  /** Active people per floor section (People page). */
+  staff: (studioId: number) => Promise<StaffCount>;
   audit: AuditRepository;
   now: () => Date;
 }
@@ -54,7 +56,7 @@ function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] 
 export type LineService = ReturnType<typeof createLineService>;
 
 /** Operations tables per style and the line plan per batch. */
-export function createLineService({ styles, batches, operations, studio, audit, now }: LineServiceDeps) {
+export function createLineService({ styles, batches, operations, studio, staff, audit, now }: LineServiceDeps) {
   async function styleOf(actor: Actor, styleId: number) {
     const s = await styles.get(actor.studioId, styleId);
     if (!s) throw notFound('Style');
@@ -128,7 +130,7 @@ export function createLineService({ styles, batches, operations, studio, audit, 
       try {
         return planLine({
           batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today: format(now(), 'yyyy-MM-dd'),
-          minutesPerDay: Math.round((st?.workingDayHours ?? 8) * 60), operations: ops, query,
+          minutesPerDay: Math.round((st?.workingDayHours ?? 8) * 60), operations: ops, query, staff: await staff(actor.studioId),
         });
       } catch (e) {
         if (e instanceof RangeError) throw badRequest(`plan: ${e.message}`, { plan: e.message });

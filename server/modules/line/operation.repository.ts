@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { OperationEntity, StudioEntity } from '../../entities';
+import { OperationEntity, StudioEntity, UserEntity } from '../../entities';
 
 export type OperationRepository = ReturnType<typeof createOperationRepository>;
 type OperationRow = Omit<OperationEntity, 'id' | 'studioId' | 'styleId' | 'seq'>;
@@ -27,6 +27,16 @@ export function createOperationRepository(ds: DataSource) {
 }
 
 /** The studio's currency and working day, for sheets and the plan. */
+/** Active people of a studio per floor section, from the People page: machinists sew, cutters cut, finishers finish. */
+export function createStaffLookup(ds: DataSource) {
+  const users = ds.getRepository(UserEntity);
+  return async (studioId: number) => {
+    const active = await users.find({ where: { studioId, active: true }, select: { role: true } });
+    const count = (role: string) => active.filter((u) => u.role === role).length;
+    return { sewing: count('machinist'), cutting: count('cutter'), finishing: count('finisher') };
+  };
+}
+
 export function createStudioLookup(ds: DataSource) {
   const repo = ds.getRepository(StudioEntity);
   return async (studioId: number) => {
