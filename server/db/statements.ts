@@ -19,6 +19,8 @@ export type Statements = ReturnType<typeof createStatements>;
 export function createStatements(ds: DataSource) {
   const postgres = ds.options.type === 'postgres';
   const texts = new Map<string, string>();
+  /** INSERT text per table and column list, built once. */
+  const inserts = new Map<string, string>();
   const columnsOf = new Map<unknown, Map<string, ColumnMetadata>>();
 
   /** The driver's text for a `?`-placeholder statement; computed once per statement. */
@@ -115,7 +117,12 @@ export function createStatements(ds: DataSource) {
     async insert<T extends ObjectLiteral>(entity: EntityTarget<T>, values: Partial<T>): Promise<number> {
       const meta = ds.getMetadata(entity);
       const cols = meta.columns.filter((c) => values[c.propertyName as keyof T] !== undefined);
-      const sql = `INSERT INTO "${meta.tableName}" (${cols.map((c) => `"${c.databaseName}"`).join(', ')}) VALUES (${cols.map(() => '?').join(', ')}) RETURNING "id"`;
+      const key = `${meta.tableName}|${cols.map((c) => c.databaseName).join(',')}`;
+      let sql = inserts.get(key);
+      if (!sql) {
+        sql = `INSERT INTO "${meta.tableName}" (${cols.map((c) => `"${c.databaseName}"`).join(', ')}) VALUES (${cols.map(() => '?').join(', ')}) RETURNING "id"`;
+        inserts.set(key, sql);
+      }
       const params = cols.map((c) => ds.driver.preparePersistentValue(values[c.propertyName as keyof T], c));
       const rows = (await query(sql, params)) as { id: number | string }[];
       return Number(rows[0].id);
