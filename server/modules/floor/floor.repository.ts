@@ -66,8 +66,8 @@ export function createFloorRepository(ds: DataSource) {
       return q.orderBy('l.id', 'ASC').getMany();
     },
     /** One INSERT … RETURNING (no save(): that would wrap a transaction and re-select around it). */
-    async insertLog(l: Omit<WorkLogEntity, 'id'>): Promise<WorkLogEntity> {
-      return { ...l, id: await sql.insert(WorkLogEntity, l) };
+    async insertLog(l: Omit<WorkLogEntity, 'id' | 'payPeriodId'>): Promise<WorkLogEntity> {
+      return { ...l, payPeriodId: null, id: await sql.insert(WorkLogEntity, l) };
     },
     deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
