@@ -40,6 +40,9 @@ export function createFloorRepository(ds: DataSource) {
       const openIds = new Set(open.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
       return found.find((b) => openIds.has(b.batchId)) ?? found[0];
     },
+    /** A batch's status, read fresh on every log (planned … shipped, cancelled). */
+    batchStatus: async (studioId: number, id: number) =>
+      (await sql.value('SELECT "status" FROM "batches" WHERE "studioId" = ? AND "id" = ?', [studioId, id])) as string | undefined,
     bundle: (studioId: number, id: number) => sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "id" = ?', [studioId, id]),
     bundlesOfBatch: (studioId: number, batchId: number) => bundles.find({ where: { studioId, batchId }, order: { number: 'ASC' } }),
     saveReopened: (studioId: number, id: number, reopened: Record<string, number>) =>
