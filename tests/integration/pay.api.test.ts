@@ -11,7 +11,7 @@ import { PAYMENTS_FAKE_SERVICE } from '../../server/modules/pay/pay.module';
 import type { PaymentsFake } from '../../server/modules/pay/payments-fake';
 import { payeeAccount } from '../../server/modules/pay/pay.service';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
-import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
+import { buildTestApp, DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 let owner: Agent, machinist: Agent;
@@ -172,5 +172,32 @@ describe('pay periods are whole calendar days', () => {
     expect(res.status).toBe(409);
     expect(res.body.error.fields.fromDay).toBe('Overlaps an approved period');
     await ds.getRepository(PayPeriodEntity).delete({ id: legacy.id });
+  });
+});
+
+describe('a period closes its days', () => {
+  it('pays a log made on an approved day after the approval in the next period, never nowhere', async () => {
+    const { app, ds: db } = await buildTestApp();
+    const [boss, sewer] = [await signIn(app, DEMO.owner), await signIn(app, DEMO.machinist)];
+    // The app's clock stands on 1 December (TEST_TODAY): the owner approves up to and including today.
+    const first = (await boss.post('/api/pay/periods').send({ fromDay: '2026-11-23', toDay: '2026-12-01' })).body.period;
+    const sewerId = (await db.getRepository(UserEntity).findOneByOrFail({ email: DEMO.machinist })).id;
+    const paidBefore = first.lines.find((l: { userId: number }) => l.userId === sewerId)?.amountMinor ?? 0;
+    const op = await db.getRepository(OperationEntity).findOneByOrFail({ code: 'OP04' });
+    const late = await sewer.post('/api/floor/logs').send({ bundleNumber: 3, batchId: 1, operationId: op.id, idempotencyKey: 'late-after-approval-1' });
+    expect(late.status).toBe(201);
+    const owed = late.body.log.payMinor;
+    expect(owed).toBeGreaterThan(0);
+
+    const preview = (await boss.get('/api/pay/preview?from=2026-12-02&to=2026-12-08')).body.preview;
+    expect(preview.carriedLogs).toBe(1);
+    expect(preview.people.find((p: { userId: number }) => p.userId === sewerId).amountMinor).toBe(owed);
+    const next = await boss.post('/api/pay/periods').send({ fromDay: '2026-12-02', toDay: '2026-12-08' });
+    expect(next.status).toBe(201);
+    expect(next.body.period.lines).toEqual([expect.objectContaining({ userId: sewerId, amountMinor: owed })]);
+    expect((await db.getRepository(WorkLogEntity).findOneByOrFail({ idempotencyKey: 'late-after-approval-1' })).payPeriodId).toBe(next.body.period.id);
+    const again = (await boss.get(`/api/pay/periods/${first.id}`)).body.period;
+    expect(again.lines.find((l: { userId: number }) => l.userId === sewerId)?.amountMinor ?? 0).toBe(paidBefore);
+    await db.destroy();
   });
 });
