@@ -30,6 +30,8 @@ const envSchema = z.object({
   LOCAL_SMTP_PORT: z.coerce.number().int().min(0).default(2525),
   PAYMENTS_SECRET_KEY: z.string().default(''),
   LOCAL_PAYMENTS_PORT: z.coerce.number().int().min(0).default(12111),
+  /** SQLite file of the local payments stand-in's keys and transfers; empty: beside DATABASE_PATH (memory in tests). */
+  LOCAL_PAYMENTS_PATH: z.string().default(''),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -21,3 +21,19 @@ export function lineEfficiency(input: { output: number; sam: number; operators: 
   const attended = input.operators * input.hours * 60;
   return attended > 0 ? ((input.output * input.sam) / attended) * 100 : 0;
 }
+
+/**
+ * What "efficiency" means on every page of Seamrun (pay, floor progress, the line plan's expected figure):
+ * standard minutes earned ÷ minutes worked, as a percentage (common practice; the operator efficiency above).
+ */
+export const EFFICIENCY_DEFINITION = 'Standard minutes earned ÷ minutes worked';
+
+/**
+ * Efficiency in percent, to two decimals: standard minutes earned (pieces × SAM, rework earns none) ÷ minutes
+ * worked (attended) × 100. Null when no minutes were worked, so "no attendance" never reads as 0 %.
+ */
+export function efficiencyPercent(earnedStandardMinutes: number, workedMinutes: number): number | null {
+  if (!(workedMinutes > 0)) return null;
+  // operatorEfficiency takes pieces × SAM; the earned minutes go in as one piece of that many minutes.
+  return Math.round(operatorEfficiency({ pieces: 1, sam: earnedStandardMinutes, attendedMinutes: workedMinutes }) * 100) / 100;
+}

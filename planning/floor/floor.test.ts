@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { minor } from '@shared/units';
-import { earnedMinutes, lineEfficiency, operatorEfficiency } from './efficiency';
+import { earnedMinutes, efficiencyPercent, lineEfficiency, operatorEfficiency } from './efficiency';
 import { computePiecePay } from './piece-pay';
 
 describe('efficiency', () => {
@@ -17,6 +17,16 @@ describe('efficiency', () => {
     [34, 8, 200, 35, 42.89], [35, 11, 311, 35, 47.12], [34, 11, 340, 35, 53.03],
   ])('line of %i operators × %i h, output %i at SAM %f → %f %%', (operators, hours, output, sam, e) => {
     expect(Math.round(lineEfficiency({ operators, hours, output, sam }) * 100) / 100).toBe(e);
+  });
+});
+
+describe('efficiencyPercent, the one definition every page shows', () => {
+  it('gives 41.67 % for 200 standard minutes earned in 480 minutes worked, and none without minutes worked', () => {
+    // Source: ../shared/reference/production-and-costing.md §2.2 E2 (onlineclothingstudy.com 2017/01,
+    // "Efficiency formula"): 400 pieces × 0.5 min = 200 min produced in 480 min → 41.67 %.
+    expect(efficiencyPercent(200, 480)).toBe(41.67);
+    expect(efficiencyPercent(200, 0)).toBeNull();
+    expect(efficiencyPercent(0, 480)).toBe(0);
   });
 });
 

@@ -1,3 +1,3 @@
-export { operatorEfficiency, earnedMinutes, lineEfficiency } from './efficiency';
+export { operatorEfficiency, earnedMinutes, lineEfficiency, efficiencyPercent, EFFICIENCY_DEFINITION } from './efficiency';
 export { computePiecePay } from './piece-pay';
 export type { WorkRecord, PiecePayInput, PersonPay, PiecePay } from './piece-pay';

@@ -48,4 +48,9 @@ export class WorkLogEntity {
 
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
+
+  /** The approved pay period that paid this log; null until one claims it (a late log goes to the next one). */
+  @Index()
+  @Column({ type: 'integer', nullable: true })
+  payPeriodId: number | null;
 }

@@ -57,3 +57,20 @@ export const ROLE_LABELS: Record<Role, string> = {
   machinist: 'Machinist',
   finisher: 'Finisher',
 };
+
+/**
+ * The operation sections each role may log (and so be paid for): a machinist sews, a finisher finishes
+ * and packs, a cutter works the cutting room; the owner may log any section for anyone short-handed.
+ */
+export const LOG_SECTIONS: Record<Role, readonly ('cutting' | 'sewing' | 'finishing')[]> = {
+  owner: ['cutting', 'sewing', 'finishing'],
+  cutter: ['cutting'],
+  machinist: ['sewing'],
+  finisher: ['finishing'],
+};
+
+/** True when `role` may log an operation of `section`. Unknown roles log nothing. */
+export function canLogSection(role: Role | string | undefined, section: string): boolean {
+  if (!role || !(role in LOG_SECTIONS)) return false;
+  return (LOG_SECTIONS[role as Role] as readonly string[]).includes(section);
+}

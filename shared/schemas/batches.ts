@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, safeText } from './common';
+import { calendarDate, safeText } from './common';
 
 export const BATCH_STATUSES = ['planned', 'cutting', 'sewing', 'finishing', 'shipped', 'cancelled'] as const;
 
@@ -8,14 +8,14 @@ export const createBatchInput = z.object({
   quantities: z
     .record(z.string(), z.number().int('Whole garments only').min(0, 'Cannot be negative').max(100000, 'Too many'))
     .refine((q) => Object.values(q).reduce((a, b) => a + b, 0) > 0, 'Enter at least one garment'),
-  dueDate: isoDate,
+  dueDate: calendarDate,
   notes: safeText(2000).default(''),
 });
 export type CreateBatchInput = z.input<typeof createBatchInput>;
 
 export const updateBatchInput = z.object({
   status: z.enum(BATCH_STATUSES).optional(),
-  dueDate: isoDate.optional(),
+  dueDate: calendarDate.optional(),
   notes: safeText(2000).optional(),
 });
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, safeText } from './common';
+import { calendarDate, safeText } from './common';
 
 const name = z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters');
 const positiveMm = (what: string) => z.number({ error: `${what} is required` }).positive(`${what} must be above 0`).max(1_000_000, `${what} is too large`);
@@ -37,7 +37,7 @@ export const rollInput = z.object({
   lengthMm: positiveMm('Length'),
   widthMm: positiveMm('Width').max(5000, 'At most 5000 mm'),
   shadeLot: z.string().trim().min(1, 'Shade lot is required').max(40, 'At most 40 characters'),
-  receivedDate: isoDate,
+  receivedDate: calendarDate,
 });
 export type RollInput = z.input<typeof rollInput>;
 /** Table entry: one or more rolls saved together (all or none). */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, safeText } from './common';
+import { calendarDate, safeText } from './common';
 
 /** Minutes after logging during which the person who logged may undo it. */
 export const UNDO_WINDOW_MS = 2 * 60 * 1000;
@@ -48,7 +48,7 @@ export const bundleLookupQuery = z.object({
 export const batchIdParam = z.object({ batchId: z.coerce.number().int().positive() });
 
 export const periodQuery = z
-  .object({ from: isoDate, to: isoDate })
+  .object({ from: calendarDate, to: calendarDate })
   .refine((v) => v.from <= v.to, { path: ['to'], message: 'The end must not be before the start' });
 export type PeriodQuery = z.infer<typeof periodQuery>;
 

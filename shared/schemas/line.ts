@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate } from './common';
+import { calendarDate } from './common';
 
 export const LINE_SECTIONS = ['cutting', 'sewing', 'finishing'] as const;
 /** Machine types offered in the operations table (free text is accepted too, up to 24 characters). */
@@ -43,7 +43,7 @@ export const linePlanQuery = z.object({
   people: z.coerce.number().int('Whole people only').min(1, 'At least 1').max(200).optional(),
   efficiency: z.coerce.number().min(0.2, 'At least 20 %').max(1.2, 'At most 120 %').default(0.7),
   bundleSize: z.coerce.number().int().min(1).max(200).default(10),
-  start: isoDate.optional(),
+  start: calendarDate.optional(),
 });
 export type LinePlanQuery = z.infer<typeof linePlanQuery>;
 

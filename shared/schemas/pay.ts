@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { isoDate } from './common';
+import { calendarDate } from './common';
 
 /** Approve piece-rate pay for the days from `fromDay` to `toDay`, both included (UTC days). */
 export const approvePayPeriodInput = z
-  .object({ fromDay: isoDate, toDay: isoDate })
+  .object({ fromDay: calendarDate, toDay: calendarDate })
   .refine((v) => v.fromDay <= v.toDay, { path: ['toDay'], message: 'The end must not be before the start' });
 export type ApprovePayPeriodInput = z.infer<typeof approvePayPeriodInput>;
 
@@ -31,9 +31,15 @@ export interface PayPreviewDto {
   totalMinor: number;
   /** An approved period already covering some of these days. */
   overlapsPeriodId: number | null;
+  /** Logs made on already-approved days after their approval, paid in this period instead. */
+  carriedLogs: number;
 }
 
-export type PayoutStatus = 'pending' | 'paid' | 'failed';
+/**
+ * pending: being sent; paid; failed: the payments service refused and paid nothing; to_check: no clear
+ * answer, it may have paid (never retried with a new key; Pay asks the service first).
+ */
+export type PayoutStatus = 'pending' | 'paid' | 'failed' | 'to_check';
 
 export interface PayoutDto {
   id: number;

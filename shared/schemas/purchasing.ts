@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, safeText } from './common';
+import { calendarDate, safeText } from './common';
 
 export const PO_STATUSES = ['draft', 'sent', 'confirmed', 'received'] as const;
 export type PoStatus = (typeof PO_STATUSES)[number];
@@ -104,7 +104,7 @@ const rollInput = z.object({
 });
 
 export const receiveOrderInput = z.object({
-  receivedDate: isoDate.optional(),
+  receivedDate: calendarDate.optional(),
   lines: z
     .array(
       z.object({

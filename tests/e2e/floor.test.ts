@@ -147,10 +147,15 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await owner.getByRole('link', { name: 'Pay' }).click();
     await expect.poll(() => owner.getByText('Test payments: no money moves.').isVisible()).toBe(true);
     await expect.poll(() => owner.getByRole('table', { name: 'Pay preview' }).textContent()).toContain('Achieng Mwende');
+    // Approve and Pay each ask first, with the amount, and act only on "Yes".
     await owner.getByRole('button', { name: 'Approve pay period' }).click();
+    await expect.poll(() => owner.getByRole('group', { name: 'Confirm: Approve pay period' }).textContent()).toMatch(/Approve \d+ people, Ksh/);
+    await owner.getByRole('button', { name: 'Yes, approve' }).click();
     const payout = owner.getByRole('listitem', { name: 'Payout Achieng Mwende' });
     await expect.poll(() => payout.isVisible()).toBe(true);
-    await payout.getByRole('button', { name: 'Pay' }).click();
+    await payout.getByRole('button', { name: 'Pay', exact: true }).click();
+    await expect.poll(() => payout.getByRole('group', { name: 'Confirm: Pay' }).textContent()).toContain('Pay Achieng Mwende Ksh');
+    await payout.getByRole('button', { name: 'Yes, pay' }).click();
     await expect.poll(() => payout.textContent(), { timeout: 20_000 }).toContain('Reference tr_');
     expect(await payout.textContent()).not.toContain('not paid');
     await shot(owner, 'floor-owner-pay');

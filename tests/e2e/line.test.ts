@@ -21,7 +21,7 @@ describe('journey: the owner balances the demo line for the due date', () => {
     await expect.poll(() => page.getByTestId('balance-summary').isVisible(), { timeout: 15_000 }).toBe(true);
     const summary = await page.getByTestId('balance-summary').textContent();
     expect(summary).toMatch(/Stations\s*6/);
-    expect(summary).toMatch(/Balance efficiency\s*[\d.]+ %/);
+    expect(summary).toMatch(/Line balance\s*[\d.]+ %/);
     // The chart has one bar per station, one of them the bottleneck (madder).
     await expect.poll(() => page.locator('[data-testid="capacity-chart"] .recharts-bar-rectangle').count()).toBe(6);
     expect(await page.locator('[data-testid="capacity-chart"] path[fill="#B5523B"]').count()).toBe(1);

@@ -86,3 +86,20 @@ describe('people', () => {
     expect(res.body.error.fields.role).toBeTruthy();
   });
 });
+
+describe('batch due dates are real calendar dates', () => {
+  it('refuses an impossible due date with a 400 naming the field, on create and on change, and keeps the saved one', async () => {
+    const before = (await owner.get('/api/batches')).body.batches.length;
+    for (const dueDate of ['2026-13-45', '2026-11-31', '2026-02-29']) {
+      const res = await owner.post('/api/batches').send(buildBatchInput(1, { dueDate }));
+      expect(res.status, dueDate).toBe(400);
+      expect(res.body.error.fields.dueDate).toBe('Not a real date: that day does not exist in the calendar');
+    }
+    expect((await owner.get('/api/batches')).body.batches.length).toBe(before);
+    const saved = (await owner.get('/api/batches/1')).body.batch.dueDate;
+    const patch = await owner.patch('/api/batches/1').send({ dueDate: '2026-13-45' });
+    expect(patch.status).toBe(400);
+    expect(patch.body.error.fields.dueDate).toBeTruthy();
+    expect((await owner.get('/api/batches/1')).body.batch.dueDate).toBe(saved);
+  });
+});

@@ -76,7 +76,7 @@ describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('fault: SIGKILL while bu
     const bundles = Array.from({ length: 10 }, (_, i) => 9000 + i);
     for (const n of bundles) insert.run(studioId, batchId, layId, n);
     seedDb.close();
-    const sewingOps = ops.filter((o) => (o as { section?: string }).section !== 'finishing');
+    const sewingOps = ops.filter((o) => (o as { section?: string }).section === 'sewing');
 
     const acknowledged: string[] = [];
     let sent = 0;

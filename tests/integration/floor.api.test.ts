@@ -54,15 +54,21 @@ async function freshBundle() {
   return b;
 }
 
+/** The demo's cutting-room operations OP01 and OP02 logged by the owner, so a sewing operation has its predecessors. */
+async function cutReady(b: BundleEntity) {
+  for (const code of ['OP01', 'OP02']) await owner.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op(code).id, idempotencyKey: nextKey() });
+}
+
 describe('logging a bundle operation', () => {
   it('logs once, confirms bundle, operation, pieces and pay, and refuses a second log with who logged it', async () => {
     const b = await freshBundle();
-    const first = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP01').id, idempotencyKey: nextKey() });
+    await cutReady(b);
+    const first = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() });
     expect(first.status).toBe(201);
-    expect(first.body.log).toMatchObject({ bundleNumber: b.number, operationCode: 'OP01', pieces: b.pieces, attempt: 0, userName: 'Achieng Mwende' });
-    expect(first.body.log.payMinor).toBe(b.pieces * (op('OP01').pieceRateMinor ?? 0));
+    expect(first.body.log).toMatchObject({ bundleNumber: b.number, operationCode: 'OP06', pieces: b.pieces, attempt: 0, userName: 'Achieng Mwende' });
+    expect(first.body.log.payMinor).toBe(b.pieces * (op('OP06').pieceRateMinor ?? 0));
     expect(first.body.warnings).toEqual([]);
-    const second = await machinist2.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP01').id, idempotencyKey: nextKey() });
+    const second = await machinist2.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() });
     expect(second.status).toBe(409);
     expect(second.body.error.code).toBe('conflict');
     expect(second.body.error.message).toContain('Achieng Mwende');
@@ -70,7 +76,7 @@ describe('logging a bundle operation', () => {
 
   it('replays the original answer for the same idempotency key and never doubles the log', async () => {
     const b = await freshBundle();
-    const body = { bundleNumber: b.number, operationId: op('OP01').id, idempotencyKey: nextKey() };
+    const body = { bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() };
     const a = await machinist.post('/api/floor/logs').send(body);
     const again = await machinist.post('/api/floor/logs').send(body);
     expect(again.status).toBe(a.status);
@@ -80,7 +86,7 @@ describe('logging a bundle operation', () => {
 
   it('warns when predecessors are not done yet but still logs', async () => {
     const b = await freshBundle();
-    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP03').id, idempotencyKey: nextKey() });
+    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP04').id, idempotencyKey: nextKey() });
     expect(res.status).toBe(201);
     expect(res.body.warnings.join(' ')).toMatch(/OP0\d .* is not logged yet/);
   });
@@ -90,13 +96,13 @@ describe('logging a bundle operation', () => {
     const agents = [machinist, machinist2];
     const results = await Promise.all(
       Array.from({ length: 40 }, (_, i) =>
-        agents[i % 2].post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP02').id, idempotencyKey: `parallel-${b.id}-${i}` }),
+        agents[i % 2].post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: `parallel-${b.id}-${i}` }),
       ),
     );
     const codes = results.map((r) => r.status);
     expect(codes.filter((c) => c === 201)).toHaveLength(1);
     expect(codes.filter((c) => c === 409)).toHaveLength(39);
-    expect(await ctx.ds.getRepository(WorkLogEntity).countBy({ bundleId: b.id, operationId: op('OP02').id })).toBe(1);
+    expect(await ctx.ds.getRepository(WorkLogEntity).countBy({ bundleId: b.id, operationId: op('OP06').id })).toBe(1);
   });
 
   it('reports bad fields by path and answers 404 for a bundle that is not there', async () => {
@@ -110,10 +116,10 @@ describe('logging a bundle operation', () => {
 
   it('lets the logger undo within two minutes, not someone else, not later', async () => {
     const b = await freshBundle();
-    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP01').id, idempotencyKey: nextKey() });
+    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() });
     expect((await machinist2.delete(`/api/floor/logs/${res.body.log.id}`)).status).toBe(403);
     expect((await machinist.delete(`/api/floor/logs/${res.body.log.id}`)).status).toBe(204);
-    const again = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP01').id, idempotencyKey: nextKey() });
+    const again = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() });
     expect(again.status).toBe(201);
     ctx.clock.t += 3 * 60_000;
     const late = await machinist.delete(`/api/floor/logs/${again.body.log.id}`);
@@ -124,7 +130,7 @@ describe('logging a bundle operation', () => {
 describe('finishing and rework', () => {
   it('a failed check reopens the operation; the rework attempt is logged but not paid twice', async () => {
     const b = await freshBundle();
-    const sew = op('OP01');
+    const sew = op('OP06');
     const check = checkOp();
     await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: sew.id, idempotencyKey: nextKey() });
     const noOutcome = await finisher.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: check.id, idempotencyKey: nextKey() });
@@ -185,5 +191,34 @@ describe('progress for the owner', () => {
     const daily = (await owner.get('/api/floor/progress/1/daily')).body;
     expect(daily.days.reduce((a: number, d: { pieces: number }) => a + d.pieces, 0)).toBe(p.packedPieces);
     expect(p.people.length).toBeGreaterThan(0);
+  });
+});
+
+describe('what a log may be for', () => {
+  it('refuses a machinist a packing operation, and a finisher a sewing one, saving nothing', async () => {
+    const b = await freshBundle();
+    const packing = ops.find((o) => /bag|pack/i.test(o.name) && o.section === 'finishing')!;
+    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: packing.id, idempotencyKey: nextKey() });
+    expect(res.status).toBe(403);
+    expect(res.body.error.fields.operationId).toBe('Not machinist work');
+    expect(res.body.error.message).toContain('finishing work');
+    const sewing = await finisher.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: op('OP06').id, idempotencyKey: nextKey() });
+    expect(sewing.status).toBe(403);
+    expect(await ctx.ds.getRepository(WorkLogEntity).countBy({ bundleId: b.id })).toBe(0);
+    expect((await finisher.post('/api/floor/logs').send({ bundleNumber: b.number, operationId: packing.id, idempotencyKey: nextKey() })).status).toBe(201);
+  });
+
+  it('logs nothing on a shipped or cancelled batch', async () => {
+    const b = await freshBundle();
+    for (const status of ['shipped', 'cancelled']) {
+      expect((await owner.patch('/api/batches/1').send({ status })).status).toBe(200);
+      const res = await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, batchId: 1, operationId: op('OP06').id, idempotencyKey: nextKey() });
+      expect(res.status, status).toBe(409);
+      expect(res.body.error.message).toContain(`is ${status}`);
+      expect(res.body.error.fields.bundleNumber).toBe(`Batch ${status}`);
+    }
+    expect(await ctx.ds.getRepository(WorkLogEntity).countBy({ bundleId: b.id })).toBe(0);
+    expect((await owner.patch('/api/batches/1').send({ status: 'sewing' })).status).toBe(200);
+    expect((await machinist.post('/api/floor/logs').send({ bundleNumber: b.number, batchId: 1, operationId: op('OP06').id, idempotencyKey: nextKey() })).status).toBe(201);
   });
 });

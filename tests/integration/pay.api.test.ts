@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
-import { AttendanceEntity, OperationEntity, UserEntity, WorkLogEntity } from '../../server/entities';
+import { AttendanceEntity, OperationEntity, PayPeriodEntity, UserEntity, WorkLogEntity } from '../../server/entities';
 import { loadEnv } from '../../server/env';
 import { logEarnedMinutes } from '../../server/modules/floor/floor-math';
 import type { ModuleContext } from '../../server/modules/module';
@@ -11,7 +11,7 @@ import { PAYMENTS_FAKE_SERVICE } from '../../server/modules/pay/pay.module';
 import type { PaymentsFake } from '../../server/modules/pay/payments-fake';
 import { payeeAccount } from '../../server/modules/pay/pay.service';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
-import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
+import { buildTestApp, DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 let owner: Agent, machinist: Agent;
@@ -143,5 +143,61 @@ describe('pay periods', () => {
     await wb.xlsx.load(res.body);
     const text = JSON.stringify(wb.worksheets[0].getSheetValues());
     for (const l of period.lines) expect(text).toContain(l.name);
+  });
+});
+
+describe('pay periods are whole calendar days', () => {
+  it('refuses impossible dates on pay routes with a 400 naming the field, never a 500', async () => {
+    const preview = await owner.get('/api/pay/preview?from=2026-13-45&to=2026-12-01');
+    expect(preview.status).toBe(400);
+    expect(preview.body.error.fields.from).toBe('Not a real date: that day does not exist in the calendar');
+    const mine = await machinist.get('/api/pay/me?from=2026-11-01&to=2026-11-31');
+    expect(mine.status).toBe(400);
+    expect(mine.body.error.fields.to).toBeTruthy();
+    const periodsBefore = (await owner.get('/api/pay/periods')).body.periods.length;
+    // 2026-11-31 would roll over to 1 December and pay an already-paid day again.
+    const approve = await owner.post('/api/pay/periods').send({ fromDay: '2026-11-31', toDay: '2026-12-01' });
+    expect(approve.status).toBe(400);
+    expect(approve.body.error.fields.fromDay).toBe('Not a real date: that day does not exist in the calendar');
+    expect((await owner.post('/api/pay/periods').send({ fromDay: '2026-12-01', toDay: '2026-13-45' })).body.error.fields.toDay).toBeTruthy();
+    expect((await owner.get('/api/pay/periods')).body.periods.length).toBe(periodsBefore);
+  });
+
+  it('judges overlap on real dates when a period saved before the check ends on a day that does not exist', async () => {
+    // Saved by the old pattern check: 2026-10-32 is 1 November once read as a date, and pay was counted that way.
+    const legacy = await ds.getRepository(PayPeriodEntity).save({ studioId: 1, fromDay: '2026-10-26', toDay: '2026-10-32', status: 'paid', approvedBy: 1, lines: [] });
+    const preview = (await owner.get('/api/pay/preview?from=2026-11-01&to=2026-11-01')).body.preview;
+    expect(preview.overlapsPeriodId).toBe(legacy.id);
+    const res = await owner.post('/api/pay/periods').send({ fromDay: '2026-11-01', toDay: '2026-11-02' });
+    expect(res.status).toBe(409);
+    expect(res.body.error.fields.fromDay).toBe('Overlaps an approved period');
+    await ds.getRepository(PayPeriodEntity).delete({ id: legacy.id });
+  });
+});
+
+describe('a period closes its days', () => {
+  it('pays a log made on an approved day after the approval in the next period, never nowhere', async () => {
+    const { app, ds: db } = await buildTestApp();
+    const [boss, sewer] = [await signIn(app, DEMO.owner), await signIn(app, DEMO.machinist)];
+    // The app's clock stands on 1 December (TEST_TODAY): the owner approves up to and including today.
+    const first = (await boss.post('/api/pay/periods').send({ fromDay: '2026-11-23', toDay: '2026-12-01' })).body.period;
+    const sewerId = (await db.getRepository(UserEntity).findOneByOrFail({ email: DEMO.machinist })).id;
+    const paidBefore = first.lines.find((l: { userId: number }) => l.userId === sewerId)?.amountMinor ?? 0;
+    const op = await db.getRepository(OperationEntity).findOneByOrFail({ code: 'OP04' });
+    const late = await sewer.post('/api/floor/logs').send({ bundleNumber: 3, batchId: 1, operationId: op.id, idempotencyKey: 'late-after-approval-1' });
+    expect(late.status).toBe(201);
+    const owed = late.body.log.payMinor;
+    expect(owed).toBeGreaterThan(0);
+
+    const preview = (await boss.get('/api/pay/preview?from=2026-12-02&to=2026-12-08')).body.preview;
+    expect(preview.carriedLogs).toBe(1);
+    expect(preview.people.find((p: { userId: number }) => p.userId === sewerId).amountMinor).toBe(owed);
+    const next = await boss.post('/api/pay/periods').send({ fromDay: '2026-12-02', toDay: '2026-12-08' });
+    expect(next.status).toBe(201);
+    expect(next.body.period.lines).toEqual([expect.objectContaining({ userId: sewerId, amountMinor: owed })]);
+    expect((await db.getRepository(WorkLogEntity).findOneByOrFail({ idempotencyKey: 'late-after-approval-1' })).payPeriodId).toBe(next.body.period.id);
+    const again = (await boss.get(`/api/pay/periods/${first.id}`)).body.period;
+    expect(again.lines.find((l: { userId: number }) => l.userId === sewerId)?.amountMinor ?? 0).toBe(paidBefore);
+    await db.destroy();
   });
 });

@@ -1,5 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import ExcelJS from 'exceljs';
+import { isCalendarDate } from '../../../shared/schemas/common';
 import type { ImportRowError, RollInput } from '../../../shared/schemas/cutting';
 
 /** Column aliases of a supplier packing list (header row, case and spacing ignored) with their unit factor to mm. */
@@ -92,7 +93,7 @@ export function rowsToRolls(rows: string[][], defaults: { widthMm: number; recei
     }
     let receivedDate = defaults.receivedDate;
     if (dateCol >= 0 && cells[dateCol]) {
-      if (!/^\d{4}-\d{2}-\d{2}$/.test(cells[dateCol]) || Number.isNaN(Date.parse(cells[dateCol]))) bad(rows[0][dateCol], `Date "${cells[dateCol]}" is not a date as YYYY-MM-DD`);
+      if (!isCalendarDate(cells[dateCol])) bad(rows[0][dateCol], `Date "${cells[dateCol]}" is not a date as YYYY-MM-DD`);
       else receivedDate = cells[dateCol];
     }
     if (label && lot && length !== null && length > 0) {

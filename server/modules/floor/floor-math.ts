@@ -2,7 +2,7 @@
  * Earned minutes, efficiency and piece-rate pay of one log, through the planning core's floor module
  * (planning/floor via @planning). The service calls only these three functions.
  */
-import { computePiecePay, earnedMinutes, operatorEfficiency } from '@planning';
+import { computePiecePay, earnedMinutes, efficiencyPercent as sharedEfficiencyPercent } from '@planning';
 import { minor } from '@shared/units';
 
 /** Earned (standard) minutes of a log: pieces × SAM; a rework attempt earns nothing again. */
@@ -18,11 +18,9 @@ export function logPayMinor(pieces: number, rateMinor: number | null, attempt: n
 }
 
 /**
- * Operator efficiency, percent to two decimals: earned ÷ attended minutes × 100 (onlineclothingstudy.com
- * 2017/01, "Efficiency formula"). Null when no attended minutes were recorded.
+ * Efficiency, percent to two decimals: standard minutes earned ÷ minutes worked × 100 (the one definition
+ * in planning/floor, EFFICIENCY_DEFINITION). Null when no attended minutes were recorded.
  */
 export function efficiencyPercent(earned: number, attendedMinutes: number): number | null {
-  if (!(attendedMinutes > 0)) return null;
-  // The core takes pieces × SAM; earned minutes are passed as one piece of `earned` minutes.
-  return Math.round(operatorEfficiency({ pieces: 1, sam: earned, attendedMinutes }) * 100) / 100;
+  return sharedEfficiencyPercent(earned, attendedMinutes);
 }

@@ -55,11 +55,16 @@ export function createFloorProgressService(deps: { repo: FloorRepository; floor:
       .sort((a, b) => a.name.localeCompare(b.name));
   }
 
-  /** Pay lines of a period, people by name, operations by code. */
+  /** Pay lines of the logs made in [fromDay, toDay], people by name, operations by code. */
   async function payLines(studioId: number, fromDay: string, toDay: string, onlyUserId?: number): Promise<PayLine[]> {
     const from = new Date(`${fromDay}T00:00:00Z`);
     const to = new Date(new Date(`${toDay}T00:00:00Z`).getTime() + DAY_MS);
-    const logs = (await repo.logsBetween(studioId, from, to, onlyUserId)).filter((l) => l.attempt === 0);
+    return payLinesOf(studioId, await repo.logsBetween(studioId, from, to, onlyUserId));
+  }
+
+  /** Pay lines of these logs (a pay period's own), people by name, operations by code; rework is left out. */
+  async function payLinesOf(studioId: number, all: WorkLogEntity[]): Promise<PayLine[]> {
+    const logs = all.filter((l) => l.attempt === 0);
     const users = new Map((await repo.usersByIds(studioId, [...new Set(logs.map((l) => l.userId))])).map((u) => [u.id, u.name]));
     const ops = new Map<number, OperationEntity | null>();
     const lines = new Map<string, PayLine>();
@@ -107,6 +112,7 @@ export function createFloorProgressService(deps: { repo: FloorRepository; floor:
   return {
     people,
     payLines,
+    payLinesOf,
 
     /** Output per day of one batch: pieces whose final operation was done that day, oldest first. */
     async daily(studioId: number, batchId: number) {

@@ -40,6 +40,9 @@ export function createFloorRepository(ds: DataSource) {
       const openIds = new Set(open.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
       return found.find((b) => openIds.has(b.batchId)) ?? found[0];
     },
+    /** A batch's status, read fresh on every log (planned … shipped, cancelled). */
+    batchStatus: async (studioId: number, id: number) =>
+      (await sql.value('SELECT "status" FROM "batches" WHERE "studioId" = ? AND "id" = ?', [studioId, id])) as string | undefined,
     bundle: (studioId: number, id: number) => sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "id" = ?', [studioId, id]),
     bundlesOfBatch: (studioId: number, batchId: number) => bundles.find({ where: { studioId, batchId }, order: { number: 'ASC' } }),
     saveReopened: (studioId: number, id: number, reopened: Record<string, number>) =>
@@ -66,8 +69,8 @@ export function createFloorRepository(ds: DataSource) {
       return q.orderBy('l.id', 'ASC').getMany();
     },
     /** One INSERT … RETURNING (no save(): that would wrap a transaction and re-select around it). */
-    async insertLog(l: Omit<WorkLogEntity, 'id'>): Promise<WorkLogEntity> {
-      return { ...l, id: await sql.insert(WorkLogEntity, l) };
+    async insertLog(l: Omit<WorkLogEntity, 'id' | 'payPeriodId'>): Promise<WorkLogEntity> {
+      return { ...l, payPeriodId: null, id: await sql.insert(WorkLogEntity, l) };
     },
     deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>

@@ -1,4 +1,4 @@
-import { can } from '../../../shared/auth/permissions';
+import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
 import type { BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
 import { UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
@@ -92,6 +92,19 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
     return { log: presentLog(log, bundle, op, actor.name, await currency(actor.studioId)), warnings };
   }
 
+  /** Work is logged (and paid) only in the person's own section, and only on a batch still in work. */
+  async function checkMayLog(actor: Actor, op: OperationEntity, bundle: BundleEntity) {
+    if (!canLogSection(actor.role, op.section)) {
+      const who = ROLE_LABELS[actor.role];
+      throw new AppError(403, 'forbidden', `${op.code} ${op.name} is ${op.section} work; a ${who.toLowerCase()} cannot log it`, { operationId: `Not ${who.toLowerCase()} work` });
+    }
+    // Read fresh, not from the batch memo: a batch shipped a moment ago takes no more work.
+    const status = await repo.batchStatus(actor.studioId, bundle.batchId);
+    if (status === 'shipped' || status === 'cancelled') {
+      throw conflict(`Batch B-${String(bundle.batchId).padStart(4, '0')} is ${status}; nothing more is logged on it`, { bundleNumber: `Batch ${status}` });
+    }
+  }
+
   /** Serialise read-modify-write of one bundle's reopened map. */
   async function withBundleLock<T>(bundleId: number, fn: () => Promise<T>): Promise<T> {
     const prev = reopenLocks.get(bundleId) ?? Promise.resolve();
@@ -154,6 +167,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       const { bundle, ops } = await findBundle(actor.studioId, input.bundleNumber, input.batchId);
       const op = ops.find((o) => o.id === input.operationId);
       if (!op) throw badRequest('operationId: not an operation of this style', { operationId: 'Not an operation of this bundle’s style' });
+      await checkMayLog(actor, op, bundle);
       const isCheck = isCheckOperation(op);
       if (isCheck && !can(actor.role, 'quality:check')) throw forbidden('Quality checks are logged by finishers');
       if (isCheck && !input.outcome) throw badRequest('outcome: say pass or fail', { outcome: 'Say pass or fail' });

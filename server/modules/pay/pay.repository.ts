@@ -1,14 +1,37 @@
 import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
-import { PayoutEntity, PayPeriodEntity, StudioEntity, UserEntity } from '../../entities';
+import { In, IsNull } from 'typeorm';
+import { PayoutEntity, PayPeriodEntity, StudioEntity, UserEntity, WorkLogEntity } from '../../entities';
 
 export type PayRepository = ReturnType<typeof createPayRepository>;
 
-/** Pay periods and payouts, always scoped to one studio. */
+/** The text SQLite holds for a UTC datetime column ('YYYY-MM-DD HH:MM:SS.SSS'). */
+const sqlTime = (d: Date) => d.toISOString().replace('T', ' ').replace('Z', '');
+
+/** Pay periods, payouts and which period pays each work log, always scoped to one studio. */
 export function createPayRepository(ds: DataSource) {
   const periods = ds.getRepository(PayPeriodEntity);
   const payouts = ds.getRepository(PayoutEntity);
+  const logs = ds.getRepository(WorkLogEntity);
   return {
+    /** Logs no period has paid yet, made before `before`; QueryBuilder because SQLite compares the stored UTC text. */
+    unclaimedLogsBefore: (studioId: number, before: Date) =>
+      logs
+        .createQueryBuilder('l')
+        .where('l.studioId = :studioId AND l.payPeriodId IS NULL', { studioId })
+        .andWhere('l.createdAt < :before', { before: sqlTime(before) })
+        .orderBy('l.id', 'ASC')
+        .getMany(),
+    /** Give these logs to a period; a log another period took meanwhile stays with it. */
+    async claimLogs(studioId: number, payPeriodId: number, ids: number[]) {
+      for (let i = 0; i < ids.length; i += 500) {
+        await logs.update({ studioId, id: In(ids.slice(i, i + 500)), payPeriodId: IsNull() }, { payPeriodId });
+      }
+    },
+    logsOfPeriod: (studioId: number, payPeriodId: number) => logs.find({ where: { studioId, payPeriodId }, order: { id: 'ASC' } }),
+    setPeriodLines: (studioId: number, id: number, lines: PayPeriodEntity['lines']) => periods.update({ studioId, id }, { lines }),
+    /** Payouts of every studio whose outcome is not known (checked against the payments service at start-up). */
+    unsettledPayouts: () => payouts.find({ where: { status: In(['pending', 'to_check']) }, order: { id: 'ASC' } }),
     periods: (studioId: number) => periods.find({ where: { studioId }, order: { fromDay: 'DESC', id: 'DESC' } }),
     period: (studioId: number, id: number) => periods.findOneBy({ studioId, id }),
     insertPeriod: (p: Partial<PayPeriodEntity>) => periods.save(periods.create(p)),

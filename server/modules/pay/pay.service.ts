@@ -1,17 +1,43 @@
+import { randomUUID } from 'node:crypto';
 import type { MyPayDto, PayoutDto, PayPeriodDto, PayPersonLine, PayPreviewDto } from '../../../shared/schemas/pay';
 import type { Actor } from '../../auth/require';
-import type { PayoutEntity, PayPeriodEntity } from '../../entities';
+import type { PayoutEntity, PayPeriodEntity, WorkLogEntity } from '../../entities';
 import { badRequest, conflict, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
-import type { FloorProgressService } from '../floor/floor-progress.service';
+import type { FloorProgressService, PayLine } from '../floor/floor-progress.service';
+import { dayOf } from '../floor/floor.service';
 import { isUniqueViolation } from '../../db/data-source';
-import type { PaymentsClient } from './payments-client';
+import type { PaymentsClient, TransferOutcome } from './payments-client';
 import type { PayRepository } from './pay.repository';
 
 export type PayService = ReturnType<typeof createPayService>;
 
 /** The account a test payout goes to when the owner has not set the person's own (test mode only). */
 export const payeeAccount = (studioId: number, userId: number) => `acct_seamrun_${studioId}_${userId}`;
+
+const DAY_MS = 86_400_000;
+
+/**
+ * The real calendar day a stored YYYY-MM-DD stands for. Schemas refuse impossible dates now; a period saved
+ * before that (say 2026-10-32) was counted as the day the date rolls into (1 November), so it is judged so.
+ */
+export function realDay(text: string): string {
+  const [y, m, d] = text.split('-').map(Number);
+  return dayOf(new Date(Date.UTC(y, m - 1, d)));
+}
+
+/** True when the approved period covers `day` (YYYY-MM-DD), on real dates. */
+const covers = (p: Pick<PayPeriodEntity, 'fromDay' | 'toDay'>, day: string) => realDay(p.fromDay) <= day && day <= realDay(p.toDay);
+
+/** One key per intended payout, made once and stored before the first call. */
+const newPayoutKey = () => `seamrun-payout-${randomUUID()}`;
+
+/** Groups every transfer of one (period, person) at the payments service; stable for the period's life. */
+export const transferGroupOf = (p: Pick<PayoutEntity, 'studioId' | 'payPeriodId' | 'userId'>, periodCreatedAt: Date) =>
+  `seamrun-${p.studioId}-${p.payPeriodId}-${p.userId}-${new Date(periodCreatedAt).getTime()}`;
+
+/** The person for start-up checks in the audit trail. */
+const systemActor = (studioId: number) => ({ id: 0, studioId, name: 'Seamrun start-up check' });
 
 const presentPayout = (p: PayoutEntity, name: string): PayoutDto => ({
   id: p.id,
@@ -37,30 +63,52 @@ export function createPayService(deps: {
   const { repo, audit, floor } = deps;
   const inFlight = new Map<string, Promise<PayoutDto>>();
 
+  /**
+   * The logs approving [fromDay, toDay] would pay: those made in these days that no period took, and those made
+   * on an already-approved day after its approval (a period closes its days; late work goes to the next one).
+   */
+  async function claimable(studioId: number, fromDay: string, toDay: string, periods: PayPeriodEntity[]) {
+    const from = new Date(`${fromDay}T00:00:00Z`);
+    const to = new Date(new Date(`${toDay}T00:00:00Z`).getTime() + DAY_MS);
+    const open = await repo.unclaimedLogsBefore(studioId, to);
+    const inDays = (l: WorkLogEntity) => new Date(l.createdAt).getTime() >= from.getTime();
+    const late = open.filter((l) => !inDays(l) && periods.some((p) => covers(p, dayOf(l.createdAt))));
+    return { logs: [...open.filter(inDays), ...late], carried: late.length };
+  }
+
+  function personLines(lines: PayLine[]) {
+    const byPerson = new Map<number, PayLine[]>();
+    for (const l of lines) byPerson.set(l.userId, [...(byPerson.get(l.userId) ?? []), l]);
+    return byPerson;
+  }
+
   async function preview(studioId: number, fromDay: string, toDay: string): Promise<PayPreviewDto> {
-    const [lines, people, studio, periods] = await Promise.all([
-      floor().payLines(studioId, fromDay, toDay),
-      floor().people(studioId, fromDay, toDay),
-      repo.studio(studioId),
-      repo.periods(studioId),
-    ]);
-    const result: PayPersonLine[] = people
-      .filter((p) => p.pieces > 0 || p.payMinor > 0)
-      .map((p) => {
-        const ops = lines.filter((l) => l.userId === p.userId);
-        return {
-          userId: p.userId,
-          name: p.name,
-          pieces: ops.reduce((a, l) => a + l.pieces, 0),
-          amountMinor: ops.reduce((a, l) => a + l.amountMinor, 0),
-          earnedMinutes: p.earnedMinutes,
-          attendedMinutes: p.attendedMinutes,
-          efficiencyPercent: p.efficiencyPercent,
-          operations: ops.map((l) => ({ code: l.operationCode, name: l.operationName, pieces: l.pieces, rateMinor: l.rateMinor, amountMinor: l.amountMinor })),
-        };
-      });
-    const overlap = periods.find((p) => p.fromDay <= toDay && fromDay <= p.toDay);
-    return { fromDay, toDay, currency: studio.currency, people: result, totalMinor: result.reduce((a, p) => a + p.amountMinor, 0), overlapsPeriodId: overlap?.id ?? null };
+    const [people, studio, periods] = await Promise.all([floor().people(studioId, fromDay, toDay), repo.studio(studioId), repo.periods(studioId)]);
+    const { logs, carried } = await claimable(studioId, fromDay, toDay, periods);
+    const byPerson = personLines(await floor().payLinesOf(studioId, logs));
+    const result: PayPersonLine[] = [...byPerson.entries()].map(([userId, ops]) => {
+      const p = people.find((x) => x.userId === userId);
+      return {
+        userId,
+        name: ops[0].name,
+        pieces: ops.reduce((a, l) => a + l.pieces, 0),
+        amountMinor: ops.reduce((a, l) => a + l.amountMinor, 0),
+        earnedMinutes: p?.earnedMinutes ?? 0,
+        attendedMinutes: p?.attendedMinutes ?? 0,
+        efficiencyPercent: p?.efficiencyPercent ?? null,
+        operations: ops.map((l) => ({ code: l.operationCode, name: l.operationName, pieces: l.pieces, rateMinor: l.rateMinor, amountMinor: l.amountMinor })),
+      };
+    }).sort((a, b) => a.name.localeCompare(b.name));
+    const overlap = periods.find((p) => realDay(p.fromDay) <= toDay && fromDay <= realDay(p.toDay));
+    return {
+      fromDay,
+      toDay,
+      currency: studio.currency,
+      people: result,
+      totalMinor: result.reduce((a, p) => a + p.amountMinor, 0),
+      overlapsPeriodId: overlap?.id ?? null,
+      carriedLogs: carried,
+    };
   }
 
   async function presentPeriod(studioId: number, p: PayPeriodEntity): Promise<PayPeriodDto> {
@@ -87,61 +135,143 @@ export function createPayService(deps: {
     return p;
   }
 
-  /** Find or create the one payout row of a person in a period (unique payPeriodId + userId). */
-  async function payoutRow(actor: Actor, period: PayPeriodEntity, userId: number, amountMinor: number, currency: string) {
-    const existing = await repo.payout(actor.studioId, period.id, userId);
+  /**
+   * Find or create the one payout row of a person in a period (unique payPeriodId + userId). The key, the
+   * account and the description are frozen here, before the first call, and every retry sends them unchanged.
+   */
+  async function payoutRow(actor: Actor, period: PayPeriodEntity, line: PayPeriodEntity['lines'][number], currency: string) {
+    const existing = await repo.payout(actor.studioId, period.id, line.userId);
     if (existing) return existing;
     try {
       return await repo.insertPayout({
         studioId: actor.studioId,
         payPeriodId: period.id,
-        userId,
-        amountMinor,
+        userId: line.userId,
+        amountMinor: line.amountMinor,
         currency,
         status: 'pending',
-        idempotencyKey: `seamrun-payout-${actor.studioId}-${period.id}-${userId}-0`,
+        idempotencyKey: newPayoutKey(),
+        destination: await accountOf(actor.studioId, line.userId),
+        description: `Piece-rate pay ${period.fromDay} to ${period.toDay}: ${line.name}`,
         attempts: 0,
       });
     } catch (e) {
       if (!isUniqueViolation(e)) throw e;
-      return (await repo.payout(actor.studioId, period.id, userId))!;
+      return (await repo.payout(actor.studioId, period.id, line.userId))!;
     }
   }
+
+  async function accountOf(studioId: number, userId: number) {
+    return (await repo.payoutAccount(studioId, userId)) || payeeAccount(studioId, userId);
+  }
+
+  /** Record what the payments service holds for a payout; marks the period paid once everyone is. */
+  async function settle(actor: Pick<Actor, 'id' | 'studioId' | 'name'>, period: PayPeriodEntity, row: PayoutEntity, patch: Partial<PayoutEntity>, action: string) {
+    const after = await repo.updatePayout(actor.studioId, row.id, patch);
+    await audit.record(actor, action, 'payout', after.id, { status: row.status }, { status: after.status, amountMinor: after.amountMinor, error: after.error, ref: after.providerRef });
+    const all = await repo.payouts(actor.studioId, period.id);
+    const payable = period.lines.filter((l) => l.amountMinor > 0);
+    if (payable.every((l) => all.some((p) => p.userId === l.userId && p.status === 'paid'))) await repo.markPeriodPaid(actor.studioId, period.id);
+    return after;
+  }
+
+  const outcomePatch = (row: PayoutEntity, outcome: TransferOutcome): Partial<PayoutEntity> =>
+    outcome.ok
+      ? { status: 'paid', providerRef: outcome.id, error: '', attempts: row.attempts + 1 }
+      : outcome.definitive
+        ? { status: 'failed', error: outcome.message, attempts: row.attempts + 1 }
+        : {
+            status: 'to_check',
+            error: `No clear answer from the payments service (${outcome.message}). It may have paid: press Pay to check; it asks the service first and resends only the same request with the same key`,
+            attempts: row.attempts + 1,
+          };
 
   async function payOnce(actor: Actor, periodId: number, userId: number): Promise<PayoutDto> {
     const period = await getPeriod(actor.studioId, periodId);
     const line = period.lines.find((l) => l.userId === userId);
     if (!line || line.amountMinor <= 0) throw badRequest('userId: nothing to pay this person in this period', { userId: 'Nothing to pay in this period' });
-    const account = await repo.payoutAccount(actor.studioId, userId);
-    if (!account && deps.live) {
+    const existing = await repo.payout(actor.studioId, period.id, userId);
+    if (!existing && deps.live && !(await repo.payoutAccount(actor.studioId, userId))) {
       throw badRequest(`payoutAccount: ${line.name} has no payments account yet; add it on the People page`, { payoutAccount: 'Not set for this person' });
     }
     const studio = await repo.studio(actor.studioId);
-    let row = await payoutRow(actor, period, userId, line.amountMinor, studio.currency);
+    let row = existing ?? (await payoutRow(actor, period, line, studio.currency));
     if (row.status === 'paid') return presentPayout(row, line.name);
-    if (row.status === 'failed') {
-      // The service refused the last key outright, so nothing was paid: a fresh key is safe for the retry.
-      row = await repo.updatePayout(actor.studioId, row.id, { idempotencyKey: `seamrun-payout-${actor.studioId}-${period.id}-${userId}-${row.attempts}`, status: 'pending' });
-    }
     const payments = await deps.payments();
+    const group = transferGroupOf(row, period.createdAt);
+    if (existing) {
+      // Ask before sending again: an earlier attempt may have paid even if its answer was lost or unclear.
+      const found = await payments.findTransfer(group);
+      if (found.ok && found.id) return presentPayout(await settle(actor, period, row, { status: 'paid', providerRef: found.id, error: '' }, 'pay'), line.name);
+    }
+    if (row.status === 'failed') {
+      // The service refused the last request outright and holds no transfer for this payout (asked just above):
+      // only here may a new key carry the account as it is now (the owner fixed it after the refusal).
+      row = await repo.updatePayout(actor.studioId, row.id, { idempotencyKey: newPayoutKey(), destination: await accountOf(actor.studioId, userId), status: 'pending' });
+    } else if (!row.destination) {
+      // A payout row saved before accounts were frozen: freeze the account now, once.
+      row = await repo.updatePayout(actor.studioId, row.id, { destination: await accountOf(actor.studioId, userId), description: `Piece-rate pay ${period.fromDay} to ${period.toDay}: ${line.name}` });
+    }
     const outcome = await payments.transfer({
       amountMinor: row.amountMinor,
       currency: row.currency,
-      destination: account || payeeAccount(actor.studioId, userId),
-      description: `Piece-rate pay ${period.fromDay} to ${period.toDay}: ${line.name}`,
+      destination: row.destination,
+      description: row.description,
+      transferGroup: group,
       idempotencyKey: row.idempotencyKey,
     });
-    const patch: Partial<PayoutEntity> = outcome.ok
-      ? { status: 'paid', providerRef: outcome.id, error: '', attempts: row.attempts + 1 }
-      : outcome.definitive
-        ? { status: 'failed', error: outcome.message, attempts: row.attempts + 1 }
-        : { status: 'pending', error: `No clear answer from the payments service (${outcome.message}); retrying is safe, it uses the same key`, attempts: row.attempts + 1 };
-    const after = await repo.updatePayout(actor.studioId, row.id, patch);
-    await audit.record(actor, outcome.ok ? 'pay' : 'pay-failed', 'payout', after.id, { status: row.status }, { status: after.status, amountMinor: after.amountMinor, error: after.error, ref: after.providerRef });
-    const all = await repo.payouts(actor.studioId, period.id);
-    const payable = period.lines.filter((l) => l.amountMinor > 0);
-    if (payable.every((l) => all.some((p) => p.userId === l.userId && p.status === 'paid'))) await repo.markPeriodPaid(actor.studioId, period.id);
+    const after = await settle(actor, period, row, outcomePatch(row, outcome), outcome.ok ? 'pay' : 'pay-failed');
     return presentPayout(after, line.name);
+  }
+
+  /** Start-up: ask the payments service about every payout left pending or unclear (a crash mid-batch). */
+  async function reconcile() {
+    const rows = await repo.unsettledPayouts();
+    if (!rows.length) return { checked: 0, paid: 0 };
+    const payments = await deps.payments();
+    let paid = 0;
+    for (const row of rows) {
+      const period = await repo.period(row.studioId, row.payPeriodId);
+      if (!period) continue;
+      const found = await payments.findTransfer(transferGroupOf(row, period.createdAt));
+      const actor = systemActor(row.studioId);
+      if (found.ok && found.id) {
+        await settle(actor, period, row, { status: 'paid', providerRef: found.id, error: '' }, 'pay-reconciled');
+        paid += 1;
+      } else if (found.ok) {
+        await settle(actor, period, row, { status: 'to_check', error: 'The server stopped before this payout was settled; the payments service holds no transfer for it. Press Pay to send it with the same key' }, 'pay-reconciled');
+      } else {
+        await settle(actor, period, row, { status: 'to_check', error: `Could not ask the payments service at start-up (${found.message}); press Pay to check again` }, 'pay-reconciled');
+      }
+    }
+    return { checked: rows.length, paid };
+  }
+
+  /** Approvals of one studio run one after another, so two cannot both take the same days. */
+  const approving = new Map<number, Promise<unknown>>();
+  function oneAtATime<T>(studioId: number, fn: () => Promise<T>): Promise<T> {
+    const run = (approving.get(studioId) ?? Promise.resolve()).then(fn, fn);
+    approving.set(studioId, run.catch(() => undefined));
+    return run;
+  }
+
+  async function approveNow(actor: Actor, fromDay: string, toDay: string) {
+    const periods = await repo.periods(actor.studioId);
+    const overlap = periods.find((p) => realDay(p.fromDay) <= toDay && fromDay <= realDay(p.toDay));
+    if (overlap) throw conflict(`These days overlap pay period ${overlap.id}, already approved`, { fromDay: 'Overlaps an approved period' });
+    const { logs } = await claimable(actor.studioId, fromDay, toDay, periods);
+    if (!logs.some((l) => l.attempt === 0 && l.pieces > 0)) throw badRequest('fromDay: no logged work in these days', { fromDay: 'No logged work in these days' });
+    const saved = await repo.insertPeriod({ studioId: actor.studioId, fromDay, toDay, status: 'approved', approvedBy: actor.id, lines: [] });
+    await repo.claimLogs(actor.studioId, saved.id, logs.map((l) => l.id));
+    // The lines are what this period really took: a log another request took meanwhile is not paid twice.
+    const byPerson = personLines(await floor().payLinesOf(actor.studioId, await repo.logsOfPeriod(actor.studioId, saved.id)));
+    const lines = [...byPerson.entries()]
+      .map(([userId, ops]) => ({ userId, name: ops[0].name, pieces: ops.reduce((a, l) => a + l.pieces, 0), amountMinor: ops.reduce((a, l) => a + l.amountMinor, 0) }))
+      .sort((a, b) => a.name.localeCompare(b.name));
+    await repo.setPeriodLines(actor.studioId, saved.id, lines);
+    saved.lines = lines;
+    await audit.record(actor, 'approve', 'pay_period', saved.id, undefined, { fromDay, toDay, totalMinor: lines.reduce((a, l) => a + l.amountMinor, 0) });
+    return presentPeriod(actor.studioId, saved);
   }
 
   return {
@@ -152,22 +282,14 @@ export function createPayService(deps: {
     async period(studioId: number, id: number) {
       return presentPeriod(studioId, await getPeriod(studioId, id));
     },
-    /** Approve a period: freezes each person's pieces and amount. Overlapping an approved period is refused. */
-    async approve(actor: Actor, fromDay: string, toDay: string) {
-      const p = await preview(actor.studioId, fromDay, toDay);
-      if (p.overlapsPeriodId) throw conflict(`These days overlap pay period ${p.overlapsPeriodId}, already approved`, { fromDay: 'Overlaps an approved period' });
-      if (!p.people.length) throw badRequest('fromDay: no logged work in these days', { fromDay: 'No logged work in these days' });
-      const saved = await repo.insertPeriod({
-        studioId: actor.studioId,
-        fromDay,
-        toDay,
-        status: 'approved',
-        approvedBy: actor.id,
-        lines: p.people.map((x) => ({ userId: x.userId, name: x.name, pieces: x.pieces, amountMinor: x.amountMinor })),
-      });
-      await audit.record(actor, 'approve', 'pay_period', saved.id, undefined, { fromDay, toDay, totalMinor: p.totalMinor });
-      return presentPeriod(actor.studioId, saved);
+    /**
+     * Approve a period: it takes the logs of its days no period took yet, and late logs of days already
+     * approved, and freezes each person's pieces and amount. Overlapping an approved period is refused.
+     */
+    approve(actor: Actor, fromDay: string, toDay: string) {
+      return oneAtATime(actor.studioId, () => approveNow(actor, fromDay, toDay));
     },
+    reconcile,
     /** Pay one person for a period. A double click or retry shares one payment: never pays twice. */
     pay(actor: Actor, periodId: number, userId: number) {
       const key = `${actor.studioId}:${periodId}:${userId}`;
@@ -194,7 +316,9 @@ export function createPayService(deps: {
     async sheetInput(studioId: number, id: number) {
       const period = await getPeriod(studioId, id);
       const studio = await repo.studio(studioId);
-      const lines = await floor().payLines(studioId, period.fromDay, period.toDay);
+      const own = await repo.logsOfPeriod(studioId, period.id);
+      // A period approved before logs were given to periods has none of its own: its days hold its logs.
+      const lines = own.length ? await floor().payLinesOf(studioId, own) : await floor().payLines(studioId, period.fromDay, period.toDay);
       const approver = await repo.userName(studioId, period.approvedBy);
       return { period, studio, lines, approver };
     },

@@ -1,6 +1,10 @@
 import Stripe from 'stripe';
 
-/** What a transfer attempt came to. `definitive: false` means no answer: retry with the same key. */
+/**
+ * What a transfer attempt came to. `definitive: true` only when the service answered with a refusal that
+ * means nothing was paid; anything else (no answer, 5xx, 409, 429, a key reused with other parameters) may
+ * have paid and must be checked, never called failed.
+ */
 export type TransferOutcome =
   | { ok: true; id: string }
   | { ok: false; definitive: boolean; message: string };
@@ -10,7 +14,19 @@ export interface TransferRequest {
   currency: string;
   destination: string;
   description: string;
+  /** Groups every attempt of one payout, so the service can be asked later what was paid. */
+  transferGroup: string;
   idempotencyKey: string;
+}
+
+/** What the service holds for a transfer group: the transfer, none, or no answer. */
+export type LookupOutcome = { ok: true; id: string | null } | { ok: false; message: string };
+
+/** True when the service's answer is a refusal that made no transfer. */
+function isDefinitiveRefusal(err: { type?: string; rawType?: string; statusCode?: number }) {
+  if (err.type === 'StripeIdempotencyError' || err.rawType === 'idempotency_error') return false;
+  const s = err.statusCode;
+  return typeof s === 'number' && s >= 400 && s < 500 && s !== 409 && s !== 429;
 }
 
 /**
@@ -32,15 +48,22 @@ export function createPaymentsClient(opts: { secretKey: string; fakePort: () => 
     async transfer(r: TransferRequest): Promise<TransferOutcome> {
       try {
         const t = await (await client()).transfers.create(
-          { amount: r.amountMinor, currency: r.currency.toLowerCase(), destination: r.destination, description: r.description },
+          { amount: r.amountMinor, currency: r.currency.toLowerCase(), destination: r.destination, description: r.description, transfer_group: r.transferGroup },
           { idempotencyKey: r.idempotencyKey },
         );
         return { ok: true, id: t.id };
       } catch (e) {
-        const err = e as { type?: string; message?: string; statusCode?: number };
-        // Refusals (4xx) are final for this key; connection errors and 5xx may or may not have paid.
-        const definitive = typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 500 && err.statusCode !== 409 && err.statusCode !== 429;
-        return { ok: false, definitive, message: err.message ?? 'Payment failed' };
+        const err = e as { type?: string; rawType?: string; message?: string; statusCode?: number };
+        return { ok: false, definitive: isDefinitiveRefusal(err), message: err.message ?? 'Payment failed' };
+      }
+    },
+    /** Ask the service which transfer, if any, it made for a group (the reconciliation after an unclear answer). */
+    async findTransfer(transferGroup: string): Promise<LookupOutcome> {
+      try {
+        const page = await (await client()).transfers.list({ transfer_group: transferGroup, limit: 10 });
+        return { ok: true, id: page.data[0]?.id ?? null };
+      } catch (e) {
+        return { ok: false, message: (e as Error).message ?? 'No answer' };
       }
     },
   };

@@ -1,5 +1,6 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { OperationProgress, PersonEfficiency } from '@shared/schemas/floor';
+import { formatEfficiency } from '@/lib/format';
 
 const op = createColumnHelper<OperationProgress>();
 export const operationProgressColumns = [
@@ -16,7 +17,7 @@ export const efficiencyColumns = [
   person.accessor('name', { header: 'Person' }),
   person.accessor('role', { header: 'Role' }),
   person.accessor('pieces', { header: 'Pieces' }),
-  person.accessor('earnedMinutes', { header: 'Earned min', cell: (i) => i.getValue().toFixed(1) }),
-  person.accessor('attendedMinutes', { header: 'Attended min' }),
-  person.accessor('efficiencyPercent', { header: 'Efficiency', cell: (i) => (i.getValue() === null ? '–' : `${i.getValue()!.toFixed(1)} %`) }),
+  person.accessor('earnedMinutes', { header: 'Standard min earned', cell: (i) => i.getValue().toFixed(1) }),
+  person.accessor('attendedMinutes', { header: 'Min worked' }),
+  person.accessor('efficiencyPercent', { header: 'Efficiency', cell: (i) => formatEfficiency(i.getValue()) }),
 ];

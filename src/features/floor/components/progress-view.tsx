@@ -1,3 +1,4 @@
+import { EFFICIENCY_DEFINITION } from '@planning';
 import type { ProgressDto } from '@shared/schemas/floor';
 import { DataTable } from '@/components/ui/data-table';
 import { Card } from '@/components/ui/page';
@@ -60,7 +61,7 @@ export function ProgressView({ progress }: { progress: ProgressDto }) {
       </div>
       <Card title="Output per day"><DailyChart daily={progress.daily} /></Card>
       <Card title="Work in progress per operation"><DataTable data={progress.operations} columns={operationProgressColumns} filterPlaceholder="Filter operations…" /></Card>
-      <Card title="Efficiency per person (earned ÷ attended minutes)">
+      <Card title={`Efficiency per person (${EFFICIENCY_DEFINITION.toLowerCase()})`}>
         <DataTable data={progress.people} columns={efficiencyColumns} filterPlaceholder="Filter people…" empty="No one has logged work on this batch yet." />
       </Card>
     </div>

@@ -1,3 +1,4 @@
+import { EFFICIENCY_DEFINITION } from '@planning';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { BatchDto } from '@shared/schemas/batches';
@@ -31,8 +32,8 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
           <input id="plan-people" className="field-input" inputMode="numeric" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
         </div>
         <div>
-          <label className="field-label" htmlFor="plan-eff">Efficiency (%)</label>
-          <input id="plan-eff" className="field-input" inputMode="numeric" value={draft.efficiency} onChange={(e) => setDraft({ ...draft, efficiency: e.target.value })} />
+          <label className="field-label" htmlFor="plan-eff" title={EFFICIENCY_DEFINITION}>Expected efficiency (%)</label>
+          <input id="plan-eff" className="field-input" inputMode="numeric" title={EFFICIENCY_DEFINITION} value={draft.efficiency} onChange={(e) => setDraft({ ...draft, efficiency: e.target.value })} />
         </div>
         <div className="flex items-end"><button type="submit" className="btn-primary w-full">Balance the line</button></div>
       </form>
@@ -42,7 +43,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         <div className="space-y-5">
           <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
             <Stat label="Stations" value={String(p.balance.stationCount)} note={p.balance.stationCount > p.balance.peopleAvailable ? `only ${p.balance.peopleAvailable} machinists` : `${p.balance.peopleAvailable} machinists`} />
-            <Stat label="Balance efficiency" value={`${p.balance.efficiencyPct.toFixed(1)} %`} note={p.balance.taktMin ? `${p.balance.utilisationPct.toFixed(1)} % of the takt` : `balance delay ${p.balance.balanceDelayPct.toFixed(1)} %`} />
+            <Stat label="Line balance" value={`${p.balance.efficiencyPct.toFixed(1)} %`} note={p.balance.taktMin ? `${p.balance.utilisationPct.toFixed(1)} % of the takt` : `balance delay ${p.balance.balanceDelayPct.toFixed(1)} %`} />
             <Stat label="Bottleneck" value={`${p.stations[p.balance.bottleneck]?.label} · ${p.balance.cycleTimeMin} min`} note={p.balance.taktMin ? `takt ${p.balance.taktMin} min` : 'smallest cycle time'} />
             <Stat label="Output a day" value={`${p.balance.outputPerDay} garments`} note={`${p.balance.method === 'exact' ? 'exact balance' : p.balance.method === 'rpw' ? 'ranked positional weight (heuristic)' : 'best found before the limit'}`} />
           </dl>
