@@ -7,6 +7,7 @@ import { useCan, useMe } from '@/lib/auth';
 import { formatMoney } from '@/lib/format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
 import { metres } from './cutting-format';
+import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
   return (
@@ -85,6 +86,7 @@ export function FabricsPage() {
   return (
     <>
       <PageHeader title="Fabric and rolls" subtitle="Cuttable width excludes the selvedges. Short ends are kept as remnant rolls." />
+      {fabrics.length === 0 ? <p className="mb-4 text-sm text-ink-600">No fabric yet. Add the self fabric, the lining and any contrast or interfacing the style uses; rolls are entered once a fabric exists.</p> : null}
       <div className="grid gap-4 md:grid-cols-3">
         {fabrics.map((f) => (
           <button type="button" key={f.id} onClick={() => setOpenId(f.id)} className={`card p-4 text-left ${f.id === id ? 'ring-2 ring-thread-700' : ''}`}>
@@ -100,8 +102,10 @@ export function FabricsPage() {
           <Card title={`Rolls of ${detail.data.fabric.name}`}><RollTable rolls={detail.data.rolls} /></Card>
           {canWrite ? <Card title="Enter a roll"><AddRollForm fabricId={id} widthMm={detail.data.fabric.widthMm} /></Card> : null}
           {canWrite ? <Card title="Import a packing list"><ImportForm fabricId={id} /></Card> : null}
+          {canWrite ? <Card title={`Edit ${detail.data.fabric.name}`}><FabricForm key={id} fabric={detail.data.fabric} onDone={() => undefined} /></Card> : null}
         </div>
       ) : null}
+      {canWrite ? <div className="mt-5"><Card title="Add a fabric, lining or interfacing"><FabricForm fabric={null} onDone={(f) => setOpenId(f.id)} /></Card></div> : null}
     </>
   );
 }
