@@ -11,6 +11,7 @@ import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
 import { formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
+import { AddTrimForm } from './add-trim-form';
 
 const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;
 
@@ -113,6 +114,11 @@ export function CostingPage() {
           <TrimPriceEditor sheet={sheet} canEdit={canEdit} />
           <p className="mt-2 text-xs text-ink-600">Change a unit price and press Enter: every total follows. Costs are shown for the middle size; the XLSX has every size.</p>
         </Card>
+        {canEdit ? (
+          <Card title="Add a trim (zip, buttons, shoulder pads, thread, labels)">
+            <AddTrimForm styleId={sheet.style.id} currency={sheet.currency} />
+          </Card>
+        ) : null}
         {canEdit ? (
           <Card title="Costing settings for this style">
             <CostingSettingsForm key={JSON.stringify(sheet.settings)} sheet={sheet} />
