@@ -82,6 +82,9 @@ export function GradingIndexPage({ styles }: { styles: { id: number; code: strin
     <>
       <PageHeader title="Pattern & grading" subtitle="Pick a style" />
       <Card>
+        {styles.length === 0 ? (
+          <p className="text-sm text-ink-600">No style yet. <Link className="text-thread-700 underline" to="/styles/new">Add a style</Link> with its size run and base size, then come back to draft and grade its pieces.</p>
+        ) : null}
         <ul className="divide-y divide-calico-200">
           {styles.map((s) => (
             <li key={s.id} className="py-2"><Link className="text-thread-700 underline" to={`/styles/${s.id}/grading`}>{s.code} · {s.name}</Link></li>
