@@ -30,8 +30,8 @@ export function GradingPage() {
     <>
       <PageHeader
         title="Pattern & grading"
-        subtitle={<>Size run {g.sizes.join(', ')} · base {g.baseSize} · {g.errors.length ? <Badge tone="red">{g.errors.length} errors</Badge> : <Badge tone="teal">seams match</Badge>}</>}
-        actions={canEdit ? <button type="button" className="btn-quiet" disabled={propose.isPending} onClick={() => propose.mutate()}>{propose.isPending ? 'Proposing…' : 'Propose rules from chart'}</button> : null}
+        subtitle={<>Size run {g.sizes.join(', ')} · base {g.baseSize} · {g.errors.length ? <Badge tone="red">{g.errors.length} errors</Badge> : g.pieces.length ? <Badge tone="teal">seams match</Badge> : <Badge tone="gold">no pieces yet</Badge>}</>}
+        actions={canEdit ? <button type="button" className="btn-quiet" disabled={propose.isPending || !g.chart} title={g.chart ? undefined : 'Import the size chart first'} onClick={() => propose.mutate()}>{propose.isPending ? 'Proposing…' : 'Propose rules from chart'}</button> : null}
       />
       <ErrorNote error={propose.error} />
       {piece ? (
@@ -59,7 +59,7 @@ export function GradingPage() {
           </Card>
         </div>
       ) : (
-        <Card><p className="text-sm text-ink-600">No pattern pieces yet. {canEdit ? 'Use “Propose rules from chart” to draft the blocks from the base size.' : ''}</p></Card>
+        <Card><p className="text-sm text-ink-600">No pattern pieces yet. {canEdit ? (g.chart ? 'Use “Propose rules from chart” to draft the blocks from the base size.' : 'Import the size chart below first; the blocks are drafted from the base size’s measurements.') : ''}</p></Card>
       )}
       <div className="mt-5 space-y-5">
         {piece ? <Card title="Measurements per size"><PieceMeasurements piece={piece} sizes={g.sizes} baseSize={g.baseSize} /></Card> : null}

@@ -12,6 +12,8 @@ export function SeamReport({ grading }: { grading: GradingDto }) {
         <ul role="alert" className="space-y-1 rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
           {grading.errors.map((e, i) => <li key={i}>{e.message}</li>)}
         </ul>
+      ) : grading.pieces.length === 0 ? (
+        <p className="text-sm text-ink-600">Nothing to check yet: the style has no pattern pieces.</p>
       ) : (
         <p className="text-sm text-thread-800"><Badge tone="teal">All clear</Badge> Every seam matches in every size, and no graded piece crosses itself or flips.</p>
       )}

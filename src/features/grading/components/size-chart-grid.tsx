@@ -17,7 +17,34 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
   const imp = useImportChart(styleId);
   const fileRef = useRef<HTMLInputElement>(null);
   useEffect(() => setCells(chart ? chart.rows.map((r) => r.values.map(cell)) : []), [chart]);
-  if (!chart) return <p className="text-sm text-ink-600">No size chart yet: import one from CSV or XLSX.</p>;
+  const importError = imp.error instanceof ApiError ? imp.error : null;
+  const importProblems = importError ? (
+    <div role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
+      <p className="font-medium">{importError.message}</p>
+      <ul className="mt-1 list-disc pl-5">{Object.entries(importError.fields).map(([k, m]) => <li key={k}>{k}: {m}</li>)}</ul>
+    </div>
+  ) : null;
+  const importControl = canEdit ? (
+    <>
+      <button type="button" className={chart ? 'btn-quiet' : 'btn-primary'} disabled={imp.isPending} onClick={() => fileRef.current?.click()}>{imp.isPending ? 'Importing…' : 'Import CSV or XLSX'}</button>
+      <input ref={fileRef} type="file" accept=".csv,.xlsx" className="hidden" aria-label="Size chart file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
+    </>
+  ) : null;
+  if (!chart) {
+    return (
+      <div className="space-y-3 text-sm">
+        <p className="text-ink-600">No size chart yet.{canEdit ? ' Import the body measurements of the size run from a CSV or XLSX file:' : ''}</p>
+        {canEdit ? (
+          <p className="text-ink-600">
+            first row <code>Point of measure, unit, {grading.sizes.join(', ')}</code>; then one row per measurement, e.g.{' '}
+            <code>bust, cm, 82, 86, 90, 96, 102</code>. Units mm, cm or in (fractions such as <code>37 1/4</code> are read). Nothing is saved unless every cell is right.
+          </p>
+        ) : null}
+        <div className="flex flex-wrap gap-2">{importControl}</div>
+        {importProblems}
+      </div>
+    );
+  }
   const save = () => {
     const errs: Record<string, string> = {};
     const rows = chart.rows.map((r, i) => ({
@@ -31,27 +58,16 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
     setCellErrors(errs);
     if (Object.keys(errs).length === 0) put.mutate({ name: chart.name, sizes: chart.sizes, rows, eases: grading.eases });
   };
-  const importError = imp.error instanceof ApiError ? imp.error : null;
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
         {canEdit ? <button type="button" className="btn-primary" onClick={save} disabled={put.isPending}>{put.isPending ? 'Saving…' : 'Save chart'}</button> : null}
-        {canEdit ? (
-          <>
-            <button type="button" className="btn-quiet" onClick={() => fileRef.current?.click()}>Import CSV or XLSX</button>
-            <input ref={fileRef} type="file" accept=".csv,.xlsx" className="hidden" aria-label="Size chart file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
-          </>
-        ) : null}
+        {importControl}
         <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.csv')}>Export CSV</button>
         <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.xlsx')}>Export XLSX</button>
       </div>
       <ErrorNote error={put.error} />
-      {importError ? (
-        <div role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
-          <p className="font-medium">{importError.message}</p>
-          <ul className="mt-1 list-disc pl-5">{Object.entries(importError.fields).map(([k, m]) => <li key={k}>{k}: {m}</li>)}</ul>
-        </div>
-      ) : null}
+      {importProblems}
       <div className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
           <thead>
