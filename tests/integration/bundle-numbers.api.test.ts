@@ -65,7 +65,8 @@ describe('bundle numbers across batches', () => {
   it('keeps a bundle number unique in the studio in the database for bundles numbered studio-wide', async () => {
     const bundles = ctx.ds.getRepository(BundleEntity);
     await expect(
-      bundles.save(bundles.create({ studioId: 1, batchId: secondBatch, layId: 0, number: 2, size: 'S', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} })),
+      // Batch 1's bundle 2 exists; another batch may not take its number.
+      bundles.save(bundles.create({ studioId: 1, batchId: secondBatch + 1, layId: 0, number: 2, size: 'S', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} })),
     ).rejects.toThrow();
   });
 });
