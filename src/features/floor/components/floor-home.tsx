@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useCallback, useEffect, useState, type FormEvent } from 'react';
 import type { LogWorkResult } from '@shared/schemas/floor';
 import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
-import { api } from '@/lib/api-client';
+import { api, ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
 import { floorQueries } from '../api/floor-queries';
@@ -61,6 +61,9 @@ export function FloorHome({ name }: { name: string }) {
   const [busy, setBusy] = useState(false);
   const outbox = useOutbox(me?.id);
   const bundle = useQuery({ ...floorQueries.bundle(target?.bundleNumber ?? 0, target?.batchId), enabled: Boolean(target) });
+  // A typed number two batches share (bundles cut before numbers were studio-wide) is never guessed: pick the batch.
+  const isAmbiguous = Boolean(target && !target.batchId && bundle.error instanceof ApiError && bundle.error.status === 409);
+  const choices = useQuery({ ...floorQueries.matches(target?.bundleNumber ?? 0), enabled: isAmbiguous });
 
   const handleFind = (e: FormEvent) => {
     e.preventDefault();
@@ -146,6 +149,23 @@ export function FloorHome({ name }: { name: string }) {
         )}
       </Card>
       <ErrorNote error={error ?? (bundle.error && target ? bundle.error : null)} />
+      {isAmbiguous && choices.data && target ? (
+        <Card title={`Which bundle ${target.bundleNumber}?`}>
+          <p className="mb-3 text-sm text-ink-600">This number is on tickets of more than one batch. Pick the batch printed on your ticket.</p>
+          <div className="grid gap-2">
+            {choices.data.map((c) => (
+              <button
+                key={c.batchId}
+                type="button"
+                className="btn-quiet w-full justify-start py-3 text-left"
+                onClick={() => setTarget({ bundleNumber: c.number, batchId: c.batchId })}
+              >
+                {c.batchCode} · {c.styleName} · size {c.size}
+              </button>
+            ))}
+          </div>
+        </Card>
+      ) : null}
       {queued ? <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">{queued}</p> : null}
       {result ? <LogConfirmation result={result} onUndo={handleUndo} undoing={busy} /> : null}
       {bundle.data && target ? (
