@@ -220,3 +220,28 @@ describe('journey: a shared phone never credits one machinist’s waiting log to
     await ctx.close();
   });
 });
+
+describe('journey: the owner makes a tablet the floor tablet; a finisher signs in with a name and a PIN', () => {
+  it('binds the tablet on the People page, then lists names without e-mails and signs Makena in with only her PIN', async () => {
+    const ctx = await browser.newContext({ viewport: { width: 820, height: 1180 }, hasTouch: true });
+    const page = await ctx.newPage();
+    await signInAs(page, 'owner@tamarind.example');
+    await page.getByRole('link', { name: 'People' }).click();
+    await page.getByRole('button', { name: 'Use this device as the floor tablet' }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Stop using this device as the floor tablet' }).isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(`${baseUrl()}/signin`);
+
+    const who = page.getByRole('radiogroup', { name: 'Who are you?' });
+    await expect.poll(() => who.isVisible()).toBe(true);
+    expect(await who.textContent()).toContain('Makena Atieno');
+    expect(await page.locator('body').textContent()).not.toContain('@tamarind.example');
+    await who.getByRole('radio', { name: 'Makena Atieno' }).click();
+    await shot(page, 'floor-tablet-pick-name');
+    for (const d of '4021') await page.getByRole('button', { name: d, exact: true }).click();
+    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    await page.waitForURL(`${baseUrl()}/`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Hello, Makena' }).isVisible()).toBe(true);
+    await ctx.close();
+  });
+});
