@@ -15,6 +15,7 @@ import { createAuditRepository } from './modules/audit/audit.repository';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { authRoutes } from './modules/auth/auth.routes';
 import { createAuthService } from './modules/auth/auth.service';
+import { createFloorDeviceRepository } from './modules/auth/floor-device.repository';
 import { createBatchRepository } from './modules/batches/batch.repository';
 import { batchRoutes } from './modules/batches/batch.routes';
 import { createSessionRepository } from './modules/sessions/session.repository';
@@ -30,7 +31,7 @@ import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
 
 export interface AppDeps {
   ds: DataSource;
-  env: Pick<Env, 'NODE_ENV' | 'SESSION_SECRET' | 'TRUST_PROXY' | 'LOGIN_RATE_LIMIT' | 'LOGIN_LOCK_AFTER'> &
+  env: Pick<Env, 'NODE_ENV' | 'SESSION_SECRET' | 'TRUST_PROXY' | 'LOGIN_RATE_LIMIT' | 'LOGIN_LOCK_AFTER' | 'LOGIN_IP_FAILURE_LIMIT'> &
     Partial<Env>;
   now?: () => Date;
   /** Folder of the built client; served with an SPA fallback when present. */
@@ -121,7 +122,14 @@ export function createApp(deps: AppDeps): Express {
   api.use(csrfGuard);
   api.use(requirePasswordChanged);
 
-  api.use('/auth', authRoutes(auth, passport, { loginLimit: env.LOGIN_RATE_LIMIT }));
+  api.use(
+    '/auth',
+    authRoutes(auth, passport, {
+      loginLimit: env.LOGIN_RATE_LIMIT,
+      ipFailureLimit: env.LOGIN_IP_FAILURE_LIMIT,
+      devices: createFloorDeviceRepository(ds),
+    }),
+  );
   api.use('/users', userRoutes(createUserService({ users, audit })));
   api.use('/studio', studioRoutes(studios, audit));
   api.use('/styles', styleRoutes(styles, audit));

@@ -23,6 +23,8 @@ const envSchema = z.object({
     .transform((v) => v === 'true'),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
   LOGIN_LOCK_AFTER: z.coerce.number().int().min(1).default(8),
+  /** Failed sign-ins (any account) one address may make per 15 minutes. */
+  LOGIN_IP_FAILURE_LIMIT: z.coerce.number().int().min(1).default(100),
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
   NESTING_SECONDS: z.coerce.number().min(1).max(3600).default(20),
   SMTP_URL: z.string().default(''),

@@ -25,4 +25,11 @@ describe('makeBundles', () => {
     expect(makeBundles({ batch: 'C', sizes: ['S'], lays: [] })).toEqual([]);
     expect(() => makeBundles({ batch: 'C', sizes: ['S'], lays: [], bundleSize: 0 })).toThrow(RangeError);
   });
+  it('counts on from firstNumber when the studio already has bundles, tickets included', () => {
+    const b = makeBundles({ batch: 'C8', sizes: ['S', 'M'], lays: [lay], firstNumber: 16 });
+    // The same 15 bundles as the first test, numbered 16..30 so they follow another batch's 1..15.
+    expect(b.map((x) => x.number)).toEqual([...Array(15).keys()].map((i) => i + 16));
+    expect(b[0].ticket).toBe('C8-16');
+    expect(() => makeBundles({ batch: 'C', sizes: ['S'], lays: [], firstNumber: 0 })).toThrow(RangeError);
+  });
 });

@@ -14,11 +14,13 @@ export interface MakeBundlesInput {
   lays: CutLay[];
   /** Plies (= garments) per bundle, default 10 ("10 pieces, a dozen or a multiple", Scribd 36983755). */
   bundleSize?: number;
+  /** Number of the first bundle, default 1: the caller counts on from the studio's last bundle. */
+  firstNumber?: number;
 }
 
 /** One bundle: one size, one shade lot, a ply range of one marker position. */
 export interface Bundle {
-  /** 1-based, consecutive within the batch. */
+  /** Consecutive from `firstNumber` (1 by default). */
   number: number;
   /** `${batch}-${number}` */
   ticket: string;
@@ -37,11 +39,14 @@ export interface Bundle {
 /**
  * Cuts each lay into bundles: for each lay, size (in `sizes` order), marker position, shade lot (in
  * spreading order) and consecutive ply ranges of `bundleSize` (the last may be smaller). A bundle
- * never mixes sizes or shade lots. Numbering is deterministic. Throws RangeError for bundleSize < 1.
+ * never mixes sizes or shade lots. Numbering is deterministic, from `firstNumber`. Throws RangeError for
+ * bundleSize < 1 or a firstNumber that is not a whole number ≥ 1.
  */
 export function makeBundles(input: MakeBundlesInput): Bundle[] {
   const size = input.bundleSize ?? 10;
   if (!(Number.isInteger(size) && size >= 1)) throw new RangeError('bundleSize must be an integer ≥ 1');
+  const first = input.firstNumber ?? 1;
+  if (!(Number.isInteger(first) && first >= 1)) throw new RangeError('firstNumber must be an integer ≥ 1');
   const out: Bundle[] = [];
   input.lays.forEach((lay, li) => {
     for (const s of input.sizes) {
@@ -50,7 +55,7 @@ export function makeBundles(input: MakeBundlesInput): Bundle[] {
         for (const { shadeLot, plies } of lay.pliesByLot) {
           for (let from = ply; from < ply + plies; from += size) {
             const to = Math.min(from + size - 1, ply + plies - 1);
-            const number = out.length + 1;
+            const number = first + out.length;
             out.push({ number, ticket: `${input.batch}-${number}`, lay: li, size: s, position: pos, shadeLot, plyFrom: from, plyTo: to, pieces: to - from + 1 });
           }
           ply += plies;

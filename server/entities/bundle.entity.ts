@@ -3,6 +3,7 @@ import { TIMESTAMP } from './column-types';
 
 @Entity('bundles')
 @Index(['studioId', 'batchId', 'number'], { unique: true })
+@Index(['studioId', 'numberScope', 'number'], { unique: true })
 export class BundleEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
@@ -16,9 +17,17 @@ export class BundleEntity {
   @Column({ type: 'integer' })
   layId: number;
 
-  /** Number within the batch, from 1. */
+  /** The number on the ticket: unique in the studio (see numberScope), counted on across batches. */
   @Column({ type: 'integer' })
   number: number;
+
+  /**
+   * 0: `number` is unique in the studio (every bundle cut since numbers became studio-wide). A bundle cut
+   * before then that shares its number with another batch's keeps the number printed on its ticket and
+   * holds its batch id here, so that number is unique only with its batch and is always typed with it.
+   */
+  @Column({ type: 'integer', default: 0 })
+  numberScope: number;
 
   @Column({ type: 'varchar', length: 12 })
   size: string;

@@ -5,6 +5,7 @@ import { BundleEntity } from './bundle.entity';
 import { CostingSettingsEntity } from './costing-settings.entity';
 import { CutPlanEntity } from './cut-plan.entity';
 import { FabricEntity } from './fabric.entity';
+import { FloorDeviceEntity } from './floor-device.entity';
 import { GradingSetEntity } from './grading-set.entity';
 import { LayEntity } from './lay.entity';
 import { MailMessageEntity } from './mail-message.entity';
@@ -31,6 +32,7 @@ export {
   CostingSettingsEntity,
   CutPlanEntity,
   FabricEntity,
+  FloorDeviceEntity,
   GradingSetEntity,
   LayEntity,
   MailMessageEntity,
@@ -76,4 +78,5 @@ export const entities = [
   PurchaseOrderEntity,
   MailMessageEntity,
   UploadEntity,
+  FloorDeviceEntity,
 ];

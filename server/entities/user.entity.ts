@@ -38,11 +38,19 @@ export class UserEntity {
   @Column({ type: 'boolean', default: true })
   active: boolean;
 
+  /** Failed password sign-ins since the last good one. */
   @Column({ type: 'integer', default: 0 })
   failedLogins: number;
 
   @Column({ type: TIMESTAMP, nullable: true })
   lockedUntil: Date | null;
+
+  /** Failed floor PIN sign-ins, counted apart from password failures so PIN guesses never lock the password form. */
+  @Column({ type: 'integer', default: 0 })
+  pinFailures: number;
+
+  @Column({ type: TIMESTAMP, nullable: true })
+  pinLockedUntil: Date | null;
 
   /** Bumped on password change or deactivation; sessions carrying an older value are dropped. */
   @Column({ type: 'integer', default: 1 })

@@ -32,7 +32,9 @@ async function ensureBundles(ctx: SeedContext) {
   const batch = await ctx.ds.getRepository(BatchEntity).findOneByOrFail({ id: ctx.batchId });
   const lay = await ctx.ds.getRepository(LayEntity).findOne({ where: { studioId: ctx.studioId, batchId: ctx.batchId }, order: { seq: 'ASC' } });
   const rows: Partial<BundleEntity>[] = [];
-  let number = 1;
+  // Bundle numbers are unique in the studio: count on from its last one.
+  const last = await repo.findOne({ where: { studioId: ctx.studioId }, order: { number: 'DESC' } });
+  let number = (last?.number ?? 0) + 1;
   for (const [size, qty] of Object.entries(batch.quantities)) {
     for (let from = 1; from <= qty; from += DEMO_BUNDLE_SIZE) {
       const to = Math.min(qty, from + DEMO_BUNDLE_SIZE - 1);

@@ -2,6 +2,9 @@ import { z } from 'zod';
 import { ROLES } from '../auth/permissions';
 import { currencyCode } from './common';
 
+/** The one form of a sign-in e-mail, for the account lookup and the rate limiter alike. */
+export const normaliseEmail = (email: unknown) => String(email ?? '').trim().toLowerCase();
+
 export const loginInput = z.object({
   email: z.string().trim().toLowerCase().min(1, 'Email is required').max(200),
   password: z.string().min(1, 'Password is required').max(200),
@@ -13,6 +16,23 @@ export const pinLoginInput = z.object({
   pin: z.string().regex(/^\d{4,6}$/, 'PIN is 4 to 6 digits'),
 });
 export type PinLoginInput = z.infer<typeof pinLoginInput>;
+
+/** PIN sign-in on a studio tablet: the person picked from the floor list, then the PIN. */
+export const floorPinLoginInput = z.object({
+  userId: z.number({ error: 'Pick your name' }).int().positive('Pick your name'),
+  pin: z.string().regex(/^\d{4,6}$/, 'PIN is 4 to 6 digits'),
+});
+export type FloorPinLoginInput = z.infer<typeof floorPinLoginInput>;
+
+export const bindFloorDeviceInput = z.object({
+  label: z.string().trim().max(80, 'At most 80 characters').optional(),
+});
+
+/** What a bound studio tablet shows before anyone signs in: names only, never e-mails. */
+export interface FloorListDto {
+  studioName: string;
+  people: { id: number; name: string; role: 'machinist' | 'finisher' }[];
+}
 
 export const passwordRule = z
   .string()

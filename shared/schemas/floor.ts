@@ -14,6 +14,16 @@ export function parseBundleQr(text: string): { batchId: number; bundleNumber: nu
   return { batchId: Number(m[1]), bundleNumber: Number(m[2]) };
 }
 
+/**
+ * The person a floor log's idempotency key was made for: devices stamp each key `u<userId>-…` when the
+ * log is made, so a log queued on a shared phone can be told apart from the next person's. Null when the
+ * key carries no stamp (scripts and imports make their own keys).
+ */
+export function idempotencyKeyAuthor(key: string): number | null {
+  const m = /^u(\d{1,9})-/.exec(key);
+  return m ? Number(m[1]) : null;
+}
+
 export const OPERATION_SECTIONS = ['cutting', 'sewing', 'finishing'] as const;
 export type OperationSection = (typeof OPERATION_SECTIONS)[number];
 
@@ -44,6 +54,21 @@ export const bundleLookupQuery = z.object({
   number: z.coerce.number().int('Whole numbers only').positive('Bundle numbers start at 1'),
   batchId: z.coerce.number().int().positive().optional(),
 });
+
+/** Every bundle with a typed number (more than one only for bundles cut before numbers were studio-wide). */
+export const bundleMatchesQuery = z.object({
+  number: z.coerce.number().int('Whole numbers only').positive('Bundle numbers start at 1'),
+});
+
+/** One bundle a typed number may mean, to pick from when it is in more than one batch. */
+export interface BundleChoiceDto {
+  batchId: number;
+  batchCode: string;
+  number: number;
+  size: string;
+  styleName: string;
+  batchStatus: string;
+}
 
 export const batchIdParam = z.object({ batchId: z.coerce.number().int().positive() });
 

@@ -24,3 +24,4 @@ export const EXTRA_ROUTES: RouteObject[] = MANIFESTS.flatMap((m) => m.routes ?? 
 export const EXTRA_NAV: NavItem[] = MANIFESTS.flatMap((m) => m.nav ?? []);
 export const EXTRA_HOMES = Object.assign({}, ...MANIFESTS.map((m) => m.homes ?? {}));
 export const BATCH_PANELS = MANIFESTS.flatMap((m) => m.batchPanels ?? []);
+export const SIGN_OUT_CHECKS = MANIFESTS.flatMap((m) => (m.beforeSignOut ? [m.beforeSignOut] : []));

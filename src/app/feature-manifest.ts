@@ -12,4 +12,6 @@ export interface FeatureManifest {
   homes?: Partial<Record<Role, ComponentType<{ name: string }>>>;
   /** Panels shown on the batch page, in manifest order. */
   batchPanels?: { key: string; Panel: ComponentType<{ batch: BatchDto }> }[];
+  /** What to tell a person before they sign out (their work still waiting on this device), or null. */
+  beforeSignOut?: (userId: number) => string | null;
 }

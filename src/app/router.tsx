@@ -18,7 +18,7 @@ import { PeoplePage } from '@/features/people/components/people-page';
 import { SettingsPage } from '@/features/studio/components/settings-page';
 import { NewStylePage, StyleDetailPage } from '@/features/styles/components/style-edit-page';
 import { StylesPage } from '@/features/styles/components/styles-page';
-import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES } from './extra-routes';
+import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES, SIGN_OUT_CHECKS } from './extra-routes';
 
 function SectionError() {
   const error = useRouteError() as Error;
@@ -49,7 +49,7 @@ export const router = createBrowserRouter([
   {
     path: '/',
     loader: requireSignedIn,
-    element: <AppShell extraNav={EXTRA_NAV} />,
+    element: <AppShell extraNav={EXTRA_NAV} signOutChecks={SIGN_OUT_CHECKS} />,
     errorElement: <SectionError />,
     children: [
       {

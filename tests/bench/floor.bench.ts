@@ -58,7 +58,9 @@ async function serve(target: string) {
   for (let l = 0; l < LEVELS.length * MODES.length + 1; l++) {
     const batch = await ds.getRepository(BatchEntity).save({ studioId: 1, styleId: style.id, quantities: { M: BUNDLES_PER_LEVEL * 10 }, dueDate: '2030-01-01', status: 'sewing', notes: 'bench' });
     batches.push(batch.id);
-    const rows = Array.from({ length: BUNDLES_PER_LEVEL }, (_, i) => ({ studioId: 1, batchId: batch.id, layId: 0, number: i + 1, size: 'M', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} }));
+    // Each bench batch numbers its bundles from 1 and is always sent with its batch id: scoped to the batch,
+    // as bundles cut before numbers were studio-wide are (bundle.entity.ts, numberScope).
+    const rows = Array.from({ length: BUNDLES_PER_LEVEL }, (_, i) => ({ studioId: 1, batchId: batch.id, numberScope: batch.id, layId: 0, number: i + 1, size: 'M', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} }));
     for (let i = 0; i < rows.length; i += 300) await ds.getRepository(BundleEntity).insert(rows.slice(i, i + 300));
   }
   const ops = (await ds.getRepository(OperationEntity).findBy({ styleId: style.id })).map((o) => o.id);

@@ -108,7 +108,8 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await expect.poll(() => page.getByText('Bundle 3 · size').isVisible()).toBe(true);
     const opsOnline = Number(await page.getByTestId('today-ops').textContent());
     // An operation nobody has logged on this bundle yet.
-    await page.locator('label:not(:has-text("Done by")) input[name="operation"]').first().check();
+    // A sewing operation nobody has logged on this bundle yet (the demo has three bundles).
+    await page.locator('label:has-text("sewing"):not(:has-text("Done by")) input[name="operation"]').first().check();
     await ctx.setOffline(true);
     await page.getByRole('button', { name: 'Log done' }).click();
     await expect.poll(() => page.getByText(/No network: bundle 3 .* saved on this phone/).isVisible()).toBe(true);
@@ -160,5 +161,92 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     expect(await payout.textContent()).not.toContain('not paid');
     await shot(owner, 'floor-owner-pay');
     await ownerCtx.close();
+  });
+});
+
+async function signOutOnPhone(page: Page) {
+  await page.getByRole('button', { name: 'Menu' }).click();
+  await page.getByRole('button', { name: 'Sign out' }).click();
+}
+
+const outboxOf = (page: Page) =>
+  page.evaluate(() => JSON.parse(localStorage.getItem('seamrun.floor.outbox') ?? '[]') as { authorId?: number; input: { idempotencyKey: string } }[]);
+
+describe('journey: a shared phone never credits one machinist’s waiting log to the next', () => {
+  it('keeps Imani’s unsent log through her sign-out, does not send it under Faraji, and sends it as hers when she signs in again', async () => {
+    const ctx = await browser.newContext({ viewport: PHONE, hasTouch: true, isMobile: true });
+    const page = await ctx.newPage();
+    await pinSignIn(page, 'machinist3@tamarind.example', '4013');
+    await expect.poll(() => page.getByRole('heading', { name: 'Hello, Imani' }).isVisible()).toBe(true);
+    await expect.poll(async () => /^\d+$/.test((await page.getByTestId('today-ops').textContent()) ?? '')).toBe(true);
+    const imaniBefore = Number(await page.getByTestId('today-ops').textContent());
+    const imaniId = await page.evaluate(async () => (await (await fetch('/api/auth/me')).json()).user.id as number);
+
+    // The server cannot be reached for logs (the phone still thinks it is online): the log waits on the phone.
+    await page.route('**/api/floor/logs', (route) => route.abort('internetdisconnected'));
+    await page.getByLabel('Bundle number').fill('3');
+    await page.getByRole('button', { name: 'Find bundle' }).click();
+    await expect.poll(() => page.getByText('Bundle 3 · size').isVisible()).toBe(true);
+    // A sewing operation nobody has logged on this bundle yet (the demo has three bundles).
+    await page.locator('label:has-text("sewing"):not(:has-text("Done by")) input[name="operation"]').first().check();
+    await page.getByRole('button', { name: 'Log done' }).click();
+    await expect.poll(() => page.getByText('1 log waiting on this phone for the network.').isVisible()).toBe(true);
+    const queued = await outboxOf(page);
+    expect(queued).toHaveLength(1);
+    expect(queued[0].authorId).toBe(imaniId);
+
+    // Signing out says the log is still waiting and keeps it for her.
+    await signOutOnPhone(page);
+    const warning = page.getByRole('alertdialog', { name: 'Before you sign out' });
+    await expect.poll(() => warning.textContent()).toContain('1 log you made is still waiting for the network');
+    await shot(page, 'floor-phone-sign-out-waiting-log');
+    await page.getByRole('button', { name: 'Sign out and keep them on this phone' }).click();
+    await page.waitForURL(`${baseUrl()}/signin`);
+    expect(await outboxOf(page)).toHaveLength(1);
+
+    // The server is reachable again and Faraji signs in on the same phone: Imani's log is not sent as his.
+    await page.unroute('**/api/floor/logs');
+    await pinSignIn(page, 'machinist4@tamarind.example', '4014');
+    await expect.poll(() => page.getByRole('heading', { name: 'Hello, Faraji' }).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('1 log waiting for Imani Wairimu').isVisible()).toBe(true);
+    await page.waitForTimeout(1500);
+    expect(await outboxOf(page)).toHaveLength(1);
+    const farajiToday = await page.evaluate(async () => (await (await fetch('/api/floor/me/today')).json()) as { logs: { bundleNumber: number }[] });
+    expect(farajiToday.logs.filter((l) => l.bundleNumber === 3)).toEqual([]);
+    await shot(page, 'floor-phone-other-persons-log-kept');
+    await signOutOnPhone(page);
+    await page.waitForURL(`${baseUrl()}/signin`);
+
+    // Imani signs in again: her log goes, under her name.
+    await pinSignIn(page, 'machinist3@tamarind.example', '4013');
+    await expect.poll(async () => (await outboxOf(page)).length, { timeout: 20_000 }).toBe(0);
+    await page.reload();
+    await expect.poll(async () => Number(await page.getByTestId('today-ops').textContent()), { timeout: 20_000 }).toBe(imaniBefore + 1);
+    await ctx.close();
+  });
+});
+
+describe('journey: the owner makes a tablet the floor tablet; a finisher signs in with a name and a PIN', () => {
+  it('binds the tablet on the People page, then lists names without e-mails and signs Makena in with only her PIN', async () => {
+    const ctx = await browser.newContext({ viewport: { width: 820, height: 1180 }, hasTouch: true });
+    const page = await ctx.newPage();
+    await signInAs(page, 'owner@tamarind.example');
+    await page.getByRole('link', { name: 'People' }).click();
+    await page.getByRole('button', { name: 'Use this device as the floor tablet' }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Stop using this device as the floor tablet' }).isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(`${baseUrl()}/signin`);
+
+    const who = page.getByRole('radiogroup', { name: 'Who are you?' });
+    await expect.poll(() => who.isVisible()).toBe(true);
+    expect(await who.textContent()).toContain('Makena Atieno');
+    expect(await page.locator('body').textContent()).not.toContain('@tamarind.example');
+    await who.getByRole('radio', { name: 'Makena Atieno' }).click();
+    await shot(page, 'floor-tablet-pick-name');
+    for (const d of '4021') await page.getByRole('button', { name: d, exact: true }).click();
+    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    await page.waitForURL(`${baseUrl()}/`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Hello, Makena' }).isVisible()).toBe(true);
+    await ctx.close();
   });
 });

@@ -19,6 +19,7 @@ export default async function setup(project: TestProject) {
     NODE_ENV: 'production',
     DATABASE_PATH: join(dir, 'e2e.sqlite'),
     LOGIN_RATE_LIMIT: '1000',
+    LOGIN_IP_FAILURE_LIMIT: '1000',
     NESTING_SECONDS: '4',
     LOCAL_SMTP_PORT: '0',
     LOCAL_PAYMENTS_PORT: '0',

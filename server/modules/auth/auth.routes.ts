@@ -1,39 +1,88 @@
-import { Router, type Request } from 'express';
+import { createHash, randomBytes } from 'node:crypto';
+import { Router, type Request, type Response } from 'express';
 import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
 import type { configurePassport } from '../../auth/passport';
 import {
+  bindFloorDeviceInput,
   changePasswordInput,
   createStudioInput,
+  floorPinLoginInput,
   loginInput,
+  normaliseEmail,
   pinLoginInput,
+  type FloorListDto,
 } from '../../../shared/schemas/auth';
-import { actorOf, requireAuth, type Actor } from '../../auth/require';
+import { actorOf, requireAuth, requirePermission, type Actor } from '../../auth/require';
 import { AppError } from '../../errors';
 import { validate } from '../../middleware/validate';
 import { presentMe } from '../users/user.presenter';
 import type { AuthService } from './auth.service';
+import type { FloorDeviceRepository } from './floor-device.repository';
+
+/** The cookie a studio tablet keeps its floor binding in (httpOnly: page scripts never see the token). */
+export const FLOOR_DEVICE_COOKIE = 'seamrun.floor';
+/** Browsers cap cookie lifetimes at 400 days (RFC 6265bis); the owner binds the tablet again after that. */
+const FLOOR_DEVICE_MAX_AGE_MS = 400 * 24 * 60 * 60 * 1000;
+const tokenHash = (token: string) => createHash('sha256').update(token).digest('hex');
+
+/** One cookie's value from the request header, without a cookie parser. */
+function cookieValue(req: Request, name: string): string | null {
+  for (const part of (req.headers.cookie ?? '').split(';')) {
+    const i = part.indexOf('=');
+    if (i > 0 && part.slice(0, i).trim() === name) return decodeURIComponent(part.slice(i + 1).trim());
+  }
+  return null;
+}
 
 const logIn = (req: Request, user: Express.User) =>
   new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
 
-export function authRoutes(auth: AuthService, passport: ReturnType<typeof configurePassport>, opts: { loginLimit: number }) {
+export function authRoutes(
+  auth: AuthService,
+  passport: ReturnType<typeof configurePassport>,
+  opts: { loginLimit: number; ipFailureLimit: number; devices: FloorDeviceRepository },
+) {
   const r = Router();
+  const { devices } = opts;
+  const refuse = (_req: Request, res: Response) =>
+    res.status(429).json({ error: { code: 'rate_limited', message: 'Too many sign-in attempts; wait a few minutes' } });
+  // Per address and account: the e-mail is normalised exactly as the lookup does, so padding or capitals
+  // never open a fresh bucket; a tablet's PIN sign-in is keyed by the person picked.
   const limiter = rateLimit({
     windowMs: 15 * 60 * 1000,
     limit: opts.loginLimit,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
-    handler: (_req, res) =>
-      res.status(429).json({ error: { code: 'rate_limited', message: 'Too many sign-in attempts; wait a few minutes' } }),
+    keyGenerator: (req) => {
+      const who = req.body?.email !== undefined ? normaliseEmail(req.body.email) : `person:${String(req.body?.userId ?? '')}`;
+      return `${ipKeyGenerator(req.ip ?? '')}|${who}`;
+    },
+    handler: refuse,
+  });
+  // Per address alone, counting failed sign-ins only: one address cannot try PINs across the whole studio,
+  // and a studio's morning sign-ins from one shared connection never reach it.
+  const ipLimiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: opts.ipFailureLimit,
+    standardHeaders: false,
+    legacyHeaders: false,
+    skipSuccessfulRequests: true,
+    keyGenerator: (req) => `ip|${ipKeyGenerator(req.ip ?? '')}`,
+    handler: refuse,
   });
 
-  const respondMe = async (req: Request, res: import('express').Response) => {
+  /** The studio this device is bound to as a floor tablet, or null. */
+  const boundDevice = async (req: Request) => {
+    const token = cookieValue(req, FLOOR_DEVICE_COOKIE);
+    return token && token.length >= 32 ? devices.byTokenHash(tokenHash(token)) : null;
+  };
+
+  const respondMe = async (req: Request, res: Response) => {
     const { user, studio } = await auth.me(actorOf(req));
     res.json({ user: presentMe(user, studio) });
   };
 
-  r.post('/login', limiter, validate({ body: loginInput }), async (req, res) => {
+  r.post('/login', ipLimiter, limiter, validate({ body: loginInput }), async (req, res) => {
     const user = await new Promise<Actor | false>((resolve, reject) =>
       passport.authenticate('local', { session: false }, (err: unknown, u: Actor | false) =>
         err ? reject(err) : resolve(u),
@@ -45,9 +94,49 @@ export function authRoutes(auth: AuthService, passport: ReturnType<typeof config
     await respondMe(req, res);
   });
 
-  r.post('/pin', limiter, validate({ body: pinLoginInput }), async (req, res) => {
+  r.post('/pin', ipLimiter, limiter, validate({ body: pinLoginInput }), async (req, res) => {
     const user = await auth.verifyPin(req.body.email, req.body.pin);
     if (!user) throw new AppError(401, 'unauthenticated', 'Email or PIN is wrong');
+    await logIn(req, user);
+    await respondMe(req, res);
+  });
+
+  // A studio tablet: the owner binds it once; then it lists the floor's names and takes only a PIN.
+  r.post('/floor-device', requirePermission('people:manage'), validate({ body: bindFloorDeviceInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const token = randomBytes(32).toString('base64url');
+    const device = await devices.insert({
+      studioId: actor.studioId,
+      tokenHash: tokenHash(token),
+      label: req.body.label || 'Floor tablet',
+      createdById: actor.id,
+    });
+    res.cookie(FLOOR_DEVICE_COOKIE, token, {
+      httpOnly: true,
+      sameSite: 'strict',
+      secure: req.secure,
+      path: '/api/auth',
+      maxAge: FLOOR_DEVICE_MAX_AGE_MS,
+    });
+    res.status(201).json({ device: { id: device.id, label: device.label } });
+  });
+  r.delete('/floor-device', requirePermission('people:manage'), async (req, res) => {
+    const device = await boundDevice(req);
+    if (device && device.studioId === actorOf(req).studioId) await devices.remove(device.studioId, device.id);
+    res.clearCookie(FLOOR_DEVICE_COOKIE, { path: '/api/auth' });
+    res.status(204).end();
+  });
+  r.get('/floor', async (req, res) => {
+    const device = await boundDevice(req);
+    if (!device) throw new AppError(404, 'not_found', 'This device is not a floor tablet');
+    const list: FloorListDto = await auth.floorList(device.studioId);
+    res.json(list);
+  });
+  r.post('/floor/pin', ipLimiter, limiter, validate({ body: floorPinLoginInput }), async (req, res) => {
+    const device = await boundDevice(req);
+    if (!device) throw new AppError(401, 'unauthenticated', 'This device is not a floor tablet; sign in with your e-mail and PIN');
+    const user = await auth.verifyFloorPin(device.studioId, req.body.userId, req.body.pin);
+    if (!user) throw new AppError(401, 'unauthenticated', 'Name or PIN is wrong');
     await logIn(req, user);
     await respondMe(req, res);
   });

@@ -5,7 +5,8 @@ import { hashSecret, verifySecret } from '../../auth/password';
 import type { Actor } from '../../auth/require';
 import { AppError, badRequest, conflict } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
-import type { UserRepository } from '../users/user.repository';
+import type { SecretKind, UserRepository } from '../users/user.repository';
+import { normaliseEmail } from '../../../shared/schemas/auth';
 
 export type AuthService = ReturnType<typeof createAuthService>;
 
@@ -30,29 +31,47 @@ export function createAuthService(deps: {
     mustChangePassword: Boolean(u.mustChangePassword),
   });
 
-  /** Shared check for password and PIN: lock after repeated failures, never say which part was wrong. */
-  async function verify(email: string, secret: string, kind: 'password' | 'pin') {
-    const user = await users.findByEmail(email.trim().toLowerCase());
+  /**
+   * Judge one secret of `user` (null: no such account). The attempt is counted before the slow hash
+   * check, in one statement, so parallel guesses cannot all be judged before the lock; a locked account
+   * is refused without judging. Password and PIN failures count and lock apart. Never says which part was wrong.
+   */
+  async function judge(user: UserEntity | null, secret: string, kind: SecretKind) {
     if (!user || !user.active) {
       await hashSecret(secret); // similar timing whether or not the account exists
       return false as const;
     }
-    if (user.lockedUntil && new Date(user.lockedUntil) > now()) {
+    const at = now();
+    if (!(await users.admitAttempt(user.id, kind, lockAfter, at, new Date(at.getTime() + LOCK_MS)))) {
       throw new AppError(429, 'locked', 'Too many failed attempts; try again in 15 minutes');
     }
     const ok = await verifySecret(secret, kind === 'pin' ? user.pinHash : user.passwordHash);
-    if (!ok) {
-      const failures = user.failedLogins + 1;
-      await users.recordFailure(user.id, failures, failures >= lockAfter ? new Date(now().getTime() + LOCK_MS) : null);
-      return false as const;
-    }
-    if (user.failedLogins) await users.clearFailures(user.id);
+    if (!ok) return false as const;
+    await users.clearFailures(user.id, kind);
     return toActor(user);
   }
 
+  const byEmail = (email: string) => users.findByEmail(normaliseEmail(email));
+
   return {
-    verifyPassword: (email: string, password: string) => verify(email, password, 'password'),
-    verifyPin: (email: string, pin: string) => verify(email, pin, 'pin'),
+    verifyPassword: async (email: string, password: string) => judge(await byEmail(email), password, 'password'),
+    verifyPin: async (email: string, pin: string) => judge(await byEmail(email), pin, 'pin'),
+
+    /** PIN sign-in on a studio tablet: the person is picked from that studio's floor list, no e-mail. */
+    async verifyFloorPin(studioId: number, userId: number, pin: string) {
+      const user = await users.get(studioId, userId);
+      const onFloor = user && (user.role === 'machinist' || user.role === 'finisher') ? user : null;
+      return judge(onFloor, pin, 'pin');
+    },
+
+    /** Names (never e-mails) of the studio's active machinists and finishers, for a bound tablet. */
+    async floorList(studioId: number) {
+      const [studio, people] = await Promise.all([users.studio(studioId), users.floorPeople(studioId)]);
+      return {
+        studioName: studio.name,
+        people: people.map((p) => ({ id: p.id, name: p.name, role: p.role as 'machinist' | 'finisher' })),
+      };
+    },
 
     async actorForSession(id: number, version: number): Promise<Actor | null> {
       const u = await users.findForSession(id);
@@ -82,7 +101,7 @@ export function createAuthService(deps: {
 
     /** Anyone may open a new studio; they become its owner. */
     async createStudio(input: CreateStudioInput) {
-      if (await users.findByEmail(input.email)) {
+      if (await byEmail(input.email)) {
         throw conflict('Someone already signs in with that email', { email: 'Already in use' });
       }
       const passwordHash = await hashSecret(input.password);

@@ -32,8 +32,9 @@ export function createCutPlanRepository(ds: DataSource) {
       for (const r of rows) out.set(r.layId, (out.get(r.layId) ?? 0) + 1);
       return out;
     },
-    async maxBundleNumber(m: EntityManager, studioId: number, batchId: number) {
-      const last = await m.getRepository(BundleEntity).findOne({ where: { studioId, batchId }, order: { number: 'DESC' } });
+    /** The highest bundle number in the studio (any batch): new bundles count on from it. */
+    async maxBundleNumber(m: EntityManager, studioId: number) {
+      const last = await m.getRepository(BundleEntity).findOne({ where: { studioId }, order: { number: 'DESC' } });
       return last?.number ?? 0;
     },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),

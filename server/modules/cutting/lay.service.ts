@@ -34,7 +34,7 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
 
 /**
  * Mark a lay cut: the recorded plies (planned plies where none were recorded) make the lay's bundles
- * (planning/bundles: one size, one shade lot, ply ranges of 10, numbered on from the batch's last bundle);
+ * (planning/bundles: one size, one shade lot, ply ranges of 10, numbered on from the studio's last bundle, so a number is never another batch's);
  * each roll's remaining length becomes its actual remnant. A remnant that no later lay uses is kept as a
  * short roll when it reaches the stock threshold (1 m, common practice), else written off as end-of-roll waste.
  */
@@ -54,14 +54,14 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
   }
   if (!byLot.length) throw badRequest('rolls: no plies were spread', { rolls: 'No plies were spread' });
   return plans.transaction(async (m) => {
-    const offset = await plans.maxBundleNumber(m, studioId, lay.batchId);
+    const offset = await plans.maxBundleNumber(m, studioId);
     const batch = await m.getRepository(BatchEntity).findOneByOrFail({ studioId, id: lay.batchId });
     const style = await m.getRepository(BatchEntity).findOne({ where: { studioId, id: lay.batchId }, relations: { style: true } });
     const sizes = style?.style?.sizeRun ?? Object.keys(lay.ratio);
-    const made = makeBundles({ batch: batchCode(lay.batchId), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10 });
+    const made = makeBundles({ batch: batchCode(lay.batchId), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
     await m.getRepository(BundleEntity).save(
       made.map((b) => m.getRepository(BundleEntity).create({
-        studioId, batchId: lay.batchId, layId: lay.id, number: offset + b.number, size: b.size, shadeLot: b.shadeLot,
+        studioId, batchId: lay.batchId, layId: lay.id, number: b.number, size: b.size, shadeLot: b.shadeLot,
         plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, reopened: {},
       })),
     );

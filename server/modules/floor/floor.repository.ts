@@ -29,20 +29,21 @@ export function createFloorRepository(ds: DataSource) {
   return {
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneBy({ id: studioId }),
     batch: (studioId: number, id: number) => batches.findOne({ where: { studioId, id }, relations: { style: true } }),
-    /** Open batches that hold a bundle with this number, newest first. */
-    async bundleByNumber(studioId: number, number: number, batchId?: number) {
+    /**
+     * Bundles with this number: the one of `batchId` when given, else every one in the studio (more than one
+     * only for bundles cut before numbers were studio-wide; the service refuses to guess between them).
+     */
+    bundlesByNumber(studioId: number, number: number, batchId?: number) {
       if (batchId) {
-        return sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "batchId" = ? AND "number" = ?', [studioId, batchId, number]);
+        return sql.all(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "batchId" = ? AND "number" = ?', [studioId, batchId, number]);
       }
-      const found = await sql.all(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "number" = ? ORDER BY "batchId" DESC', [studioId, number]);
-      if (found.length <= 1) return found[0] ?? null;
-      const open = await batches.find({ where: { studioId, id: In(found.map((b) => b.batchId)) } });
-      const openIds = new Set(open.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
-      return found.find((b) => openIds.has(b.batchId)) ?? found[0];
+      return sql.all(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "number" = ? ORDER BY "batchId" ASC', [studioId, number]);
     },
     /** A batch's status, read fresh on every log (planned … shipped, cancelled). */
     batchStatus: async (studioId: number, id: number) =>
       (await sql.value('SELECT "status" FROM "batches" WHERE "studioId" = ? AND "id" = ?', [studioId, id])) as string | undefined,
+    batchesByIds: (studioId: number, ids: number[]) =>
+      ids.length ? batches.find({ where: { studioId, id: In(ids) }, relations: { style: true }, order: { id: 'ASC' } }) : Promise.resolve([]),
     bundle: (studioId: number, id: number) => sql.first(BundleEntity, 'SELECT * FROM "bundles" WHERE "studioId" = ? AND "id" = ?', [studioId, id]),
     bundlesOfBatch: (studioId: number, batchId: number) => bundles.find({ where: { studioId, batchId }, order: { number: 'ASC' } }),
     saveReopened: (studioId: number, id: number, reopened: Record<string, number>) =>

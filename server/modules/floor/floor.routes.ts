@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { batchIdParam, bundleLookupQuery, logWorkInput } from '../../../shared/schemas/floor';
+import { batchIdParam, bundleLookupQuery, bundleMatchesQuery, logWorkInput } from '../../../shared/schemas/floor';
 import { idParam } from '../../../shared/schemas/common';
 import { actorOf, requirePermission } from '../../auth/require';
 import { validate } from '../../middleware/validate';
@@ -12,6 +12,10 @@ export function floorRoutes(floor: FloorService, progress: FloorProgressService)
   r.get('/bundles/lookup', requirePermission('bundles:log'), validate({ query: bundleLookupQuery }), async (req, res) => {
     const q = req.query as unknown as { number: number; batchId?: number };
     res.json({ bundle: await floor.lookup(actorOf(req), q.number, q.batchId) });
+  });
+  r.get('/bundles', requirePermission('bundles:log'), validate({ query: bundleMatchesQuery }), async (req, res) => {
+    const q = req.query as unknown as { number: number };
+    res.json({ bundles: await floor.matches(actorOf(req), q.number) });
   });
   r.post('/logs', requirePermission('bundles:log'), validate({ body: logWorkInput }), async (req, res) => {
     const { status, result } = await floor.log(actorOf(req), req.body);

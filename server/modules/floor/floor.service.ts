@@ -1,6 +1,6 @@
 import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
-import type { BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
-import { UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
+import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
+import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
@@ -8,6 +8,7 @@ import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
+import { batchCode } from '../batches/batch.routes';
 import type { FloorRepository } from './floor.repository';
 
 export type FloorService = ReturnType<typeof createFloorService>;
@@ -51,9 +52,34 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
   const batchOf = (studioId: number, batchId: number) => batchMemo(batchId, () => repo.batch(studioId, batchId));
   const currency = (studioId: number) => currencyMemo(studioId, async () => (await repo.studio(studioId))?.currency ?? 'KES');
 
+  /** Every bundle a number (with its batch, when given) may mean, with its batch and style for the choice. */
+  async function matches(studioId: number, number: number, batchId?: number): Promise<BundleChoiceDto[]> {
+    const found = await repo.bundlesByNumber(studioId, number, batchId);
+    const batches = new Map((await repo.batchesByIds(studioId, [...new Set(found.map((b) => b.batchId))])).map((b) => [b.id, b]));
+    return found.map((b) => ({
+      batchId: b.batchId,
+      batchCode: batchCode(b.batchId),
+      number: b.number,
+      size: b.size,
+      styleName: batches.get(b.batchId)?.style?.name ?? '',
+      batchStatus: batches.get(b.batchId)?.status ?? '',
+    }));
+  }
+
+  /**
+   * The one bundle a typed or scanned number means. A number in more than one batch (bundles cut before
+   * numbers were studio-wide) is refused with the choices, never guessed: the ticket's batch decides.
+   */
   async function findBundle(studioId: number, number: number, batchId?: number) {
-    const bundle = await repo.bundleByNumber(studioId, number, batchId);
-    if (!bundle) throw new AppError(404, 'not_found', `Bundle ${number} not found`, { bundleNumber: 'No such bundle' });
+    const found = await repo.bundlesByNumber(studioId, number, batchId);
+    if (!found.length) throw new AppError(404, 'not_found', `Bundle ${number} not found`, { bundleNumber: 'No such bundle' });
+    if (found.length > 1) {
+      const choices = (await matches(studioId, number)).map((c) => `${c.batchCode} (${c.styleName}, size ${c.size})`).join(', ');
+      throw conflict(`Bundle ${number} is in more than one batch: ${choices}. Scan the ticket or pick its batch.`, {
+        batchId: 'Pick the batch printed on the ticket',
+      });
+    }
+    const bundle = found[0];
     const batch = await batchOf(studioId, bundle.batchId);
     if (!batch) throw notFound('Batch');
     return { bundle, batch, ops: await styleOps(studioId, batch.styleId) };
@@ -127,6 +153,9 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
     batchOf,
     currency,
 
+    /** Every bundle with this number, for the floor to pick from when a typed number is in more than one batch. */
+    matches: (actor: Actor, number: number) => matches(actor.studioId, number),
+
     /** A bundle with this person's operations first and each operation's state. */
     async lookup(actor: Actor, number: number, batchId?: number): Promise<BundleDto> {
       const { bundle, batch, ops } = await findBundle(actor.studioId, number, batchId);
@@ -145,7 +174,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       return {
         id: bundle.id,
         batchId: bundle.batchId,
-        batchCode: `B-${String(bundle.batchId).padStart(4, '0')}`,
+        batchCode: batchCode(bundle.batchId),
         number: bundle.number,
         size: bundle.size,
         shadeLot: bundle.shadeLot,
@@ -164,6 +193,13 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
      * log of the same bundle operation is refused with who logged it; missing predecessors only warn.
      */
     async log(actor: Actor, input: LogWorkInput): Promise<{ status: 200 | 201; result: LogWorkResult }> {
+      // A log queued on a shared phone carries its author in its key; it is never credited to whoever sends it.
+      const author = idempotencyKeyAuthor(input.idempotencyKey);
+      if (author !== null && author !== actor.id) {
+        throw conflict('This log was made by someone else on this device; it is sent when they sign in', {
+          idempotencyKey: 'Belongs to another person',
+        });
+      }
       const { bundle, ops } = await findBundle(actor.studioId, input.bundleNumber, input.batchId);
       const op = ops.find((o) => o.id === input.operationId);
       if (!op) throw badRequest('operationId: not an operation of this style', { operationId: 'Not an operation of this bundle’s style' });

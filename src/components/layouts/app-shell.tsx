@@ -23,11 +23,19 @@ export const NAV_ITEMS: NavItem[] = [
   { to: paths.audit.getHref(), label: 'Audit trail', icon: IconChart, permission: 'audit:read' },
 ];
 
-export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
+export function AppShell({
+  extraNav = [],
+  signOutChecks = [],
+}: {
+  extraNav?: NavItem[];
+  /** Feature checks run before signing out; each returns a warning (work still waiting on this device) or null. */
+  signOutChecks?: ((userId: number) => string | null)[];
+}) {
   const { data: me } = useMe();
   const logout = useLogout();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
+  const [warnings, setWarnings] = useState<string[]>([]);
   const location = useLocation();
   const items = [...NAV_ITEMS.slice(0, 3), ...extraNav, ...NAV_ITEMS.slice(3)].filter((i) => !i.permission || can(me?.role, i.permission));
 
@@ -51,9 +59,19 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
     </nav>
   );
 
-  const handleSignOut = async () => {
+  const signOut = async () => {
+    setWarnings([]);
     await logout.mutateAsync();
     navigate(paths.signIn.getHref());
+  };
+
+  const handleSignOut = async () => {
+    const pending = me ? signOutChecks.map((check) => check(me.id)).filter((w): w is string => Boolean(w)) : [];
+    if (pending.length) {
+      setOpen(false);
+      return setWarnings(pending);
+    }
+    await signOut();
   };
 
   if (me?.mustChangePassword && location.pathname !== paths.account.getHref()) {
@@ -91,6 +109,21 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
         </div>
       </aside>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:px-6">
+        {warnings.length ? (
+          <div role="alertdialog" aria-label="Before you sign out" className="mb-4 rounded-lg bg-saffron-100 p-4 text-sm text-saffron-700">
+            {warnings.map((w) => (
+              <p key={w}>{w}</p>
+            ))}
+            <div className="mt-3 flex flex-wrap gap-2">
+              <button type="button" className="btn-primary" onClick={() => void signOut()}>
+                Sign out and keep them on this phone
+              </button>
+              <button type="button" className="btn-quiet" onClick={() => setWarnings([])}>
+                Stay signed in
+              </button>
+            </div>
+          </div>
+        ) : null}
         <Outlet />
       </main>
     </div>

@@ -8,6 +8,7 @@ import { BatchProgressPanel } from './components/batch-progress-panel';
 import { FloorHome } from './components/floor-home';
 import { FloorProgressPage } from './components/floor-progress-page';
 import { PayPage } from './components/pay-page';
+import { outboxSignOutWarning } from './lib/outbox';
 
 function Allowed({ permission, children }: { permission: Permission; children: ReactNode }) {
   return useCan(permission) ? <>{children}</> : <Navigate to="/" replace />;
@@ -25,4 +26,5 @@ export const floorManifest: FeatureManifest = {
   ],
   homes: { machinist: FloorHome, finisher: FloorHome },
   batchPanels: [{ key: 'floor-progress', Panel: BatchProgressPanel }],
+  beforeSignOut: outboxSignOutWarning,
 };

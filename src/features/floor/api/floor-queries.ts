@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { BatchDto } from '@shared/schemas/batches';
-import type { BundleDto, DailyOutput, ProgressDto, TodayDto } from '@shared/schemas/floor';
+import type { BundleChoiceDto, BundleDto, DailyOutput, ProgressDto, TodayDto } from '@shared/schemas/floor';
 import { api } from '@/lib/api-client';
 
 export const floorQueries = {
@@ -11,6 +11,12 @@ export const floorQueries = {
       queryKey: ['floor', 'bundle', number, batchId ?? null],
       queryFn: async () => (await api.get<{ bundle: BundleDto }>(`/floor/bundles/lookup?number=${number}${batchId ? `&batchId=${batchId}` : ''}`)).bundle,
       retry: false,
+    }),
+  /** Every bundle with a typed number: more than one only for bundles cut before numbers were studio-wide. */
+  matches: (number: number) =>
+    queryOptions({
+      queryKey: ['floor', 'bundle-matches', number],
+      queryFn: async () => (await api.get<{ bundles: BundleChoiceDto[] }>(`/floor/bundles?number=${number}`)).bundles,
     }),
   batches: () => queryOptions({ queryKey: ['floor', 'batches'], queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches }),
   progress: (batchId: number) =>

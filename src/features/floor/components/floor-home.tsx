@@ -2,29 +2,40 @@ import { useQuery } from '@tanstack/react-query';
 import { useCallback, useEffect, useState, type FormEvent } from 'react';
 import type { LogWorkResult } from '@shared/schemas/floor';
 import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
-import { api } from '@/lib/api-client';
+import { api, ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
 import { floorQueries } from '../api/floor-queries';
-import { flushOutbox, newIdempotencyKey, readOutbox, sendLog } from '../lib/outbox';
+import { flushOutbox, newIdempotencyKey, othersWaiting, sendLog, waitingFor } from '../lib/outbox';
 import { BundleLogPanel, type LogChoice } from './bundle-log-panel';
 import { LogConfirmation } from './log-confirmation';
 import { QrScanner } from './qr-scanner';
 import { TodayCard } from './today-card';
 
-/** Logs waiting on the phone; sent again when the network is back and every 15 s. */
-function useOutbox() {
-  const [count, setCount] = useState(() => readOutbox().length);
+/**
+ * Logs waiting on the phone; the signed-in person's are sent again when the network is back and every
+ * 15 s. Logs someone else made on this phone stay until that person signs in here.
+ */
+function useOutbox(userId: number | undefined) {
+  const count = () => (userId ? waitingFor(userId).length : 0);
+  const others = () => (userId ? othersWaiting(userId) : []);
+  const [mine, setMine] = useState(count);
+  const [theirs, setTheirs] = useState(others);
   const [note, setNote] = useState('');
   useEffect(() => {
-    const update = () => setCount(readOutbox().length);
+    if (!userId) return;
+    const update = () => {
+      setMine(waitingFor(userId).length);
+      setTheirs(othersWaiting(userId));
+    };
     const flush = async () => {
-      if (!readOutbox().length) return;
-      const r = await flushOutbox();
+      if (!waitingFor(userId).length) return;
+      const r = await flushOutbox(userId);
       if (r.sent) setNote(`${r.sent} saved log${r.sent > 1 ? 's' : ''} sent.`);
       if (r.refused.length) setNote(`Refused: ${r.refused.join('; ')}`);
       if (r.sent || r.refused.length) await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
     };
+    update();
     window.addEventListener('seamrun-outbox', update);
     window.addEventListener('online', flush);
     const t = setInterval(flush, 15_000);
@@ -34,8 +45,8 @@ function useOutbox() {
       window.removeEventListener('online', flush);
       clearInterval(t);
     };
-  }, []);
-  return { count, note };
+  }, [userId]);
+  return { count: mine, others: theirs, note };
 }
 
 /** The machinist's and finisher's phone home: find a bundle, log an operation, see today's count. */
@@ -48,8 +59,11 @@ export function FloorHome({ name }: { name: string }) {
   const [queued, setQueued] = useState('');
   const [error, setError] = useState<unknown>(null);
   const [busy, setBusy] = useState(false);
-  const outbox = useOutbox();
+  const outbox = useOutbox(me?.id);
   const bundle = useQuery({ ...floorQueries.bundle(target?.bundleNumber ?? 0, target?.batchId), enabled: Boolean(target) });
+  // A typed number two batches share (bundles cut before numbers were studio-wide) is never guessed: pick the batch.
+  const isAmbiguous = Boolean(target && !target.batchId && bundle.error instanceof ApiError && bundle.error.status === 409);
+  const choices = useQuery({ ...floorQueries.matches(target?.bundleNumber ?? 0), enabled: isAmbiguous });
 
   const handleFind = (e: FormEvent) => {
     e.preventDefault();
@@ -77,7 +91,7 @@ export function FloorHome({ name }: { name: string }) {
     const input = { bundleNumber: bundle.data.number, batchId: bundle.data.batchId, idempotencyKey: newIdempotencyKey(me.id), ...choice };
     const op = bundle.data.operations.find((o) => o.id === choice.operationId);
     try {
-      const r = await sendLog(input, `Bundle ${bundle.data.number} · ${op?.code ?? ''}`);
+      const r = await sendLog(input, `Bundle ${bundle.data.number} · ${op?.code ?? ''}`, { id: me.id, name: me.name });
       if (r.kind === 'sent') setResult(r.result);
       else setQueued(`No network: bundle ${bundle.data.number} · ${op?.code} ${op?.name} is saved on this phone and will be sent when the network is back.`);
       await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
@@ -110,6 +124,11 @@ export function FloorHome({ name }: { name: string }) {
           {outbox.count} log{outbox.count > 1 ? 's' : ''} waiting on this phone for the network.
         </p>
       ) : null}
+      {outbox.others.map((o) => (
+        <p key={o.key} role="status" className="rounded-lg bg-calico-100 px-3 py-2 text-sm text-ink-600">
+          {o.count} log{o.count > 1 ? 's' : ''} waiting for {o.name}: sent under {o.name}’s name when they sign in on this phone, never under yours.
+        </p>
+      ))}
       {outbox.note ? <p className="rounded-lg bg-calico-50 px-3 py-2 text-sm">{outbox.note}</p> : null}
       <Card title="Find a bundle">
         {scanning ? (
@@ -130,6 +149,23 @@ export function FloorHome({ name }: { name: string }) {
         )}
       </Card>
       <ErrorNote error={error ?? (bundle.error && target ? bundle.error : null)} />
+      {isAmbiguous && choices.data && target ? (
+        <Card title={`Which bundle ${target.bundleNumber}?`}>
+          <p className="mb-3 text-sm text-ink-600">This number is on tickets of more than one batch. Pick the batch printed on your ticket.</p>
+          <div className="grid gap-2">
+            {choices.data.map((c) => (
+              <button
+                key={c.batchId}
+                type="button"
+                className="btn-quiet w-full justify-start py-3 text-left"
+                onClick={() => setTarget({ bundleNumber: c.number, batchId: c.batchId })}
+              >
+                {c.batchCode} · {c.styleName} · size {c.size}
+              </button>
+            ))}
+          </div>
+        </Card>
+      ) : null}
       {queued ? <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">{queued}</p> : null}
       {result ? <LogConfirmation result={result} onUndo={handleUndo} undoing={busy} /> : null}
       {bundle.data && target ? (

@@ -1,13 +1,21 @@
-import type { LogWorkInput, LogWorkResult } from '@shared/schemas/floor';
+import { idempotencyKeyAuthor, type LogWorkInput, type LogWorkResult } from '@shared/schemas/floor';
 import { api, ApiError } from '@/lib/api-client';
 
-/** Logs waiting on this device for the network, oldest first. Kept in localStorage so a reload loses none. */
+/**
+ * Logs waiting on this device for the network, oldest first. Kept in localStorage so a reload loses none.
+ * A phone or tablet may be shared: each log keeps the person who made it and is sent only while that
+ * person is signed in on this device, never under the next person's session.
+ */
 const STORAGE_KEY = 'seamrun.floor.outbox';
 
 export interface QueuedLog {
   input: LogWorkInput;
   queuedAt: string;
   label: string;
+  /** Who made the log (user id); logs saved before this field read it from their key. */
+  authorId?: number;
+  /** Their name, to say whose logs wait on a shared phone. */
+  authorName?: string;
 }
 
 export function readOutbox(): QueuedLog[] {
@@ -16,6 +24,27 @@ export function readOutbox(): QueuedLog[] {
   } catch {
     return [];
   }
+}
+
+/** The person a queued log belongs to; null when it cannot be told (it is then kept, never sent). */
+export const authorOf = (q: QueuedLog) => q.authorId ?? idempotencyKeyAuthor(q.input.idempotencyKey);
+
+/** Logs waiting on this device that `userId` made. */
+export const waitingFor = (userId: number) => readOutbox().filter((q) => authorOf(q) === userId);
+
+/** Logs waiting on this device that someone other than `userId` made. */
+export const waitingForOthers = (userId: number) => readOutbox().filter((q) => authorOf(q) !== userId);
+
+/** Other people's waiting logs, counted per person, oldest first: "2 logs waiting for Imani Wairimu". */
+export function othersWaiting(userId: number): { key: string; name: string; count: number }[] {
+  const byAuthor = new Map<string, { key: string; name: string; count: number }>();
+  for (const q of waitingForOthers(userId)) {
+    const key = String(authorOf(q) ?? q.authorName ?? '');
+    const entry = byAuthor.get(key) ?? { key, name: q.authorName ?? 'someone else', count: 0 };
+    entry.count += 1;
+    byAuthor.set(key, entry);
+  }
+  return [...byAuthor.values()];
 }
 
 function writeOutbox(items: QueuedLog[]) {
@@ -33,32 +62,42 @@ export function newIdempotencyKey(userId: number) {
 /** No answer at all (offline, dropped connection) or a gateway error: worth sending again later. */
 export const isRetryable = (e: unknown) => !(e instanceof ApiError) || e.status >= 500 || e.status === 0;
 
+/** The server's refusal of a log made by someone other than the person signed in. */
+const isOtherAuthorsLog = (e: unknown) => e instanceof ApiError && e.status === 409 && Boolean(e.fields.idempotencyKey);
+
 export type SendResult = { kind: 'sent'; result: LogWorkResult } | { kind: 'queued' };
 
-/** Send a log now; if the network is down, keep it on the device with its key and say so. */
-export async function sendLog(input: LogWorkInput, label: string): Promise<SendResult> {
+/** Send a log now; if the network is down, keep it on the device with its key and its author, and say so. */
+export async function sendLog(input: LogWorkInput, label: string, author: { id: number; name: string }): Promise<SendResult> {
   try {
     return { kind: 'sent', result: await api.post<LogWorkResult>('/floor/logs', input) };
   } catch (e) {
     if (!isRetryable(e)) throw e;
-    writeOutbox([...readOutbox().filter((q) => q.input.idempotencyKey !== input.idempotencyKey), { input, label, queuedAt: new Date().toISOString() }]);
+    writeOutbox([
+      ...readOutbox().filter((q) => q.input.idempotencyKey !== input.idempotencyKey),
+      { input, label, authorId: author.id, authorName: author.name, queuedAt: new Date().toISOString() },
+    ]);
     return { kind: 'queued' };
   }
 }
 
 let flushing: Promise<{ sent: number; refused: string[] }> | null = null;
 
-/** Send what is waiting, in order, each with its own key. Stops at the first network failure. */
-export function flushOutbox() {
+/**
+ * Send what `userId` (the person signed in now) left waiting, in order, each with its own key. Other
+ * people's logs stay on the device for when they sign in. Stops at the first network failure.
+ */
+export function flushOutbox(userId: number) {
   flushing ??= (async () => {
     let sent = 0;
     const refused: string[] = [];
-    for (const item of readOutbox()) {
+    for (const item of waitingFor(userId)) {
       try {
         await api.post<LogWorkResult>('/floor/logs', item.input);
         sent += 1;
       } catch (e) {
-        if (isRetryable(e)) break;
+        // Not now (offline), or the session changed hands mid-send: keep it for its author.
+        if (isRetryable(e) || isOtherAuthorsLog(e)) break;
         refused.push(`${item.label}: ${(e as Error).message}`);
       }
       writeOutbox(readOutbox().filter((q) => q.input.idempotencyKey !== item.input.idempotencyKey));
@@ -68,4 +107,11 @@ export function flushOutbox() {
     flushing = null;
   });
   return flushing;
+}
+
+/** What to say before `userId` signs out while logs they made still wait on this device; null when none. */
+export function outboxSignOutWarning(userId: number): string | null {
+  const n = waitingFor(userId).length;
+  if (!n) return null;
+  return `${n} log${n > 1 ? 's' : ''} you made ${n > 1 ? 'are' : 'is'} still waiting for the network. ${n > 1 ? 'They stay' : 'It stays'} on this phone and ${n > 1 ? 'are' : 'is'} sent under your name when you sign in here again, never under anyone else's.`;
 }

@@ -9,6 +9,7 @@ import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
+import { FloorTabletCard } from './floor-tablet-card';
 
 const c = createColumnHelper<PersonDto>();
 
@@ -124,6 +125,7 @@ export function PeoplePage() {
     <>
       <PageHeader title="People" subtitle="Your cutter, machinists and finishers, and what each may do." />
       <Card title="Add a person" className="mb-5"><AddPersonForm /></Card>
+      <FloorTabletCard />
       <DataTable data={data} columns={columns} filterPlaceholder="Filter people…" />
     </>
   );
