@@ -14,6 +14,7 @@ import { PayPeriodEntity } from './pay-period.entity';
 import { PayoutEntity } from './payout.entity';
 import { PurchaseOrderEntity } from './purchase-order.entity';
 import { RollEntity } from './roll.entity';
+import { RollReservationEntity } from './roll-reservation.entity';
 import { SessionEntity } from './session.entity';
 import { StudioEntity } from './studio.entity';
 import { StyleEntity } from './style.entity';
@@ -40,6 +41,7 @@ export {
   PayoutEntity,
   PurchaseOrderEntity,
   RollEntity,
+  RollReservationEntity,
   SessionEntity,
   StudioEntity,
   StyleEntity,
@@ -76,4 +78,5 @@ export const entities = [
   PurchaseOrderEntity,
   MailMessageEntity,
   UploadEntity,
+  RollReservationEntity,
 ];
