@@ -52,6 +52,8 @@ export interface RollDto {
   shadeLot: string;
   receivedDate: string;
   remainingMm: number;
+  /** Held by planned lays not yet cut; free for other plans = remaining − reserved. */
+  reservedMm: number;
   isRemnant: boolean;
 }
 
@@ -104,6 +106,26 @@ export interface LayDto {
   flaws: string;
   cutAt: string | null;
   bundleCount: number;
+  /** Set while a planned lay cannot be spread in full from the stock it holds. */
+  shortage?: LayShortageDto | null;
+}
+
+/** Why a planned lay cannot be spread in full: plies with no roll, or rolls holding less than lays need. */
+export interface LayShortageDto {
+  /** Plies no roll could supply when the plan was made (stock was already held or used). */
+  pliesWithoutFabric: number;
+  /** Rolls with less on hand than the lays waiting on them hold, mm. */
+  rolls: { rollId: number; label: string; onHandMm: number; heldMm: number }[];
+  /** One plain sentence for the owner and the cutter. */
+  message: string;
+}
+
+/** A shortage on the owner's Today: which lay of which batch. */
+export interface ShortageDto extends LayShortageDto {
+  layId: number;
+  batchId: number;
+  batchCode: string;
+  seq: number;
 }
 
 export interface CutPlanDto {
