@@ -21,8 +21,8 @@ export function LayPage() {
     if (!data) return;
     // Empty until the cutter types what was spread and measured: a pre-filled plan would be saved as fact.
     setActual(Object.fromEntries(data.lay.rolls.map((r) => [r.rollId, {
-      actualPlies: r.actualPlies === undefined ? '' : String(r.actualPlies),
-      actualRemnantM: r.actualRemnantMm === undefined ? '' : (r.actualRemnantMm / 1000).toFixed(2),
+      actualPlies: r.actualPlies == null ? '' : String(r.actualPlies),
+      actualRemnantM: r.actualRemnantMm == null ? '' : (r.actualRemnantMm / 1000).toFixed(2),
       note: r.note ?? '',
     }])));
     setFlaws(data.lay.flaws);
