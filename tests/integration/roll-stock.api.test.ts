@@ -90,6 +90,25 @@ describe('marking a lay cut', () => {
     expect((await cutter.get(`/api/batches/${batchId}/bundles`)).body.bundles).toEqual([]);
   });
 
+  it('refuses to mark a lay cut until the plies spread and the measured remnant are entered for every roll', async () => {
+    const { fabricId, rollId } = await fabricWithRoll(40_000);
+    const batchId = await newBatch();
+    const [lay] = (await plan(batchId, fabricId)).body.cutPlan.lays as Lay[];
+    const bare = await cutter.post(`/api/lays/${lay.id}/cut`).send({});
+    expect(bare.status).toBe(400);
+    expect(bare.body.error.fields['rolls.0.actualPlies']).toMatch(/^Enter the plies spread from roll ST-\d+$/);
+    expect(bare.body.error.fields['rolls.0.actualRemnantMm']).toMatch(/^Measure and enter the remnant left on roll ST-\d+$/);
+    const pliesOnly = await cutter.post(`/api/lays/${lay.id}/cut`).send({ rolls: [{ rollId, actualPlies: lay.rolls[0].plies }] });
+    expect(pliesOnly.status).toBe(400);
+    expect((await roll(fabricId, rollId)).remainingMm).toBe(40_000);
+    expect((await cutter.get(`/api/batches/${batchId}/bundles`)).body.bundles).toEqual([]);
+    // Saved earlier on the lay page, the measured figures are what the cut uses.
+    const measured = { rolls: [{ rollId, actualPlies: lay.rolls[0].plies, actualRemnantMm: 30_000 }] };
+    expect((await cutter.put(`/api/lays/${lay.id}`).send(measured)).status).toBe(200);
+    expect((await cutter.post(`/api/lays/${lay.id}/cut`).send({})).status).toBe(200);
+    expect((await roll(fabricId, rollId)).remainingMm).toBe(30_000);
+  });
+
   it('keeps the remnant the cutter measured and consumes the lay\'s hold; stock only goes down', async () => {
     const { fabricId, rollId } = await fabricWithRoll(40_000);
     const lays = (await plan(await newBatch(), fabricId)).body.cutPlan.lays as Lay[];

@@ -41,6 +41,18 @@ function checkRemnants(lines: LayRollLine[], onHand: Map<number, RollEntity>, in
 }
 const REMNANT_EPSILON_MM = 1e-6;
 
+/** Every roll line needs the plies spread and the measured remnant, typed now or saved before: the plan is never taken as fact. */
+function checkMeasured(lines: LayRollLine[], input: RecordLayInput | undefined) {
+  const fields: Record<string, string> = {};
+  lines.forEach((l, i) => {
+    const at = input?.rolls.findIndex((r) => r.rollId === l.rollId) ?? -1;
+    const row = at >= 0 ? at : i;
+    if (l.actualPlies == null) fields[`rolls.${row}.actualPlies`] = `Enter the plies spread from roll ${l.label}`;
+    if (l.actualRemnantMm == null) fields[`rolls.${row}.actualRemnantMm`] = `Measure and enter the remnant left on roll ${l.label}`;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+}
+
 /** Save the plies spread, remnants and flaws without cutting yet. */
 export async function recordLay(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput) {
   const lay = await plans.getLay(studioId, id);
@@ -60,15 +72,17 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
  * Each roll keeps the remnant the cutter measured (else what the plies spread leave); a remnant longer
  * than the roll held is refused, so stock only goes down, and the lay's holds on its rolls are consumed.
  * A remnant no other lay holds is kept as a short roll when it reaches the stock threshold (1 m, common
- * practice), else written off as end-of-roll waste.
+ * practice), else written off as end-of-roll waste. The plies spread and the remnant of every roll must be
+ * entered (400 naming the row otherwise); only the demo seed's history is cut `asPlanned`.
  */
-export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date) {
+export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date, opts: { asPlanned?: boolean } = {}) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const later = (await plans.laysOf(studioId, lay.cutPlanId)).filter((l) => l.id !== lay.id && l.status === 'planned');
   const usedLater = new Set(later.flatMap((l) => l.rolls.map((r) => r.rollId)));
   const rolls = input ? applyRecord(lay.rolls, input) : lay.rolls;
+  if (!opts.asPlanned) checkMeasured(rolls, input);
   const byLot: { shadeLot: string; plies: number }[] = [];
   for (const r of rolls) {
     const plies = r.actualPlies ?? r.plies;
