@@ -15,6 +15,7 @@ import { PayPeriodEntity } from './pay-period.entity';
 import { PayoutEntity } from './payout.entity';
 import { PurchaseOrderEntity } from './purchase-order.entity';
 import { RollEntity } from './roll.entity';
+import { RollReservationEntity } from './roll-reservation.entity';
 import { SessionEntity } from './session.entity';
 import { StudioEntity } from './studio.entity';
 import { StyleEntity } from './style.entity';
@@ -42,6 +43,7 @@ export {
   PayoutEntity,
   PurchaseOrderEntity,
   RollEntity,
+  RollReservationEntity,
   SessionEntity,
   StudioEntity,
   StyleEntity,
@@ -79,4 +81,5 @@ export const entities = [
   MailMessageEntity,
   UploadEntity,
   FloorDeviceEntity,
+  RollReservationEntity,
 ];

@@ -36,6 +36,10 @@ export class RollEntity {
   @Column({ type: 'real' })
   remainingMm: number;
 
+  /** Length held by lays not yet cut: the sum of the roll's `held` reservations. Free = remaining − reserved. */
+  @Column({ type: 'real', default: 0 })
+  reservedMm: number;
+
   /** A short end kept as stock. */
   @Column({ type: 'boolean', default: false })
   isRemnant: boolean;

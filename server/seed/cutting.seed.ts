@@ -47,7 +47,7 @@ export async function seedCutting(ctx: SeedContext): Promise<void> {
   const plans = createCutPlanRepository(ds);
   const plan = await planBatchCut(ds, createLocalJobRunner(), plans, studioId, ctx.batchId, { fabricId: fabric.id, ...DEMO_CUT_SETTINGS });
   const lays = await plans.laysOf(studioId, plan.id);
-  if (lays[0]) await markLayCut(plans, studioId, lays[0].id, undefined, addDays(subDays(ctx.today, 1), 0));
+  if (lays[0]) await markLayCut(plans, studioId, lays[0].id, undefined, addDays(subDays(ctx.today, 1), 0), { asPlanned: true });
   if (process.env.NODE_ENV === 'test') return;
   const pieces = await loadStylePieces(ds, studioId, ctx.styleId);
   const ratios = [...new Map(lays.map((l) => [JSON.stringify(l.ratio), l.ratio])).values()].slice(1, 2);

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { safeText } from './common';
+import { limitText, MAX_PRICE_MINOR, MAX_STOCK_QUANTITY } from './limits';
 
 /** How labour is costed: standard minutes × cost per minute, or the operations' piece rates. */
 export const LABOUR_BASES = ['sam', 'piece-rates'] as const;
@@ -10,7 +11,7 @@ const minorAmount = (label: string) =>
     .number({ error: `${label} is required` })
     .int('Whole minor units only (e.g. cents)')
     .min(0, 'Cannot be negative')
-    .max(1_000_000_000, 'Too large');
+    .max(MAX_PRICE_MINOR, `At most ${limitText(MAX_PRICE_MINOR)} minor units`);
 const percent = (max: number) =>
   z.number({ error: 'Enter a percentage' }).min(0, 'Cannot be negative').max(max, `At most ${max} %`);
 
@@ -22,7 +23,7 @@ const trimFields = {
   quantityPerGarment: z.number({ error: 'Enter a quantity' }).min(0, 'Cannot be negative').max(10000, 'Too many'),
   unitPriceMinor: minorAmount('Unit price'),
   supplierId: z.number().int().positive().nullable(),
-  inStock: z.number().min(0, 'Cannot be negative'),
+  inStock: z.number({ error: 'Enter the stock' }).min(0, 'Cannot be negative').max(MAX_STOCK_QUANTITY, `At most ${limitText(MAX_STOCK_QUANTITY)} in stock`),
 };
 
 export const createTrimInput = z.object({

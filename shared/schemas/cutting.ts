@@ -1,8 +1,9 @@
+import { limitText, MAX_PLIES, MAX_PRICE_MINOR, MAX_ROLL_LENGTH_MM, MAX_ROLLS_AT_ONCE } from './limits';
 import { z } from 'zod';
 import { calendarDate, safeText } from './common';
 
 const name = z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters');
-const positiveMm = (what: string) => z.number({ error: `${what} is required` }).positive(`${what} must be above 0`).max(1_000_000, `${what} is too large`);
+const positiveMm = (what: string) => z.number({ error: `${what} is required` }).positive(`${what} must be above 0`).max(MAX_ROLL_LENGTH_MM, `${what} is too large: at most ${limitText(MAX_ROLL_LENGTH_MM)} mm (1 km)`);
 
 export const createFabricInput = z.object({
   name,
@@ -10,9 +11,9 @@ export const createFabricInput = z.object({
   widthMm: positiveMm('Cuttable width').max(5000, 'At most 5000 mm'),
   shrinkagePercent: z.number().min(0, 'Cannot be negative').max(30, 'At most 30 %').default(0),
   isDirectional: z.boolean().default(false),
-  pricePerMetreMinor: z.number().int('Whole minor units').min(0, 'Cannot be negative').default(0),
+  pricePerMetreMinor: z.number().int('Whole minor units').min(0, 'Cannot be negative').max(MAX_PRICE_MINOR, `At most ${limitText(MAX_PRICE_MINOR)} minor units`).default(0),
   supplierId: z.number().int().positive().nullable().default(null),
-  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(300, 'At most 300 plies').default(40),
+  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(MAX_PLIES, `At most ${MAX_PLIES} plies`).default(40),
 });
 export type CreateFabricInput = z.input<typeof createFabricInput>;
 export const updateFabricInput = createFabricInput.partial();
@@ -52,6 +53,8 @@ export interface RollDto {
   shadeLot: string;
   receivedDate: string;
   remainingMm: number;
+  /** Held by planned lays not yet cut; free for other plans = remaining − reserved. */
+  reservedMm: number;
   isRemnant: boolean;
 }
 
@@ -66,12 +69,12 @@ export const fabricParam = z.object({ id: z.coerce.number().int().positive() });
 
 export const createCutPlanInput = z.object({
   fabricId: z.number({ error: 'Pick a fabric' }).int().positive('Pick a fabric'),
-  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(300, 'At most 300 plies'),
+  maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(MAX_PLIES, `At most ${MAX_PLIES} plies`),
   maxGarmentsPerMarker: z.number().int('Whole garments').min(1, 'At least 1 garment').max(12, 'At most 12 garments'),
   maxMarkerLengthMm: z.number().positive('Must be above 0').max(100_000, 'At most 100 m').optional(),
   overcutPercent: z.number().min(0, 'Cannot be negative').max(50, 'At most 50 %').optional(),
   endAllowanceMm: z.number().min(0, 'Cannot be negative').max(500, 'At most 500 mm').optional(),
-  rollIds: z.array(z.number().int().positive()).optional(),
+  rollIds: z.array(z.number().int().positive()).max(MAX_ROLLS_AT_ONCE, `At most ${MAX_ROLLS_AT_ONCE} rolls`).optional(),
 });
 export type CreateCutPlanInput = z.input<typeof createCutPlanInput>;
 
@@ -104,6 +107,26 @@ export interface LayDto {
   flaws: string;
   cutAt: string | null;
   bundleCount: number;
+  /** Set while a planned lay cannot be spread in full from the stock it holds. */
+  shortage?: LayShortageDto | null;
+}
+
+/** Why a planned lay cannot be spread in full: plies with no roll, or rolls holding less than lays need. */
+export interface LayShortageDto {
+  /** Plies no roll could supply when the plan was made (stock was already held or used). */
+  pliesWithoutFabric: number;
+  /** Rolls with less on hand than the lays waiting on them hold, mm. */
+  rolls: { rollId: number; label: string; onHandMm: number; heldMm: number }[];
+  /** One plain sentence for the owner and the cutter. */
+  message: string;
+}
+
+/** A shortage on the owner's Today: which lay of which batch. */
+export interface ShortageDto extends LayShortageDto {
+  layId: number;
+  batchId: number;
+  batchCode: string;
+  seq: number;
 }
 
 export interface CutPlanDto {
@@ -135,8 +158,8 @@ export const recordLayInput = z.object({
     .array(
       z.object({
         rollId: z.number().int().positive(),
-        actualPlies: z.number().int('Whole plies').min(0, 'Cannot be negative').max(300, 'At most 300 plies'),
-        actualRemnantMm: z.number().min(0, 'Cannot be negative').max(1_000_000, 'Too long'),
+        actualPlies: z.number().int('Whole plies').min(0, 'Cannot be negative').max(MAX_PLIES, `At most ${MAX_PLIES} plies`),
+        actualRemnantMm: z.number().min(0, 'Cannot be negative').max(MAX_ROLL_LENGTH_MM, 'Longer than any roll'),
         note: safeText(500).optional(),
       }),
     )

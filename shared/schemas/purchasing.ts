@@ -1,3 +1,4 @@
+import { limitText, MAX_ORDER_LINES, MAX_ROLL_LENGTH_MM, MAX_STOCK_QUANTITY } from './limits';
 import { z } from 'zod';
 import { calendarDate, safeText } from './common';
 
@@ -78,10 +79,11 @@ export const createOrderInput = z.object({
         kind: z.enum(['fabric', 'trim']),
         refId: z.number().int().positive(),
         /** mm for fabric, the trim's unit otherwise. */
-        quantity: z.number({ error: 'Enter a quantity' }).positive('Must be more than 0').max(10_000_000, 'Too much'),
+        quantity: z.number({ error: 'Enter a quantity' }).positive('Must be more than 0').max(MAX_STOCK_QUANTITY, `At most ${limitText(MAX_STOCK_QUANTITY)}`),
       }),
     )
-    .min(1, 'Add at least one line'),
+    .min(1, 'Add at least one line')
+    .max(MAX_ORDER_LINES, `At most ${MAX_ORDER_LINES} lines`),
 });
 export type CreateOrderInput = z.input<typeof createOrderInput>;
 
@@ -99,7 +101,7 @@ export const updateOrderStatusInput = z.object({ status: z.enum(['confirmed']) }
 
 const rollInput = z.object({
   label: safeText(40).min(1, 'Label the roll'),
-  lengthMm: z.number({ error: 'Enter the roll length' }).positive('Must be longer than 0').max(1_000_000, 'Longer than 1 km?'),
+  lengthMm: z.number({ error: 'Enter the roll length' }).positive('Must be longer than 0').max(MAX_ROLL_LENGTH_MM, `At most ${limitText(MAX_ROLL_LENGTH_MM)} mm (1 km)`),
   shadeLot: safeText(40).min(1, 'Give the shade lot'),
 });
 
@@ -108,12 +110,13 @@ export const receiveOrderInput = z.object({
   lines: z
     .array(
       z.object({
-        index: z.number().int().min(0),
+        index: z.number().int().min(0).max(MAX_ORDER_LINES - 1, 'No such line on this order'),
         /** Trim lines: quantity received. Fabric lines: the rolls received. */
-        quantity: z.number().min(0, 'Cannot be negative').optional(),
+        quantity: z.number().min(0, 'Cannot be negative').max(MAX_STOCK_QUANTITY, `At most ${limitText(MAX_STOCK_QUANTITY)} in one receipt`).optional(),
         rolls: z.array(rollInput).max(200).optional(),
       }),
     )
-    .min(1, 'Receive at least one line'),
+    .min(1, 'Receive at least one line')
+    .max(MAX_ORDER_LINES, `At most ${MAX_ORDER_LINES} lines`),
 });
 export type ReceiveOrderInput = z.input<typeof receiveOrderInput>;

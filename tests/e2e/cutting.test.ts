@@ -45,9 +45,19 @@ describe('the cutter cuts today\'s first lay', () => {
     expect(await page.getByText('Cutting-room cautions').isVisible()).toBe(true);
     const body = await page.textContent('body');
     expect(body).not.toMatch(/KES|price/i);
-    const plies = page.getByLabel(/Plies spread from/).first();
-    const planned = Number(await plies.inputValue());
-    await plies.fill(String(Math.max(1, planned - 1)));
+    // Nothing is pre-filled from the plan: the cutter types the plies spread and the remnant measured on every roll.
+    const rows = page.getByRole('row').filter({ has: page.getByLabel(/Plies spread from/) });
+    const n = await rows.count();
+    expect(n).toBeGreaterThan(0);
+    for (let i = 0; i < n; i++) {
+      const row = rows.nth(i);
+      const [plies, remnant] = [row.getByLabel(/Plies spread from/), row.getByLabel(/Remnant left on/)];
+      expect(await plies.inputValue()).toBe('');
+      expect(await remnant.inputValue()).toBe('');
+      const cells = await row.getByRole('cell').allTextContents();
+      await plies.fill(String(Math.max(1, Number(cells[2]) - (i === 0 ? 1 : 0))));
+      await remnant.fill(cells[3].replace(/[^\d.]/g, ''));
+    }
     await page.getByLabel('Flaws and shortages').fill('One ply short: hole near the selvedge');
     await shot(page, 'cutter-lay-phone');
     await page.getByRole('button', { name: 'Mark lay cut' }).click();

@@ -2,6 +2,7 @@ import { Initial1796168535359 } from './1796168535359-Initial';
 import { PayoutAccount1796181395083 } from './1796181395083-PayoutAccount';
 import { FloorSignInAndBundleNumbers1796361960738 } from './1796361960738-FloorSignInAndBundleNumbers';
 import { PayoutFreezeAndLogPayPeriod1796362059995 } from './1796362059995-PayoutFreezeAndLogPayPeriod';
+import { RollReservations1796362119816 } from './1796362119816-RollReservations';
 
 /** PostgreSQL migrations, generated from the same entities (`DATABASE_URL=postgres://… npm run db:generate -- Name`). */
-export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995];
+export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816];

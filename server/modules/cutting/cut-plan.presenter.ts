@@ -1,10 +1,10 @@
-import type { BundleDto, CutPlanDto, LayDto } from '../../../shared/schemas/cutting';
+import type { BundleDto, CutPlanDto, LayDto, LayShortageDto } from '../../../shared/schemas/cutting';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 import type { BundleEntity, CutPlanEntity, LayEntity } from '../../entities';
 import { batchCode } from '../batches/batch.routes';
 import type { StoredCutPlanResult } from './cut-plan.service';
 
-export const presentLay = (l: LayEntity, bundleCount = 0): LayDto => ({
+export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageDto | null = null): LayDto => ({
   id: l.id,
   cutPlanId: l.cutPlanId,
   batchId: l.batchId,
@@ -22,9 +22,10 @@ export const presentLay = (l: LayEntity, bundleCount = 0): LayDto => ({
   flaws: l.flaws,
   cutAt: l.cutAt ? new Date(l.cutAt).toISOString() : null,
   bundleCount,
+  shortage,
 });
 
-export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>): CutPlanDto {
+export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>()): CutPlanDto {
   const r = p.result as StoredCutPlanResult;
   return {
     id: p.id,
@@ -45,7 +46,7 @@ export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEn
     stockKeptMm: r.allocation.stockKept,
     shortfall: r.allocation.shortfall,
     splitLays: r.allocation.splitLays,
-    lays: lays.map((l) => presentLay(l, counts.get(l.id) ?? 0)),
+    lays: lays.map((l) => presentLay(l, counts.get(l.id) ?? 0, shortages.get(l.id) ?? null)),
     createdAt: new Date(p.createdAt).toISOString(),
   };
 }

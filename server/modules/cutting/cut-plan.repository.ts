@@ -1,4 +1,5 @@
 import { In, Not, type DataSource, type EntityManager } from 'typeorm';
+import { createRollStockRepository } from './roll-stock.repository';
 import { BundleEntity, CutPlanEntity, LayEntity, OperationEntity, StudioEntity } from '../../entities';
 
 export type CutPlanRepository = ReturnType<typeof createCutPlanRepository>;
@@ -9,6 +10,7 @@ export function createCutPlanRepository(ds: DataSource) {
   const lays = ds.getRepository(LayEntity);
   const bundles = ds.getRepository(BundleEntity);
   return {
+    stock: createRollStockRepository(ds),
     transaction: <T>(fn: (m: EntityManager) => Promise<T>) => ds.transaction(fn),
     getPlan: (studioId: number, id: number) => plans.findOne({ where: { studioId, id } }),
     /** The batch's current plan: the newest that is not superseded. */

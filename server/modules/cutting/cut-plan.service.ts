@@ -2,7 +2,7 @@ import type { allocateRolls, planCutOrder, SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
 import type { DataSource } from 'typeorm';
 import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
-import { CutPlanEntity, LayEntity, type FabricEntity, type RollEntity } from '../../entities';
+import { CutPlanEntity, LayEntity, type FabricEntity, type RollEntity, type RollReservationEntity } from '../../entities';
 import type { LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import { createBatchRepository } from '../batches/batch.repository';
@@ -13,6 +13,7 @@ import type { CutPlanRepository } from './cut-plan.repository';
 import { createFabricRepository } from './fabric.repository';
 import { ratioKey } from './cut-order-job';
 import type { JobRunner } from '../../jobs/job-runner';
+import { withStockLock } from './stock-lock';
 
 /**
  * Utilisation assumed when a ratio has no stored marker: length ≈ piece area ÷ (width × 0.75). Common
@@ -39,20 +40,28 @@ export function spreadingModeFor(fabric: Pick<FabricEntity, 'isDirectional'>): s
   return fabric.isDirectional ? 'face-up-one-way' : 'face-up-both-ways';
 }
 
+/** Another plan took roll length between the solve and the save: solve again on what is free now. */
+class StockMoved extends Error {}
+const PLAN_ATTEMPTS = 3;
+
 /**
  * Plans the cut of a batch: marker length per candidate ratio (a stored marker of that ratio on this
  * width, else the estimate above), the cut-order core for lays with its lower bound, then roll
  * allocation (shade lots kept apart) for the marker list per roll. Earlier unstarted plans of the batch
  * are superseded; a plan with a cut lay cannot be replaced.
+ *
+ * Roll allocation sees only free length: on hand less what other batches' plans hold. The new plan
+ * holds what it allocates (one reservation per lay and roll) in the same transaction that releases the
+ * batch's old holds; a hold is taken only while the length is still free, so when two plans race the
+ * later one solves again on what is left (up to three times) rather than double-booking a roll.
  */
-export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput) {
+export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput, now: Date = new Date()) {
   const batch = await createBatchRepository(ds).get(studioId, batchId);
   if (!batch?.style) throw notFound('Batch');
   const sizes = batch.style.sizeRun;
   const fabrics = createFabricRepository(ds);
   const fabric = await fabrics.get(studioId, input.fabricId);
   if (!fabric) throw badRequest('fabricId: no such fabric in this studio', { fabricId: 'No such fabric' });
-  const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
   const pieces = await loadStylePieces(ds, studioId, batch.styleId);
   if (!Object.keys(pieces).length) throw conflict('This style has no graded pieces yet: grade it first');
   const live = await plans.livePlans(studioId, batchId);
@@ -67,30 +76,80 @@ export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPl
     const prev = stored.get(k);
     if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm });
   }
-  // The solve is pure: it runs here, or on a job worker when REDIS_URL is set (server/jobs).
-  const solved = await jobs.run('cut-order', {
-    order: {
-      sizes, quantities: remaining, maxPlies: Math.min(input.maxPlies, fabric.maxPlies), maxGarmentsPerMarker: input.maxGarmentsPerMarker,
-      maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
-      overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
-      nodeBudget: 200_000,
-    },
-    storedLengthsMm: Object.fromEntries([...stored].map(([k, v]) => [k, v.length])),
-    garmentAreasMm2: areas,
-    widthMm: fabric.widthMm,
-    assumedUtilisation: ASSUMED_UTILISATION,
-    rolls: rolls.map((r) => ({ id: String(r.id), lengthMm: r.remainingMm, shadeLot: r.shadeLot, widthMm: r.widthMm })),
-  });
-  if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
+  for (let attempt = 1; ; attempt++) {
+    const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
+    const replaced = await plans.stock.releasable(studioId, batchId);
+    const free = freeLengths(rolls, replaced);
+    // The solve is pure: it runs here, or on a job worker when REDIS_URL is set (server/jobs).
+    const solved = await jobs.run('cut-order', {
+      order: {
+        sizes, quantities: remaining, maxPlies: Math.min(input.maxPlies, fabric.maxPlies), maxGarmentsPerMarker: input.maxGarmentsPerMarker,
+        maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
+        overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
+        nodeBudget: 200_000,
+      },
+      storedLengthsMm: Object.fromEntries([...stored].map(([k, v]) => [k, v.length])),
+      garmentAreasMm2: areas,
+      widthMm: fabric.widthMm,
+      assumedUtilisation: ASSUMED_UTILISATION,
+      rolls: rolls.filter((r) => (free.get(r.id) ?? 0) > 0).map((r) => ({ id: String(r.id), lengthMm: free.get(r.id)!, shadeLot: r.shadeLot, widthMm: r.widthMm })),
+    });
+    if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
+    try {
+      return await withStockLock(studioId, () => savePlan(plans, { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rolls, replaced, now }, solved));
+    } catch (err) {
+      if (!(err instanceof StockMoved)) throw err;
+      if (attempt >= PLAN_ATTEMPTS) throw conflict('Roll stock kept changing while this plan was made; plan again');
+    }
+  }
+}
+
+/** Free length per roll: on hand less what is held, plus what the plan being made will release. */
+function freeLengths(rolls: RollEntity[], replaced: { rollId: number; lengthMm: number }[]) {
+  const back = new Map<number, number>();
+  for (const r of replaced) back.set(r.rollId, (back.get(r.rollId) ?? 0) + r.lengthMm);
+  return new Map(rolls.map((r) => [r.id, Math.max(0, r.remainingMm - r.reservedMm + (back.get(r.id) ?? 0))]));
+}
+
+interface PlanContext {
+  studioId: number;
+  batchId: number;
+  fabric: FabricEntity;
+  input: CreateCutPlanInput;
+  live: CutPlanEntity[];
+  cutLays: LayEntity[];
+  stored: Map<string, { id: number; length: number }>;
+  sizes: string[];
+  rolls: RollEntity[];
+  replaced: RollReservationEntity[];
+  now: Date;
+}
+
+/** Length each roll gives each lay: the drop in the roll's remaining length over its segment, mm. */
+function lengthsByLayAndRoll(allocation: ReturnType<typeof allocateRolls>) {
+  const out: { lay: number; rollId: number; lengthMm: number }[] = [];
+  for (const u of allocation.rolls) {
+    let before = u.length;
+    for (const s of u.segments) {
+      out.push({ lay: s.lay, rollId: Number(u.id), lengthMm: before - s.remaining });
+      before = s.remaining;
+    }
+  }
+  return out;
+}
+
+async function savePlan(plans: CutPlanRepository, c: PlanContext, solved: { plan: ReturnType<typeof planCutOrder>; allocation: ReturnType<typeof allocateRolls> }) {
+  const { studioId, batchId, fabric, input, live, cutLays, stored, sizes } = c;
   const { plan, allocation } = solved;
   const lengthSources = plan.lays.map((l) => {
     const hit = stored.get(ratioKey(l.ratio, sizes));
     return hit ? { ratio: l.ratio, source: 'marker' as const, markerId: hit.id } : { ratio: l.ratio, source: 'estimate' as const };
   });
   const result: StoredCutPlanResult = { plan, allocation, lengthSources, assumedUtilisation: ASSUMED_UTILISATION };
-  const byId = new Map(rolls.map((r) => [String(r.id), r]));
+  const byId = new Map(c.rolls.map((r) => [String(r.id), r]));
   const firstSeq = cutLays.reduce((a, l) => Math.max(a, l.seq), 0) + 1;
   return plans.transaction(async (m) => {
+    await plans.stock.release(m, studioId, c.replaced, c.now);
     for (const p of live) await m.getRepository(CutPlanEntity).update({ studioId, id: p.id }, { status: 'superseded' });
     const saved = await m.getRepository(CutPlanEntity).save({
       studioId, batchId, fabricId: fabric.id, input: { ...input, maxPlies: Math.min(input.maxPlies, fabric.maxPlies) }, result,
@@ -109,7 +168,12 @@ export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPl
         rolls: lines, status: 'planned', flaws: '', cutAt: null,
       });
     });
-    await m.getRepository(LayEntity).save(lays);
+    const savedLays = await m.getRepository(LayEntity).save(lays);
+    for (const h of lengthsByLayAndRoll(allocation)) {
+      if (!(h.lengthMm > 0)) continue;
+      const held = await plans.stock.reserve(m, { studioId, rollId: h.rollId, cutPlanId: saved.id, layId: savedLays[h.lay].id, batchId, lengthMm: h.lengthMm });
+      if (!held) throw new StockMoved();
+    }
     // Lays already cut move to the new plan unchanged; the new lays cover only what is left to cut.
     for (const l of cutLays) await m.getRepository(LayEntity).update({ studioId, id: l.id }, { cutPlanId: saved.id });
     return saved;

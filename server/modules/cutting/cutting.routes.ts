@@ -2,18 +2,21 @@ import { Router, type Response } from 'express';
 import type { DataSource } from 'typeorm';
 import type { JobRunner } from '../../jobs/job-runner';
 import { idParam } from '../../../shared/schemas/common';
-import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
+import { createCutPlanInput, cutLayInput, recordLayInput, type ShortageDto } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
 import { notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import { createBatchRepository } from '../batches/batch.repository';
+import { batchCode } from '../batches/batch.routes';
 import { presentBundle, presentCutPlan, presentLay } from './cut-plan.presenter';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { planBatchCut } from './cut-plan.service';
 import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
 import type { FabricRepository } from './fabric.repository';
 import { markLayCut, recordLay } from './lay.service';
+import { layShortages } from './shortage';
+import type { LayEntity } from '../../entities';
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 const send = (res: Response, bytes: Buffer, type: string, name: string) => res.type(type).attachment(name).send(bytes);
@@ -28,12 +31,14 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
     if (!b) throw notFound('Batch');
     return b;
   };
+  const shortagesOf = async (studioId: number, list: LayEntity[]) =>
+    layShortages(list, await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]));
   const planDto = async (studioId: number, batchId: number) => {
     const p = await plans.currentPlan(studioId, batchId);
     if (!p) return null;
     const list = await plans.laysOf(studioId, p.id);
     const fabric = await fabrics.get(studioId, p.fabricId);
-    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)));
+    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list));
   };
   const docsFor = async (studioId: number, batchId: number, only?: number) => {
     const batch = await loadBatch(studioId, batchId);
@@ -53,7 +58,7 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
     const actor = actorOf(req);
     const batchId = Number(req.params.id);
-    const saved = await planBatchCut(ds, jobs, plans, actor.studioId, batchId, req.body);
+    const saved = await planBatchCut(ds, jobs, plans, actor.studioId, batchId, req.body, now());
     const dto = (await planDto(actor.studioId, batchId))!;
     await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
     res.status(201).json({ cutPlan: dto });
@@ -93,7 +98,17 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
     const studioId = actorOf(req).studioId;
     const list = await plans.liveLays(studioId);
     const counts = await plans.bundleCounts(studioId, list.map((l) => l.id));
-    res.json({ lays: list.map((l) => presentLay(l, counts.get(l.id) ?? 0)) });
+    const short = await shortagesOf(studioId, list);
+    res.json({ lays: list.map((l) => presentLay(l, counts.get(l.id) ?? 0, short.get(l.id) ?? null)) });
+  });
+  /** Planned lays of open batches that stock cannot cover: the owner's Today and the cutter see them before spreading. */
+  lays.get('/shortages', requirePermission('cutplans:write', 'cutting:work'), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    const open = new Set((await batchRepo.list(studioId)).filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
+    const list = (await plans.liveLays(studioId)).filter((l) => open.has(l.batchId));
+    const short = await shortagesOf(studioId, list);
+    const shortages: ShortageDto[] = list.filter((l) => short.has(l.id)).map((l) => ({ layId: l.id, batchId: l.batchId, batchCode: batchCode(l.batchId), seq: l.seq, ...short.get(l.id)! }));
+    res.json({ shortages });
   });
   lays.get('/:id', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
     const studioId = actorOf(req).studioId;
@@ -103,7 +118,7 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
     const fabric = plan ? await fabrics.get(studioId, plan.fabricId) : null;
     const bundles = await plans.bundlesOfLay(studioId, lay.id);
     res.json({
-      lay: presentLay(lay, bundles.length),
+      lay: presentLay(lay, bundles.length, (await shortagesOf(studioId, [lay])).get(lay.id) ?? null),
       fabric: fabric ? { id: fabric.id, name: fabric.name, composition: fabric.composition, widthMm: fabric.widthMm, isDirectional: fabric.isDirectional, maxPlies: fabric.maxPlies } : null,
       bundles: bundles.map(presentBundle),
     });

@@ -29,5 +29,6 @@ export const presentRoll = (r: RollEntity): RollDto => ({
   shadeLot: r.shadeLot,
   receivedDate: r.receivedDate,
   remainingMm: r.remainingMm,
+  reservedMm: r.reservedMm,
   isRemnant: r.isRemnant,
 });

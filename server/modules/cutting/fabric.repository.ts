@@ -1,6 +1,6 @@
 import { updateIfChanged } from '../../db/update-if-changed';
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import { FabricEntity, RollEntity } from '../../entities';
+import { FabricEntity, RollEntity, SupplierEntity } from '../../entities';
 
 export type FabricRepository = ReturnType<typeof createFabricRepository>;
 
@@ -19,6 +19,8 @@ export function createFabricRepository(ds: DataSource) {
     async remove(studioId: number, id: number) {
       await fabrics.delete({ studioId, id });
     },
+    /** Whether the supplier is one of this studio's: another studio's supplier is never linked. */
+    hasSupplier: async (studioId: number, supplierId: number) => (await ds.getRepository(SupplierEntity).countBy({ studioId, id: supplierId })) > 0,
     rolls: (studioId: number, fabricId: number) => rolls.find({ where: { studioId, fabricId }, order: { shadeLot: 'ASC', label: 'ASC' } }),
     allRolls: (studioId: number) => rolls.find({ where: { studioId } }),
     rollsById: (studioId: number, ids: number[]) => rolls.find({ where: { studioId, id: In(ids) } }),

@@ -23,6 +23,10 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
   const noPriceForCutter = (actor: Actor, body: { pricePerMetreMinor?: number }) => {
     if (body.pricePerMetreMinor !== undefined && !can(actor.role, 'costs:write')) throw forbidden('Your role cannot set prices');
   };
+  /** A fabric's supplier must be one of the studio's own (the same answer whether it is another studio's or none). */
+  const checkSupplier = async (actor: Actor, supplierId: number | null | undefined) => {
+    if (supplierId && !(await fabrics.hasSupplier(actor.studioId, supplierId))) throw badRequest('supplierId: no such supplier', { supplierId: 'No such supplier' });
+  };
 
   r.get('/', requirePermission('fabric:read'), async (req, res) => {
     const actor = actorOf(req);
@@ -38,6 +42,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
   r.post('/', requirePermission('fabric:write'), validate({ body: createFabricInput }), async (req, res) => {
     const actor = actorOf(req);
     noPriceForCutter(actor, req.body);
+    await checkSupplier(actor, req.body.supplierId);
     const f = await fabrics.insert({ ...req.body, studioId: actor.studioId });
     await audit.record(actor, 'create', 'fabric', f.id, undefined, presentFabric(f, 'owner'));
     res.status(201).json({ fabric: presentFabric(f, actor.role) });
@@ -46,6 +51,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     const actor = actorOf(req);
     noPriceForCutter(actor, req.body);
     const before = await load(actor, Number(req.params.id));
+    await checkSupplier(actor, req.body.supplierId);
     const after = await fabrics.update(actor.studioId, before.id, req.body);
     await audit.record(actor, 'update', 'fabric', before.id, presentFabric(before, 'owner'), presentFabric(after, 'owner'));
     res.json({ fabric: presentFabric(after, actor.role, await fabrics.rolls(actor.studioId, after.id)) });

@@ -6,6 +6,7 @@ import type { LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import { batchCode } from '../batches/batch.routes';
 import type { CutPlanRepository } from './cut-plan.repository';
+import { withStockLock } from './stock-lock';
 
 /** Apply what the cutter recorded to the lay's roll lines; unknown rolls are field errors. */
 export function applyRecord(lines: LayRollLine[], input: RecordLayInput): LayRollLine[] {
@@ -20,13 +21,46 @@ export function applyRecord(lines: LayRollLine[], input: RecordLayInput): LayRol
   });
 }
 
+/** Field name of a lay line's remnant: the input row that carried it, else the lay's own line. */
+const remnantField = (input: RecordLayInput | undefined, rollId: number, lineIndex: number) => {
+  const i = input?.rolls.findIndex((r) => r.rollId === rollId) ?? -1;
+  return i >= 0 ? `rolls.${i}.actualRemnantMm` : `rolls.${lineIndex}.actualRemnantMm`;
+};
+
+/** A measured remnant can never be longer than what the roll held: stock only goes down. */
+function checkRemnants(lines: LayRollLine[], onHand: Map<number, RollEntity>, input: RecordLayInput | undefined) {
+  const fields: Record<string, string> = {};
+  lines.forEach((l, i) => {
+    const roll = onHand.get(l.rollId);
+    if (!roll || l.actualRemnantMm === undefined) return;
+    if (l.actualRemnantMm > roll.remainingMm + REMNANT_EPSILON_MM) {
+      fields[remnantField(input, l.rollId, i)] = `Roll ${l.label} had only ${(roll.remainingMm / 1000).toFixed(2)} m; the remnant cannot be longer`;
+    }
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+}
+const REMNANT_EPSILON_MM = 1e-6;
+
+/** Every roll line needs the plies spread and the measured remnant, typed now or saved before: the plan is never taken as fact. */
+function checkMeasured(lines: LayRollLine[], input: RecordLayInput | undefined) {
+  const fields: Record<string, string> = {};
+  lines.forEach((l, i) => {
+    const at = input?.rolls.findIndex((r) => r.rollId === l.rollId) ?? -1;
+    const row = at >= 0 ? at : i;
+    if (l.actualPlies == null) fields[`rolls.${row}.actualPlies`] = `Enter the plies spread from roll ${l.label}`;
+    if (l.actualRemnantMm == null) fields[`rolls.${row}.actualRemnantMm`] = `Measure and enter the remnant left on roll ${l.label}`;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+}
+
 /** Save the plies spread, remnants and flaws without cutting yet. */
 export async function recordLay(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
   if (lay.status === 'cut') throw conflict('This lay is already cut');
+  const rolls = applyRecord(lay.rolls, input);
+  checkRemnants(rolls, new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r])), input);
   return plans.transaction(async (m) => {
-    const rolls = applyRecord(lay.rolls, input);
     await m.getRepository(LayEntity).update({ studioId, id }, { rolls, flaws: input.flaws ?? '' });
     return m.getRepository(LayEntity).findOneByOrFail({ studioId, id });
   });
@@ -34,17 +68,21 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
 
 /**
  * Mark a lay cut: the recorded plies (planned plies where none were recorded) make the lay's bundles
- * (planning/bundles: one size, one shade lot, ply ranges of 10, numbered on from the studio's last bundle, so a number is never another batch's);
- * each roll's remaining length becomes its actual remnant. A remnant that no later lay uses is kept as a
- * short roll when it reaches the stock threshold (1 m, common practice), else written off as end-of-roll waste.
+ * (planning/bundles: one size, one shade lot, ply ranges of 10, numbered on from the studio's last bundle, so a number is never another batch's).
+ * Each roll keeps the remnant the cutter measured (else what the plies spread leave); a remnant longer
+ * than the roll held is refused, so stock only goes down, and the lay's holds on its rolls are consumed.
+ * A remnant no other lay holds is kept as a short roll when it reaches the stock threshold (1 m, common
+ * practice), else written off as end-of-roll waste. The plies spread and the remnant of every roll must be
+ * entered (400 naming the row otherwise); only the demo seed's history is cut `asPlanned`.
  */
-export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date) {
+export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date, opts: { asPlanned?: boolean } = {}) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const later = (await plans.laysOf(studioId, lay.cutPlanId)).filter((l) => l.id !== lay.id && l.status === 'planned');
   const usedLater = new Set(later.flatMap((l) => l.rolls.map((r) => r.rollId)));
   const rolls = input ? applyRecord(lay.rolls, input) : lay.rolls;
+  if (!opts.asPlanned) checkMeasured(rolls, input);
   const byLot: { shadeLot: string; plies: number }[] = [];
   for (const r of rolls) {
     const plies = r.actualPlies ?? r.plies;
@@ -53,7 +91,11 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     else if (plies > 0) byLot.push({ shadeLot: r.shadeLot, plies });
   }
   if (!byLot.length) throw badRequest('rolls: no plies were spread', { rolls: 'No plies were spread' });
-  return plans.transaction(async (m) => {
+  return withStockLock(studioId, () => plans.transaction(async (m) => {
+    const current = await plans.getLay(studioId, id);
+    if (current?.status === 'cut') throw conflict('This lay is already cut');
+    const onHand = new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId), m)).map((r) => [r.id, r]));
+    checkRemnants(rolls, onHand, input);
     const offset = await plans.maxBundleNumber(m, studioId);
     const batch = await m.getRepository(BatchEntity).findOneByOrFail({ studioId, id: lay.batchId });
     const style = await m.getRepository(BatchEntity).findOne({ where: { studioId, id: lay.batchId }, relations: { style: true } });
@@ -65,19 +107,23 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
         plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, reopened: {},
       })),
     );
-    for (const r of rolls) {
-      const roll = await m.getRepository(RollEntity).findOneBy({ studioId, id: r.rollId });
+    const held = await plans.stock.heldOfLay(m, studioId, lay.id);
+    for (const [i, r] of rolls.entries()) {
+      const roll = onHand.get(r.rollId);
       if (!roll) continue;
       const spread = (r.actualPlies ?? r.plies) * (lay.markerLengthMm + lay.endAllowanceMm);
-      const left = Math.max(0, r.actualRemnantMm ?? roll.remainingMm - spread);
-      const keep = usedLater.has(roll.id) || left >= DEFAULT_REMNANT_STOCK_THRESHOLD_MM;
-      await m.getRepository(RollEntity).update({ studioId, id: roll.id }, {
-        remainingMm: keep ? left : 0,
-        isRemnant: !usedLater.has(roll.id) && keep && left > 0 && left < roll.lengthMm,
-      });
+      const left = Math.min(roll.remainingMm, Math.max(0, r.actualRemnantMm ?? roll.remainingMm - spread));
+      const heldHere = held.filter((h) => h.rollId === roll.id).reduce((a, h) => a + h.lengthMm, 0);
+      const heldElsewhere = roll.reservedMm - heldHere > REMNANT_EPSILON_MM * 1000;
+      const wanted = usedLater.has(roll.id) || heldElsewhere;
+      const keep = wanted || left >= DEFAULT_REMNANT_STOCK_THRESHOLD_MM;
+      const isRemnant = !wanted && keep && left > 0 && left < roll.lengthMm;
+      if (!(await plans.stock.consume(m, studioId, lay.id, roll.id, keep ? left : 0, isRemnant, now))) {
+        throw conflict(`Roll ${roll.label} changed while this lay was being cut; reload and try again`, { [remnantField(input, roll.id, i)]: 'The roll changed meanwhile' });
+      }
     }
     await m.getRepository(LayEntity).update({ studioId, id }, { rolls, flaws: input?.flaws ?? lay.flaws, status: 'cut', cutAt: now });
     if (batch.status === 'planned') await m.getRepository(BatchEntity).update({ studioId, id: batch.id }, { status: 'cutting' });
     return { lay: await m.getRepository(LayEntity).findOneByOrFail({ studioId, id }), bundles: made.length };
-  });
+  }));
 }

@@ -1,4 +1,5 @@
 import { addDays, format } from 'date-fns';
+import { limitText, MAX_STOCK_QUANTITY } from '../../../shared/schemas/limits';
 import type { CreateOrderInput, NeedDto, OrderableItemDto, ReceiveOrderInput } from '../../../shared/schemas/purchasing';
 import type { JobRunner } from '../../jobs/job-runner';
 import type { PurchaseOrderEntity, RollEntity } from '../../entities';
@@ -173,6 +174,13 @@ export function createPurchasingService(deps: {
         line.receivedQuantity = (line.receivedQuantity ?? 0) + r.rolls.reduce((a, x) => a + x.lengthMm, 0);
       } else {
         if (r.quantity === undefined) { fields[`lines.${i}.quantity`] = 'Enter the quantity received'; continue; }
+        // Stock on hand stays within the same bound as a typed stock figure, however many receipts add to it.
+        const trim = await repo.trim(studioId, line.refId);
+        const already = trimStock.filter((t) => t.trimId === line.refId).reduce((a, t) => a + t.add, 0);
+        if (trim && trim.inStock + already + r.quantity > MAX_STOCK_QUANTITY) {
+          fields[`lines.${i}.quantity`] = `${trim.name} would hold more than ${limitText(MAX_STOCK_QUANTITY)} ${trim.unit} in stock`;
+          continue;
+        }
         trimStock.push({ trimId: line.refId, add: r.quantity });
         line.receivedQuantity = tidy((line.receivedQuantity ?? 0) + r.quantity);
       }

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { BundleDto, CreateCutPlanInput, CutPlanDto, FabricDto, LayDto, RecordLayInput, RollDto, RollInput } from '@shared/schemas/cutting';
+import type { BundleDto, CreateCutPlanInput, CutPlanDto, FabricDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -26,6 +26,8 @@ export const layQueries = {
   all: () => ({ queryKey: ['lays'] as const }),
   list: () => queryOptions({ queryKey: ['lays', 'list'], queryFn: async () => (await api.get<{ lays: LayDto[] }>('/lays')).lays }),
   detail: (id: number) => queryOptions({ queryKey: ['lays', 'detail', id], queryFn: async () => api.get<LayDetail>(`/lays/${id}`) }),
+  /** Planned lays that stock cannot cover, for the owner's Today. */
+  shortages: () => queryOptions({ queryKey: ['lays', 'shortages'], queryFn: async () => (await api.get<{ shortages: ShortageDto[] }>('/lays/shortages')).shortages }),
 };
 
 const invalidateCutting = () =>

@@ -13,12 +13,12 @@ function RollTable({ rolls }: { rolls: RollDto[] }) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-sm">
-        <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Width</th><th>Received</th></tr></thead>
+        <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Held by plans</th><th>Width</th><th>Received</th></tr></thead>
         <tbody>
           {rolls.map((r) => (
             <tr key={r.id} className="border-t border-calico-200">
               <td className="py-1 font-medium">{r.label} {r.isRemnant ? <Badge tone="gold">remnant</Badge> : null}</td>
-              <td>{r.shadeLot}</td><td>{metres(r.lengthMm)}</td><td>{metres(r.remainingMm)}</td><td>{Math.round(r.widthMm / 10)} cm</td><td>{r.receivedDate}</td>
+              <td>{r.shadeLot}</td><td>{metres(r.lengthMm)}</td><td>{metres(r.remainingMm)}</td><td>{r.reservedMm > 0 ? metres(r.reservedMm) : '—'}</td><td>{Math.round(r.widthMm / 10)} cm</td><td>{r.receivedDate}</td>
             </tr>
           ))}
         </tbody>

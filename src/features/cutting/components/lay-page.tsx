@@ -16,22 +16,42 @@ export function LayPage() {
   const cut = useCutLay(id);
   const [actual, setActual] = useState<Record<number, Actual>>({});
   const [flaws, setFlaws] = useState('');
+  const [local, setLocal] = useState<Record<string, string>>({});
   useEffect(() => {
     if (!data) return;
+    // Empty until the cutter types what was spread and measured: a pre-filled plan would be saved as fact.
     setActual(Object.fromEntries(data.lay.rolls.map((r) => [r.rollId, {
-      actualPlies: String(r.actualPlies ?? r.plies), actualRemnantM: ((r.actualRemnantMm ?? r.expectedRemnantMm) / 1000).toFixed(2), note: r.note ?? '',
+      actualPlies: r.actualPlies == null ? '' : String(r.actualPlies),
+      actualRemnantM: r.actualRemnantMm == null ? '' : (r.actualRemnantMm / 1000).toFixed(2),
+      note: r.note ?? '',
     }])));
     setFlaws(data.lay.flaws);
   }, [data]);
   if (isLoading || !data) return <Spinner />;
   const { lay, fabric, bundles } = data;
-  const body = () => ({
-    rolls: lay.rolls.map((r) => ({ rollId: r.rollId, actualPlies: Number(actual[r.rollId]?.actualPlies ?? r.plies), actualRemnantMm: Math.round(Number(actual[r.rollId]?.actualRemnantM ?? 0) * 1000), note: actual[r.rollId]?.note || undefined })),
-    flaws,
-  });
-  const fields = (record.error ?? cut.error) instanceof ApiError ? ((record.error ?? cut.error) as ApiError).fields : {};
+  const typed = (v: string | undefined) => v !== undefined && v.trim() !== '';
+  const isTyped = (rollId: number) => typed(actual[rollId]?.actualPlies) && typed(actual[rollId]?.actualRemnantM);
+  /** Rows typed in full; marking the lay cut needs every row, saving needs at least one. */
+  const body = (everyRow: boolean) => {
+    const missing: Record<string, string> = {};
+    lay.rolls.forEach((r, i) => {
+      if (!everyRow && !typed(actual[r.rollId]?.actualPlies) && !typed(actual[r.rollId]?.actualRemnantM)) return;
+      if (!typed(actual[r.rollId]?.actualPlies)) missing[`rolls.${i}.actualPlies`] = 'Enter the plies spread';
+      if (!typed(actual[r.rollId]?.actualRemnantM)) missing[`rolls.${i}.actualRemnantMm`] = 'Measure and enter the remnant';
+    });
+    const rows = lay.rolls.filter((r) => isTyped(r.rollId));
+    if (!rows.length && !Object.keys(missing).length) missing['rolls.0.actualPlies'] = 'Enter the plies spread';
+    setLocal(missing);
+    if (Object.keys(missing).length) return null;
+    return {
+      rolls: rows.map((r) => ({ rollId: r.rollId, actualPlies: Number(actual[r.rollId].actualPlies), actualRemnantMm: Math.round(Number(actual[r.rollId].actualRemnantM) * 1000), note: actual[r.rollId]?.note || undefined })),
+      flaws,
+    };
+  };
+  const server = (record.error ?? cut.error) instanceof ApiError ? ((record.error ?? cut.error) as ApiError).fields ?? {} : {};
+  const fields: Record<string, string> = { ...server, ...local };
   const isCut = lay.status === 'cut';
-  const spreadPlies = lay.rolls.reduce((a, r) => a + Number(actual[r.rollId]?.actualPlies ?? r.plies), 0);
+  const spreadPlies = lay.rolls.reduce((a, r) => a + (Number(actual[r.rollId]?.actualPlies) || 0), 0);
   const file = (url: string, name: string) => () => downloadFile(url, name);
   return (
     <>
@@ -41,6 +61,11 @@ export function LayPage() {
         actions={<button type="button" className="btn-quiet" onClick={() => window.print()}>Print</button>}
       />
       <div className="space-y-5">
+        {lay.shortage && !isCut ? (
+          <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
+            {lay.shortage.message} Tell the owner before spreading.
+          </p>
+        ) : null}
         <Card title="Marker">
           <dl className="mb-3 grid grid-cols-2 gap-2 text-sm sm:grid-cols-4">
             <div><dt className="text-xs text-ink-600">Marker length</dt><dd className="font-semibold">{metres(lay.markerLengthMm)}</dd></div>
@@ -63,7 +88,8 @@ export function LayPage() {
                     <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td>{metres(r.expectedRemnantMm)}</td>
                     <td><input aria-label={`Plies spread from ${r.label}`} className="field-input w-20" type="number" disabled={isCut} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
                       {fields[`rolls.${i}.actualPlies`] ? <p className="field-error">{fields[`rolls.${i}.actualPlies`]}</p> : null}</td>
-                    <td><input aria-label={`Remnant left on ${r.label}`} className="field-input w-24" type="number" step="0.01" disabled={isCut} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} /></td>
+                    <td><input aria-label={`Remnant left on ${r.label}`} className="field-input w-24" type="number" step="0.01" disabled={isCut} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
+                      {fields[`rolls.${i}.actualRemnantMm`] ? <p className="field-error">{fields[`rolls.${i}.actualRemnantMm`]}</p> : null}</td>
                     <td><input aria-label={`Note on ${r.label}`} className="field-input" disabled={isCut} value={actual[r.rollId]?.note ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], note: e.target.value } })} /></td>
                   </tr>
                 ))}
@@ -77,12 +103,12 @@ export function LayPage() {
           </div>
           {!isCut ? (
             <div className="mt-3 flex flex-wrap gap-2">
-              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => record.mutate(body())}>Save what was spread</button>
-              <button type="button" className="btn-primary" disabled={cut.isPending} onClick={() => cut.mutate(body())}>Mark lay cut</button>
+              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>Save what was spread</button>
+              <button type="button" className="btn-primary" disabled={cut.isPending} onClick={() => { const b = body(true); if (b) cut.mutate(b); }}>Mark lay cut</button>
             </div>
           ) : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
-          {(record.error || cut.error) && !Object.keys(fields).length ? <div className="mt-2"><ErrorNote error={record.error ?? cut.error} /></div> : null}
+          {(record.error || cut.error) && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={record.error ?? cut.error} /></div> : null}
         </Card>
         {bundles.length ? (
           <Card title="Bundles">

@@ -1,13 +1,15 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { differenceInCalendarDays, parseISO } from 'date-fns';
 import { Link } from 'react-router';
 import { Badge, Card, PageHeader } from '@/components/ui/page';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
 import { batchQueries } from '@/features/batches/api/batch-queries';
+import { layQueries } from '@/features/cutting/api/cutting-queries';
 
 export function OwnerHome({ name }: { name: string }) {
   const { data: batches } = useSuspenseQuery(batchQueries.list());
+  const shortages = useQuery(layQueries.shortages()).data ?? [];
   const open = batches.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled');
   const today = new Date();
   const attention = open
@@ -32,8 +34,14 @@ export function OwnerHome({ name }: { name: string }) {
           </ul>
         </Card>
         <Card title="Needs attention">
-          {attention.length === 0 ? <p className="text-sm text-ink-600">Nothing pressing.</p> : null}
+          {attention.length === 0 && shortages.length === 0 ? <p className="text-sm text-ink-600">Nothing pressing.</p> : null}
           <ul className="space-y-2 text-sm">
+            {shortages.map((s) => (
+              <li key={`short-${s.layId}`} role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-madder-700">
+                <Link to={paths.batch.getHref(s.batchId)} className="font-medium underline-offset-2 hover:underline">{s.batchCode} · Lay {s.seq}</Link>{' '}
+                {s.message}
+              </li>
+            ))}
             {attention.map(({ b, days }) => (
               <li key={b.id} className="rounded-lg bg-calico-50 px-3 py-2">
                 <span className="font-medium">{b.code}</span>{' '}
