@@ -1,9 +1,7 @@
 import ExcelJS from 'exceljs';
+import { currencyDigits } from '../../../shared/units/money';
 import { LINE_SECTIONS, type OperationInput } from '../../../shared/schemas/line';
 
-/** Fraction digits of a currency's minor unit (KES 2, JPY 0). */
-export const currencyDigits = (currency: string) =>
-  new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
 
 const HEADER = ['Code', 'Operation', 'Section', 'Machine type', 'SAM (min)', 'After (codes)'];
 
