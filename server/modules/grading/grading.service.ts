@@ -15,6 +15,7 @@ import { computeGrading } from './grading-compute';
 import type { GradingSetRepository, StoredGradingSet } from './grading-set.repository';
 import { presentChart, presentGrading } from './grading.presenter';
 import { readTable, rowsToCsv, rowsToXlsx, type UploadedTable } from './table-io';
+import { LISTED_ERRORS } from '../uploads/table-limits';
 
 export interface GradingServiceDeps {
   styles: StyleRepository;
@@ -32,8 +33,10 @@ export interface Download {
   filename: string;
 }
 
+/** The first problems of a table as field errors; the message gives the total. */
 const tableErrorFields = (errors: TableError[]) =>
-  Object.fromEntries(errors.map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+  Object.fromEntries(errors.slice(0, LISTED_ERRORS).map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+const problemCount = (n: number) => `${n} problem${n > 1 ? 's' : ''}${n > LISTED_ERRORS ? `, the first ${LISTED_ERRORS} listed` : ''}`;
 
 /** Grading rules of a style: chart, rules, graded set, downloads and the size mix. */
 export function createGradingService({ styles, sets, audit, now }: GradingServiceDeps) {
@@ -94,7 +97,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       const parsed = parseSizeChartTable(await readTable(file), file.originalname.replace(/\.(csv|xlsx)$/i, ''));
       if (!parsed.ok) {
         const first = parsed.errors[0];
-        throw badRequest(`row ${first.row}, column ${first.column}: ${first.message} (${parsed.errors.length} problem${parsed.errors.length > 1 ? 's' : ''}; nothing imported)`, tableErrorFields(parsed.errors));
+        throw badRequest(`row ${first.row}, column ${first.column}: ${first.message} (${problemCount(parsed.errors.length)}; nothing imported)`, tableErrorFields(parsed.errors));
       }
       return saveChart(actor, styleId, parsed.chart, undefined, 'import_chart');
     },
@@ -218,7 +221,7 @@ function readBusts(rows: string[][], columnName?: string, unitGiven?: 'mm' | 'cm
     else values.push(v * UNIT_FACTOR[unit]);
   });
   if (errors.length) {
-    throw badRequest(`row ${errors[0].row}, column ${errors[0].column}: ${errors[0].message} (${errors.length} problem${errors.length > 1 ? 's' : ''}; nothing used)`, tableErrorFields(errors.slice(0, 50)));
+    throw badRequest(`row ${errors[0].row}, column ${errors[0].column}: ${errors[0].message} (${problemCount(errors.length)}; nothing used)`, tableErrorFields(errors));
   }
   if (values.length === 0) throw badRequest('file: no measurements found', { file: 'No measurements found' });
   return { values, column: label, unit };
