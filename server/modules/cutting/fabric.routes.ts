@@ -1,6 +1,5 @@
 import { format } from 'date-fns';
 import { Router, type Response } from 'express';
-import multer from 'multer';
 import { can } from '../../../shared/auth/permissions';
 import { createFabricInput, createRollsInput, updateFabricInput, type RollInput } from '../../../shared/schemas/cutting';
 import { idParam } from '../../../shared/schemas/common';
@@ -11,6 +10,7 @@ import type { AuditRepository } from '../audit/audit.repository';
 import type { FabricRepository } from './fabric.repository';
 import { presentFabric, presentRoll } from './fabric.presenter';
 import { parsePackingList } from './packing-list';
+import { memoryUpload } from '../uploads/memory-upload';
 import { LISTED_ERRORS } from '../uploads/table-limits';
 
 /**
@@ -30,7 +30,7 @@ function refuseImport(res: Response, problems: { key: string; row: number; colum
 
 export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, opts: { maxUploadBytes: number; now: () => Date }) {
   const r = Router();
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: opts.maxUploadBytes, files: 1 } });
+  const upload = memoryUpload({ fileSize: opts.maxUploadBytes, files: 1 });
   const load = async (actor: Actor, id: number) => {
     const f = await fabrics.get(actor.studioId, id);
     if (!f) throw notFound('Fabric');
