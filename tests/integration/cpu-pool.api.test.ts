@@ -36,13 +36,13 @@ describe('CPU work off the request thread', () => {
     const small = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 2, S: 4, M: 6, L: 5, XL: 3 }, dueDate: '2027-01-15' });
     expect((await owner.post(`/api/batches/${small.body.batch.id}/cut-plan`).send({ fabricId: 1, maxPlies: 10, maxGarmentsPerMarker: 3 })).status).toBe(201);
 
-    const large = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 137, S: 291, M: 403, L: 317, XL: 173 }, dueDate: '2027-02-15' });
+    const large = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 173, S: 389, M: 547, L: 421, XL: 229 }, dueDate: '2027-02-15' });
     expect(large.status).toBe(201);
     let solvedAt = 0;
     const t0 = performance.now();
     const solve = owner
       .post(`/api/batches/${large.body.batch.id}/cut-plan`)
-      .send({ fabricId: 1, maxPlies: 40, maxGarmentsPerMarker: 10 })
+      .send({ fabricId: 1, maxPlies: 40, maxGarmentsPerMarker: 12 })
       .then((r) => ((solvedAt = performance.now()), r));
     await until(() => cpuTasksInFlight() > 0 || solvedAt > 0);
 
