@@ -1,6 +1,9 @@
 import 'dotenv/config';
 import { z } from 'zod';
 
+/** The session secret a fresh checkout runs with; never accepted with NODE_ENV=production. */
+export const DEVELOPMENT_SESSION_SECRET = 'dev-only-session-secret-change-me';
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
@@ -10,17 +13,15 @@ const envSchema = z.object({
   DATABASE_URL: z.string().default(''),
   /** redis://… moves long jobs to BullMQ workers (`npm run worker`); empty keeps the in-process queue. */
   REDIS_URL: z.string().default(''),
-  SESSION_SECRET: z.string().min(16).default('dev-only-session-secret-change-me'),
+  SESSION_SECRET: z.string().min(16).default(DEVELOPMENT_SESSION_SECRET),
   TRUST_PROXY: z
     .enum(['true', 'false'])
     .default('false')
     .transform((v) => v === 'true'),
   DEMO_PASSWORD: z.string().min(8).default('seamrun-demo'),
   DEMO_PIN_PREFIX: z.string().regex(/^\d{2}$/).default('40'),
-  SEED_DEMO: z
-    .enum(['true', 'false'])
-    .default('true')
-    .transform((v) => v === 'true'),
+  /** Seed the demo studio into an empty database; unset means yes, except with NODE_ENV=production. */
+  SEED_DEMO: z.enum(['true', 'false']).optional(),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
   LOGIN_LOCK_AFTER: z.coerce.number().int().min(1).default(8),
   /** Failed sign-ins (any account) one address may make per 15 minutes. */
@@ -36,11 +37,27 @@ const envSchema = z.object({
   LOCAL_PAYMENTS_PATH: z.string().default(''),
 });
 
-export type Env = z.infer<typeof envSchema>;
+/**
+ * Production refuses the built-in session secret (anyone could sign a session cookie with it) and only
+ * seeds the demo studio, with its published passwords, when SEED_DEMO=true says so.
+ */
+const checkedEnvSchema = envSchema
+  .superRefine((e, ctx) => {
+    if (e.NODE_ENV === 'production' && e.SESSION_SECRET === DEVELOPMENT_SESSION_SECRET) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SESSION_SECRET'],
+        message: 'the built-in development secret is refused with NODE_ENV=production; set a long random value (e.g. `openssl rand -hex 32`)',
+      });
+    }
+  })
+  .transform(({ SEED_DEMO, ...e }) => ({ ...e, SEED_DEMO: SEED_DEMO === undefined ? e.NODE_ENV !== 'production' : SEED_DEMO === 'true' }));
+
+export type Env = z.infer<typeof checkedEnvSchema>;
 
 /** Parse process.env once; a readable failure names every bad variable. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
-  const parsed = envSchema.safeParse(source);
+  const parsed = checkedEnvSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid environment:\n${lines.join('\n')}`);

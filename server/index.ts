@@ -2,17 +2,20 @@ import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
+import { startSessionPurge } from './auth/session-purge';
+import { createSessionRepository } from './modules/sessions/session.repository';
 import { createApp } from './app';
 import { loadEnv, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 
-/** env → data source → migrations → seed → listen. */
+/** env → data source → migrations → expired sessions purged → seed → listen. */
 export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
   const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
   const checkpointer = env.DATABASE_URL ? null : await startWalCheckpointer(ds, env.DATABASE_PATH);
+  const sessionPurge = await startSessionPurge(createSessionRepository(ds));
   const seeded = env.SEED_DEMO
     ? await seedDemoStudio(ds, {
         password: env.DEMO_PASSWORD,
@@ -32,6 +35,7 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const stop = async () => {
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
     await holder.current?.jobs.stop();
+    sessionPurge.stop();
     await new Promise((r) => server.close(r));
     await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();

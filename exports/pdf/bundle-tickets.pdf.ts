@@ -4,6 +4,7 @@
  */
 import QRCode from 'qrcode';
 import type { BundleOperation, BundleTicketsInput } from '../types';
+import { BODY_FONT, BOLD_FONT } from './pdf-fonts';
 import { formatPlyRange } from './document-format';
 import {
   contentWidth,
@@ -45,7 +46,7 @@ export async function buildBundleTicketsPdf(
     const top = doc.y;
     doc.image(qr, x + contentWidth(doc) - QR_SIZE, top, { width: QR_SIZE, height: QR_SIZE });
     doc
-      .font('Helvetica-Bold')
+      .font(BOLD_FONT)
       .fontSize(26)
       .fillColor(TEAL)
       .text(`Bundle ${bundle.bundleNo}`, x, top);
@@ -61,9 +62,9 @@ export async function buildBundleTicketsPdf(
     ];
     for (const [label, value] of facts) {
       doc
-        .font('Helvetica-Bold')
+        .font(BOLD_FONT)
         .text(`${label}: `, x, doc.y, { continued: true })
-        .font('Helvetica')
+        .font(BODY_FONT)
         .text(value);
     }
     doc
@@ -93,7 +94,7 @@ function drawCoupons(
     if (doc.y + COUPON_HEIGHT > doc.page.height - doc.page.margins.bottom) {
       doc.addPage();
       doc
-        .font('Helvetica-Bold')
+        .font(BOLD_FONT)
         .fontSize(11)
         .text(`Bundle ${bundle.bundleNo} (continued)`, x, doc.page.margins.top);
       doc.moveDown(0.5);
@@ -101,11 +102,11 @@ function drawCoupons(
     const y = doc.y;
     drawCutLine(doc, y);
     doc
-      .font('Helvetica-Bold')
+      .font(BOLD_FONT)
       .fontSize(11)
       .fillColor(INK)
       .text(op.name, x + 4, y + 9, { width: width * 0.55, lineBreak: false, ellipsis: true });
-    doc.font('Helvetica').fontSize(9);
+    doc.font(BODY_FONT).fontSize(9);
     doc.text(`SAM ${op.samMinutes.toFixed(2)} min`, x + 4, y + 26, { lineBreak: false });
     const right = `Bundle ${bundle.bundleNo}  ·  ${input.style.code}  ·  size ${bundle.size}  ·  ${bundle.pieces} pcs`;
     doc.text(right, x + width * 0.45, y + 26, {

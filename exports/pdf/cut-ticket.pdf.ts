@@ -2,6 +2,7 @@
  * Cut tickets: one A4 page per lay for the cutting table, with what the cutter needs at the spread.
  */
 import type { CutTicketInput, LayPlan } from '../types';
+import { BOLD_FONT } from './pdf-fonts';
 import { CUTTING_ROOM_CAUTIONS } from './cutting-cautions';
 import {
   formatLongLength,
@@ -51,7 +52,7 @@ function drawLayTicket(doc: PDFKit.PDFDocument, input: CutTicketInput, lay: LayP
     ['End allowance, each end', formatShortLength(lay.endAllowanceMm, u)],
     ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u)}`],
   ]);
-  doc.font('Helvetica-Bold').fontSize(10).text('Plies per roll');
+  doc.font(BOLD_FONT).fontSize(10).text('Plies per roll');
   doc.moveDown(0.3);
   drawRollTable(doc, lay.rolls, u);
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);

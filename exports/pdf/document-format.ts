@@ -3,18 +3,11 @@
  * units, lengths from millimetres in the studio's unit system. Pure; reads no clock.
  */
 import { MM_PER_INCH, MM_PER_YARD } from '@shared/units';
+import { currencyDigits, currencyFormatOptions } from '@shared/units/money';
 import type { SpreadingMode, UnitSystem } from '../types';
 
-/**
- * Minor-unit digits of an ISO 4217 currency (EUR 2, JPY 0, BHD 3), as `Intl` knows them.
- * Throws RangeError for a code `Intl` rejects.
- */
-export function currencyDigits(currency: string): number {
-  return (
-    new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions()
-      .maximumFractionDigits ?? 2
-  );
-}
+/** Minor-unit digits come from the one ISO 4217 helper in shared/units. */
+export { currencyDigits };
 
 /** Minor units → major units as a float for a spreadsheet cell (1250, EUR → 12.5). */
 export function minorToMajor(minorUnits: number, digits: number): number {
@@ -24,7 +17,7 @@ export function minorToMajor(minorUnits: number, digits: number): number {
 /** Money in minor units as locale text, e.g. `€12.50` (en-IE). */
 export function formatMoney(minorUnits: number, currency: string, locale: string): string {
   const digits = currencyDigits(currency);
-  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(
+  return new Intl.NumberFormat(locale, currencyFormatOptions(currency, digits)).format(
     minorToMajor(minorUnits, digits),
   );
 }

@@ -3,6 +3,7 @@
  * cutting-room cautions.
  */
 import type { MarkerListInput } from '../types';
+import { BOLD_FONT } from './pdf-fonts';
 import { CUTTING_ROOM_CAUTIONS } from './cutting-cautions';
 import {
   formatLongLength,
@@ -54,7 +55,7 @@ export async function buildMarkerListPdf(
     ]),
   );
   for (const lay of input.lays) {
-    doc.font('Helvetica-Bold').fontSize(10).text(`Lay ${lay.layNo}: rolls`);
+    doc.font(BOLD_FONT).fontSize(10).text(`Lay ${lay.layNo}: rolls`);
     doc.moveDown(0.3);
     drawRollTable(doc, lay.rolls, u);
   }

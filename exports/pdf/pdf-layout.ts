@@ -1,10 +1,11 @@
 /**
  * Seamrun's PDF look and the steps every PDF builder shares: a document whose bytes are collected into a
  * Buffer, a deep-teal title band with the studio's name and the date, simple banded tables, the cautions
- * box and dashed cut lines. Helvetica only (pdfkit's built-in, WinAnsi text). Deterministic: the PDF's
+ * box and dashed cut lines. Text in the embedded DejaVu Sans (pdf-fonts.ts), so every script prints. Deterministic: the PDF's
  * creation date is the document date, never the clock.
  */
 import PDFDocument from 'pdfkit';
+import { BODY_FONT, BOLD_FONT, useSeamrunFonts } from './pdf-fonts';
 import type { DocumentHeading } from '../types';
 import { CUTTING_ROOM_CAUTIONS_SOURCE, CUTTING_ROOM_CAUTIONS_TITLE } from './cutting-cautions';
 import { formatDate, parseIsoDate } from './document-format';
@@ -37,6 +38,7 @@ export function startPdf(
       ModDate: parseIsoDate(heading.dateIso),
     },
   });
+  useSeamrunFonts(doc);
   const chunks: Buffer[] = [];
   const bytes = new Promise<Buffer>((resolve, reject) => {
     doc.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -66,10 +68,10 @@ export function drawHeading(
   doc.save().rect(x, top, width, 34).fill(TEAL).restore();
   doc
     .fillColor('#FFFFFF')
-    .font('Helvetica-Bold')
+    .font(BOLD_FONT)
     .fontSize(15)
     .text(title, x + 10, top + 10, { lineBreak: false });
-  doc.font('Helvetica').fontSize(9);
+  doc.font(BODY_FONT).fontSize(9);
   const right = `${heading.studioName}  ·  ${formatDate(heading.dateIso, heading.locale)}`;
   doc.text(right, x + 10, top + 13, { width: width - 20, align: 'right', lineBreak: false });
   doc.fillColor(INK).fontSize(10);
@@ -77,9 +79,9 @@ export function drawHeading(
   for (const [label, value] of lines) {
     doc.x = x;
     doc
-      .font('Helvetica-Bold')
+      .font(BOLD_FONT)
       .text(`${label}: `, { continued: true })
-      .font('Helvetica')
+      .font(BODY_FONT)
       .text(value);
   }
   doc.moveDown(0.6);
@@ -106,7 +108,7 @@ export function drawTable(
     const width = columns.reduce((s, c) => s + c.width, 0);
     if (fill) doc.save().rect(x0, y, width, rowHeight).fill(fill).restore();
     doc
-      .font(bold ? 'Helvetica-Bold' : 'Helvetica')
+      .font(bold ? BOLD_FONT : BODY_FONT)
       .fontSize(9)
       .fillColor(color);
     let x = x0;
@@ -148,7 +150,7 @@ export function drawTable(
 export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[]): void {
   const x = doc.page.margins.left;
   const width = contentWidth(doc);
-  doc.font('Helvetica').fontSize(8.5);
+  doc.font(BODY_FONT).fontSize(8.5);
   const body = cautions.map((c) => `• ${c}`).join('\n');
   const height = 30 + doc.heightOfString(body, { width: width - 16 }) + 14;
   if (doc.y + height > doc.page.height - doc.page.margins.bottom) doc.addPage();
@@ -156,12 +158,12 @@ export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[
   doc.save().rect(x, y, width, height).fill(SAND).restore();
   doc
     .fillColor(TEAL)
-    .font('Helvetica-Bold')
+    .font(BOLD_FONT)
     .fontSize(10)
     .text(CUTTING_ROOM_CAUTIONS_TITLE, x + 8, y + 8, { width: width - 16 });
   doc
     .fillColor(INK)
-    .font('Helvetica')
+    .font(BODY_FONT)
     .fontSize(8.5)
     .text(body, x + 8, y + 24, { width: width - 16 });
   doc

@@ -1,4 +1,5 @@
 import PDFDocument from 'pdfkit';
+import { useSeamrunFonts } from './pdf-fonts';
 import { polygonBBox } from '@shared/geometry/polygon';
 import type { BBox, Point, Polygon } from '@shared/geometry/types';
 import type { Piece } from '@grading';
@@ -64,6 +65,7 @@ export function tiledPiecePdf(piece: Piece, options: TiledPdfOptions = {}): Prom
   const { w, h } = PAPER_MM[paper];
   const date = options.creationDate ?? new Date(0);
   const doc = new PDFDocument({ size: [w * PT_PER_MM, h * PT_PER_MM], margin: 0, autoFirstPage: false, compress: !options.uncompressed, info: { Title: options.title ?? piece.name, CreationDate: date, ModDate: date } });
+  useSeamrunFonts(doc);
   const chunks: Buffer[] = [];
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on('data', (c: Buffer) => chunks.push(c));

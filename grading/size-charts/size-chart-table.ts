@@ -42,9 +42,12 @@ export function parseSizeChartTable(rows: string[][], name = 'Imported chart'): 
   const first = hasUnit ? 2 : 1;
   const sizes = header.slice(first);
   if (sizes.length === 0) errors.push({ row: 1, column: first + 1, message: 'header names no sizes' });
+  // One pass with a set: a header thousands of sizes wide must not cost sizes² comparisons.
+  const seen = new Set<string>();
   sizes.forEach((s, i) => {
     if (!s) errors.push({ row: 1, column: first + i + 1, message: 'empty size name' });
-    else if (sizes.indexOf(s) !== i) errors.push({ row: 1, column: first + i + 1, message: `duplicate size "${s}"` });
+    else if (seen.has(s)) errors.push({ row: 1, column: first + i + 1, message: `duplicate size "${s}"` });
+    else seen.add(s);
   });
   const values: SizeChart['values'] = {};
   for (let r = 1; r < rows.length; r++) {

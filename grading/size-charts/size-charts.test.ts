@@ -95,6 +95,15 @@ describe('parseSizeChartTable', () => {
     expect(back).toEqual({ ok: true, chart });
   });
 
+  it('reads a header 200,000 sizes wide in one pass when checking for duplicate sizes', () => {
+    // Behaviour, not timing: the old indexOf check made this about 2·10^10 comparisons and never finished.
+    const sizes = Array.from({ length: 200_000 }, (_, i) => `S${i}`);
+    const res = parseSizeChartTable([['pom', 'unit', ...sizes], ['bust', 'mm', ...sizes.map(() => '800')]]);
+    expect(res.ok && res.chart.sizes.length).toBe(200_000);
+    const dup = parseSizeChartTable([['pom', ...sizes, 'S7'], ['bust', ...sizes.map(() => '800'), '800']]);
+    expect(!dup.ok && dup.errors).toEqual([{ row: 1, column: 200_002, message: 'duplicate size "S7"' }]);
+  });
+
   it('reads a table without a unit column as mm', () => {
     const res = parseSizeChartTable([['pom', 'A', 'B'], ['bust', '800', '840']]);
     expect(res.ok && res.chart.values.bust).toEqual([800, 840]);

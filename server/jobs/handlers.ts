@@ -1,29 +1,14 @@
-import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
-import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
-import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
-import { buildBundleRegisterXlsx } from '@exports/xlsx/bundle-register.xlsx';
-import { buildCostingSheetXlsx } from '@exports/xlsx/costing-sheet.xlsx';
-import { buildMarkerListXlsx } from '@exports/xlsx/marker-list.xlsx';
-import { buildPaySheetXlsx } from '@exports/xlsx/pay-sheet.xlsx';
-import { buildPurchaseOrderXlsx } from '@exports/xlsx/purchase-order.xlsx';
-import { solveCutOrderJob, type CutOrderJobInput } from '../modules/cutting/cut-order-job';
 import { sendMailJob, type MailJobInput } from '../modules/mail/mail-job';
+import { CPU_TASKS } from './cpu-tasks';
 
 /**
- * The long-running work besides nesting, as pure functions of plain data: the cut-order solve, the
- * exported documents, and sending mail. A {@link JobRunner} runs them in the web process, or (REDIS_URL)
- * hands them to `npm run worker` processes; callers cannot tell which.
+ * The long-running work besides nesting, as pure functions of plain data: the CPU work of
+ * {@link CPU_TASKS} (cut-order solve, exported documents, piece outlines) and sending mail. A
+ * {@link JobRunner} runs them in the web process (the CPU work on worker threads), or (REDIS_URL) hands
+ * them to `npm run worker` processes; callers cannot tell which.
  */
 export const JOB_HANDLERS = {
-  'cut-order': async (input: CutOrderJobInput) => solveCutOrderJob(input),
-  'marker-list.xlsx': async (input: Parameters<typeof buildMarkerListXlsx>[0]) => Buffer.from(await buildMarkerListXlsx(input)),
-  'marker-list.pdf': async (input: Parameters<typeof buildMarkerListPdf>[0]) => Buffer.from(await buildMarkerListPdf(input)),
-  'cut-ticket.pdf': async (input: Parameters<typeof buildCutTicketPdf>[0]) => Buffer.from(await buildCutTicketPdf(input)),
-  'bundle-register.xlsx': async (input: Parameters<typeof buildBundleRegisterXlsx>[0]) => Buffer.from(await buildBundleRegisterXlsx(input)),
-  'bundle-tickets.pdf': async (input: Parameters<typeof buildBundleTicketsPdf>[0]) => Buffer.from(await buildBundleTicketsPdf(input)),
-  'costing-sheet.xlsx': async (input: Parameters<typeof buildCostingSheetXlsx>[0]) => Buffer.from(await buildCostingSheetXlsx(input)),
-  'pay-sheet.xlsx': async (input: Parameters<typeof buildPaySheetXlsx>[0]) => Buffer.from(await buildPaySheetXlsx(input)),
-  'purchase-order.xlsx': async (input: Parameters<typeof buildPurchaseOrderXlsx>[0]) => Buffer.from(await buildPurchaseOrderXlsx(input)),
+  ...CPU_TASKS,
   mail: (input: MailJobInput) => sendMailJob(input),
 };
 

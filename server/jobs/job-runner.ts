@@ -2,6 +2,8 @@ import { deserialize, serialize } from 'node:v8';
 import { Queue, QueueEvents, Worker } from 'bullmq';
 import PQueue from 'p-queue';
 import { redisConnection } from '../modules/markers/marker-queue-redis';
+import { closeCpuPool, runCpuTask } from './cpu-pool';
+import { isCpuTaskName } from './cpu-tasks';
 import { isJobName, JOB_HANDLERS, type JobInput, type JobName, type JobOutput } from './handlers';
 
 /** BullMQ queue of the jobs in server/jobs/handlers.ts (markers have their own queue). */
@@ -21,14 +23,20 @@ const decode = <T>(s: string) => deserialize(Buffer.from(s, 'base64')) as T;
 const handle = <N extends JobName>(name: N, input: JobInput<N>) =>
   (JOB_HANDLERS[name] as (i: JobInput<N>) => Promise<JobOutput<N>>)(input);
 
-/** The embedded default: jobs run in this process, at most `concurrency` at once. */
+/**
+ * The embedded default: jobs run in this process, at most `concurrency` at once; the CPU-bound ones
+ * (server/jobs/cpu-tasks.ts) on the worker threads of the CPU pool, so the request thread stays free.
+ */
 export function createLocalJobRunner(concurrency = 2): JobRunner {
   const queue = new PQueue({ concurrency });
+  const runHere = <N extends JobName>(name: N, input: JobInput<N>) =>
+    (isCpuTaskName(name) ? runCpuTask(name, input as never) : handle(name, input)) as Promise<JobOutput<N>>;
   return {
     where: 'in-process',
-    run: (name, input) => queue.add(() => handle(name, input)) as Promise<JobOutput<typeof name>>,
+    run: (name, input) => queue.add(() => runHere(name, input)) as Promise<JobOutput<typeof name>>,
     async stop() {
       await queue.onIdle();
+      await closeCpuPool();
     },
   };
 }

@@ -39,10 +39,12 @@ export const passwordRule = z
   .min(10, 'At least 10 characters')
   .max(200, 'At most 200 characters');
 
-export const changePasswordInput = z.object({
-  currentPassword: z.string().min(1, 'Current password is required').max(200),
-  newPassword: passwordRule,
-});
+export const changePasswordInput = z
+  .object({
+    currentPassword: z.string().min(1, 'Current password is required').max(200),
+    newPassword: passwordRule,
+  })
+  .refine((v) => v.newPassword !== v.currentPassword, { path: ['newPassword'], message: 'Must differ from the current password' });
 export type ChangePasswordInput = z.infer<typeof changePasswordInput>;
 
 export const createStudioInput = z.object({

@@ -1,16 +1,12 @@
+import { code as iso4217 } from 'currency-codes';
 import { z } from 'zod';
 
 export const idParam = z.object({ id: z.coerce.number().int().positive() });
 export const currencyCode = z
   .string()
   .regex(/^[A-Z]{3}$/, 'Use a three-letter ISO 4217 code, e.g. KES')
-  .refine((c) => {
-    try {
-      return Intl.supportedValuesOf('currency').includes(c);
-    } catch {
-      return true;
-    }
-  }, 'Not an ISO 4217 currency code');
+  // The same ISO 4217 list that gives each currency its minor-unit digits (shared/units/money.ts).
+  .refine((c) => iso4217(c) !== undefined, 'Not an ISO 4217 currency code');
 /**
  * True when `text` is YYYY-MM-DD and that day exists in the Gregorian calendar (`2026-11-31` and
  * `2026-13-45` do not). A pattern alone lets them through, and `new Date` then rolls them into the next month.

@@ -8,6 +8,22 @@ describe('money in minor units', () => {
     expect(currencyDigits('JPY')).toBe(0);
   });
 
+  // Source: ISO 4217 list one (SIX, published date in currency-codes' iso-4217-publish-date.js), read through
+  // the currency-codes package: JPY 0, ISK 0, KES 2, KWD 3, BHD 3, IQD 3, CLF 4, UYW 4. Node's Intl tables
+  // say 0 for IQD and fail on UYW, which is why the digits no longer come from Intl.
+  it('takes minor-unit digits from the ISO 4217 list when Intl disagrees or does not know the code', () => {
+    const iso: Record<string, number> = { JPY: 0, ISK: 0, KES: 2, HUF: 2, KWD: 3, BHD: 3, IQD: 3, CLF: 4, UYW: 4 };
+    for (const [code, digits] of Object.entries(iso)) expect([code, currencyDigits(code)]).toEqual([code, digits]);
+  });
+
+  it('refuses a code that is not in the ISO 4217 list', () => {
+    expect(() => currencyDigits('ABC')).toThrow(RangeError);
+  });
+
+  it('formats with exactly the ISO 4217 digits when Intl would show fewer', () => {
+    expect(formatMinorUnits(12345, 'IQD', 'en')).toMatch(/12\.345/);
+  });
+
   it('parses typed amounts without floating-point error', () => {
     expect(parseMajor('7.50', 'KES')).toBe(750);
     expect(parseMajor('1,200', 'KES')).toBe(120000);

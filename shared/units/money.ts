@@ -1,11 +1,30 @@
-/** Decimal places of an ISO 4217 currency's minor unit (KES 2, JPY 0), from Intl. */
+import { code as iso4217 } from 'currency-codes';
+
+/**
+ * Decimal places of an ISO 4217 currency's minor unit (KES 2, JPY 0, BHD 3, CLF 4), from the ISO 4217
+ * list as the currency-codes package ships it. Not from Intl: the runtime's locale tables differ for
+ * some currencies (they give IQD, IDR or HUF no decimals, where ISO 4217 gives 3, 2 and 2), and a
+ * stored amount must mean the same on every runtime. Codes with no minor unit ("N.A.", e.g. XAU) are 0.
+ * Throws RangeError for a code that is not in the list.
+ */
 export function currencyDigits(currency: string): number {
-  return new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+  const record = iso4217(currency.toUpperCase());
+  if (!record) throw new RangeError(`Not an ISO 4217 currency code: ${currency}`);
+  return record.digits;
 }
 
-/** Money from integer minor units, formatted by Intl for the currency and locale. */
+/**
+ * Intl options that show exactly the currency's ISO 4217 digits (Intl's own digits may differ).
+ * `digits` overrides them (e.g. rates per minute with more decimals).
+ */
+export function currencyFormatOptions(currency: string, digits = currencyDigits(currency)): Intl.NumberFormatOptions {
+  return { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits };
+}
+
+/** Money from integer minor units, formatted by Intl for the currency and locale with ISO 4217 digits. */
 export function formatMinorUnits(minorUnits: number, currency: string, locale = 'en-KE'): string {
-  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minorUnits / 10 ** currencyDigits(currency));
+  const digits = currencyDigits(currency);
+  return new Intl.NumberFormat(locale, currencyFormatOptions(currency, digits)).format(minorUnits / 10 ** digits);
 }
 
 /**

@@ -17,6 +17,9 @@ export default async function setup(project: TestProject) {
     PORT: '0',
     HOST: '127.0.0.1',
     NODE_ENV: 'production',
+    // Production refuses the built-in secret and seeds the demo studio only when asked.
+    SESSION_SECRET: 'e2e-session-secret-not-the-built-in-one',
+    SEED_DEMO: 'true',
     DATABASE_PATH: join(dir, 'e2e.sqlite'),
     LOGIN_RATE_LIMIT: '1000',
     LOGIN_IP_FAILURE_LIMIT: '1000',

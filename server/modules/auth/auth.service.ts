@@ -89,6 +89,11 @@ export function createAuthService(deps: {
       if (!u || !(await verifySecret(input.currentPassword, u.passwordHash))) {
         throw badRequest('Current password is wrong', { currentPassword: 'Does not match' });
       }
+      // Checked against the stored hash, not only the typed current password: a temporary password the
+      // owner handed over must be replaced by one only its holder knows.
+      if (await verifySecret(input.newPassword, u.passwordHash)) {
+        throw badRequest('newPassword: choose a password different from the current one', { newPassword: 'Must differ from the current password' });
+      }
       const sessionVersion = u.sessionVersion + 1;
       await users.update(actor.studioId, actor.id, {
         passwordHash: await hashSecret(input.newPassword),

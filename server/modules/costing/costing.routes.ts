@@ -8,6 +8,7 @@ import { validate } from '../../middleware/validate';
 import type { ModuleContext } from '../module';
 import type { CostingRepository } from './costing.repository';
 import { presentSettings, type CostingService } from './costing.service';
+import { sendDownload } from '../../middleware/download';
 
 export const presentTrim = (t: TrimEntity, suppliers: SupplierEntity[]): TrimDto => ({
   id: t.id,
@@ -32,9 +33,7 @@ export function batchCostingRoutes(service: CostingService, ctx: ModuleContext) 
     const basis = (req.query as { labourBasis: LabourBasis }).labourBasis;
     const { dto, input } = await service.build(actorOf(req).studioId, Number(req.params.id), basis, ctx.now());
     const buffer = await ctx.jobs.run('costing-sheet.xlsx', input);
-    res.setHeader('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
-    res.setHeader('Content-Disposition', `attachment; filename="costing-${dto.batch.code}.xlsx"`);
-    res.send(buffer);
+    sendDownload(res, { body: buffer, type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `costing-${dto.batch.code}.xlsx` });
   });
   return r;
 }

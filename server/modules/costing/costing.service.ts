@@ -1,5 +1,6 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
+import { currencyDigits } from '../../../shared/units/money';
 import { costGarment, priceFromMargin, roundMinor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
@@ -97,7 +98,7 @@ export function createCostingService(repo: CostingRepository) {
     ]);
     const sizes = style.sizeRun.map((size) => ({ size, quantity: batch.quantities[size] ?? 0 }));
     const locale = localeForCurrency(studio.currency);
-    const digits = new Intl.NumberFormat('en', { style: 'currency', currency: studio.currency }).resolvedOptions().maximumFractionDigits ?? 2;
+    const digits = currencyDigits(studio.currency);
     const notes: string[] = [];
 
     const wastage = 1 + settings.wastagePercent / 100;

@@ -17,9 +17,10 @@ import type { FabricRepository } from './fabric.repository';
 import { markLayCut, recordLay } from './lay.service';
 import { layShortages } from './shortage';
 import type { LayEntity } from '../../entities';
+import { sendDownload } from '../../middleware/download';
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
-const send = (res: Response, bytes: Buffer, type: string, name: string) => res.type(type).attachment(name).send(bytes);
+const send = (res: Response, bytes: Buffer, type: string, name: string) => sendDownload(res, { body: bytes, type, filename: name });
 
 /** Cut plans of batches, the cutter's lays and their documents. */
 export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, fabrics: FabricRepository, audit: AuditRepository, now: () => Date) {

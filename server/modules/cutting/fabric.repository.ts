@@ -24,10 +24,18 @@ export function createFabricRepository(ds: DataSource) {
     rolls: (studioId: number, fabricId: number) => rolls.find({ where: { studioId, fabricId }, order: { shadeLot: 'ASC', label: 'ASC' } }),
     allRolls: (studioId: number) => rolls.find({ where: { studioId } }),
     rollsById: (studioId: number, ids: number[]) => rolls.find({ where: { studioId, id: In(ids) } }),
-    labelsTaken: async (studioId: number, labels: string[]) =>
-      (await rolls.find({ where: { studioId, label: In(labels) }, select: { label: true } })).map((r) => r.label),
-    /** Insert rolls in one transaction: all or none. */
-    insertRolls: (list: Partial<RollEntity>[]) => ds.transaction((m) => m.getRepository(RollEntity).save(list.map((r) => m.getRepository(RollEntity).create(r)))),
+    /** Labels already in stock; asked in slices so a long list stays under the drivers' bound-variable limits. */
+    async labelsTaken(studioId: number, labels: string[]) {
+      const taken: string[] = [];
+      for (let i = 0; i < labels.length; i += 500) {
+        const found = await rolls.find({ where: { studioId, label: In(labels.slice(i, i + 500)) }, select: { label: true } });
+        taken.push(...found.map((r) => r.label));
+      }
+      return taken;
+    },
+    /** Insert rolls in one transaction: all or none, in chunks of 100 rows per INSERT (bound-variable limits). */
+    insertRolls: (list: Partial<RollEntity>[]) =>
+      ds.transaction((m) => m.getRepository(RollEntity).save(list.map((r) => m.getRepository(RollEntity).create(r)), { chunk: 100 })),
     async updateRoll(studioId: number, id: number, patch: Partial<RollEntity>, m: EntityManager = ds.manager) {
       await updateIfChanged(m.getRepository(RollEntity), { studioId, id }, patch);
     },

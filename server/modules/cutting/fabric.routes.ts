@@ -1,6 +1,5 @@
 import { format } from 'date-fns';
-import { Router } from 'express';
-import multer from 'multer';
+import { Router, type Response } from 'express';
 import { can } from '../../../shared/auth/permissions';
 import { createFabricInput, createRollsInput, updateFabricInput, type RollInput } from '../../../shared/schemas/cutting';
 import { idParam } from '../../../shared/schemas/common';
@@ -11,10 +10,27 @@ import type { AuditRepository } from '../audit/audit.repository';
 import type { FabricRepository } from './fabric.repository';
 import { presentFabric, presentRoll } from './fabric.presenter';
 import { parsePackingList } from './packing-list';
+import { memoryUpload } from '../uploads/memory-upload';
+import { LISTED_ERRORS } from '../uploads/table-limits';
+
+/**
+ * The 400 of a refused packing list: the first {@link LISTED_ERRORS} problems as `rows` (row, column, why)
+ * and as the envelope's `fields` the client lists; the message gives the total. A 400,000-row file with a
+ * bad cell in each answers with 20, not 800,000 entries.
+ */
+function refuseImport(res: Response, problems: { key: string; row: number; column: string; message: string }[]) {
+  const listed = problems.slice(0, LISTED_ERRORS);
+  const n = problems.length;
+  const message = `${n} problem${n > 1 ? 's' : ''} in the packing list${n > LISTED_ERRORS ? ` (the first ${LISTED_ERRORS} are listed)` : ''}; nothing was imported`;
+  res.status(400).json({
+    error: { code: 'validation', message, fields: Object.fromEntries(listed.map((p) => [p.key, p.message])) },
+    rows: listed.map(({ row, column, message: m }) => ({ row, column, message: m })),
+  });
+}
 
 export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, opts: { maxUploadBytes: number; now: () => Date }) {
   const r = Router();
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: opts.maxUploadBytes, files: 1 } });
+  const upload = memoryUpload({ fileSize: opts.maxUploadBytes, files: 1 });
   const load = async (actor: Actor, id: number) => {
     const f = await fabrics.get(actor.studioId, id);
     if (!f) throw notFound('Fabric');
@@ -105,8 +121,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     if (!req.file) throw badRequest('file: attach the packing list (CSV or XLSX)', { file: 'Attach the packing list' });
     const { rolls, errors } = await parsePackingList(req.file, { widthMm: f.widthMm, receivedDate: format(opts.now(), 'yyyy-MM-dd') });
     if (errors.length) {
-      const fields = Object.fromEntries(errors.map((e) => [`row ${e.row}${e.column ? ` · ${e.column}` : ''}`, e.message]));
-      res.status(400).json({ error: { code: 'validation', message: `${errors.length} problem${errors.length > 1 ? 's' : ''} in the packing list; nothing was imported`, fields }, rows: errors });
+      refuseImport(res, errors.map((e) => ({ ...e, key: `row ${e.row}${e.column ? ` · ${e.column}` : ''}` })));
       return;
     }
     try {
@@ -115,8 +130,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     } catch (err) {
       const fields = (err as { fields?: Record<string, string> }).fields;
       if (!fields) throw err;
-      const rows = Object.entries(fields).map(([k, message]) => ({ row: Number(k.replace('row ', '')), column: 'roll', message }));
-      res.status(400).json({ error: { code: 'validation', message: `${rows.length} problem${rows.length > 1 ? 's' : ''} in the packing list; nothing was imported`, fields }, rows });
+      refuseImport(res, Object.entries(fields).map(([key, message]) => ({ key, row: Number(key.replace('row ', '')), column: 'roll', message })));
     }
   });
   return r;

@@ -1,7 +1,8 @@
-import { parse } from 'csv-parse/sync';
 import ExcelJS from 'exceljs';
 import { isCalendarDate } from '../../../shared/schemas/common';
 import type { ImportRowError, RollInput } from '../../../shared/schemas/cutting';
+import { AppError } from '../../errors';
+import { checkSheetSize, checkWorkbookArchive, parseCsvWithinLimits, TABLE_LIMITS } from '../uploads/table-limits';
 
 /** Column aliases of a supplier packing list (header row, case and spacing ignored) with their unit factor to mm. */
 const LENGTH_COLUMNS: Record<string, number> = { 'length m': 1000, 'length mm': 1, 'length yd': 914.4, 'metres': 1000, 'meters': 1000, 'yards': 914.4 };
@@ -17,7 +18,11 @@ export interface PackingListResult {
   errors: ImportRowError[];
 }
 
-/** Parse a CSV or XLSX packing list into rolls; every bad cell is reported by row, column and reason. */
+/**
+ * Parse a CSV or XLSX packing list into rolls; every bad cell is reported by row, column and reason.
+ * A file past the table limits (rows, columns, a workbook's unpacked size) throws the 400/413 AppError
+ * before it is read in full.
+ */
 export async function parsePackingList(
   file: { buffer: Buffer; originalname: string; mimetype: string },
   defaults: { widthMm: number; receivedDate: string },
@@ -27,20 +32,23 @@ export async function parsePackingList(
   try {
     rows = isXlsx ? await xlsxRows(file.buffer) : csvRows(file.buffer);
   } catch (err) {
+    if (err instanceof AppError) throw err;
     return { rolls: [], errors: [{ row: 1, column: '', message: `The file could not be read as ${isXlsx ? 'XLSX' : 'CSV'}: ${(err as Error).message}` }] };
   }
   return rowsToRolls(rows, defaults);
 }
 
 function csvRows(buffer: Buffer): string[][] {
-  return parse(buffer, { bom: true, skip_empty_lines: false, relax_column_count: true, trim: true }) as string[][];
+  return parseCsvWithinLimits(buffer, { trim: true });
 }
 
 async function xlsxRows(buffer: Buffer): Promise<string[][]> {
+  checkWorkbookArchive(buffer, TABLE_LIMITS);
   const wb = new ExcelJS.Workbook();
   await wb.xlsx.load(buffer as unknown as ArrayBuffer);
   const ws = wb.worksheets[0];
   if (!ws) throw new Error('the workbook has no sheet');
+  checkSheetSize(ws, TABLE_LIMITS);
   const out: string[][] = [];
   for (let r = 1; r <= ws.rowCount; r++) {
     const row = ws.getRow(r);

@@ -3,6 +3,7 @@ import type { DataSource } from 'typeorm';
 import { cuttingOutline, gradePiece, type Piece } from '@grading';
 import { polygonSignedArea } from '@shared/geometry/polygon';
 import type { Point, Polygon } from '@shared/geometry/types';
+import { runCpuTask } from '../../jobs/cpu-pool';
 import { createStyleRepository } from '../styles/style.repository';
 import { createGradingSetRepository, type StoredGradingSet } from './grading-set.repository';
 
@@ -31,7 +32,8 @@ export async function loadCuttingPieces(ds: DataSource, studioId: number, styleI
   if (!style) return {};
   const set = await createGradingSetRepository(ds).byStyle(studioId, styleId);
   if (!set || !set.sizeChart) return {};
-  return cuttingPiecesOf(set, style.baseSize);
+  // Grading and offsetting every piece of every size is CPU work: it runs on the CPU pool's threads.
+  return runCpuTask('cutting-pieces', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules }, baseSize: style.baseSize });
 }
 
 /** The same as {@link loadCuttingPieces} for a set already loaded (sizes in the chart's run order). */

@@ -7,11 +7,13 @@ import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { Download, GradingService } from './grading.service';
+import { sendDownload } from '../../middleware/download';
+import { memoryUpload } from '../uploads/memory-upload';
 
 /** Largest upload accepted for charts and customer measurements. */
 export const GRADING_UPLOAD_LIMIT_BYTES = 2 * 1024 * 1024;
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: GRADING_UPLOAD_LIMIT_BYTES, files: 1 } });
+const upload = memoryUpload({ fileSize: GRADING_UPLOAD_LIMIT_BYTES, files: 1 });
 
 /** One file field `file`; multer's own errors become 400s naming the field. */
 const singleFile: RequestHandler = (req, res, next) =>
@@ -23,11 +25,7 @@ const singleFile: RequestHandler = (req, res, next) =>
     next(badRequest(`file: ${m}`, { file: m }));
   });
 
-const send = (res: Parameters<RequestHandler>[1], d: Download) => {
-  res.setHeader('Content-Type', d.type);
-  res.setHeader('Content-Disposition', `attachment; filename="${d.filename}"`);
-  res.send(d.body);
-};
+const send = (res: Parameters<RequestHandler>[1], d: Download) => sendDownload(res, d);
 
 /** Routes under /api/styles/:id/grading. */
 export function gradingRoutes(service: GradingService) {

@@ -3,7 +3,6 @@ import {
   parseSizeChartTable, sizeChartToRows, sizeMix, type BodyMeasurements, type GradeRule, type SizeChart, type TableError,
 } from '@grading';
 import { pieceToDxf } from '@exports/dxf/piece-dxf';
-import { tiledPiecePdf } from '@exports/pdf/tiled-piece';
 import { pieceToSvg } from '@exports/svg/piece-svg';
 import { mm } from '@shared/units/units';
 import type { GradingDto, PutGradeRuleInput, PutSizeChartInput, SizeMixDto } from '../../../shared/schemas/grading';
@@ -11,10 +10,11 @@ import type { Actor } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { computeGrading } from './grading-compute';
+import { runCpuTask } from '../../jobs/cpu-pool';
 import type { GradingSetRepository, StoredGradingSet } from './grading-set.repository';
 import { presentChart, presentGrading } from './grading.presenter';
 import { readTable, rowsToCsv, rowsToXlsx, type UploadedTable } from './table-io';
+import { LISTED_ERRORS } from '../uploads/table-limits';
 
 export interface GradingServiceDeps {
   styles: StyleRepository;
@@ -32,8 +32,14 @@ export interface Download {
   filename: string;
 }
 
+/** The first problems of a table as field errors; the message gives the total. */
 const tableErrorFields = (errors: TableError[]) =>
-  Object.fromEntries(errors.map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+  Object.fromEntries(errors.slice(0, LISTED_ERRORS).map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+const problemCount = (n: number) => `${n} problem${n > 1 ? 's' : ''}${n > LISTED_ERRORS ? `, the first ${LISTED_ERRORS} listed` : ''}`;
+
+/** The set graded over its run on the CPU pool's threads (grading and cutting outlines are CPU work). */
+const gradeOnPool = (set: StoredGradingSet, styleBase: string) =>
+  runCpuTask('grading', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules }, styleBase });
 
 /** Grading rules of a style: chart, rules, graded set, downloads and the size mix. */
 export function createGradingService({ styles, sets, audit, now }: GradingServiceDeps) {
@@ -66,7 +72,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
   async function get(actor: Actor, styleId: number): Promise<GradingDto> {
     const style = await styleOf(actor, styleId);
     const set = await sets.byStyle(actor.studioId, styleId);
-    const computed = set?.sizeChart ? computeGrading(set, style.baseSize) : null;
+    const computed = set?.sizeChart ? await gradeOnPool(set, style.baseSize) : null;
     return presentGrading(style.id, style.sizeRun, style.baseSize, set, computed);
   }
 
@@ -94,7 +100,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       const parsed = parseSizeChartTable(await readTable(file), file.originalname.replace(/\.(csv|xlsx)$/i, ''));
       if (!parsed.ok) {
         const first = parsed.errors[0];
-        throw badRequest(`row ${first.row}, column ${first.column}: ${first.message} (${parsed.errors.length} problem${parsed.errors.length > 1 ? 's' : ''}; nothing imported)`, tableErrorFields(parsed.errors));
+        throw badRequest(`row ${first.row}, column ${first.column}: ${first.message} (${problemCount(parsed.errors.length)}; nothing imported)`, tableErrorFields(parsed.errors));
       }
       return saveChart(actor, styleId, parsed.chart, undefined, 'import_chart');
     },
@@ -144,7 +150,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
     async pieceFile(actor: Actor, styleId: number, pieceId: string, kind: 'svg' | 'dxf' | 'pdf', q: { size?: string; paper: 'A4' | 'Letter' }): Promise<Download> {
       const style = await styleOf(actor, styleId);
       const set = await setOf(actor, styleId);
-      const computed = computeGrading(set, style.baseSize);
+      const computed = await gradeOnPool(set, style.baseSize);
       const graded = computed.graded[pieceId];
       if (!graded) throw notFound('Piece');
       const size = q.size && q.size !== 'all' ? q.size : kind === 'pdf' ? computed.baseSize : undefined;
@@ -154,7 +160,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       if (kind === 'svg') return { body: pieceToSvg(piece ?? graded, { cutting: cuttingOutline, label: true }), type: 'image/svg+xml', filename: `${name}.svg` };
       if (kind === 'dxf') return { body: pieceToDxf(piece ?? graded, { cutting: cuttingOutline }), type: 'application/dxf', filename: `${name}.dxf` };
       const p = piece ?? graded.bySize[computed.baseSize];
-      const body = await tiledPiecePdf(p, { paper: q.paper, cutting: cuttingOutline(p), title: `${style.code} ${style.name}: ${p.name}, size ${size}`, creationDate: now() });
+      const body = await runCpuTask('piece-tiles.pdf', { piece: p, options: { paper: q.paper, cutting: cuttingOutline(p), title: `${style.code} ${style.name}: ${p.name}, size ${size}`, creationDate: now() } });
       return { body, type: 'application/pdf', filename: `${name}-${q.paper}.pdf` };
     },
 
@@ -218,7 +224,7 @@ function readBusts(rows: string[][], columnName?: string, unitGiven?: 'mm' | 'cm
     else values.push(v * UNIT_FACTOR[unit]);
   });
   if (errors.length) {
-    throw badRequest(`row ${errors[0].row}, column ${errors[0].column}: ${errors[0].message} (${errors.length} problem${errors.length > 1 ? 's' : ''}; nothing used)`, tableErrorFields(errors.slice(0, 50)));
+    throw badRequest(`row ${errors[0].row}, column ${errors[0].column}: ${errors[0].message} (${problemCount(errors.length)}; nothing used)`, tableErrorFields(errors));
   }
   if (values.length === 0) throw badRequest('file: no measurements found', { file: 'No measurements found' });
   return { values, column: label, unit };

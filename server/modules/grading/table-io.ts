@@ -1,6 +1,6 @@
 import ExcelJS from 'exceljs';
-import { parse } from 'csv-parse/sync';
-import { badRequest } from '../../errors';
+import { AppError, badRequest } from '../../errors';
+import { checkSheetSize, checkWorkbookArchive, parseCsvWithinLimits } from '../uploads/table-limits';
 
 /** An uploaded file as multer hands it over (memory storage). */
 export interface UploadedTable {
@@ -14,10 +14,12 @@ const isXlsx = (f: UploadedTable) =>
 
 /**
  * Read a CSV (UTF-8 or Latin-1, comma or semicolon) or the first sheet of an XLSX into rows of trimmed strings.
- * A file that cannot be read at all is a 400 with field `file`.
+ * A file that cannot be read at all, or lies past the table limits (rows, columns, unpacked size), is a
+ * 400 (413 for a workbook that unpacks too large) with field `file`.
  */
 export async function readTable(file: UploadedTable): Promise<string[][]> {
   if (isXlsx(file)) {
+    checkWorkbookArchive(file.buffer);
     const wb = new ExcelJS.Workbook();
     try {
       await wb.xlsx.load(file.buffer as unknown as ArrayBuffer);
@@ -26,6 +28,7 @@ export async function readTable(file: UploadedTable): Promise<string[][]> {
     }
     const sheet = wb.worksheets[0];
     if (!sheet) throw badRequest('file: the workbook has no sheet', { file: 'The workbook has no sheet' });
+    checkSheetSize(sheet);
     const rows: string[][] = [];
     const width = sheet.columnCount;
     sheet.eachRow({ includeEmpty: true }, (row, n) => {
@@ -38,8 +41,9 @@ export async function readTable(file: UploadedTable): Promise<string[][]> {
   const text = decode(file.buffer);
   const delimiter = (text.split('\n')[0] ?? '').includes(';') && !(text.split('\n')[0] ?? '').includes(',') ? ';' : ',';
   try {
-    return (parse(text, { delimiter, relax_column_count: true, skip_empty_lines: false, bom: true }) as string[][]).map((r) => r.map((c) => c.trim()));
+    return parseCsvWithinLimits(text, { delimiter }).map((r) => r.map((c) => restoreCsvCell(c.trim())));
   } catch (e) {
+    if (e instanceof AppError) throw e;
     throw badRequest(`file: ${(e as Error).message}`, { file: 'Not a readable CSV file' });
   }
 }
@@ -61,9 +65,27 @@ function cellText(v: ExcelJS.CellValue): string {
   return String(v).trim();
 }
 
-/** Rows → CSV text (RFC 4180 quoting). */
+/** First characters a spreadsheet may read as the start of a formula (OWASP "CSV Injection"). */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * A cell a spreadsheet will show as text, never run: one that begins with = + - @, a tab or a carriage
+ * return gets a leading single quote, as the OWASP "CSV Injection" page advises. Applied to every cell,
+ * numbers included, since a cell such as `-2+3+cmd|' /C calc'!A0` starts like a negative number.
+ */
+export function neutraliseCsvCell(cell: string): string {
+  return FORMULA_START.test(cell) ? `'${cell}` : cell;
+}
+
+/** Undoes {@link neutraliseCsvCell} on import, so an exported file reads back as it was. */
+const restoreCsvCell = (cell: string) => (cell.startsWith("'") && FORMULA_START.test(cell.slice(1)) ? cell.slice(1) : cell);
+
+/** Rows → CSV text (RFC 4180 quoting), every cell neutralised against formula injection. */
 export function rowsToCsv(rows: string[][]): string {
-  const q = (c: string) => (/[",\n\r]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c);
+  const q = (raw: string) => {
+    const c = neutraliseCsvCell(raw);
+    return /[",\n\r]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c;
+  };
   return rows.map((r) => r.map(q).join(',')).join('\r\n') + '\r\n';
 }
 

@@ -1,13 +1,14 @@
 import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
 import { idParam } from '../../../shared/schemas/common';
 import { copyOperationsInput, linePlanQuery, putOperationsInput, type LinePlanQuery } from '../../../shared/schemas/line';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { LineService } from './line.service';
+import { sendDownload } from '../../middleware/download';
+import { memoryUpload } from '../uploads/memory-upload';
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 1024 * 1024, files: 1 } });
+const upload = memoryUpload({ fileSize: 1024 * 1024, files: 1 });
 const singleFile: RequestHandler = (req, res, next) =>
   upload.single('file')(req, res, (err: unknown) => (err ? next(badRequest(`file: ${(err as Error).message}`, { file: (err as Error).message })) : next()));
 
@@ -27,9 +28,7 @@ export function operationRoutes(service: LineService) {
   });
   r.get('/:id/operations/export', plan, validate({ params: idParam }), async (req, res) => {
     const f = await service.exportXlsx(actorOf(req), id(req.params));
-    res.setHeader('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
-    res.setHeader('Content-Disposition', `attachment; filename="${f.filename}"`);
-    res.send(f.body);
+    sendDownload(res, { body: f.body, type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: f.filename });
   });
   r.post('/:id/operations/import', plan, singleFile, validate({ params: idParam }), async (req, res) => {
     res.json({ operations: await service.importXlsx(actorOf(req), id(req.params), req.file?.buffer) });

@@ -10,6 +10,7 @@ import type { StyleRepository } from '../styles/style.repository';
 import { planLine, type StaffCount } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
+import { LISTED_ERRORS } from '../uploads/table-limits';
 
 export interface LineServiceDeps {
   styles: StyleRepository;
@@ -116,8 +117,9 @@ export function createLineService({ styles, batches, operations, studio, staff, 
       const st = await studio(actor.studioId);
       const res = await operationsFromXlsx(buf, st?.currency ?? 'KES');
       if (!res.ok) {
-        const fields = Object.fromEntries(res.errors.map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
-        throw badRequest(`row ${res.errors[0].row}, column ${res.errors[0].column}: ${res.errors[0].message} (nothing imported)`, fields);
+        const fields = Object.fromEntries(res.errors.slice(0, LISTED_ERRORS).map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
+        const count = `${res.errors.length} problem${res.errors.length > 1 ? 's' : ''}${res.errors.length > LISTED_ERRORS ? `, the first ${LISTED_ERRORS} listed` : ''}`;
+        throw badRequest(`row ${res.errors[0].row}, column ${res.errors[0].column}: ${res.errors[0].message} (${count}; nothing imported)`, fields);
       }
       return save(actor, styleId, res.rows, 'import_operations');
     },

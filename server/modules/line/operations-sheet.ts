@@ -1,9 +1,8 @@
 import ExcelJS from 'exceljs';
+import { currencyDigits } from '../../../shared/units/money';
+import { checkSheetSize, checkWorkbookArchive } from '../uploads/table-limits';
 import { LINE_SECTIONS, type OperationInput } from '../../../shared/schemas/line';
 
-/** Fraction digits of a currency's minor unit (KES 2, JPY 0). */
-export const currencyDigits = (currency: string) =>
-  new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
 
 const HEADER = ['Code', 'Operation', 'Section', 'Machine type', 'SAM (min)', 'After (codes)'];
 
@@ -40,8 +39,12 @@ const text = (v: ExcelJS.CellValue): string => {
   return String(v).trim();
 };
 
-/** Read an operations sheet (layout of {@link operationsToXlsx}); every bad cell is reported, no partial result. */
+/**
+ * Read an operations sheet (layout of {@link operationsToXlsx}); every bad cell is reported, no partial result.
+ * Throws the 400/413 AppError of the table limits for a workbook past them.
+ */
 export async function operationsFromXlsx(buf: Buffer, currency: string): Promise<{ ok: true; rows: OperationInput[] } | { ok: false; errors: SheetError[] }> {
+  checkWorkbookArchive(buf);
   const wb = new ExcelJS.Workbook();
   try {
     await wb.xlsx.load(buf as unknown as ArrayBuffer);
@@ -50,6 +53,7 @@ export async function operationsFromXlsx(buf: Buffer, currency: string): Promise
   }
   const ws = wb.worksheets[0];
   if (!ws) return { ok: false, errors: [{ row: 1, column: 1, message: 'the workbook has no sheet' }] };
+  checkSheetSize(ws);
   const errors: SheetError[] = [];
   const header = (ws.getRow(1).values as ExcelJS.CellValue[]).slice(1).map(text);
   HEADER.forEach((h, i) => {

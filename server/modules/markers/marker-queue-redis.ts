@@ -3,7 +3,7 @@ import { Redis } from 'ioredis';
 import type { NestingRunHandle } from '../../workers/nesting-runner';
 import type { MarkerJobInput } from './marker-input';
 import { executeMarkerJob } from './marker-job';
-import type { LiveProgress, MarkerQueue, MarkerQueueOptions } from './marker-queue';
+import { MAX_QUEUED_PER_STUDIO, markerQueueFull, type LiveProgress, type MarkerQueue, type MarkerQueueOptions } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
 
 /** BullMQ queue name of marker (nesting) jobs. */
@@ -27,7 +27,8 @@ export const redisConnection = (url: string) => new Redis(url, { maxRetriesPerRe
  * worker dies is found stalled when its lock expires and runs again on another worker. Same interface as
  * the in-process queue, so the API behaves the same with or without REDIS_URL.
  */
-export function createRedisMarkerQueue(redisUrl: string): MarkerQueue {
+export function createRedisMarkerQueue(redisUrl: string, opts: Pick<MarkerQueueOptions, 'maxQueuedPerStudio'> = {}): MarkerQueue {
+  const maxQueued = opts.maxQueuedPerStudio ?? MAX_QUEUED_PER_STUDIO;
   const connection = redisConnection(redisUrl);
   const queue = new Queue<MarkerJobData>(MARKER_QUEUE_NAME, { connection });
   const events = new QueueEvents(MARKER_QUEUE_NAME, { connection: redisConnection(redisUrl) });
@@ -36,14 +37,38 @@ export function createRedisMarkerQueue(redisUrl: string): MarkerQueue {
   const forget = ({ jobId }: { jobId: string }) => live.delete(markerIdOf(jobId));
   events.on('completed', forget);
   events.on('failed', forget);
+  const reserved = new Map<number, number>();
+  /** Waiting marker jobs of one studio (a few per studio at most, so reading them is cheap). */
+  const waitingOf = async (studioId: number) =>
+    (await queue.getJobs(['waiting', 'prioritized', 'delayed'])).filter((j) => j?.data.studioId === studioId).length;
   return {
+    async reserve(studioId) {
+      reserved.set(studioId, (reserved.get(studioId) ?? 0) + 1);
+      const release = () => {
+        const n = (reserved.get(studioId) ?? 1) - 1;
+        if (n > 0) reserved.set(studioId, n);
+        else reserved.delete(studioId);
+      };
+      if ((await waitingOf(studioId)) + (reserved.get(studioId) ?? 0) > maxQueued) {
+        release();
+        throw markerQueueFull(maxQueued);
+      }
+      let done = false;
+      return () => {
+        if (!done) release();
+        done = true;
+      };
+    },
     enqueue(studioId, id, job) {
       void (async () => {
         // A finished run of the same marker row, kept for inspection, would make BullMQ ignore this one.
         const previous = await queue.getJob(markerJobId(id));
         if (previous && ((await previous.isCompleted()) || (await previous.isFailed()))) await previous.remove();
+        // The studio's n-th waiting job gets priority n (1 runs first), so studios take turns as in the
+        // in-process queue: one studio's many markers wait behind another's first one.
         await queue.add('marker', { studioId, id, job }, {
           jobId: markerJobId(id),
+          priority: Math.min(1 + (await waitingOf(studioId)), 2_097_152),
           removeOnComplete: 1000,
           removeOnFail: 1000,
           attempts: 3,

@@ -8,6 +8,7 @@ import { createStyleRepository } from '../styles/style.repository';
 import type { DataSource } from 'typeorm';
 import { markerSvg } from './marker-svg';
 import type { MarkerService } from './marker.service';
+import { sendDownload } from '../../middleware/download';
 
 export function markerRoutes(ds: DataSource, service: MarkerService) {
   const r = Router();
@@ -34,10 +35,7 @@ export function markerRoutes(ds: DataSource, service: MarkerService) {
     const style = await styles.get(studioId, dto.styleId);
     const sizes = style?.sizeRun ?? Object.keys(dto.ratio);
     const title = `${style?.code ?? 'Marker'} ${ratioText(dto.ratio, sizes)} · ${Math.round(dto.lengthMm)} mm × ${Math.round(dto.widthMm)} mm`;
-    res
-      .type('image/svg+xml')
-      .attachment(`marker-${dto.id}.svg`)
-      .send(markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }));
+    sendDownload(res, { body: markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }), type: 'image/svg+xml', filename: `marker-${dto.id}.svg` });
   });
   return r;
 }

@@ -55,12 +55,18 @@ export function createMarkerService(deps: MarkerServiceDeps) {
     const inputHash = markerInputHash(job);
     const existing = await markers.byHash(studioId, inputHash);
     if (existing) return { marker: existing, reused: true };
-    const marker = await markers.insert({
-      studioId, styleId: style.id, batchId: input.batchId ?? null, fabricId: fabric.id, ratio,
-      widthMm: fabric.widthMm, inputHash, status: 'queued', input: job, result: null, error: '',
-    });
-    deps.queue().enqueue(studioId, marker.id, job);
-    return { marker, reused: false };
+    // The studio's place in the queue is taken before the row is stored, so a full queue stores nothing.
+    const release = await deps.queue().reserve(studioId);
+    try {
+      const marker = await markers.insert({
+        studioId, styleId: style.id, batchId: input.batchId ?? null, fabricId: fabric.id, ratio,
+        widthMm: fabric.widthMm, inputHash, status: 'queued', input: job, result: null, error: '',
+      });
+      deps.queue().enqueue(studioId, marker.id, job);
+      return { marker, reused: false };
+    } finally {
+      release();
+    }
   }
 
   return {

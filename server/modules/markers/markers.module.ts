@@ -26,7 +26,7 @@ export const markersModule: ApiModule = {
       const extra = ctx.services.get(MARKER_QUEUE_OPTIONS_KEY) as MarkerQueueOptions | undefined;
       // REDIS_URL moves the runs to worker processes (`npm run worker`); otherwise they run in-process.
       queue ??= ctx.env.REDIS_URL
-        ? createRedisMarkerQueue(ctx.env.REDIS_URL)
+        ? createRedisMarkerQueue(ctx.env.REDIS_URL, extra)
         : createMarkerQueue(markers, { onDone: (studioId, id) => linkMarkerToLays(ctx.ds, studioId, id), ...extra });
       ctx.services.set(MARKER_QUEUE_KEY, queue);
       current = { queue, ctx };

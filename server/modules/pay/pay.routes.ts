@@ -5,6 +5,7 @@ import { approvePayPeriodInput, payoutParams, payPersonInput, type PayModeDto } 
 import { actorOf, requirePermission } from '../../auth/require';
 import { validate } from '../../middleware/validate';
 import type { PayService } from './pay.service';
+import { sendDownload } from '../../middleware/download';
 
 /** Routes under /api/pay: the owner's pay periods and payouts, and each person's own pay. */
 export function payRoutes(pay: PayService, mode: () => PayModeDto, jobs: JobRunner) {
@@ -45,10 +46,7 @@ export function payRoutes(pay: PayService, mode: () => PayModeDto, jobs: JobRunn
       approvedBy: approver,
       approvedAtIso: new Date(period.createdAt).toISOString(),
     });
-    res
-      .type('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet')
-      .attachment(`pay-${period.fromDay}-to-${period.toDay}.xlsx`)
-      .send(bytes);
+    sendDownload(res, { body: bytes, type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `pay-${period.fromDay}-to-${period.toDay}.xlsx` });
   });
   return r;
 }

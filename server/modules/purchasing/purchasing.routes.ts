@@ -10,6 +10,7 @@ import type { ModuleContext } from '../module';
 import { poNumber, presentOrder, presentSupplier } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 import type { PurchasingService } from './purchasing.service';
+import { sendDownload } from '../../middleware/download';
 
 const ordersQuery = z.object({ batchId: z.coerce.number().int().positive().optional() });
 
@@ -78,9 +79,7 @@ export function purchasingRoutes(repo: PurchasingRepository, service: Purchasing
     const { studioId } = actorOf(req);
     const o = await repo.order(studioId, Number(req.params.id));
     if (!o) throw notFound('Purchase order');
-    res.setHeader('Content-Type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
-    res.setHeader('Content-Disposition', `attachment; filename="${poNumber(o.id)}.xlsx"`);
-    res.send(await service.workbook(studioId, o));
+    sendDownload(res, { body: await service.workbook(studioId, o), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${poNumber(o.id)}.xlsx` });
   });
   r.post('/orders/:id/send', validate({ params: idParam }), async (req, res) => {
     const actor = actorOf(req);

@@ -2,7 +2,6 @@ import { randomUUID } from 'node:crypto';
 import { mkdir, readFile, unlink, writeFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
 import { idParam } from '../../../shared/schemas/common';
 import { uploadFields, uploadListQuery, type UploadDto, type UploadKind } from '../../../shared/schemas/uploads';
 import type { UploadEntity } from '../../entities';
@@ -12,6 +11,8 @@ import { validate } from '../../middleware/validate';
 import type { ModuleContext } from '../module';
 import { ACCEPTED, sniffUpload, svgProblems } from './upload-sniff';
 import type { UploadsRepository } from './uploads.repository';
+import { sendDownload } from '../../middleware/download';
+import { memoryUpload } from './memory-upload';
 
 export const presentUpload = (u: UploadEntity): UploadDto => ({
   id: u.id,
@@ -41,7 +42,7 @@ export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
   const r = Router();
   const maxBytes = ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024;
   const dir = uploadsDir(ctx.env.DATABASE_PATH);
-  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 10 } }).single('file');
+  const single = memoryUpload({ fileSize: maxBytes, files: 1, fields: 10 }).single('file');
   const receive: RequestHandler = (req, res, next) =>
     single(req, res, (err: unknown) => {
       const code = (err as { code?: string } | undefined)?.code;
@@ -82,12 +83,9 @@ export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
     if (!u) throw notFound('Upload');
     const bytes = await readFile(join(dir, basename(u.storedName))).catch(() => null);
     if (!bytes) throw notFound('Upload file');
-    res.setHeader('Content-Type', u.mimeType);
     res.setHeader('X-Content-Type-Options', 'nosniff');
     res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; sandbox");
-    const inline = u.mimeType.startsWith('image/');
-    res.setHeader('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${u.originalName.replace(/["\\]/g, '_')}"`);
-    res.send(bytes);
+    sendDownload(res, { body: bytes, type: u.mimeType, filename: u.originalName, inline: u.mimeType.startsWith('image/') });
   });
   r.delete('/:id', owner, validate({ params: idParam }), async (req, res) => {
     const actor = actorOf(req);
