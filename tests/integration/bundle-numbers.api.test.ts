@@ -23,7 +23,9 @@ describe('bundle numbers across batches', () => {
     const first = (await cutter.get('/api/batches/1/bundles')).body.bundles as { number: number }[];
     expect(first.length).toBeGreaterThan(0);
     const lay = (await cutter.get('/api/lays')).body.lays.find((l: { batchId: number; status: string }) => l.batchId === secondBatch && l.status === 'planned');
-    const cut = await cutter.post(`/api/lays/${lay.id}/cut`).send({});
+    // The cutter enters what was spread and the remnant measured (the plan is never taken as fact).
+    const rolls = (lay.rolls as { rollId: number; plies: number; expectedRemnantMm: number }[]).map((r) => ({ rollId: r.rollId, actualPlies: r.plies, actualRemnantMm: r.expectedRemnantMm }));
+    const cut = await cutter.post(`/api/lays/${lay.id}/cut`).send({ rolls });
     expect(cut.status).toBe(200);
     const second = (await cutter.get(`/api/batches/${secondBatch}/bundles`)).body.bundles as { number: number }[];
     expect(second.length).toBeGreaterThan(0);

@@ -21,7 +21,7 @@ beforeAll(async () => {
     bundles.create({ studioId: 1, batchId: 1, layId: 0, number: 901 + i, size: 'M', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} }),
   );
   bundleNumbers = (await bundles.save(extra)).map((b) => b.number);
-  operationId = (await app.ds.getRepository(OperationEntity).find({ order: { seq: 'ASC' } }))[0].id;
+  operationId = (await app.ds.getRepository(OperationEntity).find({ where: { section: 'sewing' }, order: { seq: 'ASC' } }))[0].id;
 }, 120_000);
 
 const until = async (cond: () => boolean) => {
