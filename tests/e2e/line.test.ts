@@ -24,8 +24,9 @@ describe('journey: the owner balances the demo line for the due date', () => {
     expect(summary).toMatch(/Line balance\s*[\d.]+ %/);
     // The chart has one bar per station, one of them the bottleneck (madder).
     await expect.poll(() => page.locator('[data-testid="capacity-chart"] .recharts-bar-rectangle').count()).toBe(6);
-    expect(await page.locator('[data-testid="capacity-chart"] path[fill="#B5523B"]').count()).toBe(1);
-    expect(await page.getByTestId('stations').getByText('bottleneck').count()).toBe(1);
+    // Bars grow in with an animation: wait for the drawn paths rather than reading them once.
+    await expect.poll(() => page.locator('[data-testid="capacity-chart"] path[fill="#B5523B"]').count()).toBe(1);
+    await expect.poll(() => page.getByTestId('stations').getByText('bottleneck').count()).toBe(1);
     const schedule = await page.getByTestId('schedule').textContent();
     expect(schedule).toMatch(/cutting:.*→/);
     expect(schedule).toMatch(/sewing:.*→/);
