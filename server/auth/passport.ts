@@ -6,6 +6,8 @@ import type { AuthService } from '../modules/auth/auth.service';
 interface SessionUser {
   id: number;
   v: number;
+  /** How the session was opened; absent in sessions made before it was stored (password). */
+  m?: 'password' | 'pin';
 }
 
 /** Wire passport: local strategy for e-mail + password, session holds id and session version. */
@@ -20,11 +22,11 @@ export function configurePassport(auth: AuthService) {
     }),
   );
   p.serializeUser((user, done) => {
-    const u = user as Actor & { sessionVersion?: number };
-    done(null, { id: u.id, v: u.sessionVersion ?? 1 } satisfies SessionUser);
+    const u = user as Actor & { sessionVersion?: number; signedInWith?: 'password' | 'pin' };
+    done(null, { id: u.id, v: u.sessionVersion ?? 1, m: u.signedInWith ?? 'password' } satisfies SessionUser);
   });
   p.deserializeUser((stored: SessionUser, done) => {
-    auth.actorForSession(stored.id, stored.v).then(
+    auth.actorForSession(stored.id, stored.v, stored.m === 'pin' ? 'pin' : 'password').then(
       (actor) => done(null, actor ?? false),
       (err) => done(err),
     );

@@ -82,4 +82,18 @@ describe('temporary password', () => {
     expect((await request(app).post('/api/auth/login').send({ email: 'newcutter@tamarind.example', password: temporary })).status).toBe(401);
     await signIn(app, 'newcutter@tamarind.example', 'my-own-secret-42');
   });
+
+  it('is not asked of a machinist signed in with their floor PIN, but still of the same person on the password form', async () => {
+    const { app } = await buildTestApp();
+    const owner = await signIn(app, DEMO.owner);
+    const made = await owner.post('/api/users').send({ name: 'New Machinist', email: 'newmachinist@tamarind.example', role: 'machinist', temporaryPassword: 'handed-over-456', pin: '8642' });
+    expect(made.status).toBe(201);
+    const floor = request.agent(app);
+    expect((await floor.post('/api/auth/pin').send({ email: 'newmachinist@tamarind.example', pin: '8642' })).status).toBe(200);
+    expect((await floor.get('/api/auth/me')).body.user.mustChangePassword).toBe(false);
+    expect((await floor.get('/api/floor/me/today')).status).toBe(200);
+    const desk = await signIn(app, 'newmachinist@tamarind.example', 'handed-over-456');
+    expect((await desk.get('/api/auth/me')).body.user.mustChangePassword).toBe(true);
+    expect((await desk.get('/api/floor/me/today')).body.error.code).toBe('password_change_required');
+  });
 });

@@ -79,7 +79,7 @@ export function authRoutes(
 
   const respondMe = async (req: Request, res: Response) => {
     const { user, studio } = await auth.me(actorOf(req));
-    res.json({ user: presentMe(user, studio) });
+    res.json({ user: { ...presentMe(user, studio), mustChangePassword: Boolean(actorOf(req).mustChangePassword) } });
   };
 
   r.post('/login', ipLimiter, limiter, validate({ body: loginInput }), async (req, res) => {

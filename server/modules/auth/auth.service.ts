@@ -21,14 +21,20 @@ export function createAuthService(deps: {
 }) {
   const { ds, users, audit, lockAfter, now } = deps;
 
-  const toActor = (u: UserEntity) => ({
+  /**
+   * The actor of a session. A temporary password must be replaced before anything else, but only in a
+   * session opened with that password: a floor PIN is the person's own secret, so a machinist signed in
+   * with a PIN is never sent to change a password they may never use (common practice on shared tablets).
+   */
+  const toActor = (u: UserEntity, signedInWith: SecretKind = 'password') => ({
     id: u.id,
     studioId: u.studioId,
     role: u.role,
     name: u.name,
     email: u.email,
     sessionVersion: u.sessionVersion,
-    mustChangePassword: Boolean(u.mustChangePassword),
+    signedInWith,
+    mustChangePassword: signedInWith === 'password' && Boolean(u.mustChangePassword),
   });
 
   /**
@@ -48,7 +54,7 @@ export function createAuthService(deps: {
     const ok = await verifySecret(secret, kind === 'pin' ? user.pinHash : user.passwordHash);
     if (!ok) return false as const;
     await users.clearFailures(user.id, kind);
-    return toActor(user);
+    return toActor(user, kind);
   }
 
   const byEmail = (email: string) => users.findByEmail(normaliseEmail(email));
@@ -73,10 +79,10 @@ export function createAuthService(deps: {
       };
     },
 
-    async actorForSession(id: number, version: number): Promise<Actor | null> {
+    async actorForSession(id: number, version: number, signedInWith: SecretKind = 'password'): Promise<Actor | null> {
       const u = await users.findForSession(id);
       if (!u || !u.active || u.sessionVersion !== version) return null;
-      return toActor(u);
+      return toActor(u, signedInWith);
     },
 
     async me(actor: Actor) {
@@ -101,7 +107,7 @@ export function createAuthService(deps: {
         sessionVersion,
       });
       await audit.record(actor, 'change_password', 'user', actor.id);
-      return { ...toActor(u), sessionVersion, mustChangePassword: false };
+      return { ...toActor(u, 'password'), sessionVersion, mustChangePassword: false };
     },
 
     /** Anyone may open a new studio; they become its owner. */
