@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { polygonArea } from '@shared/geometry/polygon';
-import { polygonIsSimple, polylineLength } from '@shared/geometry/polyline';
+import { polygonIsSimple, polylineLength, segmentDistance } from '@shared/geometry/polyline';
 import type { Point } from '@shared/geometry/types';
 import { MM_PER_INCH } from '@shared/units/units';
 import { edgePoints, type Piece } from '../pieces/piece';
@@ -89,6 +89,19 @@ describe('peplum and flounce', () => {
   it('gives a 70 cm seam, 15 cm deep flounce a fullness of 2.35 (block-drafting-and-line-planning.md §3, [computed])', () => {
     const p = unfoldPiece(draftPeplum({ waist: 700 }, { lengthMm: 150 }));
     expect(edgeLen(p, 'hem') / edgeLen(p, 'waist')).toBeCloseTo(2.35, 2);
+  });
+  it('rounds the hem corners at the opening when asked, leaving the inner edge as it was', () => {
+    const p = draftPeplum({ waist: 700 }, { cornerRadiusMm: 25.4, lengthMm: 150 });
+    const turn = (q: Piece) => {
+      const n = q.outline.length, i = q.edges[0].to;
+      const a = q.outline[(i - 1 + n) % n], b = q.outline[i], c = q.outline[(i + 1) % n];
+      const u = { x: b.x - a.x, y: b.y - a.y }, v = { x: c.x - b.x, y: c.y - b.y };
+      return Math.acos((u.x * v.x + u.y * v.y) / (Math.hypot(u.x, u.y) * Math.hypot(v.x, v.y)));
+    };
+    // square corners turn 90° from the seam onto the hem; a fillet turns a few degrees per flattened step
+    expect(turn(p)).toBeLessThan((10 * Math.PI) / 180);
+    expect(turn(draftPeplum({ waist: 700 }, { lengthMm: 150 }))).toBeCloseTo(Math.PI / 2, 1);
+    expect(Math.abs(edgeLen(p, 'waist') - 700)).toBeLessThan(1);
   });
   it('cuts halves and quarters on folds whose pieces together make the inner edge', () => {
     for (const cut of ['halves', 'quarters'] as const) {
@@ -272,6 +285,12 @@ describe('facings and composition', () => {
     expect(nb.cut).toBe('pair');
     const [af] = draftBodiceFacings(front, back, 'armhole');
     expect(edgeLen(af, 'armhole')).toBeCloseTo(edgeLen(front, 'armhole'), 1);
+    // the facing's free edge runs the facing width (2½ in) in from the neckline and the edges it turns onto
+    const source = ['neckline', 'shoulder', 'centre-front'].map((name) => edge(front, name));
+    const dist = (q: Point) => Math.min(...source.flatMap((l) => l.slice(1).map((b, i) => segmentDistance(q, l[i], b))));
+    const inner = edge(nf, 'inner').slice(1, -1).map(dist);
+    expect(Math.max(...inner)).toBeCloseTo(2.5 * IN, 0);
+    expect(Math.min(...inner)).toBeGreaterThan(2 * IN);
   });
   it('drafts the issue\'s corporate dress (V neck, long sleeves with pads, gathered peplum in contrast, centre-back zip)', () => {
     const specs: BlockSpec[] = [

@@ -23,6 +23,8 @@ export interface CircleRingInput {
   /** Name and allowance of the opening seam of a 'ring' cut (default 'centre-back', 10 mm). */
   openingName?: string;
   openingAllowanceMm?: number;
+  /** Round the two hem corners at the opening of a 'ring' with this radius (mm). Default 0: square corners. */
+  cornerRadiusMm?: number;
   seamMm?: number;
   hemMm?: number;
 }
@@ -60,9 +62,19 @@ export function draftCircleRing(input: CircleRingInput): Piece & { innerRadiusMm
   const notchAngles = [cf - side, cf, cf + side].filter((a) => a > a0 + 1e-9 && a < a1 - 1e-9);
   const at = (rad: number, a: number): Point => ({ x: rad * Math.cos(a), y: rad * Math.sin(a) });
   const b = new OutlineBuilder(at(r, a0), 'waist-start');
-  b.edge(startEdge[0], startEdge[1]).line(at(R, a0), 'hem-start');
+  const rho = cut === 'ring' ? (input.cornerRadiusMm ?? 0) : 0;
+  if (rho < 0 || rho > input.depthMm / 2) throw new RangeError('cornerRadiusMm must be between 0 and half the length');
+  // A rounded corner is a fillet tangent to the opening seam (a radius) and to the hem circle: its centre lies
+  // rho inside both, at radius R − rho and angle delta in from the seam.
+  const delta = rho > 0 ? Math.asin(rho / (R - rho)) : 0;
+  const foot = (R - rho) * Math.cos(delta);
+  const fillet = (a: number, from: number, to: number) => arcFlatten(at(R - rho, a), rho, from, to, RING_TOLERANCE_MM).slice(1);
+  b.edge(startEdge[0], startEdge[1]).line(at(rho > 0 ? foot : R, a0), 'hem-start');
   b.edge('hem', { allowanceMm: input.hemMm ?? HEM_CIRCLE_MM });
-  arcFlatten({ x: 0, y: 0 }, R, a0, a1, RING_TOLERANCE_MM).slice(1).forEach((p, i, all) => b.line(p, i === all.length - 1 ? 'hem-end' : undefined));
+  if (rho > 0) fillet(a0 + delta, a0 - Math.PI / 2, a0 + delta).forEach((p) => b.line(p));
+  arcFlatten({ x: 0, y: 0 }, R, a0 + delta, a1 - delta, RING_TOLERANCE_MM).slice(1).forEach((p) => b.line(p));
+  if (rho > 0) fillet(a1 - delta, a1 - delta, a1 + Math.PI / 2).forEach((p) => b.line(p));
+  b.landmarks['hem-end'] = b.points.length - 1;
   b.edge(endEdge[0], endEdge[1]).line(at(r, a1), 'waist-end');
   b.edge('waist', { allowanceMm: seam });
   const stops = [a1, ...[...notchAngles].reverse(), a0];

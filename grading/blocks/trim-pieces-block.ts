@@ -21,6 +21,8 @@ export interface PeplumOptions {
   cut?: RingCut;
   /** Allowance of the centre-back opening of a ring. Default the seam allowance. */
   openingAllowanceMm?: number;
+  /** Curved corners: round the hem corners at the opening of a ring with this radius. Default 0 (square). */
+  cornerRadiusMm?: number;
   seamMm?: number;
   hemMm?: number;
 }
@@ -36,7 +38,7 @@ export function draftPeplum(m: BodyMeasurements, o: PeplumOptions = {}): Piece &
   if (!(inner > 0)) throw new RangeError('innerEdge gives no inner edge length');
   return draftCircleRing({
     id: 'peplum', name: times > 1 ? 'Gathered peplum' : 'Peplum', role: 'peplum', innerEdgeMm: inner,
-    depthMm: o.lengthMm ?? 6 * IN, fraction: o.fraction ?? 1, cut: o.cut, openingAllowanceMm: o.openingAllowanceMm,
+    depthMm: o.lengthMm ?? 6 * IN, fraction: o.fraction ?? 1, cut: o.cut, openingAllowanceMm: o.openingAllowanceMm, cornerRadiusMm: o.cornerRadiusMm,
     seamMm: o.seamMm, hemMm: o.hemMm,
   });
 }

@@ -41,7 +41,7 @@ const sleeve = z.object({
 const peplum = z.object({
   block: z.literal('peplum'), shape: z.literal('circle').optional(),
   innerEdge: z.object({ times: z.number().finite().positive('Must be more than 0').max(10).optional(), plusMm: z.number().finite().min(-2000).max(5000).optional() }).strict().optional(),
-  lengthMm: mm.optional(), waistEaseMm: ease.optional(), fraction, cut: ringCut, openingAllowanceMm: mmOrZero.optional(), ...seams,
+  lengthMm: mm.optional(), waistEaseMm: ease.optional(), fraction, cut: ringCut, openingAllowanceMm: mmOrZero.optional(), cornerRadiusMm: mmOrZero.optional(), ...seams,
 }).strict();
 
 const facing = z.object({
