@@ -1,6 +1,7 @@
 import type { Piece } from '../pieces/piece';
 import { OutlineBuilder } from '../pieces/piece';
 import { draftCircleRing, type RingCut } from './circle-ring-block';
+import { squaredHemPath } from './hem-shape';
 import { ZIP_ALLOWANCE_MM } from './fitted-bodice-block';
 import { DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
@@ -118,18 +119,8 @@ function hemAndSide(b: OutlineBuilder, o: SkirtShapeOptions, length: number, hip
     b.line({ x, y: -length }, 'side-hem');
     return;
   }
-  const flare = o.hemFlareMm ?? 60;
-  const d = { x: flare, y: -length - hipY };
-  const l = Math.hypot(d.x, d.y);
-  const below = -hipY - length;
-  // The side seam below the hip is as long as the centre line, so the hem hangs level once the flare falls.
-  const sideHem = { x: hipX + (d.x / l) * -below, y: hipY + (d.y / l) * -below };
-  const s = { x: -d.x / l, y: -d.y / l };
-  const square = { x: s.y, y: -s.x };
-  const bend = { x: sideHem.x - square.x * IN, y: sideHem.y - square.y * IN };
-  const k = bend.x / 3;
-  b.cubic({ x: k, y: -length }, { x: bend.x - square.x * k, y: bend.y - square.y * k }, bend);
-  b.line(sideHem, 'side-hem');
+  const path = squaredHemPath({ x: 0, y: -length }, { x: hipX, y: hipY }, { x: hipX + (o.hemFlareMm ?? 60), y: -length });
+  path.slice(1).forEach((p, i) => b.line(p, i === path.length - 2 ? 'side-hem' : undefined));
 }
 
 function gatheredSkirt(m: BodyMeasurements, o: SkirtShapeOptions, length: number): Piece[] {

@@ -136,14 +136,24 @@ describe('hem allowances turned up along the hem fold', () => {
     expect(polygonBBox(cuttingOutline(p))).toEqual({ minX: -10, maxX: 110, minY: -30, maxY: 60 });
   });
 
+  /** Cosine of the angle between the hem's last segment and the side seam's first (0 = square). */
+  const hemCornerCos = (p: Piece) => {
+    const hem = p.edges.find((e) => e.name === 'hem')!;
+    const n = p.outline.length;
+    const corner = p.outline[hem.to], before = p.outline[(hem.to - 1 + n) % n], after = p.outline[(hem.to + 1) % n];
+    const u = { x: corner.x - before.x, y: corner.y - before.y }, v = { x: after.x - corner.x, y: after.y - corner.y };
+    return (u.x * v.x + u.y * v.y) / (Math.hypot(u.x, u.y) * Math.hypot(v.x, v.y));
+  };
+
   it('squares an A-line hem to the side seam (issue 16: a flared hem met the side seam at 81°)', () => {
     const [front] = draftSkirtShape(M, { shape: 'a-line', lengthMm: 600, hemFlareMm: 80 });
-    const hem = front.edges.find((e) => e.name === 'hem')!;
-    const n = front.outline.length;
-    const corner = front.outline[hem.to], before = front.outline[(hem.to - 1 + n) % n], after = front.outline[(hem.to + 1) % n];
-    const u = { x: corner.x - before.x, y: corner.y - before.y }, v = { x: after.x - corner.x, y: after.y - corner.y };
-    const cos = (u.x * v.x + u.y * v.y) / (Math.hypot(u.x, u.y) * Math.hypot(v.x, v.y));
-    expect(Math.abs(cos)).toBeLessThan(1e-9);
+    expect(Math.abs(hemCornerCos(front))).toBeLessThan(1e-9);
     expect(validateCuttingOutline(front, cuttingOutline(front))).toEqual([]);
+  });
+
+  it('squares the demo shirt dress hem to its flared side seams, front and back, keeping the side seams equal', () => {
+    const [front, back] = draftShirtDress(M);
+    for (const p of [front, back]) expect(Math.abs(hemCornerCos(p)), p.id).toBeLessThan(1e-9);
+    expect(edgeLength(front, ['side'])).toBeCloseTo(edgeLength(back, ['side']), 9);
   });
 });
