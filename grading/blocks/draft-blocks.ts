@@ -52,9 +52,9 @@ export function draftBlocks(m: BodyMeasurements, specs: readonly BlockSpec[]): D
       const shape = spec.shape ?? 'straight';
       for (const p of draftSkirtShape(m, { ...spec, shape })) add(p, 'skirt', material, shape);
     } else if (spec.block === 'sleeve') {
-      const { front, back } = getBodice();
       const { block: _b, material: _m, ...o } = spec;
-      const sleeve = draftSetInSleeve(m, { ...o, armholeFrontMm: o.armholeFrontMm ?? edgeLength(front, ['armhole']), armholeBackMm: o.armholeBackMm ?? edgeLength(back, ['armhole']) });
+      const armhole = (which: 'front' | 'back') => edgeLength(getBodice()[which], ['armhole']);
+      const sleeve = draftSetInSleeve(m, { ...o, armholeFrontMm: o.armholeFrontMm ?? armhole('front'), armholeBackMm: o.armholeBackMm ?? armhole('back') });
       const { bicepMm: _bicep, ...piece } = sleeve;
       add(piece, 'sleeve', material, spec.length ?? 'long');
     } else if (spec.block === 'peplum') {

@@ -51,8 +51,9 @@ export const FITTED_SHOULDER_DROP_MM = 40;
 export const FITTED_DART_SHORT_MM = IN;
 /** The chest line sits 2 in above the bust-point level (common practice). */
 export const FITTED_CHEST_LINE_MM = 2 * IN;
-/** Armhole notches along the armhole from the underarm: front single at 3 in, back double at 3½ and 3¾ in (from memory). */
+/** Front armhole notch (single), along the armhole from the underarm: 3 in (from memory). */
 export const ARMHOLE_NOTCH_FRONT_MM = 3 * IN;
+/** Back armhole notches (double), along the armhole from the underarm: 3½ and 3¾ in (from memory). */
 export const ARMHOLE_NOTCH_BACK_MM = [3.5 * IN, 3.75 * IN] as const;
 /** Drill holes sit 10 mm inside a dart point so the sewn dart hides them (common practice). */
 export const DRILL_INSIDE_DART_MM = 10;
