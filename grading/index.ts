@@ -35,6 +35,23 @@ export type { FacingOptions } from './blocks/facing-block';
 export { draftRectangle } from './blocks/rectangle-block';
 export type { RectangleInput } from './blocks/rectangle-block';
 export { SHIRT_DRESS_STYLE, draftShirtDress } from './blocks/shirt-dress';
+export { piecesPerGarment, polylineSplitAt, unfoldPiece } from './blocks/drafted-piece';
+export type { DraftedPiece, PieceMaterial } from './blocks/drafted-piece';
+export {
+  ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM, FITTED_CHEST_LINE_MM, FITTED_DART_SHORT_MM, ROUND_NECK_START_MM,
+  SHOULDER_PAD_EXTRA_WIDTH_MM, V_NECK_DEPTH_MM, ZIP_ALLOWANCE_MM, draftFittedBodiceBack, draftFittedBodiceFront,
+} from './blocks/fitted-bodice-block';
+export type { FittedBodiceOptions, FrontNeckline } from './blocks/fitted-bodice-block';
+export { HEM_CIRCLE_MM, draftCircleRing } from './blocks/circle-ring-block';
+export type { CircleRingInput, RingCut } from './blocks/circle-ring-block';
+export { HEM_STRAIGHT_SKIRT_MM, draftSkirtShape } from './blocks/skirt-shapes-block';
+export type { SkirtShape, SkirtShapeOptions } from './blocks/skirt-shapes-block';
+export { MIN_BICEP_EASE_MM, draftSetInSleeve, solveHalfBicep } from './blocks/set-in-sleeve-block';
+export type { SetInSleeveOptions, SleeveLength } from './blocks/set-in-sleeve-block';
+export { FACING_WIDTH_MM, draftBodiceFacings, draftPeplum, draftWaistband } from './blocks/trim-pieces-block';
+export type { FacingKind, PeplumOptions, WaistbandOptions } from './blocks/trim-pieces-block';
+export { BLOCK_NAMES, draftBlocks, openOutPieces } from './blocks/draft-blocks';
+export type { BlockSpec } from './blocks/draft-blocks';
 
 export { cumulativeMove, displacementFor } from './grade-rules/grade-rule';
 export type { GradeMove, GradeRule, GradeTarget } from './grade-rules/grade-rule';

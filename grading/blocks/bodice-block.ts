@@ -1,6 +1,7 @@
 import type { Point } from '@shared/geometry/types';
 import type { InternalLine, Piece } from '../pieces/piece';
 import { OutlineBuilder } from '../pieces/piece';
+import { squaredHemPath } from './hem-shape';
 import { DEFAULT_HEM_MM, DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
 /** Drafting options for bodice and dress blocks (mm). */
@@ -75,6 +76,14 @@ function armhole(b: OutlineBuilder, ua: Point, across: Point, sp: Point, hps: Po
   b.cubic({ x: across.x, y: across.y + 0.4 * (sp.y - across.y) }, { x: sp.x + u.y * k, y: sp.y - u.x * k }, sp, 'shoulder');
 }
 
+/** Dress hem from the current point (centre front or back at hem level) to the side, squared to the flared side seam. */
+function dressHem(b: OutlineBuilder, m: BodyMeasurements, dress: NonNullable<BodiceOptions['dress']>, hipEaseMm: number): void {
+  const start = b.points[b.points.length - 1];
+  const hipX = (need(m, 'hip') + hipEaseMm) / 4;
+  const path = squaredHemPath(start, { x: hipX, y: -need(m, 'waist-to-hip') }, { x: hipX + dress.hemFlareMm, y: -dress.lengthMm });
+  path.slice(1).forEach((p, i) => b.line(p, i === path.length - 2 ? 'side-hem' : undefined));
+}
+
 /** Side seam from the hem (or waist) up to the underarm; dress adds hip and hem points. */
 function sideSeam(b: OutlineBuilder, f: Frame, m: BodyMeasurements, o: BodiceOptions, seam: number): void {
   b.edge('side', { allowanceMm: seam });
@@ -117,7 +126,8 @@ export function draftBodiceFront(m: BodyMeasurements, o: BodiceOptions = {}): Pi
   const bottomY = o.dress ? -o.dress.lengthMm : 0;
   const b = new OutlineBuilder({ x: -ext, y: bottomY }, o.dress ? 'cf-hem' : 'cf-waist');
   b.edge(o.dress ? 'hem' : 'waist', { allowanceMm: o.dress ? (o.hemMm ?? DEFAULT_HEM_MM) : seam });
-  b.line(o.dress ? { x: (need(m, 'hip') + (o.hipEaseMm ?? 0)) / 4 + o.dress.hemFlareMm, y: bottomY } : { x: f.sideWaistX, y: 0 }, o.dress ? 'side-hem' : 'side-waist');
+  if (o.dress) dressHem(b, m, o.dress, o.hipEaseMm ?? 0);
+  else b.line({ x: f.sideWaistX, y: 0 }, 'side-waist');
   if (bustDart > 0 && !o.dress) {
     // Legs sit on the back's side-seam line; the upper part is that line lifted by the intake, so the sewn
     // front side seam (dart closed) equals the back's.
@@ -166,7 +176,8 @@ export function draftBodiceBack(m: BodyMeasurements, o: BodiceOptions = {}): Pie
   const bottomY = o.dress ? -o.dress.lengthMm : 0;
   const b = new OutlineBuilder({ x: 0, y: bottomY }, o.dress ? 'cb-hem' : 'cb-waist');
   b.edge(o.dress ? 'hem' : 'waist', { allowanceMm: o.dress ? (o.hemMm ?? DEFAULT_HEM_MM) : seam });
-  b.line(o.dress ? { x: (need(m, 'hip') + (o.hipEaseMm ?? 0)) / 4 + o.dress.hemFlareMm, y: bottomY } : { x: f.sideWaistX, y: 0 }, o.dress ? 'side-hem' : 'side-waist');
+  if (o.dress) dressHem(b, m, o.dress, o.hipEaseMm ?? 0);
+  else b.line({ x: f.sideWaistX, y: 0 }, 'side-waist');
   sideSeam(b, f, m, { ...o, bustDartMm: 0 }, seam);
   b.line(ua, 'underarm');
   b.edge('armhole', { allowanceMm: seam });

@@ -7,7 +7,7 @@ export type BodyMeasurements = Partial<Record<PointOfMeasure, Millimetres | numb
 /** The measurement or a RangeError naming what the block needs. */
 export function need(m: BodyMeasurements, key: PointOfMeasure): number {
   const v = m[key];
-  if (v === undefined || !Number.isFinite(v) || v <= 0) throw new RangeError(`block needs a positive "${key}" measurement`);
+  if (v === undefined || !Number.isFinite(v) || v <= 0) throw new RangeError(`measurements.${key}: the block needs this measurement (a positive number of mm)`);
   return v;
 }
 

@@ -9,6 +9,11 @@ import { demoSizeChart } from '../size-charts/demo-size-chart';
 import { measurementsForSize } from '../size-charts/size-chart';
 import { cuttingOutline, validateCuttingOutline } from './cutting-outline';
 import { measurePiece } from './piece-measure';
+import type { Polygon } from '@shared/geometry/types';
+import { draftFittedBodiceBack, draftFittedBodiceFront } from '../blocks/fitted-bodice-block';
+import { draftSetInSleeve } from '../blocks/set-in-sleeve-block';
+import { draftSkirtShape } from '../blocks/skirt-shapes-block';
+import { edgeLength } from './piece-measure';
 import type { Piece } from './piece';
 
 const M = measurementsForSize(demoSizeChart(), 'M');
@@ -95,5 +100,60 @@ describe('offset properties (fast-check)', () => {
   it('returns [] for a zero-area outline', () => {
     const p = starPiece([100, 100, 100], [10, 10, 10]);
     expect(cuttingOutline({ ...p, outline: [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 2, y: 0 }] })).toEqual([]);
+  });
+});
+
+/** Horizontal extent [min x, max x] of a ring cut by the line y = h. */
+function widthAt(ring: Polygon, h: number): [number, number] {
+  const xs: number[] = [];
+  ring.forEach((a, i) => {
+    const b = ring[(i + 1) % ring.length];
+    if ((a.y - h) * (b.y - h) < 0) xs.push(a.x + ((h - a.y) / (b.y - a.y)) * (b.x - a.x));
+  });
+  return [Math.min(...xs), Math.max(...xs)];
+}
+
+describe('hem allowances turned up along the hem fold', () => {
+  it('mirrors a tapered long sleeve\'s 2 in hem about the hem fold instead of carrying the taper on (issue 16)', () => {
+    const front = draftFittedBodiceFront(M), back = draftFittedBodiceBack(M);
+    const sleeve = draftSetInSleeve(M, { armholeFrontMm: edgeLength(front, ['armhole']), armholeBackMm: edgeLength(back, ['armhole']) });
+    const hem = sleeve.edges.find((e) => e.name === 'hem')!;
+    const a = hem.allowanceMm;
+    const hemY = sleeve.outline[hem.from].y;
+    const cut = cuttingOutline(sleeve);
+    // A turned-up hem lies flat on the sleeve: the cut line just inside the hem's raw edge must be as wide as the
+    // cut line the same distance above the fold (a mirror image), wider than the hem line itself on a taper.
+    const below = widthAt(cut, hemY - a + 0.5);
+    const above = widthAt(cut, hemY + a - 0.5);
+    expect(below[0]).toBeCloseTo(above[0], 1);
+    expect(below[1]).toBeCloseTo(above[1], 1);
+    expect(below[1] - below[0]).toBeGreaterThan(widthAt(cut, hemY + 0.5)[1] - widthAt(cut, hemY + 0.5)[0]);
+    expect(validateCuttingOutline(sleeve, cut)).toEqual([]);
+  });
+
+  it('keeps the 30 mm hem of a rectangle a plain extension (a square corner mirrors onto itself)', () => {
+    const p = draftRectangle({ id: 'r', name: 'r', role: 'x', widthMm: 100, heightMm: 50, cut: 'cut1', allowances: { bottom: 30 }, bottomNames: ['hem'] });
+    expect(polygonBBox(cuttingOutline(p))).toEqual({ minX: -10, maxX: 110, minY: -30, maxY: 60 });
+  });
+
+  /** Cosine of the angle between the hem's last segment and the side seam's first (0 = square). */
+  const hemCornerCos = (p: Piece) => {
+    const hem = p.edges.find((e) => e.name === 'hem')!;
+    const n = p.outline.length;
+    const corner = p.outline[hem.to], before = p.outline[(hem.to - 1 + n) % n], after = p.outline[(hem.to + 1) % n];
+    const u = { x: corner.x - before.x, y: corner.y - before.y }, v = { x: after.x - corner.x, y: after.y - corner.y };
+    return (u.x * v.x + u.y * v.y) / (Math.hypot(u.x, u.y) * Math.hypot(v.x, v.y));
+  };
+
+  it('squares an A-line hem to the side seam (issue 16: a flared hem met the side seam at 81°)', () => {
+    const [front] = draftSkirtShape(M, { shape: 'a-line', lengthMm: 600, hemFlareMm: 80 });
+    expect(Math.abs(hemCornerCos(front))).toBeLessThan(1e-9);
+    expect(validateCuttingOutline(front, cuttingOutline(front))).toEqual([]);
+  });
+
+  it('squares the demo shirt dress hem to its flared side seams, front and back, keeping the side seams equal', () => {
+    const [front, back] = draftShirtDress(M);
+    for (const p of [front, back]) expect(Math.abs(hemCornerCos(p)), p.id).toBeLessThan(1e-9);
+    expect(edgeLength(front, ['side'])).toBeCloseTo(edgeLength(back, ['side']), 9);
   });
 });

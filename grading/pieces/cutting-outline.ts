@@ -1,7 +1,7 @@
 import { polygonArea, polygonSignedArea } from '@shared/geometry/polygon';
 import { lineIntersection, polygonContainsPoint, polygonIsSimple, segmentDistance } from '@shared/geometry/polyline';
 import type { Point, Polygon } from '@shared/geometry/types';
-import { clipperUnion } from './clipper-adapter';
+import { clipperIntersect, clipperUnion } from './clipper-adapter';
 import { segmentAllowances, type Piece } from './piece';
 
 /** Corners whose mitre would reach past this many allowances are squared off instead (common practice). */
@@ -28,6 +28,8 @@ const outward = (d: Vec): Vec => ({ x: d.y, y: -d.x });
  * line runs one allowance past the vertex and the ends are joined. Concave corners need no fill: neighbouring
  * rectangles overlap there. The piece, rectangles and wedges are united with clipper-lib (non-zero fill) and
  * the outer ring is kept, so crossing offset lines on tight curves or unequal allowances never leave loops.
+ * A straight edge named 'hem' is turned up along its fold instead: its allowance is the mirror image, about the
+ * hem line, of the piece's own cutting line within one hem depth above it (see mirrorHem); curved hems are offset.
  * Collinear neighbours with different allowances meet in a square step. The result is counter-clockwise,
  * simple and contains the sewing line. Fewer than 3 points or zero area returns [].
  */
@@ -37,8 +39,23 @@ export function cuttingOutline(piece: Pick<Piece, 'outline' | 'edges'>): Polygon
   if (n < 3 || polygonArea(ring) === 0) return [];
   const ccw = polygonSignedArea(ring) > 0;
   const allow = segmentAllowances(piece);
+  const hems = segmentHems(piece);
   const r = ccw ? ring : [...ring].reverse();
-  const a = ccw ? allow : r.map((_, j) => allow[(2 * n - 2 - j) % n]);
+  const back = (arr: readonly number[]) => (ccw ? [...arr] : r.map((_, j) => arr[(2 * n - 2 - j) % n]));
+  const a = back(allow);
+  const runs = straightHemRuns(r, a, back(hems));
+  for (const run of runs) for (const i of run.segments) a[i] = 0;
+  const base = offsetUnion(r, a);
+  if (runs.length === 0 || base.length === 0) return base;
+  const maxAllow = Math.max(...a, ...runs.map((h) => h.allowanceMm));
+  const mirrored = runs.flatMap((h) => mirrorHem(base, h, maxAllow));
+  const [best] = clipperUnion([base, ...mirrored].map((p) => (polygonSignedArea(p) < 0 ? [...p].reverse() : p)));
+  return best ?? [];
+}
+
+/** Every segment swept out by its allowance, convex corners filled, united (see cuttingOutline). */
+function offsetUnion(r: Polygon, a: readonly number[]): Polygon {
+  const n = r.length;
   const dirs = r.map((p, i) => unit(sub(r[(i + 1) % n], p)));
   const parts: Polygon[] = [r];
   for (let i = 0; i < n; i++) {
@@ -50,6 +67,71 @@ export function cuttingOutline(piece: Pick<Piece, 'outline' | 'edges'>): Polygon
   }
   const [best] = clipperUnion(parts.map((p) => (polygonSignedArea(p) < 0 ? [...p].reverse() : p)));
   return best ?? [];
+}
+
+/** A straight hem: its segment indices, its ends on the counter-clockwise ring, and its allowance. */
+interface HemRun {
+  segments: number[];
+  from: Point;
+  to: Point;
+  allowanceMm: number;
+}
+
+/** 1 for segments of an edge named 'hem' (a hem turned up along the hem fold), 0 otherwise. */
+function segmentHems(piece: Pick<Piece, 'outline' | 'edges'>): number[] {
+  const n = piece.outline.length;
+  const out = new Array<number>(n).fill(0);
+  for (const e of piece.edges) {
+    if (e.name !== 'hem' || e.isFold) continue;
+    for (let i = e.from; i !== e.to; i = (i + 1) % n) out[i] = 1;
+  }
+  return out;
+}
+
+/** Runs of consecutive hem segments with one allowance that lie on one straight line (curved hems are offset). */
+function straightHemRuns(r: Polygon, a: readonly number[], hem: readonly number[]): HemRun[] {
+  const n = r.length;
+  const start = hem.findIndex((h, i) => h && !(hem[(i - 1 + n) % n] && a[(i - 1 + n) % n] === a[i]));
+  if (start < 0) return [];
+  const runs: HemRun[] = [];
+  for (let k = 0; k < n; k++) {
+    const i = (start + k) % n;
+    if (!hem[i] || a[i] <= 0) continue;
+    const last = runs[runs.length - 1];
+    const prev = (i - 1 + n) % n;
+    if (last && last.segments[last.segments.length - 1] === prev && a[prev] === a[i]) {
+      last.segments.push(i);
+      last.to = r[(i + 1) % n];
+    } else runs.push({ segments: [i], from: r[i], to: r[(i + 1) % n], allowanceMm: a[i] });
+  }
+  return runs.filter((h) => h.segments.every((i) => lineDistance(h.from, h.to, r[i]) < STRAIGHT_HEM_MM && lineDistance(h.from, h.to, r[(i + 1) % n]) < STRAIGHT_HEM_MM));
+}
+
+/** Hem points further than this from the chord between the hem's ends make it a curved hem (offset, not mirrored). */
+const STRAIGHT_HEM_MM = 0.01;
+
+function lineDistance(a: Point, b: Point, p: Point): number {
+  const l = Math.hypot(b.x - a.x, b.y - a.y) || 1;
+  return Math.abs((b.x - a.x) * (p.y - a.y) - (b.y - a.y) * (p.x - a.x)) / l;
+}
+
+/**
+ * The hem allowance as a cutter draws it: the part of the cutting line within one hem depth above the hem fold,
+ * reflected about the fold, so the allowance folds up flat onto the piece (a tapered sleeve's hem allowance
+ * widens where the sleeve narrows, instead of carrying the taper on).
+ */
+function mirrorHem(cut: Polygon, h: HemRun, maxAllow: number): Polygon[] {
+  const u = unit(sub(h.to, h.from));
+  const inward = { x: -u.y, y: u.x };
+  const reach = (MITRE_LIMIT + 1) * maxAllow;
+  const a0 = add(h.from, u, -reach), b0 = add(h.to, u, reach);
+  const strip = [a0, b0, add(b0, inward, h.allowanceMm), add(a0, inward, h.allowanceMm)];
+  const reflect = (p: Point): Point => {
+    const t = (p.x - h.from.x) * u.x + (p.y - h.from.y) * u.y;
+    const foot = add(h.from, u, t);
+    return { x: 2 * foot.x - p.x, y: 2 * foot.y - p.y };
+  };
+  return clipperIntersect([cut], [strip]).map((ring) => ring.map(reflect).reverse());
 }
 
 /** Fill of a convex corner between the offset lines, or null at concave or straight corners. */
