@@ -63,9 +63,18 @@ export function lpStart(input: StaffLineInput, pairs: StaffPair[], solver: LineS
     load[pr.p] += pr.time;
   }
   if ([...pinned].some((key) => !loose.some((pr, i) => kept.has(i) && `${pr.p}:${pr.o}` === key))) return null;
-  const allowed = loose.filter((_, i) => kept.has(i));
-  const restricted = solveLp(buildStaffModel(free, allowed, { symmetry: false }).lp, allowed, solver);
+  let allowed = loose.filter((_, i) => kept.has(i));
+  let restricted = solveLp(buildStaffModel(free, allowed, { symmetry: false }).lp, allowed, solver);
   if (!restricted) return null;
+  const pinnedX = new Set(loose.filter((pr) => pinned.has(`${pr.p}:${pr.o}`)).map((pr) => pr.x));
+  for (let round = 0; round < WIDEN_ROUNDS; round++) {
+    const wider = widen(input, loose, allowed, restricted, pinnedX, cap, limit);
+    if (!wider) break;
+    const next = solveLp(buildStaffModel(free, wider, { symmetry: false }).lp, wider, solver);
+    if (!next || cycleOf(n, wider, next) >= cycleOf(n, allowed, restricted) - 1e-9) break;
+    allowed = wider;
+    restricted = next;
+  }
   const shares = new Array<number>(pairs.length).fill(0);
   const index = new Map(pairs.map((pr, i) => [pr.x, i]));
   allowed.forEach((pr, k) => (shares[index.get(pr.x)!] = restricted[k]));
@@ -74,6 +83,52 @@ export function lpStart(input: StaffLineInput, pairs: StaffPair[], solver: LineS
     if (shares[i] > 0) holds[pr.p].add(input.operations[pr.o].machine);
   });
   return { shares, holds };
+}
+
+const WIDEN_ROUNDS = 8;
+
+function cycleOf(n: number, allowed: StaffPair[], shares: number[]): number {
+  const load = new Array<number>(n).fill(0);
+  allowed.forEach((pr, k) => (load[pr.p] += shares[k] * pr.time));
+  return Math.max(...load);
+}
+
+/**
+ * The next neighbourhood: keep the pairs in use (and pins), then give each person under the cycle, least loaded
+ * first, their free slots on the operations of the busiest people, fastest first, within the machines. Any LP
+ * solution on the result still keeps the cap and the machine counts. Null when nothing can be added.
+ */
+function widen(input: StaffLineInput, loose: StaffPair[], allowed: StaffPair[], shares: number[], pinnedX: Set<string>, cap: number, limit: Map<string, number>): StaffPair[] | null {
+  const n = input.people.length;
+  const load = new Array<number>(n).fill(0);
+  allowed.forEach((pr, k) => (load[pr.p] += shares[k] * pr.time));
+  const cycle = Math.max(...load);
+  const used = allowed.filter((pr, k) => shares[k] > 1e-9 || pinnedX.has(pr.x));
+  const slots = new Array<number>(n).fill(0);
+  const holders = new Map<string, Set<number>>([...limit.keys()].map((t) => [t, new Set<number>()]));
+  for (const pr of used) {
+    slots[pr.p]++;
+    holders.get(input.operations[pr.o].machine)?.add(pr.p);
+  }
+  const busy = new Set(allowed.filter((pr, k) => shares[k] > 1e-9 && load[pr.p] >= cycle - 1e-9).map((pr) => pr.o));
+  const have = new Set(used.map((pr) => pr.x));
+  const added: StaffPair[] = [];
+  const order = Array.from({ length: n }, (_, p) => p).sort((a, b) => load[a] - load[b] || a - b);
+  for (const p of order) {
+    if (load[p] >= cycle - 1e-9) continue;
+    const options = loose.filter((pr) => pr.p === p && busy.has(pr.o) && !have.has(pr.x)).sort((a, b) => a.time - b.time || a.o - b.o);
+    for (const pr of options) {
+      if (slots[p] >= cap) break;
+      const type = input.operations[pr.o].machine;
+      const h = holders.get(type);
+      if (h && !h.has(p) && h.size >= limit.get(type)!) continue;
+      h?.add(p);
+      slots[p]++;
+      have.add(pr.x);
+      added.push(pr);
+    }
+  }
+  return added.length ? [...used, ...added] : null;
 }
 
 function solveLp(lp: string, pairs: StaffPair[], solver: LineSolver): number[] | null {

@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import GLPK from 'glpk.js/node';
 import { loadLineSolver, staffLine } from './staff-line';
-import { PIN_MIN_SHARE } from './staffing-model';
+import { PIN_MIN_SHARE, staffPairs } from './staffing-model';
+import { lpStart } from './lp-start';
 import type { LineSolver, StaffLineInput, StaffedLine } from './line-staffing.types';
 
 let solver: LineSolver;
@@ -194,6 +195,36 @@ function solveSquare(a: number[][], b: number[]): number[] | null {
   }
   return m.map((row, i) => row[n] / row[i]);
 }
+
+describe('lpStart (the MIP start, widened while the cycle falls)', () => {
+  it('gives a plan within the cap and the machine counts, never below the GLPK optimum, on random small lines', () => {
+    let started = 0;
+    for (let seed = 1; seed <= 60; seed++) {
+      const input = smallLine(seed, seed % 2 === 0);
+      const pairs = staffPairs(input);
+      const start = lpStart(input, pairs, solver);
+      if (!start) continue;
+      started++;
+      input.operations.forEach((_, o) => expect(pairs.reduce((a, pr, i) => (pr.o === o ? a + start.shares[i] : a), 0)).toBeCloseTo(1, 6));
+      const load = input.people.map(() => 0);
+      const used = input.people.map(() => 0);
+      const users = new Map<string, Set<number>>();
+      pairs.forEach((pr, i) => {
+        if (start.shares[i] <= 1e-9) return;
+        load[pr.p] += start.shares[i] * pr.time;
+        used[pr.p]++;
+        const type = input.operations[pr.o].machine;
+        users.set(type, (users.get(type) ?? new Set()).add(pr.p));
+      });
+      if (input.maxOperationsPerPerson) used.forEach((u) => expect(u).toBeLessThanOrEqual(input.maxOperationsPerPerson!));
+      for (const [type, count] of Object.entries(input.machines ?? {})) expect(users.get(type)?.size ?? 0).toBeLessThanOrEqual(count);
+      const optimum = glpkCycle(input);
+      expect(optimum).not.toBeNull();
+      expect(Math.max(...load)).toBeGreaterThanOrEqual(optimum! - 1e-6);
+    }
+    expect(started).toBeGreaterThan(30);
+  });
+});
 
 describe('staffLine against exhaustive search on tiny lines', () => {
   const tiny: [string, StaffLineInput][] = [
