@@ -63,7 +63,7 @@ export function lpStart(input: StaffLineInput, pairs: StaffPair[], solver: LineS
     load[pr.p] += pr.time;
   }
   if ([...pinned].some((key) => !loose.some((pr, i) => kept.has(i) && `${pr.p}:${pr.o}` === key))) return null;
-  let allowed = loose.filter((_, i) => kept.has(i));
+  let allowed: StaffPair[] = loose.filter((_, i) => kept.has(i));
   let restricted = solveLp(buildStaffModel(free, allowed, { symmetry: false }).lp, allowed, solver);
   if (!restricted) return null;
   const pinnedX = new Set(loose.filter((pr) => pinned.has(`${pr.p}:${pr.o}`)).map((pr) => pr.x));
