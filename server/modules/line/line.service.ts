@@ -7,7 +7,8 @@ import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { planLine, type StaffCount } from './line-plan';
+import type { LineSolver } from '@planning';
+import { planLine, type CrewPerson, type StaffCount } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 
@@ -15,9 +16,13 @@ export interface LineServiceDeps {
   styles: StyleRepository;
   batches: BatchRepository;
   operations: OperationRepository;
-  studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number } | null>;
+  studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number; machines: Record<string, number> } | null>;
   /** Active people per floor section (People page). */
   staff: (studioId: number) => Promise<StaffCount>;
+  /** Active people with their skills (People page). */
+  crew: (studioId: number) => Promise<CrewPerson[]>;
+  /** The HiGHS runtime, loaded once on first use. */
+  solver: () => Promise<LineSolver>;
   audit: AuditRepository;
   now: () => Date;
 }
@@ -56,7 +61,7 @@ function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] 
 export type LineService = ReturnType<typeof createLineService>;
 
 /** Operations tables per style and the line plan per batch. */
-export function createLineService({ styles, batches, operations, studio, staff, audit, now }: LineServiceDeps) {
+export function createLineService({ styles, batches, operations, studio, staff, crew, solver, audit, now }: LineServiceDeps) {
   async function styleOf(actor: Actor, styleId: number) {
     const s = await styles.get(actor.studioId, styleId);
     if (!s) throw notFound('Style');
@@ -131,6 +136,7 @@ export function createLineService({ styles, batches, operations, studio, staff, 
         return planLine({
           batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today: format(now(), 'yyyy-MM-dd'),
           minutesPerDay: Math.round((st?.workingDayHours ?? 8) * 60), operations: ops, query, staff: await staff(actor.studioId),
+          crew: await crew(actor.studioId), machines: st?.machines ?? {}, solver: await solver(),
         });
       } catch (e) {
         if (e instanceof RangeError) throw badRequest(`plan: ${e.message}`, { plan: e.message });

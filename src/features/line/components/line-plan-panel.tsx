@@ -40,12 +40,12 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
       <ErrorNote error={plan.error} />
       {p ? (
         <div className="space-y-5">
-          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
+          {p.balance ? <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
             <Stat label="Stations" value={String(p.balance.stationCount)} note={p.balance.stationCount > p.balance.peopleAvailable ? `only ${p.balance.peopleAvailable} machinists` : `${p.balance.peopleAvailable} machinists`} />
             <Stat label="Balance efficiency" value={`${p.balance.efficiencyPct.toFixed(1)} %`} note={p.balance.taktMin ? `${p.balance.utilisationPct.toFixed(1)} % of the takt` : `balance delay ${p.balance.balanceDelayPct.toFixed(1)} %`} />
             <Stat label="Bottleneck" value={`${p.stations[p.balance.bottleneck]?.label} · ${p.balance.cycleTimeMin} min`} note={p.balance.taktMin ? `takt ${p.balance.taktMin} min` : 'smallest cycle time'} />
             <Stat label="Output a day" value={`${p.balance.outputPerDay} garments`} note={`${p.balance.method === 'exact' ? 'exact balance' : p.balance.method === 'rpw' ? 'ranked positional weight (heuristic)' : 'best found before the limit'}`} />
-          </dl>
+          </dl> : null}
           <div>
             <h3 className="mb-2 text-sm font-semibold text-thread-800">Capacity against load per station, a day</h3>
             <CapacityChart plan={p} />
