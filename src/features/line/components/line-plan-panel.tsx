@@ -5,17 +5,18 @@ import { Badge, Card, Caution, ErrorNote, Spinner } from '@/components/ui/page';
 import { formatDate } from '@/lib/format';
 import { actualOutputQueries, linePlanQueries, type PlanParams } from '../api/line-queries';
 import { CapacityChart, OutputChart, SectionTimeline } from './line-charts';
+import { StaffingCard, Stat } from './staffing-card';
 
 const RISK = { 'on-time': ['teal', 'On time'], 'at-risk': ['gold', 'At risk'], late: ['red', 'Late'], 'no-due-date': ['grey', 'No due date'] } as const;
 
 /** Balance, capacity, schedule and output of one batch's sewing line, with the working-hours caution. */
 export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' | 'dueDate' | 'total'> }) {
-  const [params, setParams] = useState<PlanParams>({ mode: 'due', people: 6, efficiency: 0.7 });
-  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '6', efficiency: '70' });
+  const [params, setParams] = useState<PlanParams>({ mode: 'due', efficiency: 0.7, pins: [] });
+  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '', efficiency: '70' });
   const plan = useQuery(linePlanQueries.detail(batch.id, params));
   const actual = useQuery(actualOutputQueries.detail(batch.id));
   const p = plan.data;
-  const apply = () => setParams({ mode: draft.mode, people: Number(draft.people) || 6, efficiency: (Number(draft.efficiency) || 70) / 100 });
+  const apply = () => setParams({ ...params, mode: draft.mode, people: Number(draft.people) || undefined, efficiency: (Number(draft.efficiency) || 70) / 100 });
   return (
     <Card title={`Sewing line for ${batch.code}`}>
       <form className="mb-4 grid gap-3 sm:grid-cols-4" onSubmit={(e) => { e.preventDefault(); apply(); }}>
@@ -28,7 +29,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         </div>
         <div>
           <label className="field-label" htmlFor="plan-people">Machinists present</label>
-          <input id="plan-people" className="field-input" inputMode="numeric" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
+          <input id="plan-people" className="field-input" inputMode="numeric" placeholder="everyone active" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
         </div>
         <div>
           <label className="field-label" htmlFor="plan-eff">Efficiency (%)</label>
@@ -46,8 +47,10 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
             <Stat label="Bottleneck" value={`${p.stations[p.balance.bottleneck]?.label} · ${p.balance.cycleTimeMin} min`} note={p.balance.taktMin ? `takt ${p.balance.taktMin} min` : 'smallest cycle time'} />
             <Stat label="Output a day" value={`${p.balance.outputPerDay} garments`} note={`${p.balance.method === 'exact' ? 'exact balance' : p.balance.method === 'rpw' ? 'ranked positional weight (heuristic)' : 'best found before the limit'}`} />
           </dl> : null}
+          {p.mode === 'people' ? <StaffingCard plan={p} pins={params.pins ?? []} onPins={(pins) => setParams({ ...params, pins })} /> : null}
+          {p.balance ? <>
           <div>
-            <h3 className="mb-2 text-sm font-semibold text-thread-800">Capacity against load per station, a day</h3>
+            <h3 className="mb-2 text-sm font-semibold text-thread-800">{p.mode === 'people' ? 'For comparison, a straight line with one machine type per station: ' : ''}Capacity against load per station, a day</h3>
             <CapacityChart plan={p} />
             <p className="text-xs text-ink-600"><span className="font-semibold text-madder-600">Madder bar</span>: the bottleneck station. Dashed line: one operator's capacity ({p.minutesPerDay} min × {Math.round(p.efficiency * 100)} %).</p>
           </div>
@@ -63,6 +66,8 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
               ))}</tbody>
             </table>
           </div>
+          </> : null}
+          {p.mode === 'due' ? <StaffingCard plan={p} pins={params.pins ?? []} onPins={(pins) => setParams({ ...params, pins })} /> : null}
           <div>
             <h3 className="mb-2 flex flex-wrap items-center gap-2 text-sm font-semibold text-thread-800">
               Schedule: cutting → sewing → finishing <Badge tone={RISK[p.schedule.risk][0]}>{RISK[p.schedule.risk][1]}</Badge>
@@ -86,15 +91,5 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         </div>
       ) : null}
     </Card>
-  );
-}
-
-function Stat({ label, value, note }: { label: string; value: string; note?: string }) {
-  return (
-    <div className="rounded-lg border border-calico-200 bg-calico-50 px-3 py-2">
-      <dt className="text-xs text-ink-600">{label}</dt>
-      <dd className="text-lg font-bold text-thread-800">{value}</dd>
-      {note ? <dd className="text-xs text-ink-600">{note}</dd> : null}
-    </div>
   );
 }
