@@ -99,6 +99,11 @@ describe('line plan of the demo batch', () => {
     expect(p.schedule.stages.map((s: { name: string }) => s.name)).toEqual(['cutting', 'sewing', 'finishing']);
     expect(p.schedule.risk).toBe('on-time');
     expect(p.plannedOutput.at(-1).pieces).toBe(40);
+    // Flow time (issue 19): the first garment leaves after its bundle of 10 visits all 6 stations, so sewing lasts
+    // Q × cycle + (stations − 1) × bundle time, cycle = bottleneck minutes ÷ efficiency.
+    const sewing = p.schedule.stages.find((s: { name: string }) => s.name === 'sewing');
+    const cycle = sewing.samPerPiece / (sewing.people * p.efficiency);
+    expect(sewing.endMinute - sewing.startMinute).toBeCloseTo(40 * cycle + 5 * 10 * cycle, 0);
   });
 
   it('balances for the people present and says when too few are there', async () => {

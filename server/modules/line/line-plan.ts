@@ -125,9 +125,10 @@ export function planLine(input: PlanInput): LinePlanDto {
   const stationCount = balance?.count ?? 0;
   // The line runs at its bottleneck: people × bottleneck time per garment over those people. People mode runs the
   // shared-operations plan (the line the studio really runs); due mode the straight line for the takt.
+  // A bundle visits every station (every person with work on the shared line) before it leaves sewing.
   const sewingStage = q.mode === 'people' && staffed.staffing
-    ? { samPerPiece: staffed.cycle * sewingCrew.length, people: sewingCrew.length }
-    : { samPerPiece: maxStation * stationCount, people: stationCount };
+    ? { samPerPiece: staffed.cycle * sewingCrew.length, people: sewingCrew.length, stations: Math.max(1, staffed.staffing.people.filter((x) => x.operations.length > 0).length) }
+    : { samPerPiece: maxStation * stationCount, people: stationCount, stations: stationCount };
   const stages = [
     { name: 'cutting', samPerPiece: samOf('cutting'), people: crew.cutting, efficiency: q.efficiency },
     { name: 'sewing', ...sewingStage, efficiency: q.efficiency },
