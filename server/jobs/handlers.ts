@@ -7,11 +7,12 @@ import { buildMarkerListXlsx } from '@exports/xlsx/marker-list.xlsx';
 import { buildPaySheetXlsx } from '@exports/xlsx/pay-sheet.xlsx';
 import { buildPurchaseOrderXlsx } from '@exports/xlsx/purchase-order.xlsx';
 import { solveCutOrderJob, type CutOrderJobInput } from '../modules/cutting/cut-order-job';
+import { staffLineJob } from '../modules/line/line-staffing-job';
 import { sendMailJob, type MailJobInput } from '../modules/mail/mail-job';
 
 /**
  * The long-running work besides nesting, as pure functions of plain data: the cut-order solve, the
- * exported documents, and sending mail. A {@link JobRunner} runs them in the web process, or (REDIS_URL)
+ * shared-operations line solve, the exported documents, and sending mail. A {@link JobRunner} runs them in the web process, or (REDIS_URL)
  * hands them to `npm run worker` processes; callers cannot tell which.
  */
 export const JOB_HANDLERS = {
@@ -25,6 +26,7 @@ export const JOB_HANDLERS = {
   'pay-sheet.xlsx': async (input: Parameters<typeof buildPaySheetXlsx>[0]) => Buffer.from(await buildPaySheetXlsx(input)),
   'purchase-order.xlsx': async (input: Parameters<typeof buildPurchaseOrderXlsx>[0]) => Buffer.from(await buildPurchaseOrderXlsx(input)),
   mail: (input: MailJobInput) => sendMailJob(input),
+  'line-staffing': (input: Parameters<typeof staffLineJob>[0]) => staffLineJob(input),
 };
 
 export type JobName = keyof typeof JOB_HANDLERS;

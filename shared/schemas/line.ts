@@ -164,9 +164,9 @@ export interface LinePlanDto {
     peopleAvailable: number;
   } | null;
   stations: StationDto[];
-  /** Shared operations for the people present; the sewing schedule in people mode. Null when it cannot be made. */
+  /** People mode: the operations shared among the people present, which the sewing schedule follows. Null in due mode. */
   staffing: StaffingDto | null;
-  /** Why `staffing` is null, or why the straight line is (in words), else null. */
+  /** People mode: why the straight line (`balance`) is null, in words; else null. */
   staffingNote: string | null;
   /** Machinists planned in people mode (People page or the `people` count). */
   peopleAvailable: number;

@@ -1,5 +1,5 @@
 import { addDays, format, parseISO } from 'date-fns';
-import { balanceLine, countWorkingDays, profileLoad, scheduleBatch, staffLine, workingDays, type LineBalance, type LineSolver, type WorkingCalendar } from '@planning';
+import { balanceLine, countWorkingDays, profileLoad, scheduleBatch, workingDays, type LineBalance, type StaffedLine, type StaffLineInput, type WorkingCalendar } from '@planning';
 import type { LinePlanDto, LinePlanQuery, StaffingDto } from '../../../shared/schemas/line';
 import { defaultSkills } from '../../../shared/schemas/people';
 import { badRequest } from '../../errors';
@@ -53,8 +53,12 @@ export interface PlanInput {
   crew: CrewPerson[];
   /** The studio's machines by type; a type not listed is not limited. */
   machines: Record<string, number>;
-  solver: LineSolver;
+  /** The solved {@link staffingProblem} (people mode), or null when it was not asked for. */
+  staffing: StaffingOutcome | null;
 }
+
+/** What the line-staffing job answered: the plan, or the core's RangeError message. */
+export type StaffingOutcome = { line: StaffedLine } | { rangeError: string };
 
 const r2 = (n: number) => Math.round(n * 100) / 100;
 const people = (n: number, role: string) => `${n} ${role}${n === 1 ? '' : 's'}`;
@@ -63,9 +67,9 @@ const people = (n: number, role: string) => `${n} ${role}${n === 1 ? '' : 's'}`;
  * Balance the sewing operations and schedule the batch. Due mode (SALBP-1): the sewing window is the working days
  * to the due date less one day each for cutting and finishing; cycle time = window minutes × efficiency ÷ garments,
  * never above the longest station a person can hold in a day. People mode (SALBP-2): stations = people present,
- * when there are enough for one machine type per station. Both modes also share the sewing operations among the
- * people present by their skills and the studio's machines (`staffing`, planning/line-staffing), which plans any
- * number of people; in people mode the sewing schedule runs at that plan's cycle.
+ * when there are enough for one machine type per station; people mode also shares the sewing operations among the
+ * people present by their skills and the studio's machines (`staffing`, planning/line-staffing, solved by the
+ * service as a job), which plans any number of people, and the sewing schedule runs at that plan's cycle.
  */
 export function planLine(input: PlanInput): LinePlanDto {
   const { query: q, quantity } = input;
@@ -85,7 +89,7 @@ export function planLine(input: PlanInput): LinePlanDto {
   let balance: LineBalance | null;
   let taktMin: number | null = null;
   let straightNote: string | null = null;
-  const staffed = staff(input, sewing, sewingCrew);
+  const staffed: Staffed = q.mode === 'people' ? staff(input, sewing, sewingCrew) : { staffing: null, cycle: 0, note: 'not asked for in due mode', field: 'mode' };
   if (q.mode === 'people') {
     if (!staffed.staffing) throw badRequest(`people: ${staffed.note}`, { [staffed.field]: staffed.note });
     try {
@@ -184,7 +188,7 @@ export function planLine(input: PlanInput): LinePlanDto {
     },
     stations,
     staffing: staffed.staffing,
-    staffingNote: straightNote ?? (staffed.staffing ? null : staffed.note),
+    staffingNote: straightNote,
     peopleAvailable,
     schedule: {
       stages: schedule.stages.map((s, k) => ({ name: s.name, startDate: s.startDate, endDate: s.endDate, startMinute: r2(s.startMinute), endMinute: r2(s.endMinute), daysNeeded: s.daysNeeded, people: stages[k].people, samPerPiece: r2(stages[k].samPerPiece) })),
@@ -218,29 +222,50 @@ export function sewingCrewOf(crew: CrewPerson[], sewing: PlanOperation[], count:
 
 type Staffed = { staffing: StaffingDto; cycle: number; note: null; field: null } | { staffing: null; cycle: 0; note: string; field: string };
 
-/** Shares of the sewing operations among the crew (planning/line-staffing), or why there is no such plan. */
-function staff(input: PlanInput, sewing: PlanOperation[], crew: ReturnType<typeof sewingCrewOf>): Staffed {
+const crewIds = (crew: ReturnType<typeof sewingCrewOf>) => crew.map((p, i) => (p.personId === null ? `extra-${i}` : String(p.personId)));
+
+/**
+ * The shared-operations problem for the people at the line (input to planning/line-staffing), or why there is none
+ * (`note`, with the query field to blame). Pure: the service runs the solve as a job and hands the answer to
+ * {@link planLine}.
+ */
+export function staffingProblem(input: Omit<PlanInput, 'staffing' | 'batchId' | 'styleId' | 'quantity' | 'dueDate' | 'today' | 'staff'>): { problem: StaffLineInput } | { note: string; field: string } {
   const q = input.query;
-  const fail = (note: string, field = 'people'): Staffed => ({ staffing: null, cycle: 0, note, field });
-  if (crew.length === 0) return fail('nobody on the People page can sew: add a machinist or give someone a sewing machine skill');
-  const key = (p: { personId: number | null }, i: number) => (p.personId === null ? `extra-${i}` : String(p.personId));
-  const ids = crew.map(key);
+  const sewing = input.operations.filter((o) => o.section === 'sewing');
+  const crew = sewingCrewOf(input.crew, sewing, q.people);
+  if (sewing.length === 0) return { note: 'the style has no sewing operations', field: 'operations' };
+  if (crew.length === 0) return { note: 'nobody on the People page can sew: add a machinist or give someone a sewing machine skill', field: 'people' };
+  const ids = crewIds(crew);
   const codes = new Set(sewing.map((o) => o.code));
   for (const pin of q.pins ?? []) {
-    if (!ids.includes(String(pin.personId))) return fail(`pins: person ${pin.personId} is not at the line`, 'pins');
-    if (!codes.has(pin.code)) return fail(`pins: ${pin.code} is not a sewing operation of this style`, 'pins');
+    if (!ids.includes(String(pin.personId))) return { note: `pins: person ${pin.personId} is not at the line`, field: 'pins' };
+    if (!codes.has(pin.code)) return { note: `pins: ${pin.code} is not a sewing operation of this style`, field: 'pins' };
   }
-  const effPerDay = input.minutesPerDay * q.efficiency;
-  try {
-    const r = staffLine({
+  return {
+    problem: {
       operations: sewing.map((o) => ({ id: o.code, minutes: o.sam, machine: o.machineType })),
       people: crew.map((p, i) => ({ id: ids[i], efficiency: p.skills })),
       machines: input.machines,
       maxOperationsPerPerson: q.maxOps,
-      minutesPerDay: effPerDay,
+      minutesPerDay: input.minutesPerDay * q.efficiency,
       pins: (q.pins ?? []).map((pin) => ({ person: String(pin.personId), operation: pin.code })),
       timeLimitSeconds: STAFF_TIME_LIMIT_S,
-    }, input.solver);
+    },
+  };
+}
+
+/** Shares of the sewing operations among the crew, from the solved problem, or why there is no such plan. */
+function staff(input: PlanInput, sewing: PlanOperation[], crew: ReturnType<typeof sewingCrewOf>): Staffed {
+  const q = input.query;
+  const fail = (note: string, field = 'people'): Staffed => ({ staffing: null, cycle: 0, note, field });
+  const asked = staffingProblem(input);
+  if ('note' in asked) return fail(asked.note, asked.field);
+  if (!input.staffing) return fail('the shared-operations plan was not made', 'people');
+  const ids = crewIds(crew);
+  const effPerDay = input.minutesPerDay * q.efficiency;
+  try {
+    if ('rangeError' in input.staffing) throw new RangeError(input.staffing.rangeError);
+    const r = input.staffing.line;
     const byId = new Map(ids.map((id, i) => [id, crew[i]]));
     const machineOf = new Map(sewing.map((o) => [o.code, o]));
     const pinned = new Set((q.pins ?? []).map((pin) => `${pin.personId}:${pin.code}`));

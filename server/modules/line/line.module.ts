@@ -3,12 +3,7 @@ import { createBatchRepository } from '../batches/batch.repository';
 import { createStyleRepository } from '../styles/style.repository';
 import { linePlanRoutes, operationRoutes } from './line.routes';
 import { createLineService } from './line.service';
-import { loadLineSolver, type LineSolver } from '@planning';
 import { createCrewLookup, createOperationRepository, createStaffLookup, createStudioLookup } from './operation.repository';
-
-let highs: Promise<LineSolver> | null = null;
-/** HiGHS (WebAssembly) is loaded on the first line plan and kept for the life of the process. */
-const lineSolver = () => (highs ??= loadLineSolver());
 
 /** The line area: operations per style, line balancing, capacity and the batch schedule. */
 export const lineModule: ApiModule = {
@@ -21,7 +16,7 @@ export const lineModule: ApiModule = {
       studio: createStudioLookup(ctx.ds),
       staff: createStaffLookup(ctx.ds),
       crew: createCrewLookup(ctx.ds),
-      solver: lineSolver,
+      solveStaffing: (input) => ctx.jobs.run('line-staffing', input),
       audit: ctx.audit,
       now: ctx.now,
     });

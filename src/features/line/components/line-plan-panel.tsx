@@ -67,7 +67,6 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
             </table>
           </div>
           </> : null}
-          {p.mode === 'due' ? <StaffingCard plan={p} pins={params.pins ?? []} onPins={(pins) => setParams({ ...params, pins })} /> : null}
           <div>
             <h3 className="mb-2 flex flex-wrap items-center gap-2 text-sm font-semibold text-thread-800">
               Schedule: cutting → sewing → finishing <Badge tone={RISK[p.schedule.risk][0]}>{RISK[p.schedule.risk][1]}</Badge>

@@ -26,7 +26,7 @@ export function StaffingCard({ plan, pins, onPins }: { plan: LinePlanDto; pins: 
       {plan.staffingNote ? <p className="mb-2 text-xs text-ink-600">{plan.staffingNote}</p> : null}
       <div className="overflow-x-auto">
         <table className="w-full min-w-[560px] text-sm" data-testid="staffing-people">
-          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Person</th><th>Operations (share)</th><th className="w-40">Load against the cycle</th><th className="text-right">Minutes</th><th className="text-right">Idle</th></tr></thead>
+          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Person</th><th>Operations (share)</th><th className="w-40 pl-3">Load against the cycle</th><th className="pl-3 text-right">Minutes</th><th className="pl-3 text-right">Idle</th></tr></thead>
           <tbody>{s.people.map((p) => (
             <tr key={`${p.personId ?? p.name}`} className={`border-b border-calico-100 align-top ${p.isBottleneck ? 'bg-madder-100/60' : ''}`}>
               <td className="py-1 font-medium">{p.name} {p.isBottleneck ? <Badge tone="red">bottleneck</Badge> : null}</td>
@@ -39,13 +39,13 @@ export function StaffingCard({ plan, pins, onPins }: { plan: LinePlanDto; pins: 
                   )) : <span className="text-xs text-ink-600">nothing this batch</span>}
                 </div>
               </td>
-              <td className="py-1">
+              <td className="py-1 pl-3">
                 <div className="h-2.5 w-full rounded bg-calico-100" role="img" aria-label={`${p.name}: ${Math.round(p.loadPct)} % of the cycle`}>
                   <div className={`h-2.5 rounded ${p.isBottleneck ? 'bg-madder-600' : 'bg-thread-700'}`} style={{ width: `${Math.min(100, p.loadPct)}%` }} />
                 </div>
               </td>
-              <td className="text-right tabular-nums">{p.loadMin.toFixed(2)}</td>
-              <td className="text-right tabular-nums">{p.idleMin.toFixed(2)}</td>
+              <td className="pl-3 text-right tabular-nums">{p.loadMin.toFixed(2)}</td>
+              <td className="pl-3 text-right tabular-nums">{p.idleMin.toFixed(2)}</td>
             </tr>
           ))}</tbody>
         </table>
