@@ -117,6 +117,13 @@ describe('line plan of the demo batch', () => {
     expect(five.status).toBe(200);
     expect(five.body.plan.balance).toBeNull();
     expect(five.body.plan.staffingNote).toMatch(/at least 6 people/);
+    for (const n of [1, 2, 4, 5]) {
+      const plan = (await owner.get(`/api/line/batches/1/plan?mode=people&people=${n}`)).body.plan;
+      // Pooling every demo minute over n people who run every machine type (issue 19's arithmetic): 24.7 ÷ n.
+      expect(plan.staffing.cycleMin).toBeCloseTo(24.7 / n, 2);
+      expect(plan.staffing.people).toHaveLength(n);
+      expect(plan.staffing.garmentsPerDay).toBe(Math.floor((480 * 0.7 * n) / 24.7));
+    }
     const bad = await owner.get('/api/line/batches/1/plan?efficiency=3&people=0');
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['efficiency', 'people']));
