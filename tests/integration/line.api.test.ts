@@ -212,6 +212,10 @@ describe('shared operations for the people present (issue 19)', () => {
       expect(mine.operations.every((o: { machineType: string }) => o.machineType === 'overlock')).toBe(true);
       const pinned = p.staffing.people.find((x: Staffed) => x.personId === second.id).operations.find((o: { code: string }) => o.code === 'OP17');
       expect(pinned).toMatchObject({ pinned: true });
+      // Pinned to a machine type missing from the skills: a 400 on the pins, naming the person.
+      const cannot = await owner.get(`/api/line/batches/1/plan?mode=people&pins=${first.id}:OP05`);
+      expect(cannot.status).toBe(400);
+      expect(cannot.body.error.fields.pins).toMatch(/cannot run lockstitch/);
     } finally {
       const back = await owner.patch(`/api/users/${first.id}`).send({ skills: null });
       expect(back.body.user).toMatchObject({ skills: { lockstitch: 1, overlock: 1 }, skillsSet: false });

@@ -304,6 +304,11 @@ function staff(input: PlanInput, sewing: PlanOperation[], crew: ReturnType<typeo
     if (!(e instanceof RangeError)) throw e;
     const m = e.message.match(/^operations\[(\d+)\]\.machine: (.*)$/);
     if (m) return fail(`${m[2]} (${sewing[Number(m[1])].code}): give someone that skill on the People page`, 'skills');
+    const pin = e.message.match(/^pins\[(\d+)\]: \S+ cannot run (.*)$/);
+    if (pin) {
+      const who = crew[ids.indexOf(String(q.pins![Number(pin[1])].personId))]?.name ?? 'that person';
+      return fail(`pins: ${who} cannot run ${pin[2]} (not on their skills)`, 'pins');
+    }
     if (e.message.startsWith('pins')) return fail(e.message.replace(/^pins\[\d+\]/, 'pins'), 'pins');
     if (e.message.startsWith('maxOperationsPerPerson')) return fail(e.message.replace('maxOperationsPerPerson', 'maxOps'), 'maxOps');
     return fail(e.message, 'machines');

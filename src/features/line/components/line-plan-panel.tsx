@@ -39,6 +39,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
       </form>
       {plan.isLoading ? <Spinner label="Balancing…" /> : null}
       <ErrorNote error={plan.error} />
+      {plan.error && params.pins?.length ? <button type="button" className="btn-quiet mt-2" onClick={() => setParams({ ...params, pins: [] })}>Clear the pins and plan again</button> : null}
       {p ? (
         <div className="space-y-5">
           {p.balance ? <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
