@@ -96,6 +96,7 @@ describe('journey: the owner shares the operations among the people present (iss
     await page.goto(`${baseUrl()}/line`);
     await page.getByLabel('Balance for').selectOption('people');
     await page.getByLabel('Machinists present').fill('3');
+    await page.getByLabel('Most operations a person').fill('6');
     await page.getByRole('button', { name: 'Balance the line' }).click();
     await expect.poll(() => page.getByTestId('staffing-summary').isVisible(), { timeout: 20_000 }).toBe(true);
     // 3 machinists: refused before issue 19 (a straight line needs 6); 24.7 demo minutes ÷ 3 = 8.23 min a garment.
@@ -103,6 +104,7 @@ describe('journey: the owner shares the operations among the people present (iss
     expect(summary).toMatch(/Garments a day\s*40/);
     expect(summary).toMatch(/Cycle\s*8\.23 min/);
     expect(await page.getByTestId('staffing-people').locator('tbody tr').count()).toBe(3);
+    for (const row of await page.getByTestId('staffing-people').locator('tbody tr').all()) expect(await row.locator('td').nth(1).locator('span').count()).toBeLessThanOrEqual(6);
     expect(await page.getByTestId('staffing-people').getByText('bottleneck').count()).toBe(1);
     expect(await page.getByTestId('balance-summary').count()).toBe(0);
     await page.getByLabel('to operation').selectOption('OP17');

@@ -222,6 +222,17 @@ describe('shared operations for the people present (issue 19)', () => {
     }
   });
 
+  it('keeps each person within the cap on operations, and says when the cap cannot cover the line', async () => {
+    const p = (await owner.get('/api/line/batches/1/plan?mode=people&maxOps=3')).body.plan;
+    expect(p.staffing.maxOperationsPerPerson).toBe(3);
+    for (const x of p.staffing.people as Staffed[]) expect(x.operations.length).toBeLessThanOrEqual(3);
+    expect(new Set((p.staffing.people as Staffed[]).flatMap((x) => x.operations.map((o) => o.code))).size).toBe(15);
+    // 6 people × 2 operations cannot cover the 15 sewing operations.
+    const tooFew = await owner.get('/api/line/batches/1/plan?mode=people&maxOps=2');
+    expect(tooFew.status).toBe(400);
+    expect(tooFew.body.error.fields.maxOps).toMatch(/cannot cover 15 operations/);
+  });
+
   it('answers bad skills, machines and pins with a 400 naming the field, and saves nothing', async () => {
     const [first] = await machinists();
     const pace = await owner.patch(`/api/users/${first.id}`).send({ skills: { lockstitch: 5 } });

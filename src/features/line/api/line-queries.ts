@@ -11,11 +11,14 @@ export interface PlanParams {
   efficiency: number;
   /** The owner's pins: this person stays on this operation. */
   pins?: { personId: number; code: string }[];
+  /** People mode: most operations one person works on; undefined: no limit. */
+  maxOps?: number;
 }
 
 const planQuery = (p: PlanParams) => {
   const q = new URLSearchParams({ mode: p.mode, efficiency: String(p.efficiency) });
   if (p.mode === 'people' && p.people) q.set('people', String(p.people));
+  if (p.mode === 'people' && p.maxOps) q.set('maxOps', String(p.maxOps));
   if (p.pins?.length) q.set('pins', p.pins.map((x) => `${x.personId}:${x.code}`).join(','));
   return q.toString();
 };

@@ -12,14 +12,14 @@ const RISK = { 'on-time': ['teal', 'On time'], 'at-risk': ['gold', 'At risk'], l
 /** Balance, capacity, schedule and output of one batch's sewing line, with the working-hours caution. */
 export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' | 'dueDate' | 'total'> }) {
   const [params, setParams] = useState<PlanParams>({ mode: 'due', efficiency: 0.7, pins: [] });
-  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '', efficiency: '70' });
+  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '', efficiency: '70', maxOps: '' });
   const plan = useQuery(linePlanQueries.detail(batch.id, params));
   const actual = useQuery(actualOutputQueries.detail(batch.id));
   const p = plan.data;
-  const apply = () => setParams({ ...params, mode: draft.mode, people: Number(draft.people) || undefined, efficiency: (Number(draft.efficiency) || 70) / 100 });
+  const apply = () => setParams({ ...params, mode: draft.mode, people: Number(draft.people) || undefined, efficiency: (Number(draft.efficiency) || 70) / 100, maxOps: Number(draft.maxOps) || undefined });
   return (
     <Card title={`Sewing line for ${batch.code}`}>
-      <form className="mb-4 grid gap-3 sm:grid-cols-4" onSubmit={(e) => { e.preventDefault(); apply(); }}>
+      <form className="mb-4 grid gap-3 sm:grid-cols-5" onSubmit={(e) => { e.preventDefault(); apply(); }}>
         <div>
           <label className="field-label" htmlFor="plan-mode">Balance for</label>
           <select id="plan-mode" className="field-input" value={draft.mode} onChange={(e) => setDraft({ ...draft, mode: e.target.value as PlanParams['mode'] })}>
@@ -30,6 +30,10 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         <div>
           <label className="field-label" htmlFor="plan-people">Machinists present</label>
           <input id="plan-people" className="field-input" inputMode="numeric" placeholder="everyone active" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
+        </div>
+        <div>
+          <label className="field-label" htmlFor="plan-max-ops">Most operations a person</label>
+          <input id="plan-max-ops" className="field-input" inputMode="numeric" placeholder="no limit" disabled={draft.mode !== 'people'} value={draft.maxOps} onChange={(e) => setDraft({ ...draft, maxOps: e.target.value })} />
         </div>
         <div>
           <label className="field-label" htmlFor="plan-eff">Efficiency (%)</label>
