@@ -85,6 +85,71 @@ describe('scheduleBatch', () => {
   });
 });
 
+describe('scheduleBatch against a discrete-event simulation of bundles (issue 19)', () => {
+  /**
+   * Independent check: bundles of `bundle` garments (the last one smaller) flow through every station of every
+   * stage in turn; a station serves one bundle at a time, first come first served, taking size × minutes per
+   * piece. Departure recurrence of a flow line: D[j][s] = max(D[j−1][s], D[j][s−1]) + service. Returns, per stage,
+   * the minute its first bundle enters and the minute its last bundle leaves.
+   */
+  function simulate(quantity: number, bundle: number, stages: { mpp: number; stations: number }[]) {
+    const sizes: number[] = [];
+    for (let left = quantity; left > 0; left -= bundle) sizes.push(Math.min(bundle, left));
+    const line = stages.flatMap((st, k) => Array.from({ length: st.stations }, () => ({ k, mpp: st.mpp })));
+    const done = new Array<number>(line.length).fill(0);
+    const firstIn = stages.map(() => Infinity);
+    const lastOut = stages.map(() => 0);
+    for (const size of sizes) {
+      let ready = 0;
+      line.forEach((station, s) => {
+        const begin = Math.max(ready, done[s]);
+        if (s === 0 || line[s - 1].k !== station.k) firstIn[station.k] = Math.min(firstIn[station.k], begin);
+        done[s] = begin + size * station.mpp;
+        ready = done[s];
+        lastOut[station.k] = Math.max(lastOut[station.k], ready);
+      });
+    }
+    return { firstIn, lastOut };
+  }
+  // Minutes per piece per stage = SAM ÷ (people × efficiency); efficiency 1 keeps the arithmetic plain.
+  const cases: [string, { name: string; samPerPiece: number; people: number; efficiency: number; stations?: number }[]][] = [
+    ['a 6-station sewing line between cutting and finishing', [
+      { name: 'cutting', samPerPiece: 2, people: 1, efficiency: 1 },
+      { name: 'sewing', samPerPiece: 24, people: 6, efficiency: 1, stations: 6 },
+      { name: 'finishing', samPerPiece: 3, people: 2, efficiency: 1 },
+    ]],
+    ['a slow cutter feeding a faster 4-station line', [
+      { name: 'cutting', samPerPiece: 6, people: 1, efficiency: 1 },
+      { name: 'sewing', samPerPiece: 8, people: 4, efficiency: 1, stations: 4 },
+      { name: 'finishing', samPerPiece: 1, people: 1, efficiency: 1 },
+    ]],
+    ['two lines in a row, the second slower', [
+      { name: 'sewing', samPerPiece: 9, people: 3, efficiency: 1, stations: 3 },
+      { name: 'sewing 2', samPerPiece: 20, people: 5, efficiency: 1, stations: 5 },
+    ]],
+  ];
+  it.each(cases)('starts and ends every stage when the simulation does with %s', (_, stages) => {
+    const s = scheduleBatch({ quantity: 120, bundleSize: 10, stages, calendar: weekdays, start: '2025-03-03' });
+    const sim = simulate(120, 10, stages.map((st) => ({ mpp: st.samPerPiece / st.people, stations: st.stations ?? 1 })));
+    s.stages.forEach((st, k) => {
+      expect(st.startMinute).toBeCloseTo(sim.firstIn[k], 9);
+      expect(st.endMinute).toBeCloseTo(sim.lastOut[k], 9);
+    });
+  });
+  it('ends sewing at start + Q × cycle + (stations − 1) × bundle time, not at start + Q × cycle', () => {
+    // 6 stations at a 4-minute cycle, bundles of 10: the first bundle leaves after 6 × 40 min.
+    const s = scheduleBatch({ quantity: 100, bundleSize: 10, stages: [{ name: 'sewing', samPerPiece: 24, people: 6, efficiency: 1, stations: 6 }], calendar: weekdays, start: '2025-03-03' });
+    expect(s.stages[0].endMinute).toBe(100 * 4 + 5 * 40);
+  });
+  it('is never earlier than the simulation when the last bundle is short', () => {
+    for (const [, stages] of cases) {
+      const s = scheduleBatch({ quantity: 95, bundleSize: 10, stages, calendar: weekdays, start: '2025-03-03' });
+      const sim = simulate(95, 10, stages.map((st) => ({ mpp: st.samPerPiece / st.people, stations: st.stations ?? 1 })));
+      expect(s.finishMinute).toBeGreaterThanOrEqual(sim.lastOut.at(-1)! - 1e-9);
+    }
+  });
+});
+
 describe('profileLoad', () => {
   it('fills days to capacity per section', () => {
     const [p] = profileLoad([{ section: 'sewing', loadMinutes: 10000, people: 10, efficiency: 0.5 }], weekdays, '2025-03-07');

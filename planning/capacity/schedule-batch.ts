@@ -11,6 +11,12 @@ export interface BatchStage {
   /** Fraction, 0.6 = 60 %. */
   efficiency: number;
   absenteeism?: number;
+  /**
+   * Stations a bundle passes through one after another inside the stage, each taking one bundle time
+   * (bundle × minutes per piece) at the stage's pace: a sewing line of 6 stations has 6, a pooled cutting table
+   * 1 (default).
+   */
+  stations?: number;
 }
 
 /** Input to {@link scheduleBatch}. */
@@ -56,8 +62,11 @@ export interface BatchSchedule {
 }
 
 /**
- * Schedules a batch through its stages as a bundle flow: stage k starts once the first bundle has
- * left stage k−1 and cannot finish before the last bundle arrives plus one bundle of its own time.
+ * Schedules a batch through its stages as a bundle flow. Inside a stage of S stations each bundle visits every
+ * station in turn, one bundle time T = bundle × minutes per piece at each, so its first bundle leaves S × T after
+ * the stage starts and the stage ends at start + Q × minutes per piece + (S − 1) × T. Stage k starts once the
+ * first bundle has left stage k−1 and cannot finish before the last bundle arrives plus S × T (exact for
+ * stations paced at the stage's rate: the bundle recurrence of a flow line).
  * Capacity per day follows {@link capacityMinutes}. Overtime needed is spread evenly over the working
  * days to the due date (a first estimate, not a re-plan). Throws RangeError on a stage without capacity.
  */
@@ -68,13 +77,17 @@ export function scheduleBatch(input: ScheduleBatchInput): BatchSchedule {
   const stages: ScheduledStage[] = [];
   let prevStart = 0;
   let prevEnd = 0;
-  let prevBundle = 0;
+  let prevFirstOut = 0;
   input.stages.forEach((s, k) => {
     const cap = capacityMinutes({ people: s.people, minutesPerDay: 1, efficiency: s.efficiency, absenteeism: s.absenteeism });
     if (!(cap > 0)) throw new RangeError(`stage ${s.name} has no capacity`);
+    const stations = s.stations ?? 1;
+    if (!(Number.isInteger(stations) && stations >= 1)) throw new RangeError(`stage ${s.name}: stations must be a whole number ≥ 1`);
     const mpp = s.samPerPiece / cap;
-    const startMinute = k === 0 ? 0 : prevStart + prevBundle;
-    const endMinute = k === 0 ? quantity * mpp : Math.max(startMinute + quantity * mpp, prevEnd + bundle * mpp);
+    const bundleTime = bundle * mpp;
+    const startMinute = k === 0 ? 0 : prevStart + prevFirstOut;
+    const ownEnd = startMinute + quantity * mpp + (stations - 1) * bundleTime;
+    const endMinute = k === 0 ? ownEnd : Math.max(ownEnd, prevEnd + stations * bundleTime);
     stages.push({
       name: s.name,
       minutesPerPiece: mpp,
@@ -86,7 +99,7 @@ export function scheduleBatch(input: ScheduleBatchInput): BatchSchedule {
     });
     prevStart = startMinute;
     prevEnd = endMinute;
-    prevBundle = bundle * mpp;
+    prevFirstOut = stations * bundleTime;
   });
   const finishMinute = prevEnd;
   const finishDate = dateAtWorkingMinute(calendar, start, finishMinute, true).date;

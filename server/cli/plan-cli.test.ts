@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { execFileSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -10,6 +10,15 @@ const run = (script: string, input: unknown) => {
   writeFileSync(file, JSON.stringify(input));
   const tsx = path.join(root, 'node_modules/.bin/tsx');
   return JSON.parse(execFileSync(tsx, [path.join(root, 'server/cli', script), '--in', file, '--json'], { cwd: root, encoding: 'utf8' }));
+};
+
+/** Runs a CLI expected to refuse its input: exit code, stderr and stdout. */
+const refuse = (script: string, input: unknown) => {
+  const file = path.join(mkdtempSync(path.join(tmpdir(), 'seamrun-cli-')), 'in.json');
+  writeFileSync(file, typeof input === 'string' ? input : JSON.stringify(input));
+  const tsx = path.join(root, 'node_modules/.bin/tsx');
+  const r = spawnSync(tsx, [path.join(root, 'server/cli', script), '--in', file, '--json'], { cwd: root, encoding: 'utf8' });
+  return { status: r.status, stderr: r.stderr, stdout: r.stdout };
 };
 
 describe('planning CLIs (fixed JSON contracts)', () => {
@@ -37,4 +46,75 @@ describe('planning CLIs (fixed JSON contracts)', () => {
     const b = run('plan-balance.cli.ts', { tasks, stations: 4 });
     expect(b.cycleTime).toBe(12);
   }, 60_000);
+
+  // Same Scholl (1993) JACKSON.IN2 instance with the ids as numbers: c = 10 → 5 stations
+  it('plan:balance accepts numeric task ids and prints them back as numbers', () => {
+    const tasks = [6, 2, 5, 7, 1, 2, 3, 6, 5, 5, 4].map((time, i) => ({ id: i + 1, time, after: [] as number[] }));
+    const arcs = [[1, 2], [1, 3], [1, 4], [1, 5], [2, 6], [3, 7], [4, 7], [5, 7], [6, 8], [7, 9], [8, 10], [9, 11], [10, 11]];
+    arcs.forEach(([p, j]) => tasks[j - 1].after.push(p));
+    const out = run('plan-balance.cli.ts', { tasks, cycleTime: 10 });
+    expect(out.count).toBe(5);
+    expect(out.stations.flat().sort((a: number, b: number) => a - b)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11]);
+  }, 60_000);
+
+  it('plan:balance answers bad input with one line naming the field and exit code 2', () => {
+    const cases: [unknown, string][] = [
+      [{ tasks: [{ id: 'a', time: -1 }], cycleTime: 5 }, 'tasks[0].time'],
+      [{ tasks: [{ id: 'a', time: 1, after: ['zz'] }], cycleTime: 5 }, 'tasks[0].after[0]'],
+      [{ tasks: [{ id: 'a', time: 6 }], cycleTime: 5 }, 'tasks[0].time'],
+      [{ tasks: [{ id: 'a', time: 1 }] }, 'cycleTime'],
+      [{ tasks: [{ id: 'a', time: 1, after: ['b'] }, { id: 'b', time: 1, after: ['a'] }], cycleTime: 5 }, 'tasks'],
+      ['{not json', '--in'],
+    ];
+    for (const [input, field] of cases) {
+      const r = refuse('plan-balance.cli.ts', input);
+      expect(r.status).toBe(2);
+      expect(r.stdout).toBe('');
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr.startsWith(`${field}:`)).toBe(true);
+      expect(r.stderr).not.toMatch(/\bat .*\.ts:\d+/);
+    }
+  }, 120_000);
+
+  // Pooling (common practice): with no caps, two able people split 6 minutes of work evenly → 3-minute cycle,
+  // 480 ÷ 3 = 160 garments a day; checked from the contract (shares sum to 1, loads within the cycle).
+  it('plan:line prints shares that sum to 1 per operation with every load within the cycle', () => {
+    const input = {
+      operations: [{ id: 'a', minutes: 2, machine: 'lockstitch' }, { id: 'b', minutes: 1, machine: 'overlock' }, { id: 'c', minutes: 3, machine: 'lockstitch' }],
+      people: [{ id: 'Ann', efficiency: { lockstitch: 1, overlock: 1 } }, { id: 7, efficiency: { lockstitch: 1 } }],
+      minutesPerDay: 480,
+    };
+    const out = run('plan-line.cli.ts', input);
+    expect(Object.keys(out).sort()).toEqual(['assignments', 'cycleMinutes', 'gap', 'garmentsPerDay', 'method']);
+    expect(out.method).toBe('exact');
+    expect(out.gap).toBe(0);
+    expect(out.cycleMinutes).toBeCloseTo(3, 6);
+    expect(out.garmentsPerDay).toBeCloseTo(160, 4);
+    const minutes: Record<string, number> = { a: 2, b: 1, c: 3 };
+    for (const op of ['a', 'b', 'c'])
+      expect(out.assignments.filter((x: { operation: string }) => x.operation === op).reduce((s: number, x: { share: number }) => s + x.share, 0)).toBeCloseTo(1, 9);
+    for (const person of ['Ann', '7']) {
+      const load = out.assignments.filter((x: { person: string }) => x.person === person).reduce((s: number, x: { operation: string; share: number }) => s + x.share * minutes[x.operation], 0);
+      expect(load).toBeLessThanOrEqual(out.cycleMinutes + 1e-9);
+    }
+    expect(out.assignments.some((x: { person: string; operation: string }) => x.person === '7' && x.operation === 'b')).toBe(false);
+  }, 60_000);
+
+  it('plan:line answers bad input with one line naming the field and exit code 2', () => {
+    const ok = { operations: [{ id: 'a', minutes: 2, machine: 'lockstitch' }], people: [{ id: 'Ann', efficiency: { lockstitch: 1 } }], minutesPerDay: 480 };
+    const cases: [unknown, string][] = [
+      [{ ...ok, minutesPerDay: 0 }, 'minutesPerDay'],
+      [{ ...ok, operations: [{ id: 'a', minutes: 'two', machine: 'lockstitch' }] }, 'operations[0].minutes'],
+      [{ ...ok, people: [{ id: 'Ann', efficiency: { overlock: 1 } }] }, 'operations[0].machine'],
+      [{ ...ok, machines: { lockstitch: 0 } }, 'operations[0].machine'],
+      [{ ...ok, maxOperationsPerPerson: 0 }, 'maxOperationsPerPerson'],
+      [{ ...ok, pins: [{ person: 'Bo', operation: 'a' }] }, 'pins[0].person'],
+    ];
+    for (const [input, field] of cases) {
+      const r = refuse('plan-line.cli.ts', input);
+      expect(r.status).toBe(2);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr.startsWith(`${field}:`)).toBe(true);
+    }
+  }, 120_000);
 });

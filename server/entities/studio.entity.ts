@@ -19,6 +19,10 @@ export class StudioEntity {
   @Column({ type: 'real', default: 8 })
   workingDayHours: number;
 
+  /** Machines on the floor by type (`{ lockstitch: 4 }`); a type not listed is not limited. Null: none listed. */
+  @Column({ type: 'simple-json', nullable: true })
+  machines: Record<string, number> | null;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

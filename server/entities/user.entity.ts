@@ -63,6 +63,13 @@ export class UserEntity {
   @Column({ type: 'varchar', length: 64, default: '' })
   payoutAccount: string;
 
+  /**
+   * Machine types the person can run, each with their pace (1.0 = standard minutes, 0.8 = 25 % slower).
+   * Null: the defaults for their role (shared/schemas/people.ts, defaultSkills).
+   */
+  @Column({ type: 'simple-json', nullable: true })
+  skills: Record<string, number> | null;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

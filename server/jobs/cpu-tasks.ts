@@ -10,6 +10,7 @@ import { buildPurchaseOrderXlsx } from '@exports/xlsx/purchase-order.xlsx';
 import { solveCutOrderJob, type CutOrderJobInput } from '../modules/cutting/cut-order-job';
 import { cuttingPiecesOf } from '../modules/grading/graded-pieces';
 import { computeGrading } from '../modules/grading/grading-compute';
+import { staffLineJob } from '../modules/line/line-staffing-job';
 
 /**
  * The CPU-bound work a request may ask for, as functions of plain data that answer plain data or bytes:
@@ -34,6 +35,8 @@ export const CPU_TASKS = {
   'cutting-pieces': async (input: { set: Parameters<typeof cuttingPiecesOf>[0]; baseSize: string }) => cuttingPiecesOf(input.set, input.baseSize),
   /** A grading set graded over its run, with its seam checks and errors. */
   grading: async (input: { set: Parameters<typeof computeGrading>[0]; styleBase: string }) => computeGrading(input.set, input.styleBase),
+  /** The shared-operations line solve (HiGHS, loaded once per thread). */
+  'line-staffing': (input: Parameters<typeof staffLineJob>[0]) => staffLineJob(input),
 };
 
 export type CpuTaskName = keyof typeof CPU_TASKS;

@@ -37,10 +37,29 @@ export type PutOperationsInput = z.input<typeof putOperationsInput>;
 /** POST /styles/:id/operations/copy. */
 export const copyOperationsInput = z.object({ fromStyleId: z.number().int().positive('Choose a style') });
 
-/** GET /line/batches/:id/plan query: balance for the due date (SALBP-1) or for the people present (SALBP-2). */
+/** One pin in the plan query: `<person id>:<operation code>`. */
+const pinItem = /^\d{1,9}:[A-Za-z0-9-_]{1,12}$/;
+
+/**
+ * GET /line/batches/:id/plan query: balance for the due date (SALBP-1) or for the people present (SALBP-2 and
+ * shared operations). `people`: how many machinists (default: everyone active on the People page). `pins`:
+ * comma-separated `<person id>:<operation code>`, each keeping that person on that operation. `maxOps`: most
+ * operations one person works on.
+ */
 export const linePlanQuery = z.object({
   mode: z.enum(['due', 'people']).default('due'),
   people: z.coerce.number().int('Whole people only').min(1, 'At least 1').max(200).optional(),
+  pins: z
+    .string()
+    .max(2000, 'At most 2000 characters')
+    .transform((v, ctx) => {
+      const items = v.split(',').map((x) => x.trim()).filter(Boolean);
+      const bad = items.find((x) => !pinItem.test(x));
+      if (bad) ctx.addIssue({ code: 'custom', message: `${bad} is not <person id>:<operation code>` });
+      return items.map((x) => ({ personId: Number(x.split(':')[0]), code: x.split(':')[1] }));
+    })
+    .optional(),
+  maxOps: z.coerce.number().int('Whole operations only').min(1, 'At least 1').max(60, 'At most 60').optional(),
   efficiency: z.coerce.number().min(0.2, 'At least 20 %').max(1.2, 'At most 120 %').default(0.7),
   bundleSize: z.coerce.number().int().min(1).max(200).default(10),
   start: calendarDate.optional(),
@@ -74,6 +93,40 @@ export interface StationDto {
   isBottleneck: boolean;
 }
 
+/** One person on the shared-operations line: what they sew and how their minutes compare with the cycle. */
+export interface StaffedPersonDto {
+  /** Null for an extra machinist added by the `people` count beyond the People page. */
+  personId: number | null;
+  name: string;
+  /** Minutes per garment: Σ share × SAM ÷ pace over their operations. */
+  loadMin: number;
+  idleMin: number;
+  /** Load ÷ cycle × 100. */
+  loadPct: number;
+  isBottleneck: boolean;
+  operations: { code: string; machineType: string; share: number; minutes: number; pinned: boolean }[];
+}
+
+/**
+ * The people present staffed on the sewing operations (planning/line-staffing): each operation shared among the
+ * people able to run its machine type, for the most garments a day, solved exactly by HiGHS.
+ */
+export interface StaffingDto {
+  method: 'exact' | 'time-limit';
+  /** Relative gap to the proven bound, %, 0 when exact. */
+  gapPct: number;
+  /** Minutes per garment at the busiest person. */
+  cycleMin: number;
+  /** Whole garments per working day at the plan's efficiency. */
+  garmentsPerDay: number;
+  bottleneck: string;
+  /** Σ idle minutes per garment over the people planned. */
+  idleMin: number;
+  people: StaffedPersonDto[];
+  machines: Record<string, number>;
+  maxOperationsPerPerson: number | null;
+}
+
 export interface LinePlanDto {
   batchId: number;
   styleId: number;
@@ -86,6 +139,10 @@ export interface LinePlanDto {
   workdays: number[];
   /** Demo assumptions the plan rests on (staff skills, calendar), in words. */
   assumptions: string[];
+  /**
+   * The straight line, one machine type per station: null in people mode when the people present are fewer than
+   * the stations it needs (the shared-operations plan in `staffing` still plans them).
+   */
   balance: {
     problem: 'salbp-1' | 'salbp-2';
     method: 'exact' | 'rpw' | 'partial-search';
@@ -105,8 +162,14 @@ export interface LinePlanDto {
     /** Garments per working day the balanced line can make at the plan's efficiency. */
     outputPerDay: number;
     peopleAvailable: number;
-  };
+  } | null;
   stations: StationDto[];
+  /** People mode: the operations shared among the people present, which the sewing schedule follows. Null in due mode. */
+  staffing: StaffingDto | null;
+  /** People mode: why the straight line (`balance`) is null, in words; else null. */
+  staffingNote: string | null;
+  /** Machinists planned in people mode (People page or the `people` count). */
+  peopleAvailable: number;
   schedule: {
     stages: { name: string; startDate: string; endDate: string; startMinute: number; endMinute: number; daysNeeded: number; people: number; samPerPiece: number }[];
     finishDate: string;

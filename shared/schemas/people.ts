@@ -28,11 +28,43 @@ export const payoutAccountField = z
   .max(64, 'At most 64 characters')
   .regex(/^([A-Za-z0-9_]{3,64})?$/, 'Letters, digits and _ only, as the payments service gives it');
 
+/** A machine type name, as in the operations table (free text up to 24 characters). */
+const machineTypeKey = z.string().trim().min(1, 'Machine type is required').max(24, 'At most 24 characters');
+
+/**
+ * A person's skills: machine type → pace against standard minutes (1.0 = standard, 0.8 = 25 % slower, 1.2 =
+ * faster). A machine type left out is one the person does not run.
+ */
+export const skillsField = z
+  .record(machineTypeKey, z.number({ error: 'Give a pace such as 1.0' }).min(0.1, 'At least 0.1').max(2, 'At most 2'))
+  .refine((v) => Object.keys(v).length <= 20, 'At most 20 machine types');
+export type Skills = z.infer<typeof skillsField>;
+
+/**
+ * Skills a person has until the owner edits them (common practice in small studios, not a published table):
+ * a machinist runs every sewing machine at standard pace, a cutter cuts, a finisher does hand work, pressing,
+ * buttons and inspection, an owner is not planned on the line.
+ */
+export function defaultSkills(role: (typeof ROLES)[number]): Skills {
+  switch (role) {
+    case 'machinist':
+      return { lockstitch: 1, overlock: 1, coverstitch: 1, buttonhole: 1, 'button sew': 1, 'hand work': 1, pressing: 1 };
+    case 'cutter':
+      return { cutting: 1 };
+    case 'finisher':
+      return { 'hand work': 1, pressing: 1, 'button sew': 1, inspection: 1 };
+    default:
+      return {};
+  }
+}
+
 export const updatePersonInput = z.object({
   role: z.enum(ROLES).optional(),
   active: z.boolean().optional(),
   name: z.string().trim().min(1).max(120).optional(),
   payoutAccount: payoutAccountField.optional(),
+  /** Null puts the person back on the defaults for their role. */
+  skills: skillsField.nullable().optional(),
 });
 export type UpdatePersonInput = z.infer<typeof updatePersonInput>;
 
@@ -45,5 +77,8 @@ export const personSchema = z.object({
   hasPin: z.boolean(),
   mustChangePassword: z.boolean(),
   payoutAccount: z.string(),
+  /** The skills the line plan uses: the person's own, or the defaults for their role when `skillsSet` is false. */
+  skills: z.record(z.string(), z.number()),
+  skillsSet: z.boolean(),
 });
 export type PersonDto = z.infer<typeof personSchema>;

@@ -88,3 +88,64 @@ describe('journey: the owner balances the demo line for the due date', () => {
     await page.close();
   });
 });
+
+describe('journey: the owner shares the operations among the people present (issue 19)', () => {
+  it('sees who does what, each load against the cycle, and pins a person to an operation', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, 'owner@tamarind.example');
+    await page.goto(`${baseUrl()}/line`);
+    await page.getByLabel('Balance for').selectOption('people');
+    await page.getByLabel('Machinists present').fill('3');
+    await page.getByLabel('Most operations a person').fill('6');
+    await page.getByRole('button', { name: 'Balance the line' }).click();
+    await expect.poll(() => page.getByTestId('staffing-summary').isVisible(), { timeout: 20_000 }).toBe(true);
+    // 3 machinists: refused before issue 19 (a straight line needs 6); 24.7 demo minutes ÷ 3 = 8.23 min a garment.
+    const summary = await page.getByTestId('staffing-summary').textContent();
+    expect(summary).toMatch(/Garments a day\s*40/);
+    expect(summary).toMatch(/Cycle\s*8\.23 min/);
+    expect(await page.getByTestId('staffing-people').locator('tbody tr').count()).toBe(3);
+    for (const row of await page.getByTestId('staffing-people').locator('tbody tr').all()) expect(await row.locator('td').nth(1).locator('span').count()).toBeLessThanOrEqual(6);
+    expect(await page.getByTestId('staffing-people').getByText('bottleneck').count()).toBe(1);
+    expect(await page.getByTestId('balance-summary').count()).toBe(0);
+    await page.getByLabel('to operation').selectOption('OP17');
+    await page.getByRole('button', { name: 'Pin and re-plan' }).click();
+    await expect.poll(() => page.getByTestId('pins').isVisible(), { timeout: 20_000 }).toBe(true);
+    await expect.poll(() => page.getByTestId('staffing-people').getByText(/OP17 .*pinned/).count(), { timeout: 20_000 }).toBe(1);
+    await shot(page, 'line-staffing-pinned');
+    await page.close();
+  });
+
+  it('edits a person\'s skills on the People page and the machines in settings, refusing a bad pace', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, 'owner@tamarind.example');
+    await page.goto(`${baseUrl()}/people`);
+    await page.getByRole('button', { name: /^Edit skills of / }).first().click();
+    await expect.poll(() => page.getByTestId('skills').isVisible()).toBe(true);
+    await page.getByLabel('Pace, row 1', { exact: true }).fill('5');
+    await page.getByRole('button', { name: 'Save skills' }).click();
+    await expect.poll(() => page.getByText('A pace from 0.1 to 2').isVisible()).toBe(true);
+    await page.getByLabel('Pace, row 1', { exact: true }).fill('1.1');
+    await page.getByRole('button', { name: 'Save skills' }).click();
+    await expect.poll(() => page.getByTestId('skills').count()).toBe(0);
+    expect(await page.getByText(/ 1\.1$/).count()).toBeGreaterThan(0);
+    await page.getByRole('button', { name: /^Edit skills of / }).first().click();
+    await page.getByRole('button', { name: 'Use role defaults' }).click();
+    await expect.poll(() => page.getByTestId('skills').count()).toBe(0);
+
+    await page.goto(`${baseUrl()}/settings`);
+    await page.getByRole('button', { name: 'Add machine type' }).click();
+    await page.getByLabel('Count, row 1', { exact: true }).fill('2.5');
+    await page.getByRole('button', { name: 'Save machines' }).click();
+    await expect.poll(() => page.getByText('A whole number from 0 to 999').isVisible()).toBe(true);
+    await page.getByLabel('Count, row 1', { exact: true }).fill('4');
+    await page.getByRole('button', { name: 'Save machines' }).click();
+    await expect.poll(() => page.getByText('Machines saved.').isVisible()).toBe(true);
+    await page.reload();
+    await expect.poll(() => page.getByLabel('Count, row 1', { exact: true }).inputValue()).toBe('4');
+    await shot(page, 'studio-machines');
+    await page.getByRole('button', { name: 'Remove' }).click();
+    await page.getByRole('button', { name: 'Save machines' }).click();
+    await expect.poll(() => page.getByText('Machines saved.').isVisible()).toBe(true);
+    await page.close();
+  });
+});

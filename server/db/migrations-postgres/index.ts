@@ -3,6 +3,7 @@ import { PayoutAccount1796181395083 } from './1796181395083-PayoutAccount';
 import { FloorSignInAndBundleNumbers1796361960738 } from './1796361960738-FloorSignInAndBundleNumbers';
 import { PayoutFreezeAndLogPayPeriod1796362059995 } from './1796362059995-PayoutFreezeAndLogPayPeriod';
 import { RollReservations1796362119816 } from './1796362119816-RollReservations';
+import { SkillsAndMachines1796363634850 } from './1796363634850-SkillsAndMachines';
 
 /** PostgreSQL migrations, generated from the same entities (`DATABASE_URL=postgres://… npm run db:generate -- Name`). */
-export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816];
+export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816, SkillsAndMachines1796363634850];

@@ -7,7 +7,8 @@ import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { planLine, type StaffCount } from './line-plan';
+import type { StaffLineInput } from '@planning';
+import { planLine, staffingProblem, type CrewPerson, type StaffCount, type StaffingOutcome } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 import { LISTED_ERRORS } from '../uploads/table-limits';
@@ -16,9 +17,13 @@ export interface LineServiceDeps {
   styles: StyleRepository;
   batches: BatchRepository;
   operations: OperationRepository;
-  studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number } | null>;
+  studio: (studioId: number) => Promise<{ currency: string; workingDayHours: number; machines: Record<string, number> } | null>;
   /** Active people per floor section (People page). */
   staff: (studioId: number) => Promise<StaffCount>;
+  /** Active people with their skills (People page). */
+  crew: (studioId: number) => Promise<CrewPerson[]>;
+  /** Runs the shared-operations solve (the `line-staffing` job, server/jobs/handlers.ts). */
+  solveStaffing: (input: StaffLineInput) => Promise<StaffingOutcome>;
   audit: AuditRepository;
   now: () => Date;
 }
@@ -57,7 +62,7 @@ function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] 
 export type LineService = ReturnType<typeof createLineService>;
 
 /** Operations tables per style and the line plan per batch. */
-export function createLineService({ styles, batches, operations, studio, staff, audit, now }: LineServiceDeps) {
+export function createLineService({ styles, batches, operations, studio, staff, crew, solveStaffing, audit, now }: LineServiceDeps) {
   async function styleOf(actor: Actor, styleId: number) {
     const s = await styles.get(actor.studioId, styleId);
     if (!s) throw notFound('Style');
@@ -129,10 +134,16 @@ export function createLineService({ styles, batches, operations, studio, staff, 
       const ops = await operations.list(actor.studioId, batch.styleId);
       const st = await studio(actor.studioId);
       const quantity = Object.values(batch.quantities).reduce((a, b) => a + b, 0);
+      const people = await crew(actor.studioId);
+      const minutesPerDay = Math.round((st?.workingDayHours ?? 8) * 60);
+      const machines = st?.machines ?? {};
+      // People mode shares the operations among the people present: the solve runs as a job.
+      const asked = query.mode === 'people' ? staffingProblem({ operations: ops, crew: people, machines, minutesPerDay, query }) : null;
+      const staffing = asked && 'problem' in asked ? await solveStaffing(asked.problem) : null;
       try {
         return planLine({
           batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today: format(now(), 'yyyy-MM-dd'),
-          minutesPerDay: Math.round((st?.workingDayHours ?? 8) * 60), operations: ops, query, staff: await staff(actor.studioId),
+          minutesPerDay, operations: ops, query, staff: await staff(actor.studioId), crew: people, machines, staffing,
         });
       } catch (e) {
         if (e instanceof RangeError) throw badRequest(`plan: ${e.message}`, { plan: e.message });

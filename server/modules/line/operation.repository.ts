@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { defaultSkills } from '../../../shared/schemas/people';
 import { OperationEntity, StudioEntity, UserEntity } from '../../entities';
 
 export type OperationRepository = ReturnType<typeof createOperationRepository>;
@@ -41,6 +42,15 @@ export function createStudioLookup(ds: DataSource) {
   const repo = ds.getRepository(StudioEntity);
   return async (studioId: number) => {
     const s = await repo.findOne({ where: { id: studioId } });
-    return s ? { currency: s.currency, workingDayHours: s.workingDayHours } : null;
+    return s ? { currency: s.currency, workingDayHours: s.workingDayHours, machines: s.machines ?? {} } : null;
+  };
+}
+
+/** Active people of a studio with the skills the line plan uses: their own, or their role's defaults. */
+export function createCrewLookup(ds: DataSource) {
+  const users = ds.getRepository(UserEntity);
+  return async (studioId: number) => {
+    const active = await users.find({ where: { studioId, active: true }, select: { id: true, name: true, role: true, skills: true }, order: { name: 'ASC', id: 'ASC' } });
+    return active.map((u) => ({ id: u.id, name: u.name, role: u.role, skills: u.skills ?? defaultSkills(u.role), skillsSet: u.skills != null }));
   };
 }

@@ -13,6 +13,7 @@ const present = (s: StudioEntity): StudioDto => ({
   currency: s.currency,
   unitSystem: s.unitSystem,
   workingDayHours: s.workingDayHours,
+  machines: s.machines ?? {},
 });
 
 export function createStudioRepository(ds: DataSource) {

@@ -1,4 +1,4 @@
-import type { PersonDto } from '../../../shared/schemas/people';
+import { defaultSkills, type PersonDto } from '../../../shared/schemas/people';
 import type { UserDto } from '../../../shared/schemas/auth';
 import type { StudioEntity, UserEntity } from '../../entities';
 
@@ -11,6 +11,8 @@ export const presentPerson = (u: UserEntity): PersonDto => ({
   hasPin: Boolean(u.pinHash),
   mustChangePassword: Boolean(u.mustChangePassword),
   payoutAccount: u.payoutAccount ?? '',
+  skills: u.skills ?? defaultSkills(u.role),
+  skillsSet: u.skills != null,
 });
 
 export const presentMe = (u: UserEntity, studio: StudioEntity): UserDto => ({

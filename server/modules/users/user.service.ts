@@ -46,8 +46,8 @@ export function createUserService(deps: { users: UserRepository; audit: AuditRep
       await users.update(actor.studioId, id, patch);
       const after = (await users.get(actor.studioId, id))!;
       await audit.record(actor, input.active === false ? 'deactivate' : 'update', 'user', id,
-        { role: before.role, active: before.active, payoutAccount: before.payoutAccount },
-        { role: after.role, active: after.active, payoutAccount: after.payoutAccount });
+        { role: before.role, active: before.active, payoutAccount: before.payoutAccount, skills: before.skills },
+        { role: after.role, active: after.active, payoutAccount: after.payoutAccount, skills: after.skills });
       return after;
     },
   };

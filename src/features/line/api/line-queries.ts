@@ -6,13 +6,20 @@ import { queryClient } from '@/lib/query-client';
 /** Plan settings the owner picks on the page. */
 export interface PlanParams {
   mode: 'due' | 'people';
-  people: number;
+  /** Machinists at the line in people mode; undefined: everyone active on the People page. */
+  people?: number;
   efficiency: number;
+  /** The owner's pins: this person stays on this operation. */
+  pins?: { personId: number; code: string }[];
+  /** People mode: most operations one person works on; undefined: no limit. */
+  maxOps?: number;
 }
 
 const planQuery = (p: PlanParams) => {
   const q = new URLSearchParams({ mode: p.mode, efficiency: String(p.efficiency) });
-  if (p.mode === 'people') q.set('people', String(p.people));
+  if (p.mode === 'people' && p.people) q.set('people', String(p.people));
+  if (p.mode === 'people' && p.maxOps) q.set('maxOps', String(p.maxOps));
+  if (p.pins?.length) q.set('pins', p.pins.map((x) => `${x.personId}:${x.code}`).join(','));
   return q.toString();
 };
 

@@ -6,20 +6,21 @@ import { Badge, Card, Caution, ErrorNote, Spinner } from '@/components/ui/page';
 import { formatDate } from '@/lib/format';
 import { actualOutputQueries, linePlanQueries, type PlanParams } from '../api/line-queries';
 import { CapacityChart, OutputChart, SectionTimeline } from './line-charts';
+import { StaffingCard, Stat } from './staffing-card';
 
 const RISK = { 'on-time': ['teal', 'On time'], 'at-risk': ['gold', 'At risk'], late: ['red', 'Late'], 'no-due-date': ['grey', 'No due date'] } as const;
 
 /** Balance, capacity, schedule and output of one batch's sewing line, with the working-hours caution. */
 export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' | 'dueDate' | 'total'> }) {
-  const [params, setParams] = useState<PlanParams>({ mode: 'due', people: 6, efficiency: 0.7 });
-  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '6', efficiency: '70' });
+  const [params, setParams] = useState<PlanParams>({ mode: 'due', efficiency: 0.7, pins: [] });
+  const [draft, setDraft] = useState({ mode: 'due' as PlanParams['mode'], people: '', efficiency: '70', maxOps: '' });
   const plan = useQuery(linePlanQueries.detail(batch.id, params));
   const actual = useQuery(actualOutputQueries.detail(batch.id));
   const p = plan.data;
-  const apply = () => setParams({ mode: draft.mode, people: Number(draft.people) || 6, efficiency: (Number(draft.efficiency) || 70) / 100 });
+  const apply = () => setParams({ ...params, mode: draft.mode, people: Number(draft.people) || undefined, efficiency: (Number(draft.efficiency) || 70) / 100, maxOps: Number(draft.maxOps) || undefined });
   return (
     <Card title={`Sewing line for ${batch.code}`}>
-      <form className="mb-4 grid gap-3 sm:grid-cols-4" onSubmit={(e) => { e.preventDefault(); apply(); }}>
+      <form className="mb-4 grid gap-3 sm:grid-cols-5" onSubmit={(e) => { e.preventDefault(); apply(); }}>
         <div>
           <label className="field-label" htmlFor="plan-mode">Balance for</label>
           <select id="plan-mode" className="field-input" value={draft.mode} onChange={(e) => setDraft({ ...draft, mode: e.target.value as PlanParams['mode'] })}>
@@ -29,7 +30,11 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         </div>
         <div>
           <label className="field-label" htmlFor="plan-people">Machinists present</label>
-          <input id="plan-people" className="field-input" inputMode="numeric" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
+          <input id="plan-people" className="field-input" inputMode="numeric" placeholder="everyone active" disabled={draft.mode !== 'people'} value={draft.people} onChange={(e) => setDraft({ ...draft, people: e.target.value })} />
+        </div>
+        <div>
+          <label className="field-label" htmlFor="plan-max-ops">Most operations a person</label>
+          <input id="plan-max-ops" className="field-input" inputMode="numeric" placeholder="no limit" disabled={draft.mode !== 'people'} value={draft.maxOps} onChange={(e) => setDraft({ ...draft, maxOps: e.target.value })} />
         </div>
         <div>
           <label className="field-label" htmlFor="plan-eff" title={EFFICIENCY_DEFINITION}>Expected efficiency (%)</label>
@@ -39,16 +44,19 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
       </form>
       {plan.isLoading ? <Spinner label="Balancing…" /> : null}
       <ErrorNote error={plan.error} />
+      {plan.error && params.pins?.length ? <button type="button" className="btn-quiet mt-2" onClick={() => setParams({ ...params, pins: [] })}>Clear the pins and plan again</button> : null}
       {p ? (
         <div className="space-y-5">
-          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
+          {p.balance ? <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="balance-summary">
             <Stat label="Stations" value={String(p.balance.stationCount)} note={p.balance.stationCount > p.balance.peopleAvailable ? `only ${p.balance.peopleAvailable} machinists` : `${p.balance.peopleAvailable} machinists`} />
             <Stat label="Line balance" value={`${p.balance.efficiencyPct.toFixed(1)} %`} note={p.balance.taktMin ? `${p.balance.utilisationPct.toFixed(1)} % of the takt` : `balance delay ${p.balance.balanceDelayPct.toFixed(1)} %`} />
             <Stat label="Bottleneck" value={`${p.stations[p.balance.bottleneck]?.label} · ${p.balance.cycleTimeMin} min`} note={p.balance.taktMin ? `takt ${p.balance.taktMin} min` : 'smallest cycle time'} />
             <Stat label="Output a day" value={`${p.balance.outputPerDay} garments`} note={`${p.balance.method === 'exact' ? 'exact balance' : p.balance.method === 'rpw' ? 'ranked positional weight (heuristic)' : 'best found before the limit'}`} />
-          </dl>
+          </dl> : null}
+          {p.mode === 'people' ? <StaffingCard plan={p} pins={params.pins ?? []} onPins={(pins) => setParams({ ...params, pins })} /> : null}
+          {p.balance ? <>
           <div>
-            <h3 className="mb-2 text-sm font-semibold text-thread-800">Capacity against load per station, a day</h3>
+            <h3 className="mb-2 text-sm font-semibold text-thread-800">{p.mode === 'people' ? 'For comparison, a straight line with one machine type per station: ' : ''}Capacity against load per station, a day</h3>
             <CapacityChart plan={p} />
             <p className="text-xs text-ink-600"><span className="font-semibold text-madder-600">Madder bar</span>: the bottleneck station. Dashed line: one operator's capacity ({p.minutesPerDay} min × {Math.round(p.efficiency * 100)} %).</p>
           </div>
@@ -64,6 +72,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
               ))}</tbody>
             </table>
           </div>
+          </> : null}
           <div>
             <h3 className="mb-2 flex flex-wrap items-center gap-2 text-sm font-semibold text-thread-800">
               Schedule: cutting → sewing → finishing <Badge tone={RISK[p.schedule.risk][0]}>{RISK[p.schedule.risk][1]}</Badge>
@@ -87,15 +96,5 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
         </div>
       ) : null}
     </Card>
-  );
-}
-
-function Stat({ label, value, note }: { label: string; value: string; note?: string }) {
-  return (
-    <div className="rounded-lg border border-calico-200 bg-calico-50 px-3 py-2">
-      <dt className="text-xs text-ink-600">{label}</dt>
-      <dd className="text-lg font-bold text-thread-800">{value}</dd>
-      {note ? <dd className="text-xs text-ink-600">{note}</dd> : null}
-    </div>
   );
 }

@@ -1,6 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
+import { useSearchParams } from 'react-router';
 import { ROLE_LABELS, ROLES, type Role } from '@shared/auth/permissions';
 import { createPersonInput, payoutAccountField, type PersonDto } from '@shared/schemas/people';
 import { DataTable } from '@/components/ui/data-table';
@@ -10,6 +11,7 @@ import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
 import { FloorTabletCard } from './floor-tablet-card';
+import { SKILLS_PARAM, SkillsCell, SkillsEditor } from './skills-editor';
 
 const c = createColumnHelper<PersonDto>();
 
@@ -79,6 +81,7 @@ const columns = [
   c.accessor('role', { header: 'Role', cell: (i) => <RoleCell person={i.row.original} /> }),
   c.accessor('active', { header: 'Status', cell: (i) => (i.getValue() ? <Badge tone="teal">active</Badge> : <Badge tone="red">inactive</Badge>) }),
   c.accessor('hasPin', { header: 'PIN', cell: (i) => (i.getValue() ? 'yes' : '—') }),
+  c.accessor('skills', { header: 'Skills (pace)', enableSorting: false, cell: (i) => <SkillsCell person={i.row.original} /> }),
   c.accessor('payoutAccount', { header: 'Payments account', enableSorting: false, cell: (i) => <PayoutAccountCell person={i.row.original} /> }),
   c.display({ id: 'actions', header: '', cell: (i) => <ActiveCell person={i.row.original} /> }),
 ];
@@ -121,12 +124,15 @@ function AddPersonForm() {
 
 export function PeoplePage() {
   const { data } = useSuspenseQuery(peopleQueries.list());
+  const [params] = useSearchParams();
+  const editing = data.find((p) => p.id === Number(params.get(SKILLS_PARAM)));
   return (
     <>
       <PageHeader title="People" subtitle="Your cutter, machinists and finishers, and what each may do." />
       <Card title="Add a person" className="mb-5"><AddPersonForm /></Card>
       <FloorTabletCard />
       <DataTable data={data} columns={columns} filterPlaceholder="Filter people…" />
+      {editing ? <SkillsEditor key={editing.id} person={editing} /> : null}
     </>
   );
 }

@@ -6,6 +6,7 @@ import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { api, ApiError } from '@/lib/api-client';
 import { meQueries } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
+import { MachinesCard } from './machines-card';
 
 export const studioQueries = {
   detail: () => queryOptions({ queryKey: ['studio'], queryFn: async () => (await api.get<{ studio: StudioDto }>('/studio')).studio }),
@@ -53,6 +54,7 @@ export function SettingsPage() {
           <button className="btn-primary" type="submit" disabled={save.isPending}>Save settings</button>
         </form>
       </Card>
+      <MachinesCard studio={studio} invalidateKey={studioQueries.detail().queryKey} />
     </>
   );
 }
