@@ -4,6 +4,7 @@ import { loadLineSolver, staffLine } from './staff-line';
 import { PIN_MIN_SHARE, staffPairs } from './staffing-model';
 import { lpStart } from './lp-start';
 import type { LineSolver, StaffLineInput, StaffedLine } from './line-staffing.types';
+import { createRng } from '../nesting/random';
 
 let solver: LineSolver;
 let glpk: Awaited<ReturnType<typeof GLPK>>;
@@ -82,20 +83,9 @@ function glpkCycle(input: StaffLineInput): number | null {
   return r.result.status === GLP_OPT ? r.result.z : null;
 }
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** A small random line: 2–4 people, 3–6 operations, three machine types, some skills missing. */
 function smallLine(seed: number, withPins = false): StaffLineInput {
-  const rng = mulberry32(seed);
+  const rng = createRng(seed);
   const types = ['lockstitch', 'overlock', 'buttonhole'];
   for (;;) {
     const people = Array.from({ length: 2 + Math.floor(rng() * 3) }, (_, i) => ({

@@ -1,23 +1,13 @@
 import type { StaffLineInput } from '../../../planning';
+import { createRng } from '../../../planning/nesting/random';
 
 const TYPES = ['lockstitch', 'overlock', 'coverstitch', 'buttonhole', 'bartack'];
 const TYPE_WEIGHTS = [0.5, 0.25, 0.1, 0.08, 0.07];
 
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** A seeded random line of `people` people and `operations` operations. */
 /** A seeded random line (see line.bench.ts for the recipe). */
 export function randomLine(seed: number, people = 20, operations = 60): StaffLineInput {
-  const rng = mulberry32(seed);
+  const rng = createRng(seed);
   const pickType = () => {
     let u = rng();
     for (let i = 0; i < TYPES.length; i++) if ((u -= TYPE_WEIGHTS[i]) <= 0) return TYPES[i];
