@@ -1,3 +1,4 @@
+import DxfParser from 'dxf-parser';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
@@ -59,6 +60,12 @@ describe('markers', () => {
     expect(svg.headers['content-type']).toMatch(/image\/svg\+xml/);
     expect((svg.body as string).match(/class="piece"/g)?.length).toBe(full.pieceCount);
     expect(svg.body).toContain('XS Front');
+    // The plotter file: one closed cutting line per placed copy, read back by an independent DXF reader.
+    const dxf = await cutter.get(`/api/markers/${done.id}/dxf`).buffer(true).parse((r, cb) => { let s = ''; r.on('data', (c: Buffer) => (s += c)); r.on('end', () => cb(null, s)); });
+    expect(dxf.status).toBe(200);
+    expect(dxf.headers['content-disposition']).toMatch(/marker-B-0001-.*\.dxf/);
+    const parsed = new DxfParser().parseSync(dxf.body as string) as unknown as { entities: { layer: string; shape?: boolean }[] };
+    expect(parsed.entities.filter((e) => e.layer === 'CUT' && e.shape).length).toBe(full.pieceCount);
   }, 180_000);
 
   it('never recomputes an unchanged marker: the same inputs return the stored one', async () => {

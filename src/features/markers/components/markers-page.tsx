@@ -43,7 +43,10 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
       {marker.drawing && marker.lengthMm ? (
         <div className="mt-3 space-y-2">
           <MarkerDrawing drawing={marker.drawing} lengthMm={marker.lengthMm} widthMm={marker.widthMm} sizes={sizes} />
-          <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `marker-${marker.id}.svg`)}>Download SVG</button>
+          <div className="flex flex-wrap gap-2">
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `marker-${marker.id}.svg`)}>Download SVG</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `marker-${marker.id}.dxf`)}>Plotter file (DXF, 1:1)</button>
+          </div>
         </div>
       ) : null}
     </Card>
