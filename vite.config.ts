@@ -18,7 +18,7 @@ export const alias = {
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias },
-  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
   server: {
     port: 5173,
     proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },

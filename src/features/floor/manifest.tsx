@@ -1,28 +1,19 @@
-import type { ReactNode } from 'react';
-import { Navigate } from 'react-router';
-import type { Permission } from '@shared/auth/permissions';
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconChart, IconCoins } from '@/components/ui/icons';
-import { useCan } from '@/lib/auth';
-import { BatchProgressPanel } from './components/batch-progress-panel';
-import { FloorHome } from './components/floor-home';
-import { FloorProgressPage } from './components/floor-progress-page';
-import { PayPage } from './components/pay-page';
+import { lazyComponent, lazyPage } from '@/lib/routing';
 
-function Allowed({ permission, children }: { permission: Permission; children: ReactNode }) {
-  return useCan(permission) ? <>{children}</> : <Navigate to="/" replace />;
-}
+const FloorHome = lazyComponent(async () => (await import('./components/floor-home')).FloorHome);
 
-/** The floor area's routes, menu entries and panels. */
+/** The floor area's routes, menu entries and panels; each page's code loads when first used. */
 export const floorManifest: FeatureManifest = {
   routes: [
-    { path: '/floor', element: <Allowed permission="progress:read"><FloorProgressPage /></Allowed> },
-    { path: '/pay', element: <Allowed permission="pay:manage"><PayPage /></Allowed> },
+    lazyPage('/floor', 'progress:read', async () => (await import('./components/floor-progress-page')).FloorProgressPage),
+    lazyPage('/pay', 'pay:manage', async () => (await import('./components/pay-page')).PayPage),
   ],
   nav: [
     { to: '/floor', label: 'Floor', icon: IconChart, permission: 'progress:read' },
     { to: '/pay', label: 'Pay', icon: IconCoins, permission: 'pay:manage' },
   ],
   homes: { machinist: FloorHome, finisher: FloorHome },
-  batchPanels: [{ key: 'floor-progress', Panel: BatchProgressPanel }],
+  batchPanels: [{ key: 'floor-progress', Panel: lazyComponent(async () => (await import('./components/batch-progress-panel')).BatchProgressPanel) }],
 };
