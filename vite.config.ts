@@ -18,7 +18,13 @@ export const alias = {
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias },
-  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+    manifest: true,
+    // Fonts stay files: the content-security policy allows fonts from 'self' only, not data: URIs.
+    assetsInlineLimit: (file) => (/\.(woff2?|ttf|otf)$/.test(file) ? false : undefined),
+  },
   server: {
     port: 5173,
     proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },
