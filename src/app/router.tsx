@@ -1,11 +1,9 @@
 import { Suspense } from 'react';
-import { createBrowserRouter, Navigate, Outlet, redirect, useRouteError } from 'react-router';
+import { createBrowserRouter, Navigate, Outlet, useRouteError } from 'react-router';
 import { Spinner } from '@/components/ui/page';
 import { AppShell } from '@/components/layouts/app-shell';
 import { paths } from '@/config/paths';
-import { meQueries } from '@/lib/auth';
-import { queryClient } from '@/lib/query-client';
-import { lazyPage } from '@/lib/routing';
+import { lazyPage, requireSignedIn } from '@/lib/routing';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
 import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES } from './extra-routes';
 
@@ -18,12 +16,6 @@ function SectionError() {
     </div>
   );
 }
-
-const requireSignedIn = async () => {
-  const me = await queryClient.ensureQueryData(meQueries.me());
-  if (!me) throw redirect(paths.signIn.getHref());
-  return null;
-};
 
 export const router = createBrowserRouter([
   { path: paths.signIn.path, element: <SignInPage /> },

@@ -2,8 +2,34 @@ import { lazy, type ComponentType } from 'react';
 import { redirect, type LoaderFunction, type RouteObject } from 'react-router';
 import { can, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
+import type { UserDto } from '@shared/schemas/auth';
+import { ApiError } from './api-client';
 import { meQueries } from './auth';
+import { keepUser, keptUser } from './offline-session';
 import { queryClient } from './query-client';
+
+/**
+ * Who is signed in, asked of the server once and cached. With no network the person last signed in on
+ * this device is used, so the floor screen and its outbox open offline; nobody after a sign-out.
+ */
+export async function signedInUser(): Promise<UserDto | null> {
+  try {
+    const me = await queryClient.ensureQueryData(meQueries.me());
+    keepUser(me);
+    return me;
+  } catch (e) {
+    if (!(e instanceof ApiError && e.status === 0)) throw e;
+    const kept = keptUser();
+    if (kept) queryClient.setQueryData(meQueries.me().queryKey, kept);
+    return kept;
+  }
+}
+
+/** The signed-in area's loader: signed out (or offline with nobody kept) goes to sign-in. */
+export async function requireSignedIn() {
+  if (!(await signedInUser())) throw redirect(paths.signIn.getHref());
+  return null;
+}
 
 /**
  * The one permission check for pages, run as the route's loader: signed out goes to sign-in, a role
@@ -12,7 +38,7 @@ import { queryClient } from './query-client';
 export const requirePermission =
   (permission?: Permission): LoaderFunction =>
   async () => {
-    const me = await queryClient.ensureQueryData(meQueries.me());
+    const me = await signedInUser();
     if (!me) throw redirect(paths.signIn.getHref());
     if (permission && !can(me.role, permission)) throw redirect(paths.home.getHref());
     return null;
