@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { baseUrl, launchBrowser, signInAs } from './browser';
@@ -38,6 +39,22 @@ function watchConsole(page: Page) {
   return said;
 }
 
+const AXE = readFileSync('node_modules/axe-core/axe.min.js', 'utf8');
+
+interface AxeViolation { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }
+
+/** axe-core's serious and critical findings on the page as it stands (evaluated over DevTools, so the CSP allows it). */
+async function seriousAccessibilityFindings(page: Page) {
+  await page.evaluate(AXE);
+  const violations = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (c: Document, o: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
+    return (await axe.run(document, { resultTypes: ['violations'] })).violations;
+  });
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.impact} ${v.id} (${v.help}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(', ')}`);
+}
+
 /** Open a page and wait until its heading is shown and the network is quiet. */
 export async function openPage(page: Page, path: string) {
   await page.goto(`${baseUrl()}${path}`);
@@ -47,20 +64,28 @@ export async function openPage(page: Page, path: string) {
 
 describe('every main page of every role', () => {
   for (const [role, { email, paths }] of Object.entries(PAGES)) {
-    it(`leaves the console clean on each of the ${role}'s pages when visited`, async () => {
-      const ctx: BrowserContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-      const page = await ctx.newPage();
-      const said = watchConsole(page);
-      await signInAs(page, email);
-      const found: string[] = said.map((s) => `/signin → ${s}`);
-      for (const path of paths) {
-        said.length = 0;
-        await openPage(page, path);
-        expect(page.url(), `${role} stays on ${path}`).toBe(`${baseUrl()}${LANDS_ON[path] ?? path}`);
-        found.push(...said.map((s) => `${path} → ${s}`));
+    it(`leaves the console clean and has no serious accessibility findings on each of the ${role}'s pages at phone and desktop size`, async () => {
+      const consoleSaid: string[] = [];
+      const accessibility: string[] = [];
+      for (const viewport of [{ width: 390, height: 844 }, { width: 1280, height: 900 }]) {
+        const ctx: BrowserContext = await browser.newContext({ viewport });
+        const page = await ctx.newPage();
+        const said = watchConsole(page);
+        const at = `${viewport.width}px`;
+        await signInAs(page, email);
+        consoleSaid.push(...said.map((s) => `${at} /signin → ${s}`));
+        accessibility.push(...(await seriousAccessibilityFindings(page)).map((f) => `${at} / → ${f}`));
+        for (const path of paths) {
+          said.length = 0;
+          await openPage(page, path);
+          expect(page.url(), `${role} stays on ${path}`).toBe(`${baseUrl()}${LANDS_ON[path] ?? path}`);
+          consoleSaid.push(...said.map((s) => `${at} ${path} → ${s}`));
+          accessibility.push(...(await seriousAccessibilityFindings(page)).map((f) => `${at} ${path} → ${f}`));
+        }
+        await ctx.close();
       }
-      await ctx.close();
-      expect(found).toEqual([]);
+      expect(consoleSaid).toEqual([]);
+      expect([...new Set(accessibility)]).toEqual([]);
     });
   }
 });

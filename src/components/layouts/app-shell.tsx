@@ -73,11 +73,12 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
     <div className="min-h-screen md:flex">
       <header className="flex items-center justify-between bg-thread-700 px-4 py-3 md:hidden">
         <span className="rounded-lg bg-calico-50 px-2 py-1"><Logo size={24} /></span>
-        <button type="button" aria-label="Menu" className="text-calico-50" onClick={() => setOpen((o) => !o)}>
+        <button type="button" aria-label="Menu" aria-expanded={open} aria-controls="main-menu" className="text-calico-50" onClick={() => setOpen((o) => !o)}>
           <IconMenu />
         </button>
       </header>
       <aside
+        id="main-menu"
         className={`${open ? 'block' : 'hidden'} bg-thread-700 px-3 py-4 md:flex md:w-60 md:flex-col md:justify-between md:min-h-screen`}
       >
         <div>

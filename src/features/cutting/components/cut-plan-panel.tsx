@@ -61,7 +61,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
           {plan.lengthSources.some((s) => s.source === 'estimate') ? (
             <p className="text-xs text-ink-600">Lays without a stored marker use an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). Build the marker to replace it.</p>
           ) : null}
-          <div className="overflow-x-auto">
+          <div tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Lay</th><th>Sizes per ply</th><th>Plies</th><th>Marker</th><th>Spreading</th><th>Rolls (plies, expected remnant)</th><th>Status</th></tr></thead>
               <tbody>

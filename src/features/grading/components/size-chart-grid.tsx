@@ -52,7 +52,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
           <ul className="mt-1 list-disc pl-5">{Object.entries(importError.fields).map(([k, m]) => <li key={k}>{k}: {m}</li>)}</ul>
         </div>
       ) : null}
-      <div className="overflow-x-auto">
+      <div tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
           <thead>
             <tr className="border-b border-calico-200 text-left">
