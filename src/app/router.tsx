@@ -58,7 +58,7 @@ export const router = createBrowserRouter([
           lazyPage(paths.settings.path, 'studio:manage', async () => (await import('@/features/studio/components/settings-page')).SettingsPage),
           lazyPage(paths.audit.path, 'audit:read', async () => (await import('@/features/audit/components/audit-page')).AuditPage),
           ...EXTRA_ROUTES,
-          { path: '*', element: <Navigate to="/" replace /> },
+          { path: '*', element: <Navigate to={paths.home.getHref()} replace /> },
         ],
       },
     ],

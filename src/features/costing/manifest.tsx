@@ -1,13 +1,14 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconCoins } from '@/components/ui/icons';
 import { lazyComponent, lazyPage } from '@/lib/routing';
+import { paths } from '@/config/paths';
 
 /** The costing area's routes, menu entries and panels; each page's code loads when first used. */
 export const costingManifest: FeatureManifest = {
   routes: [
-    lazyPage('/costing', 'costs:read', async () => (await import('./components/costing-index-page')).CostingIndexPage),
-    lazyPage('/batches/:id/costing', 'costs:read', async () => (await import('./components/costing-page')).CostingPage),
+    lazyPage(paths.costing.path, 'costs:read', async () => (await import('./components/costing-index-page')).CostingIndexPage),
+    lazyPage(paths.batchCosting.path, 'costs:read', async () => (await import('./components/costing-page')).CostingPage),
   ],
-  nav: [{ to: '/costing', label: 'Costing', icon: IconCoins, permission: 'costs:read' }],
+  nav: [{ to: paths.costing.getHref(), label: 'Costing', icon: IconCoins, permission: 'costs:read' }],
   batchPanels: [{ key: 'costing', Panel: lazyComponent(async () => (await import('./components/costing-panel')).CostingPanel) }],
 };

@@ -1,13 +1,13 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconDress } from '@/components/ui/icons';
 import { lazyPage } from '@/lib/routing';
-import { gradingPaths } from './paths';
+import { paths } from '@/config/paths';
 
 /** The grading area's routes, menu entries and panels; each page's code loads when first used. */
 export const gradingManifest: FeatureManifest = {
   routes: [
-    lazyPage(gradingPaths.index.path, 'grading:write', async () => (await import('./components/grading-index-route')).GradingIndexRoute),
-    lazyPage(gradingPaths.style.path, 'grading:read', async () => (await import('./components/grading-page')).GradingPage),
+    lazyPage(paths.grading.path, 'grading:write', async () => (await import('./components/grading-index-route')).GradingIndexRoute),
+    lazyPage(paths.styleGrading.path, 'grading:read', async () => (await import('./components/grading-page')).GradingPage),
   ],
-  nav: [{ to: gradingPaths.index.getHref(), label: 'Pattern & grading', icon: IconDress, permission: 'grading:write' }],
+  nav: [{ to: paths.grading.getHref(), label: 'Pattern & grading', icon: IconDress, permission: 'grading:write' }],
 };

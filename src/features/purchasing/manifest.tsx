@@ -1,16 +1,17 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconBatch, IconMail } from '@/components/ui/icons';
 import { lazyComponent, lazyPage } from '@/lib/routing';
+import { paths } from '@/config/paths';
 
 /** The purchasing area's routes, menu entries and panels; each page's code loads when first used. */
 export const purchasingManifest: FeatureManifest = {
   routes: [
-    lazyPage('/purchasing', 'suppliers:manage', async () => (await import('./components/purchasing-page')).PurchasingPage),
-    lazyPage('/outbox', 'suppliers:manage', async () => (await import('./components/outbox-page')).OutboxPage),
+    lazyPage(paths.purchasing.path, 'suppliers:manage', async () => (await import('./components/purchasing-page')).PurchasingPage),
+    lazyPage(paths.outbox.path, 'suppliers:manage', async () => (await import('./components/outbox-page')).OutboxPage),
   ],
   nav: [
-    { to: '/purchasing', label: 'Suppliers', icon: IconBatch, permission: 'suppliers:manage' },
-    { to: '/outbox', label: 'Outbox', icon: IconMail, permission: 'suppliers:manage' },
+    { to: paths.purchasing.getHref(), label: 'Suppliers', icon: IconBatch, permission: 'suppliers:manage' },
+    { to: paths.outbox.getHref(), label: 'Outbox', icon: IconMail, permission: 'suppliers:manage' },
   ],
   batchPanels: [{ key: 'needs', Panel: lazyComponent(async () => (await import('./components/needs-panel')).NeedsPanel) }],
 };

@@ -11,6 +11,7 @@ import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
 import { formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
+import { paths } from '@/config/paths';
 
 const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;
 
@@ -69,7 +70,7 @@ export function CostingPage() {
         subtitle={<>{sheet.style.code} {sheet.style.name} · {sheet.batch.total} garments · prices in {sheet.currency}</>}
         actions={
           <>
-            <Link className="btn-quiet" to={`/batches/${id}`}>Back to batch</Link>
+            <Link className="btn-quiet" to={paths.batch.getHref(id)}>Back to batch</Link>
             <button type="button" className="btn-primary" onClick={handleDownload}>Download XLSX</button>
           </>
         }

@@ -6,6 +6,7 @@ import { Badge, Card, ErrorNote } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
 import { cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
+import { paths } from '@/config/paths';
 
 /** The batch page's cut plan: plan settings, lays with rolls, fabric used against the lower bound. */
 export function CutPlanPanel({ batch }: { batch: BatchDto }) {
@@ -71,7 +72,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
                     <td>{metres(l.markerLengthMm)} {l.markerId ? <Badge tone="teal">marker</Badge> : <Badge>estimate</Badge>}</td>
                     <td>{SPREADING_LABELS[l.spreadingMode] ?? l.spreadingMode}</td>
                     <td>{l.rolls.map((r) => <div key={r.rollId}>{r.label} ({r.shadeLot}): {r.plies} plies, {metres(r.expectedRemnantMm)}</div>)}</td>
-                    <td><Badge tone={l.status === 'cut' ? 'teal' : 'grey'}>{l.status}</Badge> <Link className="underline" to={`/lays/${l.id}`}>open</Link></td>
+                    <td><Badge tone={l.status === 'cut' ? 'teal' : 'grey'}>{l.status}</Badge> <Link className="underline" to={paths.lay.getHref(l.id)}>open</Link></td>
                   </tr>
                 ))}
               </tbody>

@@ -3,8 +3,8 @@ import { Navigate } from 'react-router';
 import type { StyleDto } from '@shared/schemas/styles';
 import { Spinner } from '@/components/ui/page';
 import { api } from '@/lib/api-client';
-import { gradingPaths } from '../paths';
 import { GradingIndexPage } from './grading-page';
+import { paths } from '@/config/paths';
 
 const styleListQuery = { queryKey: ['styles', 'list'] as const, queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles };
 
@@ -12,6 +12,6 @@ const styleListQuery = { queryKey: ['styles', 'list'] as const, queryFn: async (
 export function GradingIndexRoute() {
   const { data } = useQuery(styleListQuery);
   if (!data) return <Spinner />;
-  if (data.length === 1) return <Navigate to={gradingPaths.style.getHref(data[0].id)} replace />;
+  if (data.length === 1) return <Navigate to={paths.styleGrading.getHref(data[0].id)} replace />;
   return <GradingIndexPage styles={data} />;
 }
