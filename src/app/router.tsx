@@ -3,8 +3,12 @@ import { createBrowserRouter, Navigate, Outlet, useRouteError } from 'react-rout
 import { Spinner } from '@/components/ui/page';
 import { AppShell } from '@/components/layouts/app-shell';
 import { paths } from '@/config/paths';
+import { queryClient } from '@/lib/query-client';
 import { lazyPage, requireSignedIn } from '@/lib/routing';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
+import { batchQueries } from '@/features/batches/api/batch-queries';
+import { peopleQueries } from '@/features/people/api/people-queries';
+import { styleQueries } from '@/features/styles/api/style-queries';
 import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES } from './extra-routes';
 
 function SectionError() {
@@ -45,16 +49,16 @@ export const router = createBrowserRouter([
             },
           },
           lazyPage(paths.account.path, undefined, async () => (await import('@/features/auth/components/account-page')).AccountPage),
-          lazyPage(paths.styles.path, 'styles:write', async () => (await import('@/features/styles/components/styles-page')).StylesPage),
+          lazyPage(paths.styles.path, 'styles:write', async () => (await import('@/features/styles/components/styles-page')).StylesPage, () => queryClient.prefetchQuery(styleQueries.list())),
           lazyPage(paths.newStyle.path, 'styles:write', async () => (await import('@/features/styles/components/style-edit-page')).NewStylePage),
-          lazyPage(paths.style.path, 'styles:write', async () => (await import('@/features/styles/components/style-edit-page')).StyleDetailPage),
-          lazyPage(paths.batches.path, 'batches:write', async () => (await import('@/features/batches/components/batches-page')).BatchesPage),
+          lazyPage(paths.style.path, 'styles:write', async () => (await import('@/features/styles/components/style-edit-page')).StyleDetailPage, ({ params }) => queryClient.prefetchQuery(styleQueries.detail(Number(params.id)))),
+          lazyPage(paths.batches.path, 'batches:write', async () => (await import('@/features/batches/components/batches-page')).BatchesPage, () => queryClient.prefetchQuery(batchQueries.list())),
           lazyPage(paths.newBatch.path, 'batches:write', async () => (await import('@/features/batches/components/new-batch-page')).NewBatchPage),
           lazyPage(paths.batch.path, 'batches:write', async () => {
             const { BatchDetailPage } = await import('@/features/batches/components/batch-detail-page');
             return () => <BatchDetailPage panels={BATCH_PANELS} />;
-          }),
-          lazyPage(paths.people.path, 'people:manage', async () => (await import('@/features/people/components/people-page')).PeoplePage),
+          }, ({ params }) => queryClient.prefetchQuery(batchQueries.detail(Number(params.id)))),
+          lazyPage(paths.people.path, 'people:manage', async () => (await import('@/features/people/components/people-page')).PeoplePage, () => queryClient.prefetchQuery(peopleQueries.list())),
           lazyPage(paths.settings.path, 'studio:manage', async () => (await import('@/features/studio/components/settings-page')).SettingsPage),
           lazyPage(paths.audit.path, 'audit:read', async () => (await import('@/features/audit/components/audit-page')).AuditPage),
           ...EXTRA_ROUTES,

@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { UserDto } from '@shared/schemas/auth';
 import { markSignedOutOffline } from './offline-session';
 import { queryClient } from './query-client';
-import { requirePermission, requireSignedIn } from './routing';
+import { lazyPage, requirePermission, requireSignedIn } from './routing';
 
 const user = (role: UserDto['role']): UserDto => ({
   id: 7, email: `${role}@example.test`, name: 'Test Person', role,
@@ -10,7 +10,7 @@ const user = (role: UserDto['role']): UserDto => ({
 });
 
 /** The server as the client sees it: who /api/auth/me says is signed in, or no network at all. */
-let server: { me: UserDto | null; online: boolean; logouts: number };
+let server: { me: UserDto | null; online: boolean; logouts: number; asked: string[] };
 
 function memoryStorage(): Storage {
   const m = new Map<string, string>();
@@ -25,10 +25,12 @@ function memoryStorage(): Storage {
 }
 
 beforeEach(() => {
-  server = { me: null, online: true, logouts: 0 };
+  server = { me: null, online: true, logouts: 0, asked: [] };
   vi.stubGlobal('localStorage', memoryStorage());
   vi.stubGlobal('fetch', async (url: string) => {
     if (!server.online) throw new TypeError('Failed to fetch');
+    server.asked.push(url);
+    if (url === '/api/widgets') return Response.json({ widgets: [1, 2] });
     if (url === '/api/auth/logout') {
       server.logouts += 1;
       server.me = null;
@@ -71,6 +73,24 @@ describe('the page permission check', () => {
   it('sends a signed-out visitor to sign-in when any page is opened', async () => {
     expect(await outcome(() => requirePermission('styles:write')(args))).toBe('redirect /signin');
     expect(await outcome(() => requireSignedIn())).toBe('redirect /signin');
+  });
+});
+
+describe('a lazily loaded page', () => {
+  const widgets = { queryKey: ['widgets'], queryFn: async () => ((await (await fetch('/api/widgets')).json()) as { widgets: number[] }).widgets };
+  const page = lazyPage('/widgets', 'styles:write', async () => () => null, () => queryClient.prefetchQuery(widgets));
+  const run = () => outcome(() => (page.loader as (a: typeof args) => unknown)(args));
+
+  it('asks for its data in its loader when the role may open it', async () => {
+    server.me = user('owner');
+    expect(await run()).toBeNull();
+    expect(queryClient.getQueryData(['widgets'])).toEqual([1, 2]);
+  });
+
+  it('asks the server for nothing of the page when the role may not open it', async () => {
+    server.me = user('machinist');
+    expect(await run()).toBe('redirect /');
+    expect(server.asked).not.toContain('/api/widgets');
   });
 });
 

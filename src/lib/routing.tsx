@@ -1,5 +1,5 @@
 import { lazy, type ComponentType } from 'react';
-import { redirect, type LoaderFunction, type RouteObject } from 'react-router';
+import { redirect, type LoaderFunction, type LoaderFunctionArgs, type RouteObject } from 'react-router';
 import { can, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
 import type { UserDto } from '@shared/schemas/auth';
@@ -46,9 +46,25 @@ export const requirePermission =
 
 type Load<P> = () => Promise<ComponentType<P>>;
 
-/** A page whose code is fetched the first time it is visited, behind a permission. */
-export function lazyPage(path: string, permission: Permission | undefined, load: Load<object>): RouteObject {
-  return { path, loader: requirePermission(permission), lazy: { Component: load } };
+/** Asks the one Query cache for server data a page reads (`queryClient.prefetchQuery`, which never throws). */
+type Prefetch = (args: LoaderFunctionArgs) => Promise<void>;
+
+/**
+ * A page whose code is fetched the first time it is visited, behind a permission. `prefetch` names the
+ * queries its component reads, so the data is asked for alongside the code rather than after it; a
+ * failed fetch is left for the component to show, as before.
+ */
+export function lazyPage(path: string, permission: Permission | undefined, load: Load<object>, ...prefetch: Prefetch[]): RouteObject {
+  const allowed = requirePermission(permission);
+  return {
+    path,
+    loader: async (args) => {
+      await allowed(args);
+      await Promise.all(prefetch.map((p) => p(args)));
+      return null;
+    },
+    lazy: { Component: load },
+  };
 }
 
 /** A component (a role's home, a batch panel) whose code is fetched the first time it is shown. */
