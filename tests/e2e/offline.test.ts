@@ -48,6 +48,12 @@ describe('the floor screen with no network', () => {
     // Sign out with no network: the sign-in screen, and nobody is let back in on a reload.
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.getByRole('button', { name: 'Sign out' }).click();
+    // Where the app warns first about logs still waiting on the phone, sign out and keep them.
+    const keep = page.getByRole('button', { name: /^Sign out and keep/ });
+    await Promise.race([
+      page.waitForURL(`${baseUrl()}/signin`).catch(() => {}),
+      keep.waitFor({ timeout: 10_000 }).then(() => keep.click()).catch(() => {}),
+    ]);
     await page.waitForURL(`${baseUrl()}/signin`);
     await page.goto(`${baseUrl()}/`);
     await page.waitForURL(`${baseUrl()}/signin`);

@@ -2,9 +2,8 @@ import { useState, type ComponentType, type SVGProps } from 'react';
 import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router';
 import { can, ROLE_LABELS, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
-import { ApiError } from '@/lib/api-client';
 import { useLogout, useMe } from '@/lib/auth';
-import { keepUser, markSignedOutOffline } from '@/lib/offline-session';
+import { signOutEvenOffline } from '@/lib/sign-out';
 import { IconBatch, IconChart, IconDress, IconHome, IconMenu, IconOut, IconPeople, IconSettings } from '../ui/icons';
 import { Logo } from '../ui/logo';
 
@@ -53,15 +52,8 @@ export function AppShell({ extraNav = [] }: { extraNav?: NavItem[] }) {
     </nav>
   );
 
-  // With no network the device forgets the person now and ends the server session when it can.
   const handleSignOut = async () => {
-    try {
-      await logout.mutateAsync();
-      keepUser(null);
-    } catch (e) {
-      if (!(e instanceof ApiError && e.status === 0)) throw e;
-      markSignedOutOffline();
-    }
+    await signOutEvenOffline(() => logout.mutateAsync());
     navigate(paths.signIn.getHref());
   };
 
