@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 const dir = (p: string) => fileURLToPath(new URL(p, import.meta.url));
@@ -16,9 +17,41 @@ export const alias = {
 };
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [
+    react(),
+    tailwindcss(),
+    // An installable app whose shell (HTML, scripts, styles, Latin fonts) is kept on the device, so the
+    // floor screen opens with no network. The API is never cached: logs wait in the floor outbox instead.
+    VitePWA({
+      registerType: 'autoUpdate',
+      injectRegister: 'script-defer',
+      manifest: {
+        name: 'Seamrun',
+        short_name: 'Seamrun',
+        description: 'Log bundles from the sewing floor, with or without network.',
+        start_url: '/',
+        scope: '/',
+        display: 'standalone',
+        theme_color: '#0F4C5C',
+        background_color: '#F4EFE6',
+        icons: [{ src: '/favicon.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' }],
+      },
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,svg,webmanifest}', 'assets/roboto-latin-*.woff2'],
+        navigateFallback: 'index.html',
+        navigateFallbackDenylist: [/^\/api\//],
+        cleanupOutdatedCaches: true,
+      },
+    }),
+  ],
   resolve: { alias },
-  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+    manifest: true,
+    // Fonts stay files: the content-security policy allows fonts from 'self' only, not data: URIs.
+    assetsInlineLimit: (file) => (/\.(woff2?|ttf|otf)$/.test(file) ? false : undefined),
+  },
   server: {
     port: 5173,
     proxy: { '/api': { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },

@@ -1,23 +1,14 @@
-import { Suspense, type ReactNode } from 'react';
-import { createBrowserRouter, Navigate, Outlet, redirect, useRouteError } from 'react-router';
-import { can, type Permission } from '@shared/auth/permissions';
-import { AppShell } from '@/components/layouts/app-shell';
+import { Suspense } from 'react';
+import { createBrowserRouter, Navigate, Outlet, useRouteError } from 'react-router';
 import { Spinner } from '@/components/ui/page';
+import { AppShell } from '@/components/layouts/app-shell';
 import { paths } from '@/config/paths';
-import { meQueries, useMe } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
-import { AuditPage } from '@/features/audit/components/audit-page';
-import { AccountPage } from '@/features/auth/components/account-page';
-import { NewStudioPage } from '@/features/auth/components/new-studio-page';
+import { lazyPage, requireSignedIn } from '@/lib/routing';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
-import { BatchDetailPage } from '@/features/batches/components/batch-detail-page';
-import { BatchesPage } from '@/features/batches/components/batches-page';
-import { NewBatchPage } from '@/features/batches/components/new-batch-page';
-import { HomePage } from '@/features/home/components/home-page';
-import { PeoplePage } from '@/features/people/components/people-page';
-import { SettingsPage } from '@/features/studio/components/settings-page';
-import { NewStylePage, StyleDetailPage } from '@/features/styles/components/style-edit-page';
-import { StylesPage } from '@/features/styles/components/styles-page';
+import { batchQueries } from '@/features/batches/api/batch-queries';
+import { peopleQueries } from '@/features/people/api/people-queries';
+import { styleQueries } from '@/features/styles/api/style-queries';
 import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES, SIGN_OUT_CHECKS } from './extra-routes';
 
 function SectionError() {
@@ -30,25 +21,17 @@ function SectionError() {
   );
 }
 
-/** Pages a role may not use redirect home; the server refuses the data anyway. */
-export function Guard({ permission, children }: { permission: Permission; children: ReactNode }) {
-  const me = useMe().data;
-  if (!can(me?.role, permission)) return <Navigate to={paths.home.getHref()} replace />;
-  return <Suspense fallback={<Spinner />}>{children}</Suspense>;
-}
-
-const requireSignedIn = async () => {
-  const me = await queryClient.ensureQueryData(meQueries.me());
-  if (!me) throw redirect(paths.signIn.getHref());
-  return null;
-};
-
 export const router = createBrowserRouter([
   { path: paths.signIn.path, element: <SignInPage /> },
-  { path: paths.newStudio.path, element: <NewStudioPage /> },
+  {
+    path: paths.newStudio.path,
+    HydrateFallback: Spinner,
+    lazy: { Component: async () => (await import('@/features/auth/components/new-studio-page')).NewStudioPage },
+  },
   {
     path: '/',
     loader: requireSignedIn,
+    HydrateFallback: Spinner,
     element: <AppShell extraNav={EXTRA_NAV} signOutChecks={SIGN_OUT_CHECKS} />,
     errorElement: <SectionError />,
     children: [
@@ -56,19 +39,30 @@ export const router = createBrowserRouter([
         errorElement: <SectionError />,
         element: <Suspense fallback={<Spinner />}><Outlet /></Suspense>,
         children: [
-          { index: true, element: <HomePage homes={EXTRA_HOMES} /> },
-          { path: paths.account.path, element: <AccountPage /> },
-          { path: paths.styles.path, element: <Guard permission="styles:write"><StylesPage /></Guard> },
-          { path: paths.newStyle.path, element: <Guard permission="styles:write"><NewStylePage /></Guard> },
-          { path: paths.style.path, element: <Guard permission="styles:write"><StyleDetailPage /></Guard> },
-          { path: paths.batches.path, element: <Guard permission="batches:write"><BatchesPage /></Guard> },
-          { path: paths.newBatch.path, element: <Guard permission="batches:write"><NewBatchPage /></Guard> },
-          { path: paths.batch.path, element: <Guard permission="batches:write"><BatchDetailPage panels={BATCH_PANELS} /></Guard> },
-          { path: paths.people.path, element: <Guard permission="people:manage"><PeoplePage /></Guard> },
-          { path: paths.settings.path, element: <Guard permission="studio:manage"><SettingsPage /></Guard> },
-          { path: paths.audit.path, element: <Guard permission="audit:read"><AuditPage /></Guard> },
+          {
+            index: true,
+            lazy: {
+              Component: async () => {
+                const { HomePage } = await import('@/features/home/components/home-page');
+                return () => <HomePage homes={EXTRA_HOMES} />;
+              },
+            },
+          },
+          lazyPage(paths.account.path, undefined, async () => (await import('@/features/auth/components/account-page')).AccountPage),
+          lazyPage(paths.styles.path, 'styles:write', async () => (await import('@/features/styles/components/styles-page')).StylesPage, () => queryClient.prefetchQuery(styleQueries.list())),
+          lazyPage(paths.newStyle.path, 'styles:write', async () => (await import('@/features/styles/components/style-edit-page')).NewStylePage),
+          lazyPage(paths.style.path, 'styles:write', async () => (await import('@/features/styles/components/style-edit-page')).StyleDetailPage, ({ params }) => queryClient.prefetchQuery(styleQueries.detail(Number(params.id)))),
+          lazyPage(paths.batches.path, 'batches:write', async () => (await import('@/features/batches/components/batches-page')).BatchesPage, () => queryClient.prefetchQuery(batchQueries.list())),
+          lazyPage(paths.newBatch.path, 'batches:write', async () => (await import('@/features/batches/components/new-batch-page')).NewBatchPage),
+          lazyPage(paths.batch.path, 'batches:write', async () => {
+            const { BatchDetailPage } = await import('@/features/batches/components/batch-detail-page');
+            return () => <BatchDetailPage panels={BATCH_PANELS} />;
+          }, ({ params }) => queryClient.prefetchQuery(batchQueries.detail(Number(params.id)))),
+          lazyPage(paths.people.path, 'people:manage', async () => (await import('@/features/people/components/people-page')).PeoplePage, () => queryClient.prefetchQuery(peopleQueries.list())),
+          lazyPage(paths.settings.path, 'studio:manage', async () => (await import('@/features/studio/components/settings-page')).SettingsPage),
+          lazyPage(paths.audit.path, 'audit:read', async () => (await import('@/features/audit/components/audit-page')).AuditPage),
           ...EXTRA_ROUTES,
-          { path: '*', element: <Navigate to="/" replace /> },
+          { path: '*', element: <Navigate to={paths.home.getHref()} replace /> },
         ],
       },
     ],

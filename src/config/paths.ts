@@ -1,4 +1,4 @@
-/** Paths as data, with getHref, so links never hard-code strings. */
+/** Paths as data, with getHref, so links never hard-code strings. Every page's path lives here. */
 export const paths = {
   signIn: { path: '/signin', getHref: () => '/signin' },
   newStudio: { path: '/new-studio', getHref: () => '/new-studio' },
@@ -13,4 +13,16 @@ export const paths = {
   settings: { path: '/settings', getHref: () => '/settings' },
   account: { path: '/account', getHref: () => '/account' },
   audit: { path: '/audit', getHref: () => '/audit' },
+  grading: { path: '/grading', getHref: () => '/grading' },
+  styleGrading: { path: '/styles/:id/grading', getHref: (styleId: number) => `/styles/${styleId}/grading` },
+  markers: { path: '/markers', getHref: () => '/markers' },
+  fabrics: { path: '/fabrics', getHref: () => '/fabrics' },
+  lay: { path: '/lays/:id', getHref: (id: number) => `/lays/${id}` },
+  line: { path: '/line', getHref: (batchId?: number) => (batchId ? `/line?batch=${batchId}` : '/line') },
+  floor: { path: '/floor', getHref: (batchId?: number) => (batchId ? `/floor?batch=${batchId}` : '/floor') },
+  pay: { path: '/pay', getHref: () => '/pay' },
+  costing: { path: '/costing', getHref: () => '/costing' },
+  batchCosting: { path: '/batches/:id/costing', getHref: (batchId: number) => `/batches/${batchId}/costing` },
+  purchasing: { path: '/purchasing', getHref: () => '/purchasing' },
+  outbox: { path: '/outbox', getHref: () => '/outbox' },
 } as const;

@@ -3,6 +3,7 @@ import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-route
 import { can, ROLE_LABELS, type Permission } from '@shared/auth/permissions';
 import { paths } from '@/config/paths';
 import { useLogout, useMe } from '@/lib/auth';
+import { signOutEvenOffline } from '@/lib/sign-out';
 import { IconBatch, IconChart, IconDress, IconHome, IconMenu, IconOut, IconPeople, IconSettings } from '../ui/icons';
 import { Logo } from '../ui/logo';
 
@@ -61,7 +62,7 @@ export function AppShell({
 
   const signOut = async () => {
     setWarnings([]);
-    await logout.mutateAsync();
+    await signOutEvenOffline(() => logout.mutateAsync());
     navigate(paths.signIn.getHref());
   };
 
@@ -82,11 +83,12 @@ export function AppShell({
     <div className="min-h-screen md:flex">
       <header className="flex items-center justify-between bg-thread-700 px-4 py-3 md:hidden">
         <span className="rounded-lg bg-calico-50 px-2 py-1"><Logo size={24} /></span>
-        <button type="button" aria-label="Menu" className="text-calico-50" onClick={() => setOpen((o) => !o)}>
+        <button type="button" aria-label="Menu" aria-expanded={open} aria-controls="main-menu" className="text-calico-50" onClick={() => setOpen((o) => !o)}>
           <IconMenu />
         </button>
       </header>
       <aside
+        id="main-menu"
         className={`${open ? 'block' : 'hidden'} bg-thread-700 px-3 py-4 md:flex md:w-60 md:flex-col md:justify-between md:min-h-screen`}
       >
         <div>

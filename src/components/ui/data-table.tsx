@@ -65,7 +65,7 @@ export function DataTable<T>({
         value={q}
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
-      <div className="overflow-x-auto rounded-card border border-calico-200 bg-white">
+      <div tabIndex={0} className="overflow-x-auto rounded-card border border-calico-200 bg-white">
         <table className="min-w-full text-sm">
           <thead className="bg-thread-700 text-left text-calico-50">
             {table.getHeaderGroups().map((hg) => (

@@ -1,29 +1,15 @@
-import { Suspense, type ReactNode } from 'react';
-import { Navigate } from 'react-router';
-import type { Permission } from '@shared/auth/permissions';
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconScissors } from '@/components/ui/icons';
-import { Spinner } from '@/components/ui/page';
-import { useCan } from '@/lib/auth';
-import { CutPlanPanel } from './components/cut-plan-panel';
-import { CutterHome } from './components/cutter-home';
-import { FabricsPage } from './components/fabrics-page';
-import { LayPage } from './components/lay-page';
-
-function Allowed({ permission, children }: { permission: Permission; children: ReactNode }) {
-  if (!useCan(permission)) return <Navigate to="/" replace />;
-  return <Suspense fallback={<Spinner />}>{children}</Suspense>;
-}
+import { lazyComponent, lazyPage } from '@/lib/routing';
+import { paths } from '@/config/paths';
 
 /** The cutting area: fabric and rolls, the batch's cut plan, the cutter's home and lay pages. */
 export const cuttingManifest: FeatureManifest = {
   routes: [
-    { path: '/fabrics', element: <Allowed permission="fabric:read"><FabricsPage /></Allowed> },
-    { path: '/lays/:id', element: <Allowed permission="cutting:work"><LayPage /></Allowed> },
+    lazyPage(paths.fabrics.path, 'fabric:read', async () => (await import('./components/fabrics-page')).FabricsPage),
+    lazyPage(paths.lay.path, 'cutting:work', async () => (await import('./components/lay-page')).LayPage),
   ],
-  nav: [
-    { to: '/fabrics', label: 'Fabric', icon: IconScissors, permission: 'fabric:read' },
-  ],
-  homes: { cutter: CutterHome },
-  batchPanels: [{ key: 'cut-plan', Panel: CutPlanPanel }],
+  nav: [{ to: paths.fabrics.getHref(), label: 'Fabric', icon: IconScissors, permission: 'fabric:read' }],
+  homes: { cutter: lazyComponent(async () => (await import('./components/cutter-home')).CutterHome) },
+  batchPanels: [{ key: 'cut-plan', Panel: lazyComponent(async () => (await import('./components/cut-plan-panel')).CutPlanPanel) }],
 };

@@ -1,30 +1,22 @@
-import type { ReactNode } from 'react';
-import { Navigate } from 'react-router';
-import type { Permission } from '@shared/auth/permissions';
 import type { FeatureManifest } from '@/app/feature-manifest';
 import { IconChart, IconCoins } from '@/components/ui/icons';
-import { useCan } from '@/lib/auth';
-import { BatchProgressPanel } from './components/batch-progress-panel';
-import { FloorHome } from './components/floor-home';
-import { FloorProgressPage } from './components/floor-progress-page';
-import { PayPage } from './components/pay-page';
+import { lazyComponent, lazyPage } from '@/lib/routing';
+import { paths } from '@/config/paths';
 import { outboxSignOutWarning } from './lib/outbox';
 
-function Allowed({ permission, children }: { permission: Permission; children: ReactNode }) {
-  return useCan(permission) ? <>{children}</> : <Navigate to="/" replace />;
-}
+const FloorHome = lazyComponent(async () => (await import('./components/floor-home')).FloorHome);
 
-/** The floor area's routes, menu entries and panels. */
+/** The floor area's routes, menu entries and panels; each page's code loads when first used. */
 export const floorManifest: FeatureManifest = {
   routes: [
-    { path: '/floor', element: <Allowed permission="progress:read"><FloorProgressPage /></Allowed> },
-    { path: '/pay', element: <Allowed permission="pay:manage"><PayPage /></Allowed> },
+    lazyPage(paths.floor.path, 'progress:read', async () => (await import('./components/floor-progress-page')).FloorProgressPage),
+    lazyPage(paths.pay.path, 'pay:manage', async () => (await import('./components/pay-page')).PayPage),
   ],
   nav: [
-    { to: '/floor', label: 'Floor', icon: IconChart, permission: 'progress:read' },
-    { to: '/pay', label: 'Pay', icon: IconCoins, permission: 'pay:manage' },
+    { to: paths.floor.getHref(), label: 'Floor', icon: IconChart, permission: 'progress:read' },
+    { to: paths.pay.getHref(), label: 'Pay', icon: IconCoins, permission: 'pay:manage' },
   ],
   homes: { machinist: FloorHome, finisher: FloorHome },
-  batchPanels: [{ key: 'floor-progress', Panel: BatchProgressPanel }],
+  batchPanels: [{ key: 'floor-progress', Panel: lazyComponent(async () => (await import('./components/batch-progress-panel')).BatchProgressPanel) }],
   beforeSignOut: outboxSignOutWarning,
 };

@@ -4,7 +4,7 @@ import { Badge, Card, PageHeader, Spinner } from '@/components/ui/page';
 import { formatDate } from '@/lib/format';
 import { batchQueries } from '../api/batch-queries';
 import { batchTone } from './batch-columns';
-import type { ComponentType } from 'react';
+import { Suspense, type ComponentType } from 'react';
 import type { BatchDto } from '@shared/schemas/batches';
 
 export function BatchDetailPage({ panels = [] }: { panels?: { key: string; Panel: ComponentType<{ batch: BatchDto }> }[] }) {
@@ -33,7 +33,11 @@ export function BatchDetailPage({ panels = [] }: { panels?: { key: string; Panel
         {b.notes ? <p className="mt-3 text-sm text-ink-600">{b.notes}</p> : null}
       </Card>
       <div className="mt-5 space-y-5">
-        {panels.map(({ key, Panel }) => <Panel key={key} batch={b} />)}
+        {panels.map(({ key, Panel }) => (
+          <Suspense key={key} fallback={<Spinner />}>
+            <Panel batch={b} />
+          </Suspense>
+        ))}
       </div>
     </>
   );

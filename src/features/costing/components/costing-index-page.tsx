@@ -5,6 +5,7 @@ import type { BatchDto } from '@shared/schemas/batches';
 import { DataTable } from '@/components/ui/data-table';
 import { PageHeader } from '@/components/ui/page';
 import { costingQueries } from '../api/costing-queries';
+import { paths } from '@/config/paths';
 
 const c = createColumnHelper<BatchDto>();
 const columns = [
@@ -21,7 +22,7 @@ export function CostingIndexPage() {
   return (
     <>
       <PageHeader title="Costing" subtitle="Open a batch to price it from its marker, bill of materials and operations." />
-      <DataTable data={data} columns={columns} filterPlaceholder="Filter batches…" onRowClick={(b) => navigate(`/batches/${b.id}/costing`)} />
+      <DataTable data={data} columns={columns} filterPlaceholder="Filter batches…" onRowClick={(b) => navigate(paths.batchCosting.getHref(b.id))} />
     </>
   );
 }

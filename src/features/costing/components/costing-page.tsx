@@ -12,6 +12,7 @@ import { CostingSettingsForm } from './costing-settings-form';
 import { formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
 import { AddTrimForm } from './add-trim-form';
+import { paths } from '@/config/paths';
 
 const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;
 
@@ -70,7 +71,7 @@ export function CostingPage() {
         subtitle={<>{sheet.style.code} {sheet.style.name} · {sheet.batch.total} garments · prices in {sheet.currency}</>}
         actions={
           <>
-            <Link className="btn-quiet" to={`/batches/${id}`}>Back to batch</Link>
+            <Link className="btn-quiet" to={paths.batch.getHref(id)}>Back to batch</Link>
             <button type="button" className="btn-primary" onClick={handleDownload}>Download XLSX</button>
           </>
         }

@@ -5,6 +5,7 @@ import { Card } from '@/components/ui/page';
 import { useCan } from '@/lib/auth';
 import { costingQueries } from '../api/costing-queries';
 import { formatMoney as money } from '@/lib/format';
+import { paths } from '@/config/paths';
 
 /** On the batch page: the headline prices and a link to the full sheet (owner only). */
 export function CostingPanel({ batch }: { batch: BatchDto }) {
@@ -19,7 +20,7 @@ export function CostingPanel({ batch }: { batch: BatchDto }) {
           {money(data.totals.wholesaleMinor, data.currency, data.locale)} · suggested retail {money(data.totals.retailMinor, data.currency, data.locale)}
         </p>
       ) : null}
-      <Link className="btn-primary" to={`/batches/${batch.id}/costing`}>Open costing sheet</Link>
+      <Link className="btn-primary" to={paths.batchCosting.getHref(batch.id)}>Open costing sheet</Link>
     </Card>
   );
 }

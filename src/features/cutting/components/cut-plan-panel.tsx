@@ -6,6 +6,7 @@ import { Badge, Card, ErrorNote } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
 import { cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
+import { paths } from '@/config/paths';
 
 /** The batch page's cut plan: plan settings, lays with rolls, fabric used against the lower bound. */
 export function CutPlanPanel({ batch }: { batch: BatchDto }) {
@@ -61,7 +62,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
           {plan.lengthSources.some((s) => s.source === 'estimate') ? (
             <p className="text-xs text-ink-600">Lays without a stored marker use an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). Build the marker to replace it.</p>
           ) : null}
-          <div className="overflow-x-auto">
+          <div tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Lay</th><th>Sizes per ply</th><th>Plies</th><th>Marker</th><th>Spreading</th><th>Rolls (plies, expected remnant)</th><th>Status</th></tr></thead>
               <tbody>
@@ -71,7 +72,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
                     <td>{metres(l.markerLengthMm)} {l.markerId ? <Badge tone="teal">marker</Badge> : <Badge>estimate</Badge>}</td>
                     <td>{SPREADING_LABELS[l.spreadingMode] ?? l.spreadingMode}</td>
                     <td>{l.rolls.map((r) => <div key={r.rollId}>{r.label} ({r.shadeLot}): {r.plies} plies, {metres(r.expectedRemnantMm)}</div>)}</td>
-                    <td><Badge tone={l.status === 'cut' ? 'teal' : 'grey'}>{l.status}</Badge> <Link className="underline" to={`/lays/${l.id}`}>open</Link></td>
+                    <td><Badge tone={l.status === 'cut' ? 'teal' : 'grey'}>{l.status}</Badge> <Link className="underline" to={paths.lay.getHref(l.id)}>open</Link></td>
                   </tr>
                 ))}
               </tbody>

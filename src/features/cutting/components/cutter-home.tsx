@@ -4,6 +4,7 @@ import { Badge, Card, PageHeader, Spinner } from '@/components/ui/page';
 import { layQueries } from '../api/cutting-queries';
 import { CuttingCautions } from './cutting-cautions';
 import { metres, ratioLabel } from './cutting-format';
+import { paths } from '@/config/paths';
 
 /** The cutter's home: today's lays in cutting order, the next one first. */
 export function CutterHome({ name }: { name: string }) {
@@ -19,7 +20,7 @@ export function CutterHome({ name }: { name: string }) {
         <ol className="space-y-2">
           {planned.map((l, i) => (
             <li key={l.id}>
-              <Link to={`/lays/${l.id}`} className={`block rounded-lg border p-3 ${i === 0 ? 'border-thread-700 bg-thread-700/5' : 'border-calico-200'}`}>
+              <Link to={paths.lay.getHref(l.id)} className={`block rounded-lg border p-3 ${i === 0 ? 'border-thread-700 bg-thread-700/5' : 'border-calico-200'}`}>
                 <div className="flex flex-wrap items-center justify-between gap-2">
                   <span className="font-semibold text-thread-800">{l.batchCode} · Lay {l.seq}</span>
                   {i === 0 ? <Badge tone="teal">next</Badge> : null}
@@ -33,7 +34,7 @@ export function CutterHome({ name }: { name: string }) {
       </Card>
       {done.length ? (
         <Card title="Cut" className="mt-5">
-          <ul className="text-sm">{done.map((l) => <li key={l.id}><Link className="underline" to={`/lays/${l.id}`}>{l.batchCode} · Lay {l.seq}</Link> · {l.bundleCount} bundles</li>)}</ul>
+          <ul className="text-sm">{done.map((l) => <li key={l.id}><Link className="underline" to={paths.lay.getHref(l.id)}>{l.batchCode} · Lay {l.seq}</Link> · {l.bundleCount} bundles</li>)}</ul>
         </Card>
       ) : null}
       <div className="mt-5"><CuttingCautions /></div>

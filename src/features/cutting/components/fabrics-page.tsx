@@ -11,7 +11,7 @@ import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
   return (
-    <div className="overflow-x-auto">
+    <div tabIndex={0} className="overflow-x-auto">
       <table className="w-full text-sm">
         <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Held by plans</th><th>Width</th><th>Received</th></tr></thead>
         <tbody>

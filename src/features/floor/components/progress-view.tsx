@@ -27,7 +27,7 @@ function DailyChart({ daily }: { daily: ProgressDto['daily'] }) {
   const max = Math.max(1, ...daily.map((d) => Math.max(d.pieces, d.planned)));
   return (
     <div>
-      <div className="flex h-40 items-end gap-1 overflow-x-auto" aria-label="Output per day against the plan">
+      <div tabIndex={0} className="flex h-40 items-end gap-1 overflow-x-auto" aria-label="Output per day against the plan">
         {daily.map((d) => (
           <div key={d.day} className="flex min-w-8 flex-1 flex-col items-center justify-end gap-1" title={`${d.day}: ${d.pieces} packed, plan ${d.planned}`}>
             <div className="relative flex h-32 w-full items-end justify-center">

@@ -1,4 +1,3 @@
-import jsQR from 'jsqr';
 import { useEffect, useRef, useState } from 'react';
 import { parseBundleQr } from '@shared/schemas/floor';
 
@@ -13,15 +12,16 @@ export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: numb
     let stopped = false;
     const canvas = document.createElement('canvas');
     const ctx = canvas.getContext('2d', { willReadFrequently: true });
+    let decode: typeof import('jsqr').default | null = null;
     const tick = () => {
       const v = video.current;
       if (stopped || !v || !ctx) return;
-      if (v.readyState === v.HAVE_ENOUGH_DATA && v.videoWidth) {
+      if (decode && v.readyState === v.HAVE_ENOUGH_DATA && v.videoWidth) {
         canvas.width = v.videoWidth;
         canvas.height = v.videoHeight;
         ctx.drawImage(v, 0, 0);
         const img = ctx.getImageData(0, 0, canvas.width, canvas.height);
-        const code = jsQR(img.data, img.width, img.height, { inversionAttempts: 'dontInvert' });
+        const code = decode(img.data, img.width, img.height, { inversionAttempts: 'dontInvert' });
         if (code?.data) {
           const parsed = parseBundleQr(code.data);
           if (parsed) {
@@ -39,6 +39,8 @@ export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: numb
         return;
       }
       try {
+        // The QR decoder is fetched only when someone opens the camera.
+        decode = (await import('jsqr')).default;
         stream = await navigator.mediaDevices.getUserMedia({ video: { facingMode: 'environment' }, audio: false });
         if (stopped) return;
         if (video.current) {

@@ -11,6 +11,7 @@ import { PieceMeasurements } from './piece-measurements';
 import { SeamReport } from './seam-report';
 import { SizeChartGrid } from './size-chart-grid';
 import { SizeMixTool } from './size-mix-tool';
+import { paths } from '@/config/paths';
 
 const CUT_LABEL = { cut1: 'cut 1', pair: 'cut a mirrored pair', fold: 'cut on fold' } as const;
 
@@ -87,7 +88,7 @@ export function GradingIndexPage({ styles }: { styles: { id: number; code: strin
         ) : null}
         <ul className="divide-y divide-calico-200">
           {styles.map((s) => (
-            <li key={s.id} className="py-2"><Link className="text-thread-700 underline" to={`/styles/${s.id}/grading`}>{s.code} · {s.name}</Link></li>
+            <li key={s.id} className="py-2"><Link className="text-thread-700 underline" to={paths.styleGrading.getHref(s.id)}>{s.code} · {s.name}</Link></li>
           ))}
         </ul>
       </Card>

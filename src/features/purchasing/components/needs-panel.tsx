@@ -5,6 +5,7 @@ import { Card, ErrorNote } from '@/components/ui/page';
 import { useCan } from '@/lib/auth';
 import { purchasingQueries, useCreateOrders } from '../api/purchasing-queries';
 import { quantityText } from './quantity-text';
+import { paths } from '@/config/paths';
 
 /** On the batch page: fabric and trims still to order, net of stock and open orders. */
 export function NeedsPanel({ batch }: { batch: BatchDto }) {
@@ -32,7 +33,7 @@ export function NeedsPanel({ batch }: { batch: BatchDto }) {
         <button type="button" className="btn-primary" disabled={!toOrder.length || create.isPending} onClick={() => create.mutate(batch.id)}>
           Make purchase orders
         </button>
-        <Link className="btn-quiet" to="/purchasing">Suppliers and orders</Link>
+        <Link className="btn-quiet" to={paths.purchasing.getHref()}>Suppliers and orders</Link>
       </div>
     </Card>
   );
