@@ -29,12 +29,7 @@ export const floorDeviceQueries = {
     queryOptions({
       queryKey: ['floor-device', 'list'],
       queryFn: async () => {
-        try {
-          return await api.get<FloorListDto>('/auth/floor');
-        } catch (e) {
-          if (e instanceof ApiError && e.status === 404) return null;
-          throw e;
-        }
+        return await api.get<FloorListDto | null>('/auth/floor');
       },
       staleTime: 60_000,
     }),

@@ -128,7 +128,8 @@ export function authRoutes(
   });
   r.get('/floor', async (req, res) => {
     const device = await boundDevice(req);
-    if (!device) throw new AppError(404, 'not_found', 'This device is not a floor tablet');
+    // Not a floor tablet: an ordinary answer (null), not an error, since every sign-in page asks.
+    if (!device) return void res.json(null);
     const list: FloorListDto = await auth.floorList(device.studioId);
     res.json(list);
   });
