@@ -218,10 +218,18 @@ function solveMip(solver: MipSolver, m: MipModel, plyCost: number[], layCost: nu
   const indices: number[] = [];
   const values: number[] = [];
   cands.forEach((c, j) => {
-    c.counts.forEach((v, i) => v > 0 && (indices.push(i), values.push(v)));
+    c.counts.forEach((v, i) => {
+      if (v > 0) {
+        indices.push(i);
+        values.push(v);
+      }
+    });
     indices.push(n + j, n + N + j, n + 2 * N);
     values.push(1, 1, 1);
-    if (capRow >= 0) indices.push(capRow), values.push(c.spread);
+    if (capRow >= 0) {
+      indices.push(capRow);
+      values.push(c.spread);
+    }
     starts.push(indices.length);
   });
   cands.forEach((_, j) => {
