@@ -15,6 +15,8 @@ export const DEFAULT_CUT_TIME_LIMIT_SECONDS = 5;
 export const DEFAULT_MAX_MIP_CANDIDATES = 20_000;
 /** Nodes the old branch and bound may spend to hand the solver a starting plan. */
 const WARM_START_NODES = 5_000;
+/** Share of the time limit the least-fabric pass may use; the fewest-lays pass gets the rest. */
+const FABRIC_SHARE = 0.6;
 const TOL = 1e-6;
 const STATUS_OPTIMAL = 7;
 
@@ -90,16 +92,16 @@ export function solveCutOrder(input: CutOrderInput, solver: MipSolver): CutOrder
       fabricBound: Math.max(lp.value, 0), layBound: layLB, exact, gap: relGap(run.value, exact ? run.value : globalBound), cost: run.value,
     });
   }
-  const fabric = solveMip(solver, model, cands.list.map((c) => c.spread), cands.list.map(() => 0), null, left());
+  // Least fabric first, on at most 60 % of the budget so the fewest-lays pass always has time: when the
+  // fabric is not proven least, the second pass still finds fewer lays among plans using no more fabric.
+  const fabric = solveMip(solver, model, cands.list.map((c) => c.spread), cands.list.map(() => 0), null, Math.max(0.05, limit * FABRIC_SHARE));
   spent += fabric.seconds;
   const fabricBound = Math.max(lp.value, cands.restricted ? 0 : fabric.bound);
   const fabricExact = fabric.optimal && (!cands.restricted || fabric.value <= fabricBound * (1 + TOL));
-  if (!fabric.optimal) {
-    return buildPlan(base, cands.list, fabric, { fabricBound, layBound: layLB, exact: false, gap: relGap(fabric.value, fabricBound) });
-  }
   const cap = fabric.value + Math.max(TOL, fabric.value * 1e-9);
   const fewest = solveMip(solver, { ...model, start: fabric }, cands.list.map(() => 0), cands.list.map(() => 1), cap, left());
-  const layBound = Math.max(layLB, Math.ceil(fewest.bound - TOL));
+  // The second pass's bound holds only among plans at the first pass's fabric, so it counts only once that fabric is proven least.
+  const layBound = fabricExact ? Math.max(layLB, Math.ceil(fewest.bound - TOL)) : layLB;
   const exact = fabricExact && fewest.optimal;
   return buildPlan(base, cands.list, fewest, {
     fabricBound: exact ? Math.min(fabricBound, fabric.value) : fabricBound, layBound,
