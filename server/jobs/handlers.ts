@@ -15,7 +15,7 @@ import { sendMailJob, type MailJobInput } from '../modules/mail/mail-job';
  * hands them to `npm run worker` processes; callers cannot tell which.
  */
 export const JOB_HANDLERS = {
-  'cut-order': async (input: CutOrderJobInput) => solveCutOrderJob(input),
+  'cut-order': (input: CutOrderJobInput) => solveCutOrderJob(input),
   'marker-list.xlsx': async (input: Parameters<typeof buildMarkerListXlsx>[0]) => Buffer.from(await buildMarkerListXlsx(input)),
   'marker-list.pdf': async (input: Parameters<typeof buildMarkerListPdf>[0]) => Buffer.from(await buildMarkerListPdf(input)),
   'cut-ticket.pdf': async (input: Parameters<typeof buildCutTicketPdf>[0]) => Buffer.from(await buildCutTicketPdf(input)),

@@ -1,6 +1,7 @@
 import { Router, type Response } from 'express';
 import type { DataSource } from 'typeorm';
 import type { JobRunner } from '../../jobs/job-runner';
+import { can, type Role } from '../../../shared/auth/permissions';
 import { idParam } from '../../../shared/schemas/common';
 import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
@@ -28,12 +29,12 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
     if (!b) throw notFound('Batch');
     return b;
   };
-  const planDto = async (studioId: number, batchId: number) => {
+  const planDto = async (studioId: number, batchId: number, role: Role) => {
     const p = await plans.currentPlan(studioId, batchId);
     if (!p) return null;
     const list = await plans.laysOf(studioId, p.id);
     const fabric = await fabrics.get(studioId, p.fabricId);
-    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)));
+    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), can(role, 'costs:read'));
   };
   const docsFor = async (studioId: number, batchId: number, only?: number) => {
     const batch = await loadBatch(studioId, batchId);
@@ -48,13 +49,13 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   batches.get('/:id/cut-plan', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const studioId = actorOf(req).studioId;
     await loadBatch(studioId, Number(req.params.id));
-    res.json({ cutPlan: await planDto(studioId, Number(req.params.id)) });
+    res.json({ cutPlan: await planDto(studioId, Number(req.params.id), actorOf(req).role) });
   });
   batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
     const actor = actorOf(req);
     const batchId = Number(req.params.id);
     const saved = await planBatchCut(ds, jobs, plans, actor.studioId, batchId, req.body);
-    const dto = (await planDto(actor.studioId, batchId))!;
+    const dto = (await planDto(actor.studioId, batchId, actor.role))!;
     await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
     res.status(201).json({ cutPlan: dto });
   });
