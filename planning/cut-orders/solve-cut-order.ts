@@ -99,7 +99,10 @@ export function solveCutOrder(input: CutOrderInput, solver: MipSolver): CutOrder
   const fabricBound = Math.max(lp.value, cands.restricted ? 0 : fabric.bound);
   const fabricExact = fabric.optimal && (!cands.restricted || fabric.value <= fabricBound * (1 + TOL));
   const cap = fabric.value + Math.max(TOL, fabric.value * 1e-9);
-  const fewest = solveMip(solver, { ...model, start: fabric }, cands.list.map(() => 0), cands.list.map(() => 1), cap, left());
+  const exactCut = exactCutModel(input, model, fabric, e);
+  const fewest = exactCut
+    ? solveMip(solver, { ...exactCut, start: fabric }, cands.list.map(() => 0), cands.list.map(() => 1), null, left())
+    : solveMip(solver, { ...model, start: fabric }, cands.list.map(() => 0), cands.list.map(() => 1), cap, left());
   // The second pass's bound holds only among plans at the first pass's fabric, so it counts only once that fabric is proven least.
   const layBound = fabricExact ? Math.max(layLB, Math.ceil(fewest.bound - TOL)) : layLB;
   const exact = fabricExact && fewest.optimal;
@@ -107,6 +110,23 @@ export function solveCutOrder(input: CutOrderInput, solver: MipSolver): CutOrder
     fabricBound: exact ? Math.min(fabricBound, fabric.value) : fabricBound, layBound,
     exact, gap: fabricExact ? relGap(fewest.lays.reduce((a, b) => a + b, 0), layBound) : relGap(fabric.value, fabricBound),
   });
+}
+
+/**
+ * With lengths that add up per garment (`garmentLength`), fabric = Σ length × cut + end allowance × plies.
+ * When the least-fabric plan cuts exactly the quantities, and one garment of over-cut costs more fabric
+ * than the end allowances of every ply it could save, the least-fabric plans are exactly those that cut
+ * the quantities with no more plies: the fewest-lays pass then gets those two simple rows instead of one
+ * dense fabric row, which the solver handles far better. Null when that does not hold.
+ */
+function exactCutModel(input: CutOrderInput, m: MipModel, fabric: MipRun, e: number): MipModel | null {
+  if (input.markers || input.markerLength || !input.garmentLength) return null;
+  const len = input.sizes.map((s) => input.garmentLength![s]);
+  const cut = m.q.map((_, i) => fabric.plies.reduce((a, p, j) => a + p * m.cands[j].counts[i], 0));
+  if (cut.some((c, i) => c !== m.q[i])) return null;
+  const plies = fabric.plies.reduce((a, b) => a + b, 0);
+  if (!(Math.min(...len) > e * (plies - m.pliesLB))) return null;
+  return { ...m, u: m.q, pliesUB: e > 0 ? plies : undefined };
 }
 
 function validateCosts(costs: CutCosts | undefined): void {
@@ -195,6 +215,8 @@ interface MipModel {
   u: number[];
   H: number;
   pliesLB: number;
+  /** Most plies in all, when the plan must not use more. */
+  pliesUB?: number;
   layLB: number;
   start: { plies: number[]; lays: number[] } | null;
 }
@@ -210,7 +232,7 @@ function solveMip(solver: MipSolver, m: MipModel, plyCost: number[], layCost: nu
   const N = cands.length;
   const inf = solver.infinity;
   const rowsLower: number[] = [...q, ...cands.map(() => -inf), ...cands.map(() => 0), m.pliesLB, m.layLB];
-  const rowsUpper: number[] = [...u, ...cands.map(() => 0), ...cands.map(() => inf), inf, inf];
+  const rowsUpper: number[] = [...u, ...cands.map(() => 0), ...cands.map(() => inf), m.pliesUB ?? inf, inf];
   const capRow = fabricCap === null ? -1 : rowsLower.length;
   if (fabricCap !== null) {
     rowsLower.push(-inf);
@@ -279,6 +301,7 @@ function feasible(m: MipModel, plies: number[], lays: number[], fabricCap: numbe
   if (plies.some((p, j) => !(p >= 0) || !(lays[j] >= 0) || p > m.H * lays[j] || p < lays[j])) return false;
   const cut = m.q.map((_, i) => plies.reduce((a, p, j) => a + p * m.cands[j].counts[i], 0));
   if (cut.some((c, i) => c < m.q[i] || c > m.u[i])) return false;
+  if (m.pliesUB !== undefined && plies.reduce((a, p) => a + p, 0) > m.pliesUB) return false;
   return fabricCap === null || plies.reduce((a, p, j) => a + p * m.cands[j].spread, 0) <= fabricCap + TOL;
 }
 
