@@ -23,9 +23,24 @@ const inputSchema = z.object({
 });
 
 const { input, json } = readCliInput(process.argv.slice(2));
-const parsed = inputSchema.parse(input);
+const checked = inputSchema.safeParse(input);
+if (!checked.success) {
+  // One line per bad field, named by its path, then exit 2 (as a missing --in does).
+  for (const issue of checked.error.issues) process.stderr.write(`${issue.path.join('.') || 'input'}: ${issue.message}\n`);
+  process.exit(2);
+}
+const parsed = checked.data;
 const priced = parsed.layCost !== undefined || parsed.plyCost !== undefined || parsed.fabricCostPerMetre !== undefined;
-const plan = solveCutOrder(
+const solve = (order: Parameters<typeof solveCutOrder>[0], solver: Parameters<typeof solveCutOrder>[1]) => {
+  try {
+    return solveCutOrder(order, solver);
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    process.stderr.write(`${err.message}\n`);
+    process.exit(2);
+  }
+};
+const plan = solve(
   {
     sizes: parsed.sizes, quantities: parsed.quantities, maxPlies: parsed.maxPlies, maxGarmentsPerMarker: parsed.maxGarmentsPerMarker,
     overcutPercent: parsed.overcutPercent, timeLimitSeconds: parsed.timeLimitSeconds,
