@@ -92,6 +92,7 @@ describe('planning again', () => {
       const cut = await cutter.post(`/api/lays/${l.id}/cut`).send({});
       expect(cut.status).toBe(409);
       expect(cut.body.error.message).toMatch(/retired/);
+      expect((await cutter.get(`/api/lays/${l.id}/cut-ticket.pdf`)).status).toBe(409);
     }
     const live = (await cutter.get('/api/lays')).body.lays as Lay[];
     expect(live.some((l) => retired.some((r) => r.id === l.id))).toBe(false);

@@ -5,7 +5,7 @@ import { can, type Role } from '../../../shared/auth/permissions';
 import { idParam } from '../../../shared/schemas/common';
 import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
-import { notFound } from '../../errors';
+import { conflict, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import { createBatchRepository } from '../batches/batch.repository';
@@ -126,6 +126,8 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   const layDoc = async (studioId: number, id: number) => {
     const lay = await plans.getLay(studioId, id);
     if (!lay) throw notFound('Lay');
+    // A retired lay is in no current plan: no ticket or marker list that a cutter could spread from.
+    if (lay.status === 'retired') throw conflict('This lay was retired when the batch was planned again: use the current plan’s documents');
     return { lay, input: await docsFor(studioId, lay.batchId, lay.id) };
   };
   lays.get('/:id/cut-ticket.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {

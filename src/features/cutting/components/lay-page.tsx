@@ -98,7 +98,7 @@ export function LayPage() {
             </ul>
           </Card>
         ) : null}
-        <Card title="Documents">
+        {retired ? null : <Card title="Documents">
           <div className="flex flex-wrap gap-2">
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
@@ -106,7 +106,7 @@ export function LayPage() {
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>Bundle register (XLSX)</button> : null}
           </div>
-        </Card>
+        </Card>}
         <CuttingCautions />
       </div>
     </>
