@@ -54,7 +54,8 @@ export interface CostingTrimLine {
 }
 
 /** Rate of a labour line: an exact decimal cost per minute (major units, e.g. `'0.4006'`) or a rate per hour. */
-export type LabourRate = { perMinute: string } | { perHourMinor: MinorUnits };
+/** Per minute (a decimal string in major units), per hour (minor units), or a piece rate per garment (minor units; minutes unused). */
+export type LabourRate = { perMinute: string } | { perHourMinor: MinorUnits } | { perGarmentMinor: MinorUnits };
 
 /** A labour line: standard minutes (SAM) per garment × cost per minute. */
 export interface CostingLabourLine {

@@ -92,7 +92,10 @@ export function computeCostingFigures(input: CostingSheetInput): CostingFigures 
   }
   for (const l of input.labour) {
     const minutes = sizes.map((s) => perSize(l.samMinutes, s, 0));
-    if ('perMinute' in l.rate) {
+    if ('perGarmentMinor' in l.rate) {
+      // Piece rates: a labour line of one garment at the summed rate, labelled labour like any other.
+      lines.push(priced('Labour', l.operation, 'per garment', l.rate.perGarmentMinor, sizes.map(() => 1)));
+    } else if ('perMinute' in l.rate) {
       const perMinute = Number(l.rate.perMinute);
       if (!Number.isFinite(perMinute))
         throw new RangeError(`bad rate per minute: ${l.rate.perMinute}`);

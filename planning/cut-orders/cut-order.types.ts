@@ -3,7 +3,26 @@ import type { Millimetres } from '@shared/units';
 /** Garments of each size in one marker, e.g. `{ M: 3, L: 2 }`; sizes with 0 may be omitted. */
 export type SizeRatio = Record<string, number>;
 
-/** Input to {@link planCutOrder}. Lengths in millimetres; counts are non-negative integers. */
+/**
+ * The studio's rates for the money objective, minor units of its currency. Any of them given switches
+ * the plan from "least fabric, then fewest lays" to least total cost.
+ */
+export interface CutCosts {
+  /** Fabric price per metre of spread (marker length + end allowance). */
+  fabricCostPerMetre?: number;
+  /** Cost of each lay: spreading set-up, marker, cutting. */
+  layCost?: number;
+  /** Cost of each ply spread. */
+  plyCost?: number;
+}
+
+/** A measured marker: its ratio and plotted length. */
+export interface MeasuredMarker {
+  ratio: SizeRatio;
+  length: Millimetres;
+}
+
+/** Input to {@link planCutOrder} and `solveCutOrder`. Lengths in millimetres; counts are non-negative integers. */
 export interface CutOrderInput {
   /** Sizes in display order; the order fixes tie-breaks and output order. */
   sizes: string[];
@@ -31,6 +50,12 @@ export interface CutOrderInput {
   maxCandidates?: number;
   /** Checked between search nodes; on abort the best plan so far is returned. */
   signal?: AbortSignal;
+  /** Solver only: measured markers, the only ratios the plan may use (their lengths, never estimates). */
+  markers?: MeasuredMarker[];
+  /** Solver only: rates for the money objective; absent = least fabric, then fewest lays. */
+  costs?: CutCosts;
+  /** Solver only: wall-clock budget for the whole plan, seconds. Default 5. */
+  timeLimitSeconds?: number;
 }
 
 /** One lay: one marker spread to `plies` plies. */
@@ -51,7 +76,7 @@ export interface CutOrderPlan {
   fabricUsed: Millimetres;
   /** LP-relaxation lower bound on fabric used, mm (no plan can use less). */
   lowerBound: Millimetres;
-  /** (fabricUsed − lowerBound) / lowerBound, 0 when lowerBound is 0. */
+  /** Relative gap to the proven bound of the objective optimised (0 when exact); see `solveCutOrder`. */
   gap: number;
   /** Lower bound on the number of lays, ⌈Σ quantities ÷ (max garments × max plies)⌉. */
   layLowerBound: number;
@@ -63,4 +88,8 @@ export interface CutOrderPlan {
   /** Search nodes visited. */
   nodes: number;
   endAllowance: Millimetres;
+  /** Where every marker length in the plan comes from: measured markers or estimates, never both. */
+  markerLengths?: 'measured' | 'estimated';
+  /** Total cost of the plan in minor units, when the plan was priced with {@link CutCosts}. */
+  cost?: number;
 }

@@ -24,3 +24,13 @@ export const DEFAULT_SPLICE_OVERLAP_MM: Millimetres = mm(150);
  * 1 m is common practice (no published figure).
  */
 export const DEFAULT_REMNANT_STOCK_THRESHOLD_MM: Millimetres = mm(1000);
+
+/**
+ * Cutting-room minutes one lay costs whatever its height: laying the marker, setting up the spread,
+ * cutting round the pieces and bundling off. 30 minutes is common practice for a small studio's hand
+ * spread (no published figure); priced at the style's labour cost per minute when no lay cost is set.
+ */
+export const DEFAULT_LAY_MINUTES = 30;
+
+/** Minutes of spreading per ply by hand, two people walking the roll: 0.5, common practice (no published figure). */
+export const DEFAULT_PLY_MINUTES = 0.5;

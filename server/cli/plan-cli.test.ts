@@ -9,7 +9,7 @@ const run = (script: string, input: unknown) => {
   const file = path.join(mkdtempSync(path.join(tmpdir(), 'seamrun-cli-')), 'in.json');
   writeFileSync(file, JSON.stringify(input));
   const tsx = path.join(root, 'node_modules/.bin/tsx');
-  return JSON.parse(execFileSync(tsx, [path.join(root, 'server/cli', script), '--in', file, '--json'], { cwd: root, encoding: 'utf8' }));
+  return JSON.parse(execFileSync(tsx, [path.join(root, 'server/cli', script), '--in', file, '--json'], { cwd: root, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] }));
 };
 
 /** Runs a CLI expected to refuse its input: exit code, stderr and stdout. */
@@ -33,6 +33,35 @@ describe('planning CLIs (fixed JSON contracts)', () => {
     expect(out.lowerBound).toBe(114 * 1220);
     expect(out.overcut).toEqual({ M: 0 });
     expect(out.rolls.reduce((a: number, r: { plies: number }) => a + r.plies, 0)).toBe(114);
+  }, 60_000);
+  // Issue 18, recomputed outside the project: S 30 / M 50 / L 20 at 1000 / 1100 / 1200 mm, 20 mm ends, ≤ 3
+  // garments, ≤ 20 plies → 3 lays, 109,680 mm (34 plies × 20 mm + Σ garments, no 2-lay plan reaches it).
+  it('plan:cut proves the least-fabric plan with fewest lays and says "exact"', () => {
+    const out = run('plan-cut.cli.ts', {
+      sizes: ['S', 'M', 'L'], quantities: { S: 30, M: 50, L: 20 }, maxPlies: 20, maxGarmentsPerMarker: 3, endAllowance: 20,
+      garmentLength: { S: 1000, M: 1100, L: 1200 },
+    });
+    expect(out.fabricUsed).toBe(109_680);
+    expect(out.lays).toHaveLength(3);
+    expect(out.method).toBe('exact');
+    expect(out.gap).toBe(0);
+  }, 60_000);
+  // By hand: 31 garments, 2 per marker, 1 over-cut allowed (4 %): least fabric is A2 × 15 + A1 × 1 =
+  // 31,320 mm in 2 lays; A2 × 16 in one lay uses 32,320 mm. At 100 a metre the extra metre costs 100 < 500
+  // for a lay, so the priced plan is one lay costing 3,232 + 500 = 3,732.
+  it('plan:cut takes layCost, plyCost and fabricCostPerMetre and buys a lay fewer with a metre of fabric', () => {
+    const base = { sizes: ['A'], quantities: { A: 31 }, maxPlies: 30, maxGarmentsPerMarker: 2, overcutPercent: 4, endAllowance: 20, garmentLength: { A: 1000 } };
+    const plain = run('plan-cut.cli.ts', base);
+    expect(plain.fabricUsed).toBe(31_320);
+    expect(plain.lays).toHaveLength(2);
+    expect(plain.cost).toBeUndefined();
+    const priced = run('plan-cut.cli.ts', { ...base, fabricCostPerMetre: 100, layCost: 500, plyCost: 0 });
+    expect(priced.lays).toEqual([{ ratio: { A: 2 }, plies: 16, markerLength: 2000 }]);
+    expect(priced.cost).toBe(3_732);
+    expect(priced.method).toBe('exact');
+  }, 60_000);
+  it('plan:cut refuses a negative lay cost, naming the field', () => {
+    expect(() => run('plan-cut.cli.ts', { sizes: ['A'], quantities: { A: 3 }, maxPlies: 5, maxGarmentsPerMarker: 1, garmentLength: { A: 900 }, layCost: -5 })).toThrow(/layCost:/);
   }, 60_000);
   // Scholl (1993) JACKSON.IN2: c = 10 → 5 stations; m = 4 → c = 12 (computed, reference §2.3)
   it('plan:balance prints stations for a cycle time and the cycle time for stations', () => {

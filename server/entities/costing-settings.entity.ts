@@ -27,4 +27,8 @@ export class CostingSettingsEntity {
 
   @Column({ type: 'real', default: 2 })
   retailMultiplier: number;
+
+  /** How labour is costed for this style on every costing view and the workbook: standard minutes or piece rates. */
+  @Column({ type: 'varchar', length: 12, default: 'sam' })
+  labourBasis: 'sam' | 'piece-rates';
 }

@@ -51,8 +51,9 @@ export class LayEntity {
   @Column({ type: 'simple-json' })
   rolls: LayRollLine[];
 
+  /** `retired`: dropped when the batch was planned again (the lay stays readable, nothing more is done with it). */
   @Column({ type: 'varchar', length: 12, default: 'planned' })
-  status: 'planned' | 'cut';
+  status: 'planned' | 'cut' | 'retired';
 
   @Column({ type: 'text', default: '' })
   flaws: string;

@@ -15,7 +15,8 @@ const minorAmount = (label: string) =>
 const percent = (max: number) =>
   z.number({ error: 'Enter a percentage' }).min(0, 'Cannot be negative').max(max, `At most ${max} %`);
 
-export const costingQuery = z.object({ labourBasis: z.enum(LABOUR_BASES).default('sam') });
+/** `labourBasis` overrides the style's saved basis for one answer; without it the saved basis is used. */
+export const costingQuery = z.object({ labourBasis: z.enum(LABOUR_BASES).optional() });
 
 const trimFields = {
   name: safeText(120).min(1, 'Name the trim'),
@@ -43,6 +44,7 @@ export const updateCostingSettingsInput = z.object({
   wastagePercent: percent(50).optional(),
   marginPercent: percent(99).optional(),
   retailMultiplier: z.number().min(1, 'At least 1 (selling at wholesale)').max(10, 'At most 10').optional(),
+  labourBasis: z.enum(LABOUR_BASES, { error: 'Standard minutes or piece rates' }).optional(),
 });
 export type UpdateCostingSettingsInput = z.input<typeof updateCostingSettingsInput>;
 
@@ -53,6 +55,8 @@ export interface CostingSettingsDto {
   wastagePercent: number;
   marginPercent: number;
   retailMultiplier: number;
+  /** How labour is costed on the costing page, the batch page and the workbook alike. */
+  labourBasis: LabourBasis;
   /** True when the style has no saved settings and these are the studio defaults. */
   isDefault: boolean;
 }

@@ -103,7 +103,8 @@ export interface LayDto {
   markerId: number | null;
   spreadingMode: string;
   rolls: LayRollDto[];
-  status: 'planned' | 'cut';
+  /** `retired`: replaced when the batch was planned again; kept for the record, not to be spread or cut. */
+  status: 'planned' | 'cut' | 'retired';
   flaws: string;
   cutAt: string | null;
   bundleCount: number;
@@ -145,6 +146,16 @@ export interface CutPlanDto {
   /** How each lay's marker length was found: stored marker or estimate. */
   lengthSources: { ratio: Record<string, number>; source: 'marker' | 'estimate'; markerId?: number }[];
   assumedUtilisation: number;
+  /** Every marker length in the plan is measured (stored markers) or every one is an estimate, never mixed. */
+  markerLengths: 'measured' | 'estimated';
+  /** Why the plan uses estimates although measured markers exist. */
+  markerLengthsNote: string | null;
+  /** What the plan minimises: total cost at the studio's rates, or fabric and then lays. */
+  objective: 'cost' | 'fabric';
+  /** Rates the plan was priced with (minor units); null when unpriced or not shown to this role. */
+  rates: { layCostMinor: number; plyCostMinor: number; fabricCostPerMetreMinor: number; basis: string; currency: string } | null;
+  /** Fabric, lays and plies at those rates (minor units); null when unpriced. */
+  costMinor: number | null;
   endOfRollWasteMm: number;
   stockKeptMm: number;
   shortfall: number[];

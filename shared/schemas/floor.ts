@@ -173,7 +173,10 @@ export interface SectionProgress {
   section: OperationSection;
   piecesDone: number;
   piecesTotal: number;
+  /** Cutting with a cut plan: the percentage of its lays cut (`laysDone` of `laysTotal`). */
   percent: number;
+  laysDone?: number;
+  laysTotal?: number;
 }
 
 export interface DailyOutput {

@@ -110,7 +110,7 @@ describe('the demo cut plan and the cutter', () => {
     const lays = (await cutter.get('/api/lays')).body.lays.filter((l: { batchId: number }) => l.batchId === 1);
     const lay = lays.find((l: { status: string }) => l.status === 'planned');
     const before = (await cutter.get('/api/batches/1/bundles')).body.bundles.length;
-    const rolls = lay.rolls.map((r: { rollId: number; plies: number; expectedRemnantMm: number }) => ({ rollId: r.rollId, actualPlies: r.plies, actualRemnantMm: r.expectedRemnantMm - 100 }));
+    const rolls = lay.rolls.map((r: { rollId: number; plies: number; expectedRemnantMm: number }) => ({ rollId: r.rollId, actualPlies: r.plies, actualRemnantMm: Math.max(0, r.expectedRemnantMm - 100) }));
     const rec = await cutter.put(`/api/lays/${lay.id}`).send({ rolls, flaws: 'Slub at 3 m on the first ply' });
     expect(rec.status).toBe(200);
     expect(rec.body.lay.rolls[0].actualPlies).toBe(lay.rolls[0].plies);

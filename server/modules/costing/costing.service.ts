@@ -23,6 +23,7 @@ export const DEFAULT_SETTINGS = {
   wastagePercent: 3,
   marginPercent: 20,
   retailMultiplier: 2,
+  labourBasis: 'sam' as LabourBasis,
 };
 
 export const presentSettings = (styleId: number, s: CostingSettingsEntity | null): CostingSettingsDto => ({
@@ -32,6 +33,7 @@ export const presentSettings = (styleId: number, s: CostingSettingsEntity | null
   wastagePercent: s?.wastagePercent ?? DEFAULT_SETTINGS.wastagePercent,
   marginPercent: s?.marginPercent ?? DEFAULT_SETTINGS.marginPercent,
   retailMultiplier: s?.retailMultiplier ?? DEFAULT_SETTINGS.retailMultiplier,
+  labourBasis: s?.labourBasis ?? DEFAULT_SETTINGS.labourBasis,
   isDefault: !s,
 });
 
@@ -84,12 +86,14 @@ export function createCostingService(repo: CostingRepository) {
     return { fabric, basis: 'estimate' as ConsumptionBasis, perSize, planned: [] as LayLike[], cutLays: [] as LayEntity[] };
   }
 
-  async function build(studioId: number, batchId: number, labourBasis: LabourBasis, now: Date) {
+  /** The sheet of a batch; labour on the style's saved basis unless `basisOverride` is given. */
+  async function build(studioId: number, batchId: number, basisOverride: LabourBasis | undefined, now: Date) {
     const batch = await repo.batch(studioId, batchId);
     if (!batch || !batch.style) throw notFound('Batch');
     const style = batch.style;
     const studio = await repo.studio(studioId);
     const settings = presentSettings(style.id, await repo.settings(studioId, style.id));
+    const labourBasis = basisOverride ?? settings.labourBasis;
     const [trims, operations, logs, fab] = await Promise.all([
       repo.trims(studioId, style.id),
       repo.operations(studioId, style.id),
@@ -184,9 +188,10 @@ export function createCostingService(repo: CostingRepository) {
     };
 
     const labour: CostingLabourLine[] =
-      basis === 'sam' ? [{ operation: labourLine.name, samMinutes: garmentSam, rate: { perMinute: (settings.labourCostPerMinuteMinor / scale).toFixed(digits) } }] : [];
+      basis === 'sam'
+        ? [{ operation: labourLine.name, samMinutes: garmentSam, rate: { perMinute: (settings.labourCostPerMinuteMinor / scale).toFixed(digits) } }]
+        : [{ operation: labourLine.name, samMinutes: 0, rate: { perGarmentMinor: minor(pieceRateMinor) } }];
     const overheads: CostingOverheadLine[] = [];
-    if (basis === 'piece-rates') overheads.push({ kind: 'per-garment', description: labourLine.name, amountMinor: minor(pieceRateMinor) });
     if (settings.overheadPercent > 0) overheads.push({ kind: 'percent', description: lines[lines.length - 1].description, percent: settings.overheadPercent });
     const perLength = (perMetre: number) => (studio.unitSystem === 'imperial' ? Math.round((perMetre * MM_PER_YARD) / 1000) : perMetre);
     const input: CostingSheetInput = {

@@ -25,7 +25,8 @@ export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageD
   shortage,
 });
 
-export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>()): CutPlanDto {
+/** Cut plan → DTO. Rates and cost go only to roles that may read costs (`showCosts`), never to the cutter. */
+export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>(), showCosts = false): CutPlanDto {
   const r = p.result as StoredCutPlanResult;
   return {
     id: p.id,
@@ -42,6 +43,11 @@ export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEn
     cut: r.plan.cut,
     lengthSources: r.lengthSources,
     assumedUtilisation: r.assumedUtilisation,
+    markerLengths: r.markerLengths ?? (r.lengthSources.some((s) => s.source === 'estimate') ? 'estimated' : 'measured'),
+    markerLengthsNote: r.markerLengthsNote ?? null,
+    objective: r.plan.cost === undefined ? 'fabric' : 'cost',
+    rates: showCosts ? (r.rates ?? null) : null,
+    costMinor: showCosts && r.plan.cost !== undefined ? Math.round(r.plan.cost) : null,
     endOfRollWasteMm: r.allocation.endOfRollWaste,
     stockKeptMm: r.allocation.stockKept,
     shortfall: r.allocation.shortfall,

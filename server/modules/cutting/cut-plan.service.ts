@@ -1,4 +1,4 @@
-import type { allocateRolls, planCutOrder, SizeRatio } from '@planning';
+import { DEFAULT_LAY_MINUTES, DEFAULT_PLY_MINUTES, type allocateRolls, type CutOrderPlan, type SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
 import type { DataSource } from 'typeorm';
 import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
@@ -12,6 +12,7 @@ import { loadStylePieces } from '../markers/style-pieces';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { createFabricRepository } from './fabric.repository';
 import { ratioKey } from './cut-order-job';
+import { createCostingRepository } from '../costing/costing.repository';
 import type { JobRunner } from '../../jobs/job-runner';
 import { withStockLock } from './stock-lock';
 
@@ -22,14 +23,47 @@ import { withStockLock } from './stock-lock';
  */
 export const ASSUMED_UTILISATION = 0.75;
 
+/** The rates a plan was priced with, minor units of the studio's currency. */
+export interface CutPlanRates {
+  layCostMinor: number;
+  plyCostMinor: number;
+  fabricCostPerMetreMinor: number;
+  /** Where the lay and ply costs come from. */
+  basis: string;
+  /** ISO 4217 code of the studio's currency. */
+  currency: string;
+}
+
 /** What the plan result stores beside the core's output. */
 export interface StoredCutPlanResult {
-  plan: ReturnType<typeof planCutOrder>;
+  plan: CutOrderPlan;
   allocation: ReturnType<typeof allocateRolls>;
   lengthSources: { ratio: SizeRatio; source: 'marker' | 'estimate'; markerId?: number }[];
   assumedUtilisation: number;
+  /** Every marker length of the plan is measured, or every one is an estimate (older plans: absent). */
+  markerLengths?: 'measured' | 'estimated';
+  /** Why measured markers were not used although some exist. */
+  markerLengthsNote?: string;
+  /** Rates of the money objective; null = least fabric, then fewest lays (older plans: absent). */
+  rates?: CutPlanRates | null;
 }
 
+/**
+ * The studio's rates for a plan: fabric at the fabric's price per metre; a lay at
+ * {@link DEFAULT_LAY_MINUTES} and a ply at {@link DEFAULT_PLY_MINUTES} of the style's labour cost per
+ * minute (its costing settings). Without a fabric price or a labour cost there is nothing to weigh, and
+ * the plan is least fabric, then fewest lays.
+ */
+export function cutPlanRates(fabricPricePerMetreMinor: number, labourCostPerMinuteMinor: number, currency: string): CutPlanRates | null {
+  if (!(fabricPricePerMetreMinor > 0) || !(labourCostPerMinuteMinor > 0)) return null;
+  return {
+    layCostMinor: Math.round(DEFAULT_LAY_MINUTES * labourCostPerMinuteMinor),
+    plyCostMinor: Math.round(DEFAULT_PLY_MINUTES * labourCostPerMinuteMinor),
+    fabricCostPerMetreMinor: fabricPricePerMetreMinor,
+    basis: `${DEFAULT_LAY_MINUTES} min a lay and ${DEFAULT_PLY_MINUTES} min a ply at the style's labour cost per minute`,
+    currency,
+  };
+}
 
 /**
  * Spreading mode of a lay: one-way (napped or directional) fabric is spread face up, one way, so every
@@ -70,12 +104,14 @@ export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPl
   if (Object.values(remaining).every((q) => q === 0)) throw conflict('Every garment of this batch is already cut');
 
   const areas = garmentAreas(pieces);
-  const stored = new Map<string, { id: number; length: number }>();
+  const stored = new Map<string, { id: number; length: number; ratio: SizeRatio }>();
   for (const m of await createMarkerRepository(ds).doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
     const k = ratioKey(m.ratio, sizes);
     const prev = stored.get(k);
-    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm });
+    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio });
   }
+  const labour = (await createCostingRepository(ds).settings(studioId, batch.styleId))?.labourCostPerMinuteMinor ?? 0;
+  const rates = cutPlanRates(fabric.pricePerMetreMinor, labour, (await plans.studio(studioId)).currency);
   for (let attempt = 1; ; attempt++) {
     const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
     const replaced = await plans.stock.releasable(studioId, batchId);
@@ -86,17 +122,17 @@ export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPl
         sizes, quantities: remaining, maxPlies: Math.min(input.maxPlies, fabric.maxPlies), maxGarmentsPerMarker: input.maxGarmentsPerMarker,
         maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
         overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
-        nodeBudget: 200_000,
       },
-      storedLengthsMm: Object.fromEntries([...stored].map(([k, v]) => [k, v.length])),
+      measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length })),
       garmentAreasMm2: areas,
       widthMm: fabric.widthMm,
       assumedUtilisation: ASSUMED_UTILISATION,
       rolls: rolls.filter((r) => (free.get(r.id) ?? 0) > 0).map((r) => ({ id: String(r.id), lengthMm: free.get(r.id)!, shadeLot: r.shadeLot, widthMm: r.widthMm })),
+      ...(rates ? { costs: { layCost: rates.layCostMinor, plyCost: rates.plyCostMinor, fabricCostPerMetre: rates.fabricCostPerMetreMinor } } : {}),
     });
     if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
     try {
-      return await withStockLock(studioId, () => savePlan(plans, { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rolls, replaced, now }, solved));
+      return await withStockLock(studioId, () => savePlan(plans, { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rolls, replaced, now, rates }, solved));
     } catch (err) {
       if (!(err instanceof StockMoved)) throw err;
       if (attempt >= PLAN_ATTEMPTS) throw conflict('Roll stock kept changing while this plan was made; plan again');
@@ -118,11 +154,12 @@ interface PlanContext {
   input: CreateCutPlanInput;
   live: CutPlanEntity[];
   cutLays: LayEntity[];
-  stored: Map<string, { id: number; length: number }>;
+  stored: Map<string, { id: number; length: number; ratio: SizeRatio }>;
   sizes: string[];
   rolls: RollEntity[];
   replaced: RollReservationEntity[];
   now: Date;
+  rates: CutPlanRates | null;
 }
 
 /** Length each roll gives each lay: the drop in the roll's remaining length over its segment, mm. */
@@ -138,16 +175,24 @@ function lengthsByLayAndRoll(allocation: ReturnType<typeof allocateRolls>) {
   return out;
 }
 
-async function savePlan(plans: CutPlanRepository, c: PlanContext, solved: { plan: ReturnType<typeof planCutOrder>; allocation: ReturnType<typeof allocateRolls> }) {
-  const { studioId, batchId, fabric, input, live, cutLays, stored, sizes } = c;
-  const { plan, allocation } = solved;
+async function savePlan(
+  plans: CutPlanRepository,
+  c: PlanContext,
+  solved: { plan: CutOrderPlan; allocation: ReturnType<typeof allocateRolls>; markerLengths: 'measured' | 'estimated'; measuredRefused?: string },
+) {
+  const { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rates } = c;
+  const { plan, allocation, markerLengths } = solved;
   const lengthSources = plan.lays.map((l) => {
-    const hit = stored.get(ratioKey(l.ratio, sizes));
+    const hit = markerLengths === 'measured' ? stored.get(ratioKey(l.ratio, sizes)) : undefined;
     return hit ? { ratio: l.ratio, source: 'marker' as const, markerId: hit.id } : { ratio: l.ratio, source: 'estimate' as const };
   });
-  const result: StoredCutPlanResult = { plan, allocation, lengthSources, assumedUtilisation: ASSUMED_UTILISATION };
+  const result: StoredCutPlanResult = {
+    plan, allocation, lengthSources, assumedUtilisation: ASSUMED_UTILISATION, markerLengths, rates,
+    ...(solved.measuredRefused ? { markerLengthsNote: solved.measuredRefused } : {}),
+  };
   const byId = new Map(c.rolls.map((r) => [String(r.id), r]));
   const firstSeq = cutLays.reduce((a, l) => Math.max(a, l.seq), 0) + 1;
+  const waiting = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'planned');
   return plans.transaction(async (m) => {
     await plans.stock.release(m, studioId, c.replaced, c.now);
     for (const p of live) await m.getRepository(CutPlanEntity).update({ studioId, id: p.id }, { status: 'superseded' });
@@ -155,20 +200,30 @@ async function savePlan(plans: CutPlanRepository, c: PlanContext, solved: { plan
       studioId, batchId, fabricId: fabric.id, input: { ...input, maxPlies: Math.min(input.maxPlies, fabric.maxPlies) }, result,
       fabricUsedMm: plan.fabricUsed, lowerBoundMm: plan.lowerBound, status: 'draft',
     });
-    const lays = plan.lays.map((l, i) => {
+    const fresh: LayEntity[] = [];
+    const kept = new Set<number>();
+    plan.lays.forEach((l, i) => {
       const lines: LayRollLine[] = allocation.rolls.flatMap((u) =>
         u.segments.filter((s) => s.lay === i).map((s) => {
           const r = byId.get(u.id)!;
           return { rollId: r.id, label: r.label, shadeLot: r.shadeLot, plies: s.plies, expectedRemnantMm: Math.round(s.remaining) };
         }),
       );
-      return m.getRepository(LayEntity).create({
+      const lay = m.getRepository(LayEntity).create({
         studioId, cutPlanId: saved.id, batchId, seq: firstSeq + i, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
         endAllowanceMm: plan.endAllowance, markerId: lengthSources[i].markerId ?? null, spreadingMode: spreadingModeFor(fabric),
         rolls: lines, status: 'planned', flaws: '', cutAt: null,
       });
+      const same = waiting.find((w) => !kept.has(w.id) && sameLay(w, lay, sizes));
+      if (same) {
+        kept.add(same.id);
+        fresh.push(Object.assign(same, { cutPlanId: saved.id, seq: firstSeq + i }));
+      } else fresh.push(lay);
     });
-    const savedLays = await m.getRepository(LayEntity).save(lays);
+    // A lay that did not change keeps its id (and anything recorded on it); the others are retired, visibly.
+    for (const w of waiting) if (!kept.has(w.id)) await m.getRepository(LayEntity).update({ studioId, id: w.id }, { status: 'retired' });
+    const savedLays = await m.getRepository(LayEntity).save(fresh);
+    // The batch's old holds were released above; every lay of the new plan (kept or new) holds its length again.
     for (const h of lengthsByLayAndRoll(allocation)) {
       if (!(h.lengthMm > 0)) continue;
       const held = await plans.stock.reserve(m, { studioId, rollId: h.rollId, cutPlanId: saved.id, layId: savedLays[h.lay].id, batchId, lengthMm: h.lengthMm });
@@ -178,6 +233,13 @@ async function savePlan(plans: CutPlanRepository, c: PlanContext, solved: { plan
     for (const l of cutLays) await m.getRepository(LayEntity).update({ studioId, id: l.id }, { cutPlanId: saved.id });
     return saved;
   });
+}
+
+/** A waiting lay is unchanged when ratio, plies, marker, allowance, spreading and its rolls (and plies per roll) are. */
+function sameLay(a: LayEntity, b: LayEntity, sizes: string[]): boolean {
+  const rolls = (x: LayEntity) => x.rolls.map((r) => `${r.rollId}:${r.plies}`).join(',');
+  return ratioKey(a.ratio, sizes) === ratioKey(b.ratio, sizes) && a.plies === b.plies && Math.round(a.markerLengthMm) === Math.round(b.markerLengthMm)
+    && a.endAllowanceMm === b.endAllowanceMm && a.markerId === b.markerId && a.spreadingMode === b.spreadingMode && rolls(a) === rolls(b);
 }
 
 async function pickRolls(fabrics: ReturnType<typeof createFabricRepository>, studioId: number, fabric: FabricEntity, rollIds?: number[]): Promise<RollEntity[]> {

@@ -1,10 +1,11 @@
 import { Router, type Response } from 'express';
 import type { DataSource } from 'typeorm';
 import type { JobRunner } from '../../jobs/job-runner';
+import { can, type Role } from '../../../shared/auth/permissions';
 import { idParam } from '../../../shared/schemas/common';
 import { createCutPlanInput, cutLayInput, recordLayInput, type ShortageDto } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
-import { notFound } from '../../errors';
+import { conflict, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import { createBatchRepository } from '../batches/batch.repository';
@@ -34,12 +35,12 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   };
   const shortagesOf = async (studioId: number, list: LayEntity[]) =>
     layShortages(list, await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]));
-  const planDto = async (studioId: number, batchId: number) => {
+  const planDto = async (studioId: number, batchId: number, role: Role) => {
     const p = await plans.currentPlan(studioId, batchId);
     if (!p) return null;
     const list = await plans.laysOf(studioId, p.id);
     const fabric = await fabrics.get(studioId, p.fabricId);
-    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list));
+    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
   };
   const docsFor = async (studioId: number, batchId: number, only?: number) => {
     const batch = await loadBatch(studioId, batchId);
@@ -54,13 +55,13 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   batches.get('/:id/cut-plan', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
     const studioId = actorOf(req).studioId;
     await loadBatch(studioId, Number(req.params.id));
-    res.json({ cutPlan: await planDto(studioId, Number(req.params.id)) });
+    res.json({ cutPlan: await planDto(studioId, Number(req.params.id), actorOf(req).role) });
   });
   batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
     const actor = actorOf(req);
     const batchId = Number(req.params.id);
     const saved = await planBatchCut(ds, jobs, plans, actor.studioId, batchId, req.body, now());
-    const dto = (await planDto(actor.studioId, batchId))!;
+    const dto = (await planDto(actor.studioId, batchId, actor.role))!;
     await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
     res.status(201).json({ cutPlan: dto });
   });
@@ -141,6 +142,8 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
   const layDoc = async (studioId: number, id: number) => {
     const lay = await plans.getLay(studioId, id);
     if (!lay) throw notFound('Lay');
+    // A retired lay is in no current plan: no ticket or marker list that a cutter could spread from.
+    if (lay.status === 'retired') throw conflict('This lay was retired when the batch was planned again: use the current plan’s documents');
     return { lay, input: await docsFor(studioId, lay.batchId, lay.id) };
   };
   lays.get('/:id/cut-ticket.pdf', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {

@@ -8,6 +8,8 @@ import { batchCode } from '../batches/batch.routes';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';
 
+const RETIRED = 'This lay was retired when the batch was planned again: cut the lays of the current plan';
+
 /** Apply what the cutter recorded to the lay's roll lines; unknown rolls are field errors. */
 export function applyRecord(lines: LayRollLine[], input: RecordLayInput): LayRollLine[] {
   const fields: Record<string, string> = {};
@@ -57,6 +59,7 @@ function checkMeasured(lines: LayRollLine[], input: RecordLayInput | undefined) 
 export async function recordLay(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
+  if (lay.status === 'retired') throw conflict(RETIRED);
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const rolls = applyRecord(lay.rolls, input);
   checkRemnants(rolls, new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r])), input);
@@ -78,6 +81,7 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
 export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date, opts: { asPlanned?: boolean } = {}) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
+  if (lay.status === 'retired') throw conflict(RETIRED);
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const later = (await plans.laysOf(studioId, lay.cutPlanId)).filter((l) => l.id !== lay.id && l.status === 'planned');
   const usedLater = new Set(later.flatMap((l) => l.rolls.map((r) => r.rollId)));

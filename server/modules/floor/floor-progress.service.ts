@@ -143,6 +143,19 @@ export function createFloorProgressService(deps: { repo: FloorRepository; floor:
         const piecesTotal = totalPieces * mine.length;
         return { section, piecesDone, piecesTotal, percent: piecesTotal ? Math.round((piecesDone / piecesTotal) * 1000) / 10 : 0 };
       }).filter((s) => s.piecesTotal > 0);
+      // Cutting is done lay by lay: with a cut plan, its progress is the share of lays cut (bundles
+      // appear only when a lay is cut, so cutting operations logged on them would always lag).
+      const lays = await repo.liveLaysOfBatch(studioId, batchId);
+      if (lays.length) {
+        const laysDone = lays.filter((l) => l.status === 'cut').length;
+        const cutting: SectionProgress = {
+          section: 'cutting', piecesDone: sections.find((s) => s.section === 'cutting')?.piecesDone ?? 0, piecesTotal: sections.find((s) => s.section === 'cutting')?.piecesTotal ?? 0,
+          percent: Math.round((laysDone / lays.length) * 1000) / 10, laysDone, laysTotal: lays.length,
+        };
+        const at = sections.findIndex((s) => s.section === 'cutting');
+        if (at >= 0) sections[at] = cutting;
+        else sections.unshift(cutting);
+      }
       const last = finalOperation(ops);
       const sewing = ops.filter((o) => o.section === 'sewing');
       const finishing = ops.filter((o) => o.section === 'finishing');

@@ -1,10 +1,12 @@
-import { Between, In, type DataSource } from 'typeorm';
+import { Between, In, Not, type DataSource } from 'typeorm';
 import { createStatements } from '../../db/statements';
 import {
   AttendanceEntity,
   BatchEntity,
   BundleEntity,
+  CutPlanEntity,
   GradingSetEntity,
+  LayEntity,
   OperationEntity,
   StudioEntity,
   UserEntity,
@@ -28,6 +30,12 @@ export function createFloorRepository(ds: DataSource) {
   const sql = createStatements(ds);
   return {
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneBy({ id: studioId }),
+    /** Lays of the batch's current cut plans, retired ones left out (read only: the cutting area owns them). */
+    async liveLaysOfBatch(studioId: number, batchId: number) {
+      const live = await ds.getRepository(CutPlanEntity).find({ where: { studioId, batchId, status: Not('superseded') }, select: { id: true } });
+      if (!live.length) return [];
+      return ds.getRepository(LayEntity).find({ where: { studioId, cutPlanId: In(live.map((p) => p.id)), status: Not('retired') }, select: { id: true, status: true } });
+    },
     batch: (studioId: number, id: number) => batches.findOne({ where: { studioId, id }, relations: { style: true } }),
     /**
      * Bundles with this number: the one of `batchId` when given, else every one in the studio (more than one

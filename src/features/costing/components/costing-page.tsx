@@ -6,7 +6,7 @@ import { DataTable } from '@/components/ui/data-table';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { downloadFile } from '@/lib/api-client';
 import { useCan } from '@/lib/auth';
-import { costingQueries } from '../api/costing-queries';
+import { costingQueries, useUpdateCostingSettings } from '../api/costing-queries';
 import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
 import { formatMoney as money } from '@/lib/format';
@@ -47,9 +47,10 @@ function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
 
 export function CostingPage() {
   const id = Number(useParams().id);
-  const [basis, setBasis] = useState<LabourBasis>('sam');
-  const { data: sheet, isLoading, error, isFetching } = useQuery({ ...costingQueries.sheet(id, basis), placeholderData: (prev) => prev });
+  const { data: sheet, isLoading, error, isFetching } = useQuery({ ...costingQueries.sheet(id), placeholderData: (prev) => prev });
   const canEdit = useCan('costs:write');
+  // The chosen basis is saved with the style's settings, so the batch page and the workbook follow it.
+  const saveSettings = useUpdateCostingSettings();
   // A stable array: the table resets its state whenever `data` changes identity.
   const sizeRows = useMemo(() => (sheet ? sheet.sizes.map((s) => ({ ...s, currency: sheet.currency, locale: sheet.locale })) : []), [sheet]);
   const [downloadError, setDownloadError] = useState<unknown>(null);
@@ -59,7 +60,7 @@ export function CostingPage() {
   const handleDownload = async () => {
     setDownloadError(null);
     try {
-      await downloadFile(`/batches/${id}/costing.xlsx?labourBasis=${basis}`, `costing-${sheet.batch.code}.xlsx`);
+      await downloadFile(`/batches/${id}/costing.xlsx`, `costing-${sheet.batch.code}.xlsx`);
     } catch (e) {
       setDownloadError(e);
     }
@@ -103,7 +104,7 @@ export function CostingPage() {
               <span>Cost lines (bill of materials, labour, overheads)</span>
               <label className="flex items-center gap-2 text-sm font-normal text-ink-700">
                 Labour costed by
-                <select aria-label="Labour costed by" className="field-input w-auto py-1" value={basis} onChange={(e) => setBasis(e.target.value as LabourBasis)}>
+                <select aria-label="Labour costed by" className="field-input w-auto py-1" value={sheet.settings.labourBasis} disabled={!canEdit || saveSettings.isPending} onChange={(e) => saveSettings.mutate({ styleId: sheet.style.id, labourBasis: e.target.value as LabourBasis })}>
                   <option value="sam">standard minutes × cost per minute</option>
                   <option value="piece-rates">piece rates</option>
                 </select>

@@ -4,6 +4,7 @@ import { Link } from 'react-router';
 import type { BatchDto } from '@shared/schemas/batches';
 import { Badge, Card, ErrorNote } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
+import { formatMoney } from '@/lib/format';
 import { cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { paths } from '@/config/paths';
@@ -57,11 +58,21 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
             <span className="rounded-lg bg-calico-50 px-3 py-2">Lower bound <b>{metres(plan.lowerBoundMm)}</b></span>
             <span className="rounded-lg bg-calico-50 px-3 py-2">Gap <b>{(plan.gap * 100).toFixed(2)} %</b></span>
             <span className="rounded-lg bg-calico-50 px-3 py-2">{plan.lays.length} lays (at least {plan.layLowerBound})</span>
-            <Badge tone={plan.method === 'exact' ? 'teal' : 'gold'}>{plan.method === 'exact' ? 'proven best' : 'best found'}</Badge>
+            <Badge tone={plan.method === 'exact' ? 'teal' : 'gold'}>{plan.method === 'exact' ? 'proven best' : `best found, within ${(plan.gap * 100).toFixed(2)} %`}</Badge>
+            {plan.rates && plan.costMinor !== null ? <span className="rounded-lg bg-calico-50 px-3 py-2">Cost <b>{formatMoney(plan.costMinor, plan.rates.currency)}</b></span> : null}
           </div>
-          {plan.lengthSources.some((s) => s.source === 'estimate') ? (
-            <p className="text-xs text-ink-600">Lays without a stored marker use an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). Build the marker to replace it.</p>
-          ) : null}
+          <p className="text-xs text-ink-600" aria-label="Plan objective">
+            {plan.objective === 'cost'
+              ? plan.rates
+                ? <>Least total cost: fabric at {formatMoney(plan.rates.fabricCostPerMetreMinor, plan.rates.currency)} a metre, {formatMoney(plan.rates.layCostMinor, plan.rates.currency)} a lay and {formatMoney(plan.rates.plyCostMinor, plan.rates.currency)} a ply ({plan.rates.basis}).</>
+                : <>Least total cost of fabric, lays and plies at the studio's rates.</>
+              : <>Least fabric, then fewest lays. With a fabric price and a labour cost per minute in the style's costing, the plan weighs fabric against lays.</>}
+          </p>
+          <p className="text-xs text-ink-600" aria-label="Marker lengths">
+            {plan.markerLengths === 'measured'
+              ? 'Every marker length is a measured marker.'
+              : <>Every marker length is an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). {plan.markerLengthsNote ?? 'Build the markers to plan on measured lengths.'}</>}
+          </p>
           <div tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Lay</th><th>Sizes per ply</th><th>Plies</th><th>Marker</th><th>Spreading</th><th>Rolls (plies, expected remnant)</th><th>Status</th></tr></thead>

@@ -51,17 +51,24 @@ export function LayPage() {
   const server = (record.error ?? cut.error) instanceof ApiError ? ((record.error ?? cut.error) as ApiError).fields ?? {} : {};
   const fields: Record<string, string> = { ...server, ...local };
   const isCut = lay.status === 'cut';
+  const retired = lay.status === 'retired';
+  const readOnly = isCut || retired;
   const spreadPlies = lay.rolls.reduce((a, r) => a + (Number(actual[r.rollId]?.actualPlies) || 0), 0);
   const file = (url: string, name: string) => () => downloadFile(url, name);
   return (
     <>
       <PageHeader
         title={`${lay.batchCode} · Lay ${lay.seq}`}
-        subtitle={<>{ratioLabel(lay.ratio)} per ply · {lay.plies} plies · <Badge tone={isCut ? 'teal' : 'grey'}>{lay.status}</Badge></>}
+        subtitle={<>{ratioLabel(lay.ratio)} per ply · {lay.plies} plies · <Badge tone={isCut ? 'teal' : retired ? 'gold' : 'grey'}>{lay.status}</Badge></>}
         actions={<button type="button" className="btn-quiet" onClick={() => window.print()}>Print</button>}
       />
       <div className="space-y-5">
-        {lay.shortage && !isCut ? (
+        {retired ? (
+          <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">
+            This lay was retired when the batch was planned again: do not spread or cut it. The batch's current cut plan lists the lays to cut.
+          </p>
+        ) : null}
+        {lay.shortage && !readOnly ? (
           <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
             {lay.shortage.message} Tell the owner before spreading.
           </p>
@@ -86,11 +93,11 @@ export function LayPage() {
                 {lay.rolls.map((r, i) => (
                   <tr key={r.rollId} className="border-t border-calico-200">
                     <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td>{metres(r.expectedRemnantMm)}</td>
-                    <td><input aria-label={`Plies spread from ${r.label}`} className="field-input w-20" type="number" disabled={isCut} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
+                    <td><input aria-label={`Plies spread from ${r.label}`} className="field-input w-20" type="number" disabled={readOnly} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
                       {fields[`rolls.${i}.actualPlies`] ? <p className="field-error">{fields[`rolls.${i}.actualPlies`]}</p> : null}</td>
-                    <td><input aria-label={`Remnant left on ${r.label}`} className="field-input w-24" type="number" step="0.01" disabled={isCut} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
+                    <td><input aria-label={`Remnant left on ${r.label}`} className="field-input w-24" type="number" step="0.01" disabled={readOnly} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
                       {fields[`rolls.${i}.actualRemnantMm`] ? <p className="field-error">{fields[`rolls.${i}.actualRemnantMm`]}</p> : null}</td>
-                    <td><input aria-label={`Note on ${r.label}`} className="field-input" disabled={isCut} value={actual[r.rollId]?.note ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], note: e.target.value } })} /></td>
+                    <td><input aria-label={`Note on ${r.label}`} className="field-input" disabled={readOnly} value={actual[r.rollId]?.note ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], note: e.target.value } })} /></td>
                   </tr>
                 ))}
               </tbody>
@@ -99,14 +106,14 @@ export function LayPage() {
           <p className="mt-2 text-sm">Plies spread: <b>{spreadPlies}</b> of {lay.plies}{fabric && lay.plies > fabric.maxPlies ? ' · above this fabric’s ply limit' : ''}</p>
           <div className="mt-3">
             <label className="field-label" htmlFor="lay-flaws">Flaws and shortages</label>
-            <textarea id="lay-flaws" className="field-input" rows={2} disabled={isCut} value={flaws} onChange={(e) => setFlaws(e.target.value)} />
+            <textarea id="lay-flaws" className="field-input" rows={2} disabled={readOnly} value={flaws} onChange={(e) => setFlaws(e.target.value)} />
           </div>
-          {!isCut ? (
+          {!readOnly ? (
             <div className="mt-3 flex flex-wrap gap-2">
               <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>Save what was spread</button>
               <button type="button" className="btn-primary" disabled={cut.isPending} onClick={() => { const b = body(true); if (b) cut.mutate(b); }}>Mark lay cut</button>
             </div>
-          ) : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
+          ) : retired ? null : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
           {(record.error || cut.error) && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={record.error ?? cut.error} /></div> : null}
         </Card>
@@ -117,7 +124,7 @@ export function LayPage() {
             </ul>
           </Card>
         ) : null}
-        <Card title="Documents">
+        {retired ? null : <Card title="Documents">
           <div className="flex flex-wrap gap-2">
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
@@ -125,7 +132,7 @@ export function LayPage() {
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>Bundle register (XLSX)</button> : null}
           </div>
-        </Card>
+        </Card>}
         <CuttingCautions />
       </div>
     </>

@@ -12,7 +12,7 @@ export function SectionBars({ progress }: { progress: ProgressDto }) {
     <div className="space-y-2">
       {progress.sections.map((s) => (
         <div key={s.section}>
-          <div className="flex justify-between text-sm"><span className="capitalize">{s.section}</span><span>{s.percent} %</span></div>
+          <div className="flex justify-between text-sm"><span className="capitalize">{s.section}</span><span>{s.laysTotal ? `${s.laysDone} of ${s.laysTotal} lays · ` : ''}{s.percent} %</span></div>
           <div className="h-2.5 rounded-full bg-calico-200" role="progressbar" aria-label={`${s.section} done`} aria-valuenow={s.percent} aria-valuemin={0} aria-valuemax={100}>
             <div className="h-2.5 rounded-full bg-thread-700" style={{ width: `${Math.min(100, s.percent)}%` }} />
           </div>
