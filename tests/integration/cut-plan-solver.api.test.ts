@@ -4,7 +4,7 @@ import { MarkerEntity } from '../../server/entities';
 import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
-type Lay = { id: number; seq: number; status: string; ratio: Record<string, number>; plies: number; markerLengthMm: number; endAllowanceMm: number; markerId: number | null };
+type Lay = { id: number; seq: number; status: string; ratio: Record<string, number>; plies: number; markerLengthMm: number; endAllowanceMm: number; markerId: number | null; rolls: { rollId: number; plies: number; expectedRemnantMm: number }[] };
 let owner: Agent, cutter: Agent, ds: DataSource;
 beforeAll(async () => {
   const ctx = await buildTestApp();
@@ -107,7 +107,9 @@ describe('cutting progress on the owner’s pages', () => {
     const cutting = before.sections.find((s: { section: string }) => s.section === 'cutting');
     expect(cutting).toMatchObject({ laysDone: 1, laysTotal: lays.length, percent: Math.round((1 / lays.length) * 1000) / 10 });
     const next = lays.find((l) => l.status === 'planned')!;
-    expect((await cutter.post(`/api/lays/${next.id}/cut`).send({})).status).toBe(200);
+    // The cutter enters what was spread and the remnant measured (the plan is never taken as fact).
+    const rolls = next.rolls.map((r) => ({ rollId: r.rollId, actualPlies: r.plies, actualRemnantMm: r.expectedRemnantMm }));
+    expect((await cutter.post(`/api/lays/${next.id}/cut`).send({ rolls })).status).toBe(200);
     const after = (await owner.get('/api/floor/progress/1')).body.progress.sections.find((s: { section: string }) => s.section === 'cutting');
     expect(after).toMatchObject({ laysDone: 2, laysTotal: lays.length, percent: Math.round((2 / lays.length) * 1000) / 10 });
   });
