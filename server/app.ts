@@ -27,6 +27,10 @@ import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
 import { createUserService } from './modules/users/user.service';
 import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
+import { requestLogger } from './observability/logger';
+import type { Logger } from 'pino';
+import { readiness } from './observability/readiness';
+import { serveClient } from './observability/static-client';
 
 export interface AppDeps {
   ds: DataSource;
@@ -39,6 +43,8 @@ export interface AppDeps {
   moduleContext?: { current?: ModuleContext };
   /** Job runner override; by default in-process, or BullMQ on Redis with REDIS_URL. */
   jobs?: JobRunner;
+  /** Request log destination (tests pass one to read the lines); the process logger by default. */
+  logger?: Logger;
 }
 
 /** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
@@ -62,6 +68,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY) app.set('trust proxy', 1);
+  app.use(requestLogger(deps.logger));
 
   app.use(
     helmet({
@@ -93,8 +100,14 @@ export function createApp(deps: AppDeps): Express {
 
   const api = Router();
   api.use(express.json({ limit: '2mb' }));
+  // Liveness: the process answers. Readiness (below, once the job runner exists): the database, and
+  // Redis and the queues when configured, answer too.
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
+  });
+  api.get('/health/ready', async (_req, res) => {
+    const report = await readiness({ ds, redisUrl: env.REDIS_URL || undefined });
+    res.status(report.ready ? 200 : 503).json(report);
   });
   api.use(
     session({
@@ -135,9 +148,6 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', api);
 
   const clientDir = deps.clientDir ?? resolve('dist/client');
-  if (existsSync(join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/{*path}', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
-  }
+  if (existsSync(join(clientDir, 'index.html'))) serveClient(app, clientDir);
   return app;
 }

@@ -1,5 +1,9 @@
-import 'dotenv/config';
+import { existsSync } from 'node:fs';
 import { z } from 'zod';
+
+// A `.env` file beside package.json fills variables the environment does not set (Node's own reader,
+// no banner). Must run before any module reads process.env at load time (entity column types do).
+if (existsSync('.env') && process.env.NODE_ENV !== 'test' && !process.env.VITEST) process.loadEnvFile('.env');
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -29,10 +33,21 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Seamrun <no-reply@seamrun.local>'),
   LOCAL_SMTP_PORT: z.coerce.number().int().min(0).default(2525),
   PAYMENTS_SECRET_KEY: z.string().default(''),
+  /**
+   * Run pending migrations when the server starts. Default: yes, except with NODE_ENV=production, where
+   * `npm run db:migrate` is its own deployment step and a start against a database that is behind stops.
+   */
+  MIGRATE_ON_START: z.enum(['true', 'false']).optional(),
+  /** pino level: fatal, error, warn, info, debug, trace or silent (default info; silent under tests). */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   LOCAL_PAYMENTS_PORT: z.coerce.number().int().min(0).default(12111),
 });
 
 export type Env = z.infer<typeof envSchema>;
+
+/** Whether this start migrates: MIGRATE_ON_START when set, else everywhere but production. */
+export const shouldMigrateOnStart = (env: Env) =>
+  env.MIGRATE_ON_START ? env.MIGRATE_ON_START === 'true' : env.NODE_ENV !== 'production';
 
 /** Parse process.env once; a readable failure names every bad variable. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {

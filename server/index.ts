@@ -3,7 +3,7 @@ import type { Server } from 'node:http';
 import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
 import { createApp } from './app';
-import { loadEnv, type Env } from './env';
+import { loadEnv, shouldMigrateOnStart, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
@@ -11,7 +11,7 @@ import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 /** env → data source → migrations → seed → listen. */
 export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
-  const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
+  const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH, { migrate: shouldMigrateOnStart(env) });
   const checkpointer = env.DATABASE_URL ? null : await startWalCheckpointer(ds, env.DATABASE_PATH);
   const seeded = env.SEED_DEMO
     ? await seedDemoStudio(ds, {

@@ -25,7 +25,7 @@ export async function backupDatabase(source: string, target: string): Promise<st
   return target;
 }
 
-if (process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop()!)) {
+if (process.argv[1] && import.meta.url.split('?')[0].endsWith(process.argv[1].split('/').pop()!)) {
   const env = loadEnv();
   const stamp = new Date().toISOString().replace(/[-:]/g, '').replace(/\..+/, 'Z');
   const target = process.argv[2] ?? join(dirname(env.DATABASE_PATH), 'backups', `seamrun-${stamp}.sqlite`);
