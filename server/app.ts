@@ -8,6 +8,7 @@ import type { DataSource } from 'typeorm';
 import { configurePassport } from './auth/passport';
 import { requirePasswordChanged } from './auth/require';
 import { DatabaseSessionStore } from './auth/session-store';
+import { createThrottleCounter, SharedThrottleStore } from './auth/throttle-store';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
@@ -15,6 +16,7 @@ import { createAuditRepository } from './modules/audit/audit.repository';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { authRoutes } from './modules/auth/auth.routes';
 import { createAuthService } from './modules/auth/auth.service';
+import { createSignInThrottleRepository } from './modules/auth/sign-in-throttle.repository';
 import { createBatchRepository } from './modules/batches/batch.repository';
 import { batchRoutes } from './modules/batches/batch.routes';
 import { createSessionRepository } from './modules/sessions/session.repository';
@@ -46,6 +48,9 @@ export interface AppDeps {
   /** Request log destination (tests pass one to read the lines); the process logger by default. */
   logger?: Logger;
 }
+
+/** ctx.services key of the sign-in throttle counter (closed when the server stops). */
+export const SIGN_IN_THROTTLE_KEY = 'auth:sign-in-throttle';
 
 /** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
 const RENEW_SESSION_EVERY_MS = 5 * 60 * 1000;
@@ -134,13 +139,17 @@ export function createApp(deps: AppDeps): Express {
   api.use(csrfGuard);
   api.use(requirePasswordChanged);
 
-  api.use('/auth', authRoutes(auth, passport, { loginLimit: env.LOGIN_RATE_LIMIT }));
+  // Sign-in attempts are counted where every web process sees them (the database, or Redis when set).
+  const throttle = createThrottleCounter({ repo: createSignInThrottleRepository(ds), redisUrl: env.REDIS_URL || undefined });
+  const throttleStore = (name: string) => new SharedThrottleStore(throttle, name);
+  api.use('/auth', authRoutes(auth, passport, { loginLimit: env.LOGIN_RATE_LIMIT, throttleStore }));
   api.use('/users', userRoutes(createUserService({ users, audit })));
   api.use('/studio', studioRoutes(studios, audit));
   api.use('/styles', styleRoutes(styles, audit));
   api.use('/batches', batchRoutes(batches, styles, audit));
   api.use('/audit', auditRoutes(audit));
   const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined), services: new Map() };
+  ctx.services.set(SIGN_IN_THROTTLE_KEY, throttle);
   for (const m of FEATURE_MODULES) m.register(api, ctx);
   if (deps.moduleContext) deps.moduleContext.current = ctx;
   api.use(notFoundHandler);

@@ -2,7 +2,8 @@ import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
-import { createApp } from './app';
+import { createApp, SIGN_IN_THROTTLE_KEY } from './app';
+import type { ThrottleCounter } from './auth/throttle-store';
 import { loadEnv, shouldMigrateOnStart, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
@@ -32,6 +33,7 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const stop = async () => {
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
     await holder.current?.jobs.stop();
+    await (holder.current?.services.get(SIGN_IN_THROTTLE_KEY) as ThrottleCounter | undefined)?.close();
     await new Promise((r) => server.close(r));
     await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();

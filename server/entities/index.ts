@@ -15,6 +15,7 @@ import { PayoutEntity } from './payout.entity';
 import { PurchaseOrderEntity } from './purchase-order.entity';
 import { RollEntity } from './roll.entity';
 import { SessionEntity } from './session.entity';
+import { SignInThrottleEntity } from './sign-in-throttle.entity';
 import { StudioEntity } from './studio.entity';
 import { StyleEntity } from './style.entity';
 import { SupplierEntity } from './supplier.entity';
@@ -41,6 +42,7 @@ export {
   PurchaseOrderEntity,
   RollEntity,
   SessionEntity,
+  SignInThrottleEntity,
   StudioEntity,
   StyleEntity,
   SupplierEntity,
@@ -76,4 +78,5 @@ export const entities = [
   PurchaseOrderEntity,
   MailMessageEntity,
   UploadEntity,
+  SignInThrottleEntity,
 ];

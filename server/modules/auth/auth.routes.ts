@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
+import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';
 import type { configurePassport } from '../../auth/passport';
 import {
   changePasswordInput,
@@ -16,13 +16,19 @@ import type { AuthService } from './auth.service';
 const logIn = (req: Request, user: Express.User) =>
   new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
 
-export function authRoutes(auth: AuthService, passport: ReturnType<typeof configurePassport>, opts: { loginLimit: number }) {
+export function authRoutes(
+  auth: AuthService,
+  passport: ReturnType<typeof configurePassport>,
+  // `throttleStore(name)`: a store shared by every web process (server/auth/throttle-store.ts), one per limiter.
+  opts: { loginLimit: number; throttleStore?: (name: string) => Store },
+) {
   const r = Router();
   const limiter = rateLimit({
     windowMs: 15 * 60 * 1000,
     limit: opts.loginLimit,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
+    store: opts.throttleStore?.('login'),
     keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
     handler: (_req, res) =>
       res.status(429).json({ error: { code: 'rate_limited', message: 'Too many sign-in attempts; wait a few minutes' } }),

@@ -36,9 +36,12 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
   const live = new Map<number, LiveProgress>();
   const running = new Map<number, NestingRunHandle>();
   const cancelledBeforeStart = new Set<number>();
+  /** Jobs queued here and not yet started, so a sweep does not queue them twice in this process. */
+  const pending = new Set<number>();
   let stopped = false;
 
   async function run(studioId: number, id: number, job: MarkerJobInput) {
+    pending.delete(id);
     if (stopped || cancelledBeforeStart.delete(id)) return;
     try {
       await executeMarkerJob(markers, studioId, id, job, {
@@ -56,9 +59,14 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
   }
 
   return {
-    /** Queue a marker row already stored as 'queued'. */
+    /**
+     * Queue a marker row stored as 'queued' (or left 'running' by a process that died). Queuing a job
+     * this or another process also queued is harmless: the run starts by claiming it, and only one claim wins.
+     */
     enqueue(studioId: number, id: number, job: MarkerJobInput) {
       stopped = false;
+      if (pending.has(id) || running.has(id)) return;
+      pending.add(id);
       void queue.add(() =>
         run(studioId, id, job).catch(async (err: unknown) => {
           const message = err instanceof Error ? err.message : String(err);
@@ -83,6 +91,7 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
     async stop() {
       stopped = true;
       queue.clear();
+      pending.clear();
       for (const h of running.values()) h.cancel();
       running.clear();
     },
