@@ -41,6 +41,12 @@ const envSchema = z.object({
   /** pino level: fatal, error, warn, info, debug, trace or silent (default info; silent under tests). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   LOCAL_PAYMENTS_PORT: z.coerce.number().int().min(0).default(12111),
+  /** Hours between scheduled online backups; 0 turns them off. Default 24 (off under NODE_ENV=test). */
+  BACKUP_EVERY_HOURS: z.coerce.number().min(0).max(24 * 365).optional(),
+  /** How many scheduled backups to keep; older ones are deleted. */
+  BACKUP_KEEP: z.coerce.number().int().min(1).default(14),
+  /** Folder of the scheduled backups (default: backups/ beside the SQLite file, or data/backups). */
+  BACKUP_DIR: z.string().default(''),
 });
 
 export type Env = z.infer<typeof envSchema>;

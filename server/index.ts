@@ -1,11 +1,13 @@
 import 'reflect-metadata';
 import type { Server } from 'node:http';
+import { startBackupSchedule } from './db/backup-schedule';
 import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
 import { createApp, SIGN_IN_THROTTLE_KEY } from './app';
 import type { ThrottleCounter } from './auth/throttle-store';
 import { loadEnv, shouldMigrateOnStart, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
+import { logger } from './observability/logger';
 import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 
@@ -28,9 +30,11 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));
   });
+  const backups = startBackupSchedule(env, logger);
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   const stop = async () => {
+    backups.stop();
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
     await holder.current?.jobs.stop();
     await (holder.current?.services.get(SIGN_IN_THROTTLE_KEY) as ThrottleCounter | undefined)?.close();
