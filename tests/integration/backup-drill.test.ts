@@ -2,10 +2,20 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { execFile } from 'node:child_process';
+import { promisify } from 'node:util';
 import Database from 'better-sqlite3';
+import pg from 'pg';
 import { afterAll, describe, expect, it } from 'vitest';
-import { takeBackupIfDue } from '../../server/db/backup-schedule';
+import { createApp } from '../../server/app';
+import { hasPgDump, takeBackupIfDue } from '../../server/db/backup-schedule';
+import { openDatabase } from '../../server/db/data-source';
 import { restoreDatabase } from '../../server/db/restore';
+import { BundleEntity, OperationEntity } from '../../server/entities';
+import { loadEnv } from '../../server/env';
+import { seedDemoStudio } from '../../server/seed/demo-studio';
+import { createPostgresDatabase, freshDatabaseTarget } from '../fixtures/fresh-database';
+import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
 
 const dir = mkdtempSync(join(tmpdir(), 'seamrun-drill-'));
 const dbPath = join(dir, 'live.sqlite');
@@ -138,3 +148,62 @@ describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('restore drill: a schedu
     live.close();
   }, 120_000);
 });
+
+const admin = process.env.TEST_DATABASE_URL;
+describe.skipIf(!admin || !hasPgDump())('restore drill on PostgreSQL: a scheduled pg_dump taken while floor logs are written', () => {
+  it('restores into a new database that holds every log acknowledged before the dump began, each one whole', async () => {
+    const target = await freshDatabaseTarget();
+    const ds = await openDatabase(target);
+    await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
+    const app = createApp({ ds, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' }), clientDir: '/nonexistent' });
+    const machinist = await signIn(app, DEMO.machinist);
+    const ops = (await ds.getRepository(OperationEntity).find({ order: { seq: 'ASC' } })).filter((o) => o.section !== 'finishing');
+    const bundles = ds.getRepository(BundleEntity);
+    const numbers = Array.from({ length: 12 }, (_, i) => 8000 + i);
+    await bundles.save(numbers.map((number) => bundles.create({ studioId: 1, batchId: 1, layId: 0, number, size: 'M', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} })));
+
+    const acknowledged = new Set<string>();
+    const jobs = numbers.flatMap((b) => ops.map((o) => ({ b, o: o.id })));
+    let stop = false;
+    let inFlight = 0;
+    const writers = Array.from({ length: 4 }, async () => {
+      while (jobs.length && !stop) {
+        const { b, o } = jobs.shift()!;
+        const idempotencyKey = `drill-${b}-${o}`;
+        inFlight++;
+        const res = await Promise.resolve(machinist.post('/api/floor/logs').send({ bundleNumber: b, batchId: 1, operationId: o, idempotencyKey })).finally(() => inFlight--);
+        if (res.status === 201 || res.status === 200) acknowledged.add(idempotencyKey);
+      }
+    });
+    while (acknowledged.size < 20) await new Promise((r) => setTimeout(r, 20));
+    const before = new Set(acknowledged);
+    const writingDuringBackup = inFlight;
+    const backup = await takeBackupIfDue({ database: target, dir: join(dir, 'pg-backups'), everyMs: 60 * 60 * 1000, keep: 3 });
+    stop = true;
+    await Promise.all(writers);
+    expect(backup).toMatch(/\.dump$/);
+    expect(writingDuringBackup, 'floor logs in flight when the backup began').toBeGreaterThan(0);
+
+    const restoredUrl = await createPostgresDatabase(admin!, `seamrun_r_${Date.now()}`);
+    await promisify(execFile)('pg_restore', ['--no-owner', `--dbname=${restoredUrl}`, backup!]);
+    const restored = new pg.Client({ connectionString: restoredUrl });
+    const live = new pg.Client({ connectionString: target });
+    await Promise.all([restored.connect(), live.connect()]);
+    const q = `SELECT * FROM work_logs WHERE "idempotencyKey" LIKE 'drill-%' ORDER BY id`;
+    const logs = (await restored.query(q)).rows as Row[];
+    const liveLogs = (await live.query(q)).rows as Row[];
+    const keys = logs.map((l) => String(l.idempotencyKey));
+    expect([...before].filter((k) => !keys.includes(k))).toEqual([]);
+    expect(keys.filter((k) => !acknowledged.has(k))).toEqual([]);
+    const liveById = new Map(liveLogs.map((l) => [l.id, l]));
+    for (const log of logs) expect(log).toEqual(liveById.get(log.id));
+    const orphans = await restored.query(
+      `SELECT w.id FROM work_logs w LEFT JOIN bundles b ON b.id = w."bundleId" LEFT JOIN operations o ON o.id = w."operationId" LEFT JOIN users u ON u.id = w."userId" WHERE b.id IS NULL OR o.id IS NULL OR u.id IS NULL`,
+    );
+    expect(orphans.rows).toEqual([]);
+    console.log(JSON.stringify({ inFlightAtStart: writingDuringBackup, acknowledgedBefore: before.size, inBackup: logs.length, total: acknowledged.size }));
+    await Promise.all([restored.end(), live.end()]);
+    await ds.destroy();
+  }, 120_000);
+});
+
