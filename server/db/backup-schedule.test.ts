@@ -20,6 +20,7 @@ afterEach(() => {
 function sqliteFile(dir: string) {
   const file = join(dir, 'live.sqlite');
   const db = new Database(file);
+  db.pragma('journal_mode = WAL'); // as the server opens it
   db.exec('CREATE TABLE t (x integer); INSERT INTO t VALUES (1), (2), (3);');
   db.close();
   return file;
@@ -56,6 +57,7 @@ describe('scheduled backups', () => {
     expect(readdirSync(plan.dir).filter((f) => f.endsWith('.sqlite'))).toHaveLength(3);
     expect(readdirSync(plan.dir).filter((f) => f.endsWith('.lock'))).toHaveLength(1);
     expect(existsSync(`${later}.partial`)).toBe(false);
+    expect(readdirSync(plan.dir).filter((f) => /-(wal|shm)$/.test(f))).toEqual([]);
   });
 
   it('is on every 24 hours by default and off under tests unless BACKUP_EVERY_HOURS says so', () => {
