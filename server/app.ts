@@ -8,6 +8,7 @@ import type { DataSource } from 'typeorm';
 import { configurePassport } from './auth/passport';
 import { requirePasswordChanged } from './auth/require';
 import { DatabaseSessionStore } from './auth/session-store';
+import { createThrottleCounter, SharedThrottleStore } from './auth/throttle-store';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
@@ -16,6 +17,7 @@ import { auditRoutes } from './modules/audit/audit.routes';
 import { authRoutes } from './modules/auth/auth.routes';
 import { createAuthService } from './modules/auth/auth.service';
 import { createFloorDeviceRepository } from './modules/auth/floor-device.repository';
+import { createSignInThrottleRepository } from './modules/auth/sign-in-throttle.repository';
 import { createBatchRepository } from './modules/batches/batch.repository';
 import { batchRoutes } from './modules/batches/batch.routes';
 import { createSessionRepository } from './modules/sessions/session.repository';
@@ -28,6 +30,10 @@ import { FEATURE_MODULES } from './modules';
 import type { ModuleContext } from './modules/module';
 import { createUserService } from './modules/users/user.service';
 import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
+import { requestLogger } from './observability/logger';
+import type { Logger } from 'pino';
+import { readiness } from './observability/readiness';
+import { serveClient } from './observability/static-client';
 
 export interface AppDeps {
   ds: DataSource;
@@ -40,7 +46,12 @@ export interface AppDeps {
   moduleContext?: { current?: ModuleContext };
   /** Job runner override; by default in-process, or BullMQ on Redis with REDIS_URL. */
   jobs?: JobRunner;
+  /** Request log destination (tests pass one to read the lines); the process logger by default. */
+  logger?: Logger;
 }
+
+/** ctx.services key of the sign-in throttle counter (closed when the server stops). */
+export const SIGN_IN_THROTTLE_KEY = 'auth:sign-in-throttle';
 
 /** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
 const RENEW_SESSION_EVERY_MS = 5 * 60 * 1000;
@@ -63,6 +74,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY) app.set('trust proxy', 1);
+  app.use(requestLogger(deps.logger));
 
   app.use(
     helmet({
@@ -94,8 +106,14 @@ export function createApp(deps: AppDeps): Express {
 
   const api = Router();
   api.use(express.json({ limit: '2mb' }));
+  // Liveness: the process answers. Readiness (below, once the job runner exists): the database, and
+  // Redis and the queues when configured, answer too.
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
+  });
+  api.get('/health/ready', async (_req, res) => {
+    const report = await readiness({ ds, redisUrl: env.REDIS_URL || undefined });
+    res.status(report.ready ? 200 : 503).json(report);
   });
   api.use(
     session({
@@ -122,12 +140,16 @@ export function createApp(deps: AppDeps): Express {
   api.use(csrfGuard);
   api.use(requirePasswordChanged);
 
+  // Sign-in attempts are counted where every web process sees them (the database, or Redis when set).
+  const throttle = createThrottleCounter({ repo: createSignInThrottleRepository(ds), redisUrl: env.REDIS_URL || undefined });
+  const throttleStore = (name: string) => new SharedThrottleStore(throttle, name);
   api.use(
     '/auth',
     authRoutes(auth, passport, {
       loginLimit: env.LOGIN_RATE_LIMIT,
       ipFailureLimit: env.LOGIN_IP_FAILURE_LIMIT,
       devices: createFloorDeviceRepository(ds),
+      throttleStore,
     }),
   );
   api.use('/users', userRoutes(createUserService({ users, audit })));
@@ -136,6 +158,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/batches', batchRoutes(batches, styles, audit));
   api.use('/audit', auditRoutes(audit));
   const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined), services: new Map() };
+  ctx.services.set(SIGN_IN_THROTTLE_KEY, throttle);
   for (const m of FEATURE_MODULES) m.register(api, ctx);
   if (deps.moduleContext) deps.moduleContext.current = ctx;
   api.use(notFoundHandler);
@@ -143,9 +166,6 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', api);
 
   const clientDir = deps.clientDir ?? resolve('dist/client');
-  if (existsSync(join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/{*path}', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
-  }
+  if (existsSync(join(clientDir, 'index.html'))) serveClient(app, clientDir);
   return app;
 }

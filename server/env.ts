@@ -1,5 +1,9 @@
-import 'dotenv/config';
+import { existsSync } from 'node:fs';
 import { z } from 'zod';
+
+// A `.env` file beside package.json fills variables the environment does not set (Node's own reader,
+// no banner). Must run before any module reads process.env at load time (entity column types do).
+if (existsSync('.env') && process.env.NODE_ENV !== 'test' && !process.env.VITEST) process.loadEnvFile('.env');
 
 /** The session secret a fresh checkout runs with; never accepted with NODE_ENV=production. */
 export const DEVELOPMENT_SESSION_SECRET = 'dev-only-session-secret-change-me';
@@ -32,9 +36,22 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Seamrun <no-reply@seamrun.local>'),
   LOCAL_SMTP_PORT: z.coerce.number().int().min(0).default(2525),
   PAYMENTS_SECRET_KEY: z.string().default(''),
+  /**
+   * Run pending migrations when the server starts. Default: yes, except with NODE_ENV=production, where
+   * `npm run db:migrate` is its own deployment step and a start against a database that is behind stops.
+   */
+  MIGRATE_ON_START: z.enum(['true', 'false']).optional(),
+  /** pino level: fatal, error, warn, info, debug, trace or silent (default info; silent under tests). */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   LOCAL_PAYMENTS_PORT: z.coerce.number().int().min(0).default(12111),
   /** SQLite file of the local payments stand-in's keys and transfers; empty: beside DATABASE_PATH (memory in tests). */
   LOCAL_PAYMENTS_PATH: z.string().default(''),
+  /** Hours between scheduled online backups; 0 turns them off. Default 24 (off under NODE_ENV=test). */
+  BACKUP_EVERY_HOURS: z.coerce.number().min(0).max(24 * 365).optional(),
+  /** How many scheduled backups to keep; older ones are deleted. */
+  BACKUP_KEEP: z.coerce.number().int().min(1).default(14),
+  /** Folder of the scheduled backups (default: backups/ beside the SQLite file, or data/backups). */
+  BACKUP_DIR: z.string().default(''),
 });
 
 /**
@@ -54,6 +71,10 @@ const checkedEnvSchema = envSchema
   .transform(({ SEED_DEMO, ...e }) => ({ ...e, SEED_DEMO: SEED_DEMO === undefined ? e.NODE_ENV !== 'production' : SEED_DEMO === 'true' }));
 
 export type Env = z.infer<typeof checkedEnvSchema>;
+
+/** Whether this start migrates: MIGRATE_ON_START when set, else everywhere but production. */
+export const shouldMigrateOnStart = (env: Env) =>
+  env.MIGRATE_ON_START ? env.MIGRATE_ON_START === 'true' : env.NODE_ENV !== 'production';
 
 /** Parse process.env once; a readable failure names every bad variable. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {

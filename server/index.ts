@@ -1,19 +1,22 @@
 import 'reflect-metadata';
 import type { Server } from 'node:http';
+import { startBackupSchedule } from './db/backup-schedule';
 import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
 import { startSessionPurge } from './auth/session-purge';
 import { createSessionRepository } from './modules/sessions/session.repository';
-import { createApp } from './app';
-import { loadEnv, type Env } from './env';
+import { createApp, SIGN_IN_THROTTLE_KEY } from './app';
+import type { ThrottleCounter } from './auth/throttle-store';
+import { loadEnv, shouldMigrateOnStart, type Env } from './env';
 import { FEATURE_MODULES } from './modules';
+import { logger } from './observability/logger';
 import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 
 /** env → data source → migrations → expired sessions purged → seed → listen. */
 export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const env: Env = loadEnv({ ...process.env, ...overrides });
-  const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
+  const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH, { migrate: shouldMigrateOnStart(env) });
   const checkpointer = env.DATABASE_URL ? null : await startWalCheckpointer(ds, env.DATABASE_PATH);
   const sessionPurge = await startSessionPurge(createSessionRepository(ds));
   const seeded = env.SEED_DEMO
@@ -30,12 +33,15 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));
   });
+  const backups = startBackupSchedule(env, logger);
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   const stop = async () => {
+    backups.stop();
     for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
     await holder.current?.jobs.stop();
     sessionPurge.stop();
+    await (holder.current?.services.get(SIGN_IN_THROTTLE_KEY) as ThrottleCounter | undefined)?.close();
     await new Promise((r) => server.close(r));
     await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();

@@ -7,7 +7,7 @@
  */
 import 'reflect-metadata';
 import { openDatabase } from './db/data-source';
-import { loadEnv } from './env';
+import { loadEnv, shouldMigrateOnStart } from './env';
 import { startJobWorker } from './jobs/job-runner';
 import { closeMailTransports } from './modules/mail/mail-job';
 import { linkMarkerToLays } from './modules/markers/link-lays';
@@ -19,7 +19,7 @@ if (!env.REDIS_URL) {
   console.error('npm run worker needs REDIS_URL (redis://…); without it the server runs jobs in-process.');
   process.exit(1);
 }
-const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH);
+const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH, { migrate: shouldMigrateOnStart(env) });
 const worker = startMarkerWorker(env.REDIS_URL, createMarkerRepository(ds), {
   onDone: (studioId, id) => linkMarkerToLays(ds, studioId, id),
   lockDurationMs: Number(process.env.WORKER_LOCK_MS ?? 30_000),

@@ -15,8 +15,10 @@ export async function backupDatabase(source: string, target: string): Promise<st
   } finally {
     db.close();
   }
-  const copy = new Database(target, { readonly: true });
+  // The copy carries the live file's WAL mode; a backup is one self-contained file (no -wal/-shm beside it).
+  const copy = new Database(target);
   try {
+    copy.pragma('journal_mode = DELETE');
     const [row] = copy.pragma('integrity_check') as { integrity_check: string }[];
     if (row.integrity_check !== 'ok') throw new Error(`backup failed its integrity check: ${row.integrity_check}`);
   } finally {
@@ -25,7 +27,7 @@ export async function backupDatabase(source: string, target: string): Promise<st
   return target;
 }
 
-if (process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop()!)) {
+if (process.argv[1] && import.meta.url.split('?')[0].endsWith(process.argv[1].split('/').pop()!)) {
   const env = loadEnv();
   const stamp = new Date().toISOString().replace(/[-:]/g, '').replace(/\..+/, 'Z');
   const target = process.argv[2] ?? join(dirname(env.DATABASE_PATH), 'backups', `seamrun-${stamp}.sqlite`);

@@ -47,11 +47,43 @@ export function createDataSource(target: string): DataSource {
   });
 }
 
-/** Open the data source and bring the schema up to date. */
-export async function openDatabase(target: string): Promise<DataSource> {
+/** Thrown when the schema is behind the code and this start was told not to migrate. */
+export class PendingMigrationsError extends Error {
+  constructor(readonly pending: string[]) {
+    super(
+      `The database needs ${pending.length} migration${pending.length === 1 ? '' : 's'} before this version can start ` +
+        `(${pending.join(', ')}). Run \`npm run db:migrate\` with the same configuration, or set MIGRATE_ON_START=true.`,
+    );
+    this.name = 'PendingMigrationsError';
+  }
+}
+
+/** Names of the migrations this code has that the database has not run yet. */
+export async function pendingMigrations(ds: DataSource): Promise<string[]> {
+  const known = ds.migrations.map((m) => m.name ?? m.constructor.name);
+  const hasTable = await ds.createQueryRunner().hasTable('migrations');
+  if (!hasTable) return known;
+  const rows: { name: string }[] = await ds.query('SELECT name FROM migrations');
+  const applied = new Set(rows.map((r) => r.name));
+  return known.filter((n) => !applied.has(n));
+}
+
+/**
+ * Open the data source. With `migrate` (the default) bring the schema up to date; without it, stop
+ * with PendingMigrationsError when migrations are pending (production starts after `npm run db:migrate`).
+ */
+export async function openDatabase(target: string, opts: { migrate?: boolean } = {}): Promise<DataSource> {
   const ds = createDataSource(target);
   await ds.initialize();
-  await ds.runMigrations({ transaction: 'each' });
+  if (opts.migrate ?? true) {
+    await ds.runMigrations({ transaction: 'each' });
+  } else {
+    const pending = await pendingMigrations(ds);
+    if (pending.length > 0) {
+      await ds.destroy();
+      throw new PendingMigrationsError(pending);
+    }
+  }
   return ds;
 }
 

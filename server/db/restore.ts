@@ -20,7 +20,7 @@ export function restoreDatabase(backupFile: string, target: string) {
   return src.backup(target).finally(() => src.close());
 }
 
-if (process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop()!)) {
+if (process.argv[1] && import.meta.url.split('?')[0].endsWith(process.argv[1].split('/').pop()!)) {
   const file = process.argv[2];
   if (!file) {
     console.error('Usage: npm run db:restore -- FILE');

@@ -17,6 +17,7 @@ import { PurchaseOrderEntity } from './purchase-order.entity';
 import { RollEntity } from './roll.entity';
 import { RollReservationEntity } from './roll-reservation.entity';
 import { SessionEntity } from './session.entity';
+import { SignInThrottleEntity } from './sign-in-throttle.entity';
 import { StudioEntity } from './studio.entity';
 import { StyleEntity } from './style.entity';
 import { SupplierEntity } from './supplier.entity';
@@ -45,6 +46,7 @@ export {
   RollEntity,
   RollReservationEntity,
   SessionEntity,
+  SignInThrottleEntity,
   StudioEntity,
   StyleEntity,
   SupplierEntity,
@@ -82,4 +84,5 @@ export const entities = [
   UploadEntity,
   FloorDeviceEntity,
   RollReservationEntity,
+  SignInThrottleEntity,
 ];

@@ -54,6 +54,21 @@ export class MarkerEntity {
   @Column({ type: 'text', default: '' })
   error: string;
 
+  /** Times a process has claimed this job to run it (one claim per run; 1 when it ran once). */
+  @Column({ type: 'integer', default: 0 })
+  runs: number;
+
+  /** The claim of the process running the job; only it may store the outcome. */
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  claimToken: string | null;
+
+  /**
+   * Until when the claim holds (epoch ms), renewed while the run lives: a 'running' job whose lease ran
+   * out lost its process and may be claimed again by another.
+   */
+  @Column({ type: 'bigint', nullable: true })
+  leaseExpiresAtMs: number | null;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

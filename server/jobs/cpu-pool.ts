@@ -1,6 +1,7 @@
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import type { CpuTaskInput, CpuTaskName, CpuTaskOutput } from './cpu-tasks';
+import { builtServerFile, isBuilt } from '../workers/worker-entry';
 
 /**
  * Where the pool's task file is. Under tsx (dev, tests, npm start) this file is TypeScript, so piscina
@@ -9,13 +10,14 @@ import type { CpuTaskInput, CpuTaskName, CpuTaskOutput } from './cpu-tasks';
  * move to a shared helper.
  */
 export function cpuWorkerFile(): { filename: string; workerData?: { entry: string } } {
-  if (import.meta.url.endsWith('.ts')) {
+  if (!isBuilt) {
     return {
       filename: new URL('../workers/ts-task-loader.mjs', import.meta.url).href,
       workerData: { entry: new URL('./cpu.worker.ts', import.meta.url).href },
     };
   }
-  return { filename: new URL('./cpu.worker.js', import.meta.url).href };
+  // The production build compiles server/jobs/cpu.worker.ts to dist/server/jobs/cpu.worker.js (server/build-server.ts).
+  return { filename: builtServerFile('jobs/cpu.worker.js').href };
 }
 
 let pool: Piscina | null = null;

@@ -1,9 +1,8 @@
 import { Worker } from 'node:worker_threads';
 import type { NestingInput, NestingResult } from '@planning';
 import type { NestingWorkerMessage } from './nesting.worker';
+import { workerEntry } from './worker-entry';
 
-const LOADER = new URL('./ts-worker-loader.mjs', import.meta.url);
-const ENTRY = new URL('./nesting.worker.ts', import.meta.url).href;
 
 /** How a run ended: the engine's result (possibly cut short by cancel) or a failure message. */
 export type NestingOutcome =
@@ -35,8 +34,9 @@ export interface NestingRunOptions {
  * terminated). Never rejects.
  */
 export function runNestingWorker(input: NestingInput, opts: NestingRunOptions): NestingRunHandle {
-  const worker = new Worker(LOADER, {
-    workerData: { entry: opts.entry ?? ENTRY, input, options: { seed: opts.seed, timeBudgetMs: opts.timeBudgetMs } },
+  const start = workerEntry('nesting', opts.entry);
+  const worker = new Worker(start.file, {
+    workerData: start.data({ input, options: { seed: opts.seed, timeBudgetMs: opts.timeBudgetMs } }),
   });
   let settled = false;
   let cancelled = false;

@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Router, type Request, type Response } from 'express';
-import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
+import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';
 import type { configurePassport } from '../../auth/passport';
 import {
   bindFloorDeviceInput,
@@ -40,7 +40,8 @@ const logIn = (req: Request, user: Express.User) =>
 export function authRoutes(
   auth: AuthService,
   passport: ReturnType<typeof configurePassport>,
-  opts: { loginLimit: number; ipFailureLimit: number; devices: FloorDeviceRepository },
+  // `throttleStore(name)`: a store shared by every web process (server/auth/throttle-store.ts), one per limiter.
+  opts: { loginLimit: number; ipFailureLimit: number; devices: FloorDeviceRepository; throttleStore?: (name: string) => Store },
 ) {
   const r = Router();
   const { devices } = opts;
@@ -53,6 +54,7 @@ export function authRoutes(
     limit: opts.loginLimit,
     standardHeaders: 'draft-7',
     legacyHeaders: false,
+    store: opts.throttleStore?.('login'),
     keyGenerator: (req) => {
       const who = req.body?.email !== undefined ? normaliseEmail(req.body.email) : `person:${String(req.body?.userId ?? '')}`;
       return `${ipKeyGenerator(req.ip ?? '')}|${who}`;
@@ -67,6 +69,7 @@ export function authRoutes(
     standardHeaders: false,
     legacyHeaders: false,
     skipSuccessfulRequests: true,
+    store: opts.throttleStore?.('ip'),
     keyGenerator: (req) => `ip|${ipKeyGenerator(req.ip ?? '')}`,
     handler: refuse,
   });

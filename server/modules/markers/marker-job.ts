@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { checkLayout } from '@planning';
 import { runNestingWorker, type NestingRunHandle } from '../../workers/nesting-runner';
 import type { MarkerJobInput } from './marker-input';
@@ -16,12 +17,22 @@ export interface MarkerJobHooks {
   onDone?: (studioId: number, markerId: number) => Promise<void>;
   /** True when the caller shut down mid-run: the outcome is then not stored (the job resumes later). */
   isStopped?: () => boolean;
+  /** How long a claim holds without renewal (renewed every third of it while the run lives). */
+  leaseMs?: number;
+  /** Claim even a job another holder still leases (the Redis queue's own lock says that holder is gone). */
+  takeover?: boolean;
+  /** Clock of the lease (epoch ms). */
+  nowMs?: () => number;
 }
+
+/** Default lease of a marker claim: a process that dies mid-run frees its job this long after its last renewal. */
+export const MARKER_LEASE_MS = 15_000;
 
 /**
  * Runs one stored marker job to its end on a worker thread and stores the outcome: the layout (checked by
  * the independent checker), a cancellation, or a failure with its message. Shared by the in-process queue
- * and the Redis worker processes, so both behave the same.
+ * and the Redis worker processes, so both behave the same. Resolves false, without running, when another
+ * process holds the job or it is no longer queued.
  */
 export async function executeMarkerJob(
   markers: MarkerRepository,
@@ -29,8 +40,13 @@ export async function executeMarkerJob(
   id: number,
   job: MarkerJobInput,
   hooks: MarkerJobHooks = {},
-): Promise<void> {
-  await markers.update(studioId, id, { status: 'running' });
+): Promise<boolean> {
+  // One process runs a job: the conditional UPDATE lets exactly one claimant through, however many
+  // processes queued it (start-up resume, the sweep for jobs of a process that died, a second enqueue).
+  const token = randomUUID();
+  const nowMs = hooks.nowMs ?? Date.now;
+  const leaseMs = hooks.leaseMs ?? MARKER_LEASE_MS;
+  if (!(await markers.claim(studioId, id, token, nowMs(), leaseMs, hooks.takeover))) return false;
   const started = performance.now();
   const handle = runNestingWorker(job.engine, {
     seed: job.seed,
@@ -40,13 +56,23 @@ export async function executeMarkerJob(
     onProgress: hooks.onProgress,
   });
   hooks.onStart?.(handle);
-  const outcome = await handle.done;
+  // Renew the lease while the run lives; a refused renewal means the job was cancelled from another
+  // process (or claimed by one after a stall): stop, and let `finish` store only what this claim still may.
+  const heartbeat = setInterval(() => {
+    void markers.renew(id, token, nowMs() + leaseMs).then((held) => held || handle.cancel(), () => undefined);
+  }, Math.max(50, Math.floor(leaseMs / 3)));
+  const outcome = await handle.done.finally(() => clearInterval(heartbeat));
   const elapsedMs = performance.now() - started;
-  if (hooks.isStopped?.()) return;
+  // Shut down mid-run: hand the job back at once rather than when the lease runs out.
+  if (hooks.isStopped?.()) {
+    await markers.finish(studioId, id, token, { status: 'queued' }).catch(() => undefined);
+    return true;
+  }
+  const store = (patch: Parameters<MarkerRepository['finish']>[3]) => markers.finish(studioId, id, token, patch);
   if (outcome.kind === 'result') {
     const check = checkLayout(job.engine, outcome.result);
     const result: StoredMarkerResult = { ...outcome.result, check: { valid: check.valid, errors: check.errors.slice(0, 10) } };
-    await markers.update(studioId, id, {
+    await store({
       status: check.valid ? (outcome.cancelled ? 'cancelled' : 'done') : 'failed',
       lengthMm: outcome.result.length,
       utilisation: outcome.result.utilisation,
@@ -63,8 +89,9 @@ export async function executeMarkerJob(
     });
     if (check.valid && !outcome.cancelled) await hooks.onDone?.(studioId, id);
   } else if (outcome.kind === 'cancelled') {
-    await markers.update(studioId, id, { status: 'cancelled', elapsedMs, error: 'Cancelled before a marker was found.' });
+    await store({ status: 'cancelled', elapsedMs, error: 'Cancelled before a marker was found.' });
   } else {
-    await markers.update(studioId, id, { status: 'failed', elapsedMs, error: outcome.message });
+    await store({ status: 'failed', elapsedMs, error: outcome.message });
   }
+  return true;
 }

@@ -123,6 +123,9 @@ export function startMarkerWorker(redisUrl: string, markers: MarkerRepository, o
           onDone: opts.onDone,
           onProgress: (p) => void job.updateProgress(p as unknown as object),
           onStart: (h) => (handle = h),
+          // BullMQ's job lock already makes this worker the only holder; a stalled job's row still
+          // shows the dead worker's claim, which this one takes over.
+          takeover: true,
         });
       } finally {
         clearInterval(poll);

@@ -73,10 +73,14 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
   const live = new Map<number, LiveProgress>();
   const running = new Map<number, NestingRunHandle>();
   const idleWaiters: (() => void)[] = [];
+  /** Jobs queued here and not yet started, so a sweep does not queue them twice in this process. */
+  const pending = new Set<number>();
   let busy = false;
   let stopped = false;
 
   async function run(studioId: number, id: number, job: MarkerJobInput) {
+    pending.delete(id);
+    if (stopped) return;
     try {
       await executeMarkerJob(markers, studioId, id, job, {
         overrunMs: opts.overrunMs,
@@ -100,7 +104,13 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
     if (busy) return;
     busy = true;
     try {
-      for (let next = waiting.shift(); next && !stopped; next = waiting.shift()) await run(next.studioId, next.item.id, next.item.job);
+      for (let next = waiting.shift(); next && !stopped; next = waiting.shift()) {
+        const { studioId, item } = next;
+        await run(studioId, item.id, item.job).catch(async (err: unknown) => {
+          const message = err instanceof Error ? err.message : String(err);
+          await markers.update(studioId, item.id, { status: 'failed', error: `The marker job failed: ${message}` }).catch(() => undefined);
+        });
+      }
     } finally {
       busy = false;
       if (!waiting.size || stopped) idleWaiters.splice(0).forEach((resolve) => resolve());
@@ -123,8 +133,14 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
         done = true;
       };
     },
+    /**
+     * Queue a marker row stored as 'queued' (or left 'running' by a process that died). Queuing a job
+     * this or another process also queued is harmless: the run starts by claiming it, and only one claim wins.
+     */
     enqueue(studioId: number, id: number, job: MarkerJobInput) {
       stopped = false;
+      if (pending.has(id) || running.has(id)) return;
+      pending.add(id);
       waiting.push(studioId, { id, job });
       void drain();
     },
@@ -139,12 +155,14 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
         return true;
       }
       waiting.remove((w) => w.id === id);
+      pending.delete(id);
       return false;
     },
     idle: () => (busy || waiting.size ? new Promise<void>((resolve) => idleWaiters.push(resolve)) : Promise.resolve()),
     async stop() {
       stopped = true;
       waiting.clear();
+      pending.clear();
       for (const h of running.values()) h.cancel();
       running.clear();
     },

@@ -1,4 +1,5 @@
 import { In, type DataSource } from 'typeorm';
+import { createStatements } from '../../db/statements';
 import { MarkerEntity } from '../../entities';
 import type { MarkerStatus } from '../../entities/marker.entity';
 import type { QueryDeepPartialEntity } from 'typeorm';
@@ -8,6 +9,7 @@ export type MarkerRepository = ReturnType<typeof createMarkerRepository>;
 /** Marker queries, scoped by studio (except the queue's resume query, which runs at start-up). */
 export function createMarkerRepository(ds: DataSource) {
   const repo = ds.getRepository(MarkerEntity);
+  const sql = createStatements(ds);
   return {
     get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
     list: (studioId: number, where: { styleId?: number; batchId?: number } = {}) =>
@@ -23,5 +25,39 @@ export function createMarkerRepository(ds: DataSource) {
     },
     /** Jobs a stopped server left behind: queued or running, oldest first. */
     unfinished: () => repo.find({ where: { status: In<MarkerStatus>(['queued', 'running']) }, order: { id: 'ASC' } }),
+    /**
+     * Jobs any process may claim now: queued, or running under a lease that ran out (its process died),
+     * oldest first. Several processes may list the same job; `claim` lets one of them run it.
+     */
+    claimable: (nowMs: number) =>
+      sql.all(
+        MarkerEntity,
+        `SELECT * FROM "markers" WHERE "status" = 'queued' OR ("status" = 'running' AND ("leaseExpiresAtMs" IS NULL OR "leaseExpiresAtMs" < ?)) ORDER BY "id"`,
+        [nowMs],
+      ),
+    /**
+     * Claim a job in one conditional UPDATE: true for exactly one caller. `takeover` also claims a job
+     * another holder still leases (the Redis queue, whose own lock already says that holder is gone).
+     */
+    async claim(studioId: number, id: number, token: string, nowMs: number, leaseMs: number, takeover = false): Promise<boolean> {
+      const running = takeover ? `"status" = 'running'` : `"status" = 'running' AND ("leaseExpiresAtMs" IS NULL OR "leaseExpiresAtMs" < ?)`;
+      const claimed = await sql.value(
+        `UPDATE "markers" SET "status" = 'running', "runs" = "runs" + 1, "claimToken" = ?, "leaseExpiresAtMs" = ? WHERE "id" = ? AND "studioId" = ? AND ("status" = 'queued' OR (${running})) RETURNING "id"`,
+        takeover ? [token, nowMs + leaseMs, id, studioId] : [token, nowMs + leaseMs, id, studioId, nowMs],
+      );
+      return claimed !== undefined;
+    },
+    /** Extend a claim; false when the job was cancelled elsewhere or claimed by another process. */
+    async renew(id: number, token: string, untilMs: number): Promise<boolean> {
+      const renewed = await sql.value(
+        `UPDATE "markers" SET "leaseExpiresAtMs" = ? WHERE "id" = ? AND "claimToken" = ? AND "status" = 'running' RETURNING "id"`,
+        [untilMs, id, token],
+      );
+      return renewed !== undefined;
+    },
+    /** Store a run's outcome, only while `token` still holds the claim; the claim ends with it. */
+    async finish(studioId: number, id: number, token: string, patch: Partial<MarkerEntity>) {
+      await repo.update({ studioId, id, claimToken: token }, { ...patch, claimToken: null, leaseExpiresAtMs: null } as QueryDeepPartialEntity<MarkerEntity>);
+    },
   };
 }

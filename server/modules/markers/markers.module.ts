@@ -15,6 +15,10 @@ export const MARKER_QUEUE_KEY = 'markers:queue';
 export const MARKER_QUEUE_OPTIONS_KEY = 'markers:queue-options';
 
 let current: { queue?: MarkerQueue; ctx?: ModuleContext } = {};
+let sweep: NodeJS.Timeout | undefined;
+
+/** How often an in-process queue looks for jobs no live process holds (queued elsewhere, or orphaned). */
+const SWEEP_EVERY_MS = 10_000;
 
 /** The markers area: the nesting job queue and /api/markers. The queue starts on first use. */
 export const markersModule: ApiModule = {
@@ -40,16 +44,29 @@ export const markersModule: ApiModule = {
     current = { ctx };
     api.use('/markers', markerRoutes(ctx.ds, service));
   },
-  /** Resume the jobs a stopped server left queued or running (the seed queues the demo markers). */
+  /**
+   * Resume the jobs no live process holds: queued (the seed queues the demo markers) or left running by a
+   * process that died. Other web processes on the same database may queue the same ones; each run claims
+   * its job first, so it runs once. Without Redis, every process sweeps again now and then for jobs a
+   * process that died had queued or was running (their lease ran out); with Redis, BullMQ does that.
+   */
   async start(ctx) {
     const getQueue = ctx.services.get('markers:get-queue') as () => MarkerQueue;
     const markers = createMarkerRepository(ctx.ds);
-    for (const m of await markers.unfinished()) {
-      await markers.update(m.studioId, m.id, { status: 'queued' });
-      getQueue().enqueue(m.studioId, m.id, m.input as MarkerJobInput);
+    const resume = async () => {
+      const jobs = ctx.env.REDIS_URL ? await markers.unfinished() : await markers.claimable(Date.now());
+      for (const m of jobs) getQueue().enqueue(m.studioId, m.id, m.input as MarkerJobInput);
+    };
+    await resume();
+    if (!ctx.env.REDIS_URL) {
+      clearInterval(sweep);
+      sweep = setInterval(() => void resume().catch(() => undefined), SWEEP_EVERY_MS);
+      sweep.unref();
     }
   },
   async stop() {
+    clearInterval(sweep);
+    sweep = undefined;
     await current.queue?.stop();
   },
 };
