@@ -28,7 +28,8 @@ describe('production start', () => {
 
   it('starts empty in production with its own secret and no SEED_DEMO', async () => {
     const s = await startServer({
-      NODE_ENV: 'production', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: ':memory:', SEED_DEMO: undefined,
+      // Production migrates as its own step; a fresh in-memory database asks for it at start.
+      NODE_ENV: 'production', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: ':memory:', SEED_DEMO: undefined, MIGRATE_ON_START: 'true',
       SESSION_SECRET: 'a-long-random-production-secret', LOCAL_SMTP_PORT: '0', LOCAL_PAYMENTS_PORT: '0',
     });
     try {
