@@ -20,6 +20,9 @@ export default async function setup(project: TestProject) {
     // Production refuses the built-in secret and seeds the demo studio only when asked.
     SESSION_SECRET: 'e2e-session-secret-not-the-built-in-one',
     SEED_DEMO: 'true',
+    // A throw-away database: migrate at start (a real production start runs `npm run db:migrate` first).
+    MIGRATE_ON_START: 'true',
+    BACKUP_EVERY_HOURS: '0',
     DATABASE_PATH: join(dir, 'e2e.sqlite'),
     LOGIN_RATE_LIMIT: '1000',
     LOGIN_IP_FAILURE_LIMIT: '1000',
