@@ -1,5 +1,5 @@
 import { execSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
@@ -8,7 +8,25 @@ import type { TestProject } from 'vitest/node';
  * Builds the client, then starts the real server (migrations + demo seed) on a free port with a
  * throw-away database. Tests read the URL from the provided context.
  */
+/**
+ * The browser the tests drive is Debian's Chromium (never a downloaded one). On a fresh machine without it,
+ * install it from Debian when this process may (root with apt-get, as `.ci/run` does); otherwise stop with
+ * one line saying what to run.
+ */
+function ensureChromium() {
+  const path = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+  if (existsSync(path)) return;
+  const root = typeof process.getuid === 'function' && process.getuid() === 0;
+  if (!process.env.CHROMIUM_PATH && root && existsSync('/usr/bin/apt-get')) {
+    console.log('Chromium is missing: installing it from Debian (apt-get install chromium)…');
+    execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', { stdio: 'inherit' });
+    if (existsSync(path)) return;
+  }
+  throw new Error(`Chromium not found at ${path}: run \`sudo apt-get install -y chromium\` (or set CHROMIUM_PATH to a Chromium binary), then npm test again.`);
+}
+
 export default async function setup(project: TestProject) {
+  ensureChromium();
   if (process.env.E2E_SKIP_BUILD !== 'true') execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
   const dir = mkdtempSync(join(tmpdir(), 'seamrun-e2e-'));
   process.env.SCRYPT_LOG_N = '10';
