@@ -62,7 +62,7 @@ function OperationsCard({ styleId }: { styleId: number }) {
     );
   }
   return (
-    <Card title="Operations (minutes are demo estimates)">
+    <Card title="Operations and standard minutes (SAM)">
       <div className="mb-3 flex flex-wrap items-end gap-2">
         <button type="button" className="btn-primary" disabled={!ops.data} onClick={() => setEditing(true)}>Edit operations</button>
         <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/operations/export`, 'operations.xlsx')}>Export XLSX</button>
