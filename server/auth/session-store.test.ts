@@ -14,6 +14,7 @@ function fakeRepo() {
       return r && r.expiresAt > now ? r.data : null;
     },
     save: async (id: string, data: string, expiresAt: number) => void rows.set(id, { data, expiresAt }),
+    replace: async (id: string, data: string, expiresAt: number) => void (rows.has(id) && rows.set(id, { data, expiresAt })),
     extend: async (id: string, expiresAt: number) => void (rows.get(id) && (rows.get(id)!.expiresAt = expiresAt)),
     remove: async (id: string) => void rows.delete(id),
     purgeExpired: async () => undefined,
@@ -71,5 +72,20 @@ describe('database session store with a one-second memory', () => {
     await get(uncached, 'c');
     await get(uncached, 'c');
     expect(plain.reads()).toBe(2);
+  });
+
+  it('never brings back a session signed out in another process by a late write of a request still running', async () => {
+    let t = 1_000_000;
+    const { repo, rows } = fakeRepo();
+    const other = new DatabaseSessionStore(repo, () => t, 1000);
+    const here = new DatabaseSessionStore(repo, () => t, 1000);
+    await set(other, 's', cookie(t + 3_600_000));
+    const read = await get(here, 's');
+    await destroy(other, 's');
+    // The request that read it here ends after the sign-out and writes the session back (renewed expiry).
+    await set(here, 's', { ...read, renewal: 1 });
+    expect(rows.has('s')).toBe(false);
+    t += 1000;
+    expect(await get(here, 's')).toBeNull();
   });
 });

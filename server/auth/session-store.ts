@@ -16,6 +16,12 @@ const TOUCH_EVERY_MS = 5 * 60 * 1000;
 export class DatabaseSessionStore extends session.Store {
   /** Expiry last written per session id, so touches that barely move it cost no write. */
   private readonly written = new Map<string, number>();
+  /**
+   * Sessions this process has read from the database. Writing one of them back only rewrites the row:
+   * if another process (or a sign-out here) deleted it meanwhile, a late write of a request that was
+   * still running must not bring the signed-out session back. New sessions (sign-in) are inserted.
+   */
+  private readonly fromDatabase = new Set<string>();
   /** Session JSON read or written recently, by id (parsed afresh for every request). */
   private readonly recent = new Map<string, { json: string; at: number }>();
 
@@ -48,8 +54,11 @@ export class DatabaseSessionStore extends session.Store {
     this.repo
       .find(sid, now)
       .then((row) => {
-        if (row) this.remember(sid, row);
-        else this.recent.delete(sid);
+        if (row) {
+          this.remember(sid, row);
+          if (this.fromDatabase.size > 50_000) this.fromDatabase.clear();
+          this.fromDatabase.add(sid);
+        } else this.recent.delete(sid);
         cb(null, row ? (JSON.parse(row) as session.SessionData) : null);
       })
       .catch(cb);
@@ -59,11 +68,12 @@ export class DatabaseSessionStore extends session.Store {
     const expires = this.expiryOf(s);
     const json = JSON.stringify(s);
     this.recent.delete(sid);
-    this.repo
-      .save(sid, json, expires)
+    const existing = this.fromDatabase.has(sid);
+    (existing ? this.repo.replace(sid, json, expires) : this.repo.save(sid, json, expires))
       .then(() => {
         this.written.set(sid, expires);
-        this.remember(sid, json);
+        // A rewrite may have found no row (signed out meanwhile): only a new session is remembered unread.
+        if (!existing) this.remember(sid, json);
         cb?.();
       })
       .catch((e) => cb?.(e));
@@ -72,6 +82,8 @@ export class DatabaseSessionStore extends session.Store {
   override destroy(sid: string, cb?: (err?: unknown) => void) {
     this.written.delete(sid);
     this.recent.delete(sid);
+    // Kept as known: a write still in flight for this session must not insert it again.
+    this.fromDatabase.add(sid);
     this.repo
       .remove(sid)
       .then(() => cb?.())

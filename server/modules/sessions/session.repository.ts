@@ -17,6 +17,10 @@ export function createSessionRepository(ds: DataSource) {
     async save(id: string, data: string, expiresAt: number) {
       await repo.upsert({ id, data, expiresAt }, ['id']);
     },
+    /** Rewrites a session that exists; never creates one (a late write must not bring back a signed-out session). */
+    async replace(id: string, data: string, expiresAt: number) {
+      await repo.update({ id }, { data, expiresAt });
+    },
     async extend(id: string, expiresAt: number) {
       await repo.update({ id }, { expiresAt });
     },
