@@ -61,6 +61,8 @@ describe('the cutter cuts today\'s first lay', () => {
     await page.getByLabel('Flaws and shortages').fill('One ply short: hole near the selvedge');
     await shot(page, 'cutter-lay-phone');
     await page.getByRole('button', { name: 'Mark lay cut' }).click();
+    // It asks first, in place: the spread becomes the roll stock.
+    await page.getByRole('button', { name: 'Yes, mark it cut' }).click();
     await expect.poll(() => page.getByText(/bundles\./).isVisible()).toBe(true);
     await expect.poll(() => page.getByRole('heading', { name: 'Bundles' }).isVisible()).toBe(true);
     await shot(page, 'cutter-lay-cut-phone');

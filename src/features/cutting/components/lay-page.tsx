@@ -6,6 +6,7 @@ import { ApiError, downloadFile } from '@/lib/api-client';
 import { layQueries, useCutLay, useRecordLay } from '../api/cutting-queries';
 import { CuttingCautions } from './cutting-cautions';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
+import { ConfirmButton } from '@/components/ui/confirm-button';
 
 type Actual = { actualPlies: string; actualRemnantM: string; note: string };
 
@@ -111,7 +112,13 @@ export function LayPage() {
           {!readOnly ? (
             <div className="mt-3 flex flex-wrap gap-2">
               <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>Save what was spread</button>
-              <button type="button" className="btn-primary" disabled={cut.isPending} onClick={() => { const b = body(true); if (b) cut.mutate(b); }}>Mark lay cut</button>
+              <ConfirmButton
+                label="Mark lay cut"
+                question={`Mark lay ${lay.seq} cut? The plies and remnants entered become the roll stock and the bundles are made.`}
+                confirmLabel="Yes, mark it cut"
+                disabled={cut.isPending}
+                onConfirm={() => { const b = body(true); if (b) cut.mutate(b); }}
+              />
             </div>
           ) : retired ? null : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
