@@ -2,6 +2,7 @@ import { addDays, format } from 'date-fns';
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/auth/permissions';
 import { hashSecret } from '../auth/password';
+import { presetComposition } from '../../shared/schemas/style-composition';
 import { BatchEntity, StudioEntity, StyleEntity, UserEntity } from '../entities';
 import { seedCosting } from './costing.seed';
 import { seedCutting } from './cutting.seed';
@@ -71,6 +72,7 @@ export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise
       sizeRun: ['XS', 'S', 'M', 'L', 'XL'],
       baseSize: 'M',
       status: 'approved',
+      composition: presetComposition('shirt-dress'),
     });
     const batch = await m.getRepository(BatchEntity).save({
       studioId: studio.id,

@@ -4,6 +4,7 @@ import { FloorSignInAndBundleNumbers1796361960738 } from './1796361960738-FloorS
 import { PayoutFreezeAndLogPayPeriod1796362059995 } from './1796362059995-PayoutFreezeAndLogPayPeriod';
 import { RollReservations1796362119816 } from './1796362119816-RollReservations';
 import { SkillsAndMachines1796363634850 } from './1796363634850-SkillsAndMachines';
+import { StyleComposition1796367105713 } from './1796367105713-StyleComposition';
 
 /** PostgreSQL migrations, generated from the same entities (`DATABASE_URL=postgres://… npm run db:generate -- Name`). */
-export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816, SkillsAndMachines1796363634850];
+export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816, SkillsAndMachines1796363634850, StyleComposition1796367105713];
