@@ -1,13 +1,19 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { demoSizeChart } from '@grading';
 import { presetComposition } from '@shared/schemas/style-composition';
+import { polygonArea } from '@shared/geometry/polygon';
+import type { DataSource } from 'typeorm';
+import { loadCuttingPieces } from '../../server/modules/grading/graded-pieces';
 import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 let owner: Agent, cutter: Agent;
+let ds: DataSource;
 
 beforeAll(async () => {
-  const { app } = await buildTestApp();
+  const built = await buildTestApp();
+  const app = built.app;
+  ds = built.ds;
   owner = await signIn(app, DEMO.owner);
   cutter = await signIn(app, DEMO.cutter);
 }, 60_000);
@@ -78,5 +84,65 @@ describe('a style drafted from its blocks', () => {
 
   it('forbids a cutter to change the blocks of a style', async () => {
     expect((await cutter.put('/api/styles/1/composition').send({ composition: { preset: 'shirt-dress' } })).status).toBe(403);
+  });
+});
+
+describe('materials of a style', () => {
+  const fabric = async (name: string, widthMm: number) => {
+    const res = await owner.post('/api/fabrics').send({ name, widthMm });
+    expect(res.status).toBe(201);
+    return res.body.fabric.id as number;
+  };
+
+  it('gives a lined fitted dress pieces in self, lining, contrast and interfacing, each with its copies', async () => {
+    const id = await newStyle('LF-2');
+    await owner.put(`/api/styles/${id}/composition`).send({ composition: presetComposition('lined-fitted-dress') });
+    const pieces = (await owner.post(`/api/styles/${id}/grading/propose`)).body.grading.pieces as { id: string; material: string; cut: string; quantity: number }[];
+    const by = (m: string) => pieces.filter((p) => p.material === m).map((p) => p.id);
+    expect(by('self')).toEqual(expect.arrayContaining(['bodice-front', 'bodice-back', 'sleeve', 'skirt-front', 'skirt-back']));
+    expect(by('lining')).toEqual(['bodice-front-2', 'bodice-back-2', 'skirt-front-2', 'skirt-back-2']);
+    expect(by('contrast')).toEqual(['peplum']);
+    expect(by('interfacing').length).toBeGreaterThan(0);
+  });
+
+  it('plans the cut on the lining fabric from the lining pieces only', async () => {
+    const id = await newStyle('LF-3');
+    const self = await fabric('Wool crepe', 1500);
+    const lining = await fabric('Acetate lining', 1400);
+    const contrast = await fabric('Silk organza', 1400);
+    const put = await owner.put(`/api/styles/${id}/composition`).send({
+      composition: presetComposition('lined-fitted-dress'), materialFabrics: { self, lining, contrast, interfacing: self },
+    });
+    expect(put.status).toBe(200);
+    expect(put.body.style.materialFabrics).toEqual({ self, lining, contrast, interfacing: self });
+    expect((await owner.post(`/api/styles/${id}/grading/propose`)).status).toBe(200);
+    const batch = await owner.post('/api/batches').send({ styleId: id, quantities: { XS: 2, S: 2, M: 4, L: 2, XL: 2 }, dueDate: '2027-02-01' });
+    expect(batch.status).toBe(201);
+    const plan = await owner.post(`/api/batches/${batch.body.batch.id}/cut-plan`).send({ fabricId: lining, maxPlies: 10, maxGarmentsPerMarker: 2, overcutPercent: 0 });
+    expect(plan.status).toBe(201);
+    // Each lay rests on the plan's stated estimate (area ÷ (width × assumed utilisation)); the areas are summed
+    // here from the loader's pieces of each material, independently of the plan's own filter.
+    const all = await loadCuttingPieces(ds, 1, id);
+    const area = (size: string, keep: (m: string) => boolean) => all[size].filter((p) => keep(p.material)).reduce((a, p) => a + polygonArea(p.outline) * p.quantity, 0);
+    const { lays, assumedUtilisation } = plan.body.cutPlan as { lays: { ratio: Record<string, number>; markerLengthMm: number }[]; assumedUtilisation: number };
+    expect(lays.length).toBeGreaterThan(0);
+    for (const l of lays) {
+      const estimate = (keep: (m: string) => boolean) => Object.entries(l.ratio).reduce((a, [s, n]) => a + n * area(s, keep), 0) / (1400 * assumedUtilisation);
+      expect(l.markerLengthMm).toBeGreaterThan(0.97 * estimate((m) => m === 'lining'));
+      expect(l.markerLengthMm).toBeLessThan(1.03 * estimate((m) => m === 'lining') + 50);
+      expect(l.markerLengthMm).toBeLessThan(0.8 * estimate(() => true));
+    }
+  });
+
+  it('answers 400 on fabricId when the cut is planned on a fabric no material of the style uses', async () => {
+    const id = await newStyle('LF-4');
+    const self = await fabric('Ponte', 1500);
+    const other = await fabric('Denim', 1500);
+    await owner.put(`/api/styles/${id}/composition`).send({ composition: presetComposition('lined-fitted-dress'), materialFabrics: { self } });
+    await owner.post(`/api/styles/${id}/grading/propose`);
+    const batch = await owner.post('/api/batches').send({ styleId: id, quantities: { M: 2 }, dueDate: '2027-02-01' });
+    const plan = await owner.post(`/api/batches/${batch.body.batch.id}/cut-plan`).send({ fabricId: other, maxPlies: 10, maxGarmentsPerMarker: 2 });
+    expect(plan.status).toBe(400);
+    expect(plan.body.error.fields.fabricId).toMatch(/No material/);
   });
 });
