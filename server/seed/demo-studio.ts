@@ -9,10 +9,11 @@ import { seedCutting } from './cutting.seed';
 import { seedFloor } from './floor.seed';
 import { seedGrading } from './grading.seed';
 import { seedLine } from './line.seed';
+import { seedLinedDress } from './lined-dress.seed';
 import type { SeedContext } from './seed-context';
 
 /** Area seeders in dependency order: pieces → fabric, markers, cut plan → line → floor → costing. */
-const AREA_SEEDS: ((ctx: SeedContext) => Promise<void>)[] = [seedGrading, seedCutting, seedLine, seedFloor, seedCosting];
+const AREA_SEEDS: ((ctx: SeedContext) => Promise<void>)[] = [seedGrading, seedCutting, seedLine, seedFloor, seedCosting, seedLinedDress];
 
 /** Our own invented demo people; none is a real person. */
 export const DEMO_PEOPLE: { email: string; name: string; role: Role; pin?: string }[] = [

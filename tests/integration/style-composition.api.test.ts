@@ -32,6 +32,28 @@ async function newStyle(code: string): Promise<number> {
 
 type PieceDto = { id: string; name: string };
 
+describe('the second demo style', () => {
+  it('seeds the lined fitted dress with its blocks, a fabric per material, graded pieces in five sizes and its trims', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string; composition: { preset: string } | null; materialFabrics: Record<string, number> }[];
+    expect(styles.map((s) => s.code)).toEqual(['SR-101', 'SR-202']);
+    const lined = styles[1];
+    expect(lined.composition?.preset).toBe('lined-fitted-dress');
+    expect(Object.keys(lined.materialFabrics).sort()).toEqual(['contrast', 'interfacing', 'lining', 'self']);
+    const fabrics = (await owner.get('/api/fabrics')).body.fabrics as { id: number; name: string }[];
+    const nameOf = (id: number) => fabrics.find((f) => f.id === id)?.name;
+    expect(nameOf(lined.materialFabrics.self)).toBe('Sable cotton poplin');
+    expect(nameOf(lined.materialFabrics.lining)).toBe('Usiku viscose lining');
+    expect(nameOf(lined.materialFabrics.contrast)).toBe('Tausi silk organza');
+    const g = (await owner.get(`/api/styles/${lined.id}/grading`)).body.grading;
+    expect(g.sizes).toEqual(SIZES);
+    expect(g.errors).toEqual([]);
+    expect(g.pieces.find((p: { id: string }) => p.id === 'peplum').material).toBe('contrast');
+    // The shirt dress keeps its eight pieces and stays first in every list.
+    expect((await owner.get('/api/styles/1/grading')).body.grading.pieces).toHaveLength(8);
+    expect(fabrics[0].name).toBe('Sable cotton poplin');
+  });
+});
+
 describe('a style drafted from its blocks', () => {
   it('answers 400 asking to choose blocks when a new style without a composition proposes rules', async () => {
     const id = await newStyle('NB-1');
