@@ -1,4 +1,4 @@
-import { FACING_WIDTH_MM, HEM_CIRCLE_MM, HEM_STRAIGHT_SKIRT_MM, SHOULDER_PAD_EXTRA_WIDTH_MM, V_NECK_DEPTH_MM, ZIP_ALLOWANCE_MM } from '@grading';
+import { FACING_WIDTH_MM } from '@grading';
 import type { BlockSpecInput } from '@shared/schemas/style-composition';
 
 const IN = 25.4;
@@ -31,10 +31,10 @@ export const BLOCK_FIELDS: Record<BlockName, BlockField[]> = {
     { path: 'waistEaseMm', label: 'Waist ease', kind: 'length', default: IN },
     { path: 'waistDartMm', label: 'Waist dart intake', kind: 'length', default: 'from bust − waist' },
     { path: 'neckline.shape', label: 'Front neckline', kind: 'choice', choices: ['round', 'v', 'square', 'boat'], default: 'round' },
-    { path: 'neckline.depthMm', label: 'Neckline depth', kind: 'length', default: `round 3 in, V ${V_NECK_DEPTH_MM / IN} in` },
+    { path: 'neckline.depthMm', label: 'Neckline depth', kind: 'length', default: 'round 3 in, V 7 in' },
     { path: 'backNeckline', label: 'Back neckline', kind: 'choice', choices: ['standard', 'high'], default: 'standard' },
-    { path: 'shoulderPads', label: `Shoulder pads (+${SHOULDER_PAD_EXTRA_WIDTH_MM / IN} in shoulder)`, kind: 'switch', default: false, on: {} },
-    { path: 'centreBackOpening', label: `Centre-back zip opening (${ZIP_ALLOWANCE_MM / IN} in allowance)`, kind: 'switch', default: false, on: {} },
+    { path: 'shoulderPads', label: 'Shoulder pads (+1 in at the shoulder)', kind: 'switch', default: false, on: {} },
+    { path: 'centreBackOpening', label: 'Centre-back zip opening (1½ in allowance)', kind: 'switch', default: false, on: {} },
     { path: 'seamMm', label: 'Seam allowance', kind: 'length', default: 10 },
   ],
   skirt: [
@@ -43,8 +43,8 @@ export const BLOCK_FIELDS: Record<BlockName, BlockField[]> = {
     { path: 'waistEaseMm', label: 'Waist ease', kind: 'length', default: 0.5 * IN },
     { path: 'hipEaseMm', label: 'Hip ease', kind: 'length', default: 2 * IN },
     { path: 'fraction', label: 'Circle fraction (circle)', kind: 'number', default: 1, step: 0.25 },
-    { path: 'centreBackOpening', label: `Centre-back zip opening`, kind: 'switch', default: false, on: {} },
-    { path: 'hemMm', label: 'Hem allowance', kind: 'length', default: `straight ${HEM_STRAIGHT_SKIRT_MM / IN} in, circle ${HEM_CIRCLE_MM / IN} in` },
+    { path: 'centreBackOpening', label: 'Centre-back zip opening (1½ in allowance)', kind: 'switch', default: false, on: {} },
+    { path: 'hemMm', label: 'Hem allowance', kind: 'length', default: 'straight 2 in, circle ⅜ in' },
   ],
   sleeve: [
     { path: 'length', label: 'Length', kind: 'choice', choices: ['short', 'three-quarter', 'long'], default: 'long' },

@@ -2,6 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router';
 import { cuttingOutline, draftStyle, type BlockSpec, type BodyMeasurements, type DraftedPiece } from '@grading';
+import { formatLength, parseLength } from '@shared/units/length-format';
 import { presetComposition, STYLE_PRESETS, type BlockSpecInput, type StyleComposition } from '@shared/schemas/style-composition';
 import type { StyleDto } from '@shared/schemas/styles';
 import { ErrorNote } from '@/components/ui/page';
@@ -108,7 +109,10 @@ function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: numb
 }
 
 function OptionField({ index, field: f, spec, canEdit, onChange }: { index: number; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
-  const { len, cell, parseCell, cellUnit } = useLength();
+  const { len, system } = useLength();
+  const unit = system === 'metric' ? 'cm' : 'in';
+  const cell = (v: number) => (system === 'metric' ? String(Number((v / 10).toFixed(2))) : formatLength(v, system).replace('"', ''));
+  const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
   const value = getAt(spec, f.path);
   const id = `b${index}-${f.path}`;
   const set = (v: unknown) => onChange(setAt(spec, f.path, v));
@@ -135,7 +139,7 @@ function OptionField({ index, field: f, spec, canEdit, onChange }: { index: numb
   const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : String(f.default)) : f.default;
   return (
     <label className="text-sm" htmlFor={id}>
-      <span className="field-label">{f.label}{f.kind === 'length' ? ` (${cellUnit === 'mm' ? 'mm' : 'in'})` : ''}</span>
+      <span className="field-label">{f.label}{f.kind === 'length' ? ` (${unit})` : ''}</span>
       <input
         id={id} className="field-input" disabled={!canEdit} placeholder={`Default ${shown}`}
         defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : String(value)}
@@ -181,23 +185,25 @@ function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; 
     x += maxX - minX + gap;
     return { p, cut, dx, dy: -minY, h: maxY - minY };
   });
-  const height = Math.max(...laid.map((l) => l.h)) + 60;
+  const font = Math.max(18, x / 90);
+  const k = Math.max(1, x / 900); // stroke widths in screen-ish pixels
+  const height = Math.max(...laid.map((l) => l.h)) + 3 * font + 20;
   const d = (pts: { x: number; y: number }[], dx: number, dy: number) => `M${pts.map((q) => `${(q.x + dx).toFixed(1)},${(-q.y + dy).toFixed(1)}`).join('L')}Z`;
   return (
     <figure>
-      <svg viewBox={`-20 -20 ${x + 20} ${height + 20}`} className="h-72 w-full rounded-lg border border-calico-200 bg-calico-50" role="img" aria-label={`${drafted.pieces.length} pieces of size ${baseSize} to scale`} data-testid="blocks-drawing">
-        {laid.map(({ p, cut, dx, dy, h }) => (
+      <svg viewBox={`-20 -20 ${x + 20} ${height + 20}`} className="h-96 w-full rounded-lg border border-calico-200 bg-calico-50" role="img" aria-label={`${drafted.pieces.length} pieces of size ${baseSize} to scale`} data-testid="blocks-drawing">
+        {laid.map(({ p, cut, dx, dy, h }, i) => (
           <g key={p.id} data-piece={p.id}>
-            <path d={d(cut, dx, dy)} fill="none" stroke="#D6C8B0" strokeWidth={3} />
-            <path d={d(p.outline, dx, dy)} fill={p.material === 'lining' ? 'rgba(120,90,160,0.08)' : p.material === 'contrast' ? 'rgba(190,90,60,0.1)' : 'rgba(15,76,92,0.06)'} stroke="#0F4C5C" strokeWidth={2} />
-            <line x1={p.grainLine.from.x + dx} y1={-p.grainLine.from.y + dy} x2={p.grainLine.to.x + dx} y2={-p.grainLine.to.y + dy} stroke="#434B50" strokeWidth={2} strokeDasharray="12 6" />
-            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + 40} fontSize={28} fill="#434B50">{p.name} ×{p.copies} · {p.material}</text>
+            <path d={d(cut, dx, dy)} fill="none" stroke="#C9B48F" strokeWidth={1.5 * k} />
+            <path d={d(p.outline, dx, dy)} fill={p.material === 'lining' ? 'rgba(120,90,160,0.08)' : p.material === 'contrast' ? 'rgba(190,90,60,0.1)' : 'rgba(15,76,92,0.06)'} stroke="#0F4C5C" strokeWidth={1.5 * k} />
+            <line x1={p.grainLine.from.x + dx} y1={-p.grainLine.from.y + dy} x2={p.grainLine.to.x + dx} y2={-p.grainLine.to.y + dy} stroke="#434B50" strokeWidth={k} strokeDasharray={`${6 * k} ${3 * k}`} />
+            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{p.name} ×{p.copies}</text>
           </g>
         ))}
-        <line x1={0} y1={height} x2={100} y2={height} stroke="#434B50" strokeWidth={3} />
-        <text x={110} y={height + 8} fontSize={24} fill="#434B50">{len(100)}</text>
+        <line x1={0} y1={height} x2={100} y2={height} stroke="#434B50" strokeWidth={2 * k} />
+        <text x={110} y={height + font / 3} fontSize={font} fill="#434B50">{len(100)}</text>
       </svg>
-      <figcaption className="mt-1 text-xs text-ink-600">Size {baseSize}, drafted from the blocks as edited: sewing line dark, cutting line pale, grain dashed; the bar is {len(100)}.</figcaption>
+      <figcaption className="mt-1 text-xs text-ink-600">Size {baseSize}, drafted from the blocks as edited: sewing line dark, cutting line pale, grain dashed; self teal, lining violet, contrast rust; the bar is {len(100)}.</figcaption>
     </figure>
   );
 }
