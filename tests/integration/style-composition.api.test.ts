@@ -54,6 +54,26 @@ describe('the second demo style', () => {
   });
 });
 
+describe('costing a style of several materials', () => {
+  it('prices a fabric line for each linked fabric, lining and contrast from their own pieces, when the batch has no cut plan yet', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string; materialFabrics: Record<string, number> }[];
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    const batch = await owner.post('/api/batches').send({ styleId: lined.id, quantities: { S: 4, M: 6, L: 4 }, dueDate: '2027-03-01' });
+    expect(batch.status).toBe(201);
+    const sheet = (await owner.get(`/api/batches/${batch.body.batch.id}/costing`)).body.costing;
+    const fabricLines = (sheet.lines as { kind: string; refId: number; quantities: Record<string, number>; costMinor: Record<string, number> }[]).filter((l) => l.kind === 'fabric');
+    expect(fabricLines.map((l) => l.refId).sort()).toEqual(Object.values(lined.materialFabrics).sort());
+    const line = (m: string) => fabricLines.find((l) => l.refId === lined.materialFabrics[m])!;
+    // The sheet's main fabric is the self fabric; the others rest on their pieces' area.
+    expect(sheet.fabric.id).toBe(lined.materialFabrics.self);
+    for (const m of ['lining', 'contrast', 'interfacing']) expect(line(m).quantities.M, m).toBeGreaterThan(0);
+    // A larger size takes more lining; the organza is priced; the workbook carries every fabric line.
+    expect(line('lining').quantities.L).toBeGreaterThan(line('lining').quantities.S);
+    expect(line('contrast').costMinor.M).toBeGreaterThan(0);
+    expect((await owner.get(`/api/batches/${batch.body.batch.id}/costing.xlsx`)).status).toBe(200);
+  });
+});
+
 describe('a style drafted from its blocks', () => {
   it('answers 400 asking to choose blocks when a new style without a composition proposes rules', async () => {
     const id = await newStyle('NB-1');
