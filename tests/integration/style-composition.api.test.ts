@@ -75,6 +75,12 @@ describe('costing a style of several materials', () => {
 });
 
 describe('a style drafted from its blocks', () => {
+  it('creates a style with no blocks chosen and no material linked', async () => {
+    const res = await owner.post('/api/styles').send({ code: 'NB-0', name: 'Blank', sizeRun: SIZES, baseSize: 'M' });
+    expect(res.body.style.composition).toBeNull();
+    expect(res.body.style.materialFabrics).toEqual({});
+  });
+
   it('answers 400 asking to choose blocks when a new style without a composition proposes rules', async () => {
     const id = await newStyle('NB-1');
     const res = await owner.post(`/api/styles/${id}/grading/propose`);
@@ -124,6 +130,16 @@ describe('a style drafted from its blocks', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.fields['materialFabrics.lining']).toMatch(/No such fabric/);
     expect((await owner.get('/api/styles/1')).body.style.composition.preset).toBe('shirt-dress');
+  });
+
+  it('keeps the blocks and material links when the style details are saved', async () => {
+    const id = await newStyle('KP-1');
+    const lining = (await owner.post('/api/fabrics').send({ name: 'Cupro lining', widthMm: 1400 })).body.fabric.id as number;
+    await owner.put(`/api/styles/${id}/composition`).send({ composition: presetComposition('lined-fitted-dress'), materialFabrics: { lining } });
+    const saved = await owner.put(`/api/styles/${id}`).send({ code: 'KP-1', name: 'Renamed', sizeRun: SIZES, baseSize: 'M' });
+    expect(saved.status).toBe(200);
+    expect(saved.body.style.composition.preset).toBe('lined-fitted-dress');
+    expect(saved.body.style.materialFabrics).toEqual({ lining });
   });
 
   it('forbids a cutter to change the blocks of a style', async () => {
