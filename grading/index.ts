@@ -52,6 +52,8 @@ export { FACING_WIDTH_MM, draftBodiceFacings, draftPeplum, draftWaistband } from
 export type { FacingKind, PeplumOptions, WaistbandOptions } from './blocks/trim-pieces-block';
 export { BLOCK_NAMES, draftBlocks, openOutPieces } from './blocks/draft-blocks';
 export type { BlockSpec } from './blocks/draft-blocks';
+export { draftStyle } from './blocks/draft-style';
+export type { StyleDraftSpec } from './blocks/draft-style';
 
 export { cumulativeMove, displacementFor } from './grade-rules/grade-rule';
 export type { GradeMove, GradeRule, GradeTarget } from './grade-rules/grade-rule';

@@ -3,6 +3,7 @@ import { polygonArea } from '@shared/geometry/polygon';
 import { polygonIsSimple, polylineLength, segmentDistance } from '@shared/geometry/polyline';
 import type { Point } from '@shared/geometry/types';
 import { MM_PER_INCH } from '@shared/units/units';
+import { cuttingOutline, validateCuttingOutline } from '../pieces/cutting-outline';
 import { edgePoints, type Piece } from '../pieces/piece';
 import { demoSizeChart } from '../size-charts/demo-size-chart';
 import { measurementsForSize } from '../size-charts/size-chart';
@@ -34,13 +35,13 @@ function circumradius(a: Point, b: Point, c: Point): number {
  * ring's edge starts and ends at the same point). */
 const arcRadius = (w: Point[]) => circumradius(w[Math.floor(w.length / 4)], w[Math.floor(w.length / 2)], w[Math.floor((3 * w.length) / 4)]);
 const waistRadius = (p: Piece) => arcRadius(edge(p, 'waist'));
-const circleSkirt = (waistMm: number, fraction: number, lengthMm = 500) =>
-  openOutPieces(draftBlocks({ waist: waistMm }, [{ block: 'skirt', shape: 'circle', fraction, lengthMm, waistEaseMm: 0 }]))[0];
+const circleSkirt = (waistMm: number, fraction: number, lengthMm = 500, cut?: 'ring' | 'halves') =>
+  openOutPieces(draftBlocks({ waist: waistMm }, [{ block: 'skirt', shape: 'circle', fraction, lengthMm, waistEaseMm: 0, cut }]))[0];
 
 describe('circle skirts: r = W / (2π·f) (sizing-and-grading.md §3.2)', () => {
   // prettyquirkypants.com, "DIY tips: circle skirt, half circle skirt formulas" (web article), W = 26 in.
-  it('drafts a full circle for a 26 in waist with the published 4.13 in radius (truncated; exact π 4.138)', () => {
-    const r = inches(waistRadius(circleSkirt(26 * IN, 1)));
+  it('drafts a full circle in halves for a 26 in waist with the published 4.13 in radius (truncated; exact π 4.138)', () => {
+    const r = inches(waistRadius(circleSkirt(26 * IN, 1, 500, 'halves')));
     expect(Math.trunc(r * 100) / 100).toBe(4.13);
   });
   it('drafts a half circle for a 26 in waist with the published 8.2 in radius (truncated; exact π 8.276)', () => {
@@ -67,25 +68,45 @@ describe('circle skirts: r = W / (2π·f) (sizing-and-grading.md §3.2)', () => 
     const p = circleSkirt(700, 1);
     expect(p.edges.map((e) => e.name)).toEqual(['centre-back', 'hem', 'centre-back', 'waist']);
     expect(p.copies).toBe(1);
-    // Annulus area π(R² − r²) with r = 700/2π: the opened ring covers the whole circle once.
-    const r = 700 / (2 * Math.PI);
-    expect(polygonArea(p.outline)).toBeCloseTo(Math.PI * ((r + 500) ** 2 - r ** 2), -3);
+    // Sector of an annulus, θ/2 · (R² − r²), with θ the waist's own angle (waist length ÷ radius): the opened ring
+    // covers the circle once less the gap its opening allowances need.
+    const r = waistRadius(p);
+    const theta = edgeLen(p, 'waist') / r;
+    expect(theta).toBeLessThan(2 * Math.PI);
+    expect(polygonArea(p.outline)).toBeCloseTo((theta / 2) * ((r + 500) ** 2 - r ** 2), -3);
+  });
+  it('cuts a full ring whose cutting outline passes the cutting check, the inner sewing edge on target within 1 mm', () => {
+    // Before: a full ring spanned 2π, so its two opening allowances overlapped at the waist (~87 mm).
+    for (const [waist, allowance] of [[700, undefined], [30 * IN, 10], [600, 2 * IN]] as const) {
+      const target = 2 * waist + 10 * IN;
+      const p = draftPeplum({ waist }, { innerEdge: { times: 2, plusMm: 10 * IN }, lengthMm: 6 * IN, openingAllowanceMm: allowance });
+      expect(validateCuttingOutline(p, cuttingOutline(p)), `waist ${waist}`).toEqual([]);
+      expect(Math.abs(edgeLen(p, 'waist') - target)).toBeLessThan(1);
+      // The gap the two allowances take, from the drafted radius: the sewing line spans 2π less that angle.
+      const a = allowance ?? 10, s = 10;
+      const gap = 2 * Math.asin(a / (p.innerRadiusMm - s));
+      expect(edgeLen(p, 'waist') / p.innerRadiusMm).toBeCloseTo(2 * Math.PI - gap, 2);
+    }
+    const skirt = circleSkirt(700, 1);
+    expect(validateCuttingOutline(skirt, cuttingOutline(skirt))).toEqual([]);
   });
 });
 
 describe('peplum and flounce', () => {
   it('cuts the practitioner\'s gathered peplum, 2 × waist + 10 in, at r = 11.1 in for a 30 in waist (issue 16 seed document)', () => {
-    const p = openOutPieces(draftBlocks({ waist: 30 * IN }, [{ block: 'peplum', shape: 'circle', innerEdge: { times: 2, plusMm: 10 * IN }, lengthMm: 6 * IN }]))[0];
+    // Cut in halves on folds, so no opening gap changes the radius (a ring grows it to leave the opening room).
+    const p = openOutPieces(draftBlocks({ waist: 30 * IN }, [{ block: 'peplum', shape: 'circle', innerEdge: { times: 2, plusMm: 10 * IN }, lengthMm: 6 * IN, cut: 'halves' }]))[0];
     expect(inches(waistRadius(p))).toBeCloseTo(11.1, 1);
-    // the ring's inner edge, measured on the outline, is the 70 in target within 1 mm
-    expect(Math.abs(edgeLen(p, 'waist') - 70 * IN)).toBeLessThan(1);
+    // the inner edges of both halves, measured on the outline, make the 70 in target within 1 mm
+    expect(Math.abs(p.copies * edgeLen(p, 'waist') - 70 * IN)).toBeLessThan(1);
   });
   it('cuts a flat circle peplum whose inner edge equals the waist within 1 mm', () => {
     const p = unfoldPiece(draftPeplum({ waist: 737 }, { lengthMm: 150 }));
     expect(Math.abs(edgeLen(p, 'waist') - 737)).toBeLessThan(1);
   });
   it('gives a 70 cm seam, 15 cm deep flounce a fullness of 2.35 (block-drafting-and-line-planning.md §3, [computed])', () => {
-    const p = unfoldPiece(draftPeplum({ waist: 700 }, { lengthMm: 150 }));
+    // In halves: the published fullness is for r = seam / 2π (a ring grows r to leave its opening room).
+    const p = unfoldPiece(draftPeplum({ waist: 700 }, { lengthMm: 150, cut: 'halves' }));
     expect(edgeLen(p, 'hem') / edgeLen(p, 'waist')).toBeCloseTo(2.35, 2);
   });
   it('rounds the hem corners at the opening when asked, leaving the inner edge as it was', () => {

@@ -46,19 +46,22 @@ const RING_TOLERANCE_MM = 0.05;
  */
 export function draftCircleRing(input: CircleRingInput): Piece & { innerRadiusMm: number; outerRadiusMm: number } {
   if (!(input.depthMm > 0)) throw new RangeError('length must be a positive number of mm');
-  const r = circleSkirtRadius(input.innerEdgeMm, input.fraction);
-  const R = r + input.depthMm;
   const cut = input.cut ?? 'ring';
+  const seam = input.seamMm ?? DEFAULT_SEAM_MM;
+  const { radiusMm: r, sweep: ringSweep } = cut === 'ring'
+    ? openRing(input.innerEdgeMm, input.fraction, input.openingAllowanceMm ?? seam, seam)
+    : { radiusMm: circleSkirtRadius(input.innerEdgeMm, input.fraction), sweep: 2 * Math.PI * input.fraction };
+  const R = r + input.depthMm;
   const parts = cut === 'ring' ? 1 : cut === 'halves' ? 2 : 4;
   const cf = -Math.PI / 2;
-  const sweep = (2 * Math.PI * input.fraction) / parts;
-  const seam = input.seamMm ?? DEFAULT_SEAM_MM;
+  const sweep = ringSweep / parts;
   const [a0, a1] = cut === 'ring' ? [cf - sweep / 2, cf + sweep / 2] : [cf, cf + sweep / 2];
   const startEdge: [string, EdgeOptions] = cut === 'ring'
     ? [input.openingName ?? 'centre-back', { allowanceMm: input.openingAllowanceMm ?? seam }]
     : ['centre-front', { allowanceMm: 0, isFold: true }];
   const endEdge: [string, EdgeOptions] = cut === 'ring' ? [startEdge[0], startEdge[1]] : ['side', { allowanceMm: seam }];
-  const side = (Math.PI * input.fraction) / 2;
+  // Side positions: a quarter of the inner edge either side of centre front.
+  const side = input.innerEdgeMm / (4 * r);
   const notchAngles = [cf - side, cf, cf + side].filter((a) => a > a0 + 1e-9 && a < a1 - 1e-9);
   const at = (rad: number, a: number): Point => ({ x: rad * Math.cos(a), y: rad * Math.sin(a) });
   const b = new OutlineBuilder(at(r, a0), 'waist-start');
@@ -91,4 +94,27 @@ export function draftCircleRing(input: CircleRingInput): Piece & { innerRadiusMm
     drillHoles: [], internalLines: [], cut: cut === 'ring' ? 'cut1' : 'fold', quantity: parts,
     innerRadiusMm: r, outerRadiusMm: R,
   };
+}
+
+/**
+ * Radius and sweep of a ring opened at one seam. The two opening allowances lie side by side in the gap the
+ * opening leaves; their cutting lines meet the waist's cutting circle (radius r − waist allowance) only if the gap
+ * is at least 2·asin(a / (r − s)) wide (each allowance a is a strip along its radius; the strips part where the
+ * circle of radius r − s crosses them). A fraction leaving less than that gap is cut on a sweep of 2π minus the
+ * gap, the radius grown so the inner sewing edge keeps its length: r = innerEdge / sweep, solved by fixed point
+ * (it settles in a few steps: the gap shrinks as r grows). Throws RangeError when the allowances cannot fit.
+ */
+export function openRing(innerEdgeMm: number, fraction: number, openingAllowanceMm: number, waistAllowanceMm: number): { radiusMm: number; sweep: number } {
+  let r = circleSkirtRadius(innerEdgeMm, fraction);
+  let sweep = 2 * Math.PI * fraction;
+  for (let k = 0; k < 50; k++) {
+    const inner = r - waistAllowanceMm;
+    if (!(inner > openingAllowanceMm)) throw new RangeError('the ring is too small for its opening allowances: cut it in halves or quarters');
+    const gap = 2 * Math.asin(openingAllowanceMm / inner);
+    const next = Math.min(2 * Math.PI * fraction, 2 * Math.PI - gap);
+    if (Math.abs(next - sweep) < 1e-12) break;
+    sweep = next;
+    r = innerEdgeMm / sweep;
+  }
+  return { radiusMm: r, sweep };
 }

@@ -2,16 +2,18 @@ import { addDays, format } from 'date-fns';
 import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/auth/permissions';
 import { hashSecret } from '../auth/password';
+import { presetComposition } from '../../shared/schemas/style-composition';
 import { BatchEntity, StudioEntity, StyleEntity, UserEntity } from '../entities';
 import { seedCosting } from './costing.seed';
 import { seedCutting } from './cutting.seed';
 import { seedFloor } from './floor.seed';
 import { seedGrading } from './grading.seed';
 import { seedLine } from './line.seed';
+import { seedLinedDress } from './lined-dress.seed';
 import type { SeedContext } from './seed-context';
 
 /** Area seeders in dependency order: pieces → fabric, markers, cut plan → line → floor → costing. */
-const AREA_SEEDS: ((ctx: SeedContext) => Promise<void>)[] = [seedGrading, seedCutting, seedLine, seedFloor, seedCosting];
+const AREA_SEEDS: ((ctx: SeedContext) => Promise<void>)[] = [seedGrading, seedCutting, seedLine, seedFloor, seedCosting, seedLinedDress];
 
 /** Our own invented demo people; none is a real person. */
 export const DEMO_PEOPLE: { email: string; name: string; role: Role; pin?: string }[] = [
@@ -71,6 +73,7 @@ export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise
       sizeRun: ['XS', 'S', 'M', 'L', 'XL'],
       baseSize: 'M',
       status: 'approved',
+      composition: presetComposition('shirt-dress'),
     });
     const batch = await m.getRepository(BatchEntity).save({
       studioId: studio.id,

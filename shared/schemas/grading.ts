@@ -97,6 +97,8 @@ export interface GradedPieceDto {
   role: string;
   cut: 'cut1' | 'pair' | 'fold';
   quantity: number;
+  /** The style's material the piece is cut from ('self', 'lining', 'contrast', 'interfacing' or an owner's name). */
+  material: string;
   landmarks: Record<string, number>;
   edges: { name: string; allowanceMm: number; isFold: boolean }[];
   rules: GradeRuleDto[];

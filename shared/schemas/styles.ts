@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { safeText, sizeLabel } from './common';
+import type { MaterialFabrics, StyleComposition } from './style-composition';
 
 export const STYLE_STATUSES = ['draft', 'sampling', 'approved', 'archived'] as const;
 
@@ -37,5 +38,9 @@ export interface StyleDto {
   sizeRun: string[];
   baseSize: string;
   status: (typeof STYLE_STATUSES)[number];
+  /** Blocks (or preset) the pieces are drafted from; null until the owner chooses. */
+  composition: StyleComposition | null;
+  /** Fabric id per material ({} = none linked). */
+  materialFabrics: MaterialFabrics;
   updatedAt: string;
 }

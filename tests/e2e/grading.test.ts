@@ -18,7 +18,9 @@ describe('journey: the owner grades the demo style', () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
     await signInAs(page, 'owner@tamarind.example');
     await page.getByRole('link', { name: 'Pattern & grading' }).first().click();
+    // With two demo styles the grading index lists them: wait for the list (or a direct redirect), then pick SR-101.
     const demo = page.getByRole('link', { name: /SR-101/ });
+    await expect.poll(async () => /\/styles\/\d+\/grading$/.test(page.url()) || (await demo.isVisible().catch(() => false)), { timeout: 15_000 }).toBe(true);
     if (await demo.isVisible().catch(() => false)) await demo.click();
     await page.waitForURL(/\/styles\/\d+\/grading$/);
     const styleId = Number(/styles\/(\d+)\/grading/.exec(page.url())![1]);
@@ -75,5 +77,20 @@ describe('journey: the owner grades the demo style', () => {
     expect(overflow).toBeLessThanOrEqual(1);
     await shot(page, 'grading-phone');
     await ctx.close();
+  });
+
+  it('shows the lined fitted dress built from blocks: its preset, options with defaults, a fabric per material and its pieces to scale', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, 'owner@tamarind.example');
+    const styles = await page.evaluate(async () => (await (await fetch('/api/styles')).json()).styles as { id: number; code: string }[]);
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    await page.goto(`${baseUrl()}/styles/${lined.id}`);
+    await expect.poll(() => page.locator('[data-testid="blocks-drawing"] g[data-piece]').count(), { timeout: 15_000 }).toBe(14);
+    expect(await page.locator('[data-testid="style-blocks"] li').count()).toBe(7);
+    expect(await page.getByLabel('Fabric for lining').locator('option:checked').textContent()).toBe('Usiku viscose lining');
+    expect(await page.getByLabel('Fabric for contrast').locator('option:checked').textContent()).toBe('Tausi silk organza');
+    expect(await page.locator('#b2-innerEdge\\.times').inputValue()).toBe('2');
+    await shot(page, 'style-blocks-lined-dress');
+    await page.close();
   });
 });

@@ -44,6 +44,7 @@ describe('file names in any script', () => {
     const csv = await owner.get(`/api/styles/${id}/grading/chart/export?format=csv&unit=mm`);
     expect(csv.status).toBe(200);
     expect(csv.text.split('\r\n')[0]).toBe(`measurement,unit,${sizes.join(',')}`);
+    expect((await owner.put(`/api/styles/${id}/composition`).send({ composition: { preset: 'shirt-dress' } })).status).toBe(200);
     expect((await owner.post(`/api/styles/${id}/grading/propose`).set('X-Seamrun-Csrf', '1')).status).toBe(200);
     const svg = await owner.get(`/api/styles/${id}/grading/pieces/front/svg?size=${encodeURIComponent('Р44')}`);
     expect(svg.status).toBe(200);

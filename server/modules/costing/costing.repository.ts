@@ -16,6 +16,9 @@ import {
   StyleEntity,
 } from '../../entities';
 
+import { polygonArea } from '@shared/geometry/polygon';
+import { loadCuttingPieces } from '../grading/graded-pieces';
+
 export type CostingRepository = ReturnType<typeof createCostingRepository>;
 
 /**
@@ -26,6 +29,16 @@ export function createCostingRepository(ds: DataSource) {
   const trims = ds.getRepository(TrimEntity);
   const settings = ds.getRepository(CostingSettingsEntity);
   return {
+    /** Cut area per garment by size and material (mm², copies counted), from the style's graded cutting pieces. */
+    async materialAreas(studioId: number, styleId: number): Promise<Record<string, Record<string, number>>> {
+      const pieces = await loadCuttingPieces(ds, studioId, styleId);
+      const out: Record<string, Record<string, number>> = {};
+      for (const [size, list] of Object.entries(pieces)) {
+        out[size] = {};
+        for (const p of list) out[size][p.material] = (out[size][p.material] ?? 0) + polygonArea(p.outline) * p.quantity;
+      }
+      return out;
+    },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
     batch: (studioId: number, id: number) =>
       ds.getRepository(BatchEntity).findOne({ where: { studioId, id }, relations: { style: true } }),

@@ -6,6 +6,7 @@ import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '
 import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
 import { batchCode } from '../batches/batch.routes';
+import { ASSUMED_UTILISATION } from '../cutting/cut-plan.service';
 import {
   consumptionBySize,
   estimateConsumption,
@@ -80,10 +81,35 @@ export function createCostingService(repo: CostingRepository) {
         return { fabric, basis: 'marker' as ConsumptionBasis, perSize, planned: [] as LayLike[], cutLays: [] as LayEntity[] };
       }
     }
-    const fabric = await repo.firstFabric(studioId);
+    // The style's self fabric when it links one, else the studio's first fabric.
+    const selfId = batch.style?.materialFabrics?.self;
+    const fabric = (selfId ? await repo.fabric(studioId, selfId) : null) ?? (await repo.firstFabric(studioId));
     if (!fabric) return null;
     const perSize = estimateConsumption(sizeRun, batch.style?.baseSize ?? sizeRun[0]);
     return { fabric, basis: 'estimate' as ConsumptionBasis, perSize, planned: [] as LayLike[], cutLays: [] as LayEntity[] };
+  }
+
+  /**
+   * The style's other materials' fabrics (lining, contrast, interfacing…: every linked fabric but the sheet's main
+   * one), each with a length per garment by size: its pieces' cut area ÷ (width × the cut plan's assumed
+   * utilisation), plus wastage. None when the style links no materials.
+   */
+  async function otherMaterialFabrics(studioId: number, style: NonNullable<BatchEntity['style']>, mainFabricId: number | undefined, wastage: number) {
+    const links = Object.entries(style.materialFabrics ?? {}).filter(([, id]) => id !== mainFabricId);
+    if (!links.length) return [];
+    const areas = await repo.materialAreas(studioId, style.id);
+    const out = [];
+    for (const id of [...new Set(links.map(([, f]) => f))]) {
+      const fabric = await repo.fabric(studioId, id);
+      if (!fabric) continue;
+      const materials = links.filter(([, f]) => f === id).map(([m]) => m);
+      const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
+        const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
+        return [s, mm(round1((area / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
+      }));
+      out.push({ fabric, materials, perSize });
+    }
+    return out;
   }
 
   /** The sheet of a batch; labour on the style's saved basis unless `basisOverride` is given. */
@@ -108,6 +134,8 @@ export function createCostingService(repo: CostingRepository) {
     const wastage = 1 + settings.wastagePercent / 100;
     const fabricMm: Record<string, Millimetres> = {};
     for (const { size } of sizes) fabricMm[size] = mm(round1((fab?.perSize[size] ?? 0) * wastage));
+    const others = await otherMaterialFabrics(studioId, style, fab?.fabric.id, wastage);
+    if (others.length) notes.push(`${others.map((o) => o.fabric.name).join(', ')}: estimated from the cut area of the pieces of ${others.map((o) => o.materials.join(' and ')).join(', ')} at ${ASSUMED_UTILISATION * 100} % utilisation until they have their own marker.`);
     if (!fab) notes.push('No fabric is recorded for this studio yet, so the sheet has no fabric line.');
     else if (fab.basis === 'estimate') notes.push('Fabric is an estimate until a marker or cut plan exists for this batch.');
     else if (fab.basis === 'marker') notes.push('Fabric comes from the latest finished marker; the cut plan will replace it.');
@@ -133,7 +161,10 @@ export function createCostingService(repo: CostingRepository) {
     const sheet = costGarment({
       sizes: sizeLabels,
       quantities: batch.quantities,
-      fabrics: fab ? [{ name: fab.fabric.name, pricePerMetre: fab.fabric.pricePerMetreMinor, lengthPerGarment: fabricMm }] : [],
+      fabrics: [
+        ...(fab ? [{ name: fab.fabric.name, pricePerMetre: fab.fabric.pricePerMetreMinor, lengthPerGarment: fabricMm }] : []),
+        ...others.map((o) => ({ name: o.fabric.name, pricePerMetre: o.fabric.pricePerMetreMinor, lengthPerGarment: o.perSize })),
+      ],
       trims: trimLines,
       labour: [labourLine],
       overheads: settings.overheadPercent > 0 ? { percentOfPrimeCost: settings.overheadPercent } : undefined,
@@ -142,6 +173,7 @@ export function createCostingService(repo: CostingRepository) {
     });
     const lines: CostingLineDto[] = [];
     if (fab) lines.push({ kind: 'fabric', refId: fab.fabric.id, description: fab.fabric.name, unit: 'm', priceMinor: fab.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, fabricMm[x] / 1000])), costMinor: {} });
+    for (const o of others) lines.push({ kind: 'fabric', refId: o.fabric.id, description: o.fabric.name, unit: 'm', priceMinor: o.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, o.perSize[x] / 1000])), costMinor: {} });
     for (const t of trims) lines.push({ kind: 'trim', refId: t.id, description: t.name, unit: t.unit, priceMinor: t.unitPriceMinor, percent: null, quantities: perSize(t.quantityPerGarment), costMinor: {} });
     lines.push('pieceRate' in labourLine
       ? { kind: 'labour', refId: null, description: labourLine.name, unit: 'per garment', priceMinor: pieceRateMinor, percent: null, quantities: perSize(1), costMinor: {} }
@@ -203,7 +235,10 @@ export function createCostingService(repo: CostingRepository) {
       style: { code: style.code, name: style.name },
       batch: { code: batchCode(batch.id) },
       sizes,
-      fabrics: fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric.pricePerMetreMinor)), consumptionMmBySize: fabricMm }] : [],
+      fabrics: [
+        ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric.pricePerMetreMinor)), consumptionMmBySize: fabricMm }] : []),
+        ...others.map((o) => ({ description: o.fabric.name, pricePerLengthMinor: minor(perLength(o.fabric.pricePerMetreMinor)), consumptionMmBySize: o.perSize })),
+      ],
       trims: trims.map((t) => ({ description: t.name, quantityPerGarment: t.quantityPerGarment, unit: t.unit, unitPriceMinor: minor(t.unitPriceMinor) })),
       labour,
       overheads,

@@ -13,6 +13,8 @@ export interface CuttingPiece {
   name: string;
   /** Cutting outline (sewing line + seam allowance), mm, counter-clockwise. */
   outline: { x: number; y: number }[];
+  /** The style's material the piece is cut from ('self' for pieces stored before materials existed). */
+  material: string;
   /** Copies per garment (a mirrored pair counts 2). */
   quantity: number;
   /** True when the copies are cut as a mirrored pair (left and right). */
@@ -67,6 +69,7 @@ export function cuttingPieceOf(piece: Piece): CuttingPiece {
   return {
     pieceId: piece.id,
     name: piece.name,
+    material: 'material' in piece && typeof piece.material === 'string' ? piece.material : 'self',
     outline: outline.map((p) => ({ x: round(p.x), y: round(p.y) })),
     quantity: mirrored ? 2 * piece.quantity : piece.quantity,
     mirrored,

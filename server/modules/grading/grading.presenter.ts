@@ -30,6 +30,9 @@ export function presentChart(chart: SizeChart): NonNullable<GradingDto['chart']>
   };
 }
 
+/** A stored piece's material; pieces stored before materials existed are self. */
+export const materialOf = (p: object): string => ('material' in p && typeof p.material === 'string' ? p.material : 'self');
+
 /** The whole grading view of a style; `set` null gives an empty view over the style's run. */
 export function presentGrading(styleId: number, styleRun: string[], styleBase: string, set: StoredGradingSet | null, computed: ComputedGrading | null): GradingDto {
   const chart = set?.sizeChart ?? null;
@@ -39,7 +42,7 @@ export function presentGrading(styleId: number, styleRun: string[], styleBase: s
     const g = computed?.graded[p.id];
     if (!g) return [];
     return [{
-      id: p.id, name: p.name, role: p.role, cut: p.cut, quantity: p.quantity, landmarks: p.landmarks,
+      id: p.id, name: p.name, role: p.role, cut: p.cut, quantity: p.quantity, material: materialOf(p), landmarks: p.landmarks,
       edges: p.edges.map((e) => ({ name: e.name, allowanceMm: e.allowanceMm, isFold: !!e.isFold })),
       rules: set?.gradeRules[p.id] ?? [],
       bySize: Object.fromEntries(g.sizes.map((s) => [s, shape(g.bySize[s])])),

@@ -1,6 +1,6 @@
 import {
-  cuttingOutline, demoSizeChart, draftShirtDress, en13402BustIntervals, gradeStyle, isPointOfMeasure, measurementsForSize,
-  parseSizeChartTable, sizeChartToRows, sizeMix, type BodyMeasurements, type GradeRule, type SizeChart, type TableError,
+  cuttingOutline, demoSizeChart, draftStyle, en13402BustIntervals, gradeStyle, isPointOfMeasure, measurementsForSize,
+  parseSizeChartTable, sizeChartToRows, sizeMix, type BlockSpec, type BodyMeasurements, type GradeRule, type SizeChart, type TableError,
 } from '@grading';
 import { pieceToDxf } from '@exports/dxf/piece-dxf';
 import { pieceToSvg } from '@exports/svg/piece-svg';
@@ -40,6 +40,17 @@ const problemCount = (n: number) => `${n} problem${n > 1 ? 's' : ''}${n > LISTED
 /** The set graded over its run on the CPU pool's threads (grading and cutting outlines are CPU work). */
 const gradeOnPool = (set: StoredGradingSet, styleBase: string) =>
   runCpuTask('grading', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules }, styleBase });
+
+/** The style's base pieces drafted from its composition at the base size's chart measurements; a bad option or a
+ * measurement the chart lacks is a 400 naming it. */
+function draftComposition(composition: { preset: string | null; blocks: unknown[] }, chart: SizeChart, baseSize: string) {
+  try {
+    return draftStyle(measurementsForSize(chart, baseSize) as BodyMeasurements, { preset: composition.preset, blocks: composition.blocks as BlockSpec[] });
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    throw badRequest(`composition: ${err.message}`, { composition: err.message });
+  }
+}
 
 /** Grading rules of a style: chart, rules, graded set, downloads and the size mix. */
 export function createGradingService({ styles, sets, audit, now }: GradingServiceDeps) {
@@ -139,7 +150,10 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
     async proposeRules(actor: Actor, styleId: number) {
       const style = await styleOf(actor, styleId);
       const set = await setOf(actor, styleId);
-      const pieces = set.pieces.length ? set.pieces : draftShirtDress(measurementsForSize(set.sizeChart, style.baseSize) as BodyMeasurements);
+      const pieces = style.composition ? draftComposition(style.composition, set.sizeChart, style.baseSize) : set.pieces;
+      if (!pieces.length) {
+        throw badRequest('composition: choose the blocks this style is drafted from (or a preset) on the style page first', { composition: 'Choose blocks or a preset for this style' });
+      }
       const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize);
       const saved = await sets.save(actor.studioId, styleId, { pieces, gradeRules: rules });
       await audit.record(actor, 'propose_grade_rules', 'grading_set', saved.id, { pieces: set.pieces.length }, { pieces: pieces.length, rules: Object.values(rules).flat().length });

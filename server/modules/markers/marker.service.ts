@@ -11,7 +11,7 @@ import { buildMarkerInput, markerInputHash } from './marker-input';
 import { presentMarker } from './marker.presenter';
 import type { MarkerQueue } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
-import { loadStylePieces } from './style-pieces';
+import { loadStylePieces, piecesOnFabric } from './style-pieces';
 
 export interface MarkerServiceDeps {
   ds: DataSource;
@@ -44,8 +44,9 @@ export function createMarkerService(deps: MarkerServiceDeps) {
     const fields: Record<string, string> = {};
     for (const size of Object.keys(input.ratio)) if (!style.sizeRun.includes(size)) fields[`ratio.${size}`] = `Size ${size} is not in the style's size run`;
     if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
-    const pieces = await loadStylePieces(ds, studioId, style.id);
-    if (Object.keys(pieces).length === 0) throw conflict('This style has no graded pieces yet: grade it first');
+    const all = await loadStylePieces(ds, studioId, style.id);
+    if (Object.keys(all).length === 0) throw conflict('This style has no graded pieces yet: grade it first');
+    const pieces = piecesOnFabric(all, style.materialFabrics, fabric);
     const ratio = Object.fromEntries(style.sizeRun.filter((s) => (input.ratio[s] ?? 0) > 0).map((s) => [s, input.ratio[s]]));
     const job = buildMarkerInput(pieces, ratio, {
       widthMm: fabric.widthMm,

@@ -1,6 +1,6 @@
 import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
-import { StyleEntity } from '../../entities';
+import { FabricEntity, StyleEntity } from '../../entities';
 
 export type StyleRepository = ReturnType<typeof createStyleRepository>;
 
@@ -8,6 +8,8 @@ export type StyleRepository = ReturnType<typeof createStyleRepository>;
 export function createStyleRepository(ds: DataSource) {
   const repo = ds.getRepository(StyleEntity);
   return {
+    /** Ids of the studio's fabrics (a style's materials link only to these). */
+    fabricIds: async (studioId: number) => new Set((await ds.getRepository(FabricEntity).find({ where: { studioId }, select: { id: true } })).map((f) => f.id)),
     list: (studioId: number) => repo.find({ where: { studioId }, order: { code: 'ASC' } }),
     get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
     byCode: (studioId: number, code: string) => repo.findOne({ where: { studioId, code } }),

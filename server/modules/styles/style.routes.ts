@@ -1,9 +1,10 @@
 import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
+import { putCompositionInput, type StyleComposition } from '../../../shared/schemas/style-composition';
 import { createStyleInput, updateStyleInput, type StyleDto } from '../../../shared/schemas/styles';
 import type { StyleEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
-import { conflict, notFound } from '../../errors';
+import { badRequest, conflict, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { StyleRepository } from './style.repository';
@@ -16,6 +17,8 @@ export const presentStyle = (s: StyleEntity): StyleDto => ({
   sizeRun: s.sizeRun,
   baseSize: s.baseSize,
   status: s.status,
+  composition: (s.composition as StyleComposition | null) ?? null,
+  materialFabrics: s.materialFabrics ?? {},
   updatedAt: new Date(s.updatedAt).toISOString(),
 });
 
@@ -47,6 +50,21 @@ export function styleRoutes(styles: StyleRepository, audit: AuditRepository) {
     if (clash && clash.id !== id) throw conflict('A style with that code exists', { code: 'Already used in this studio' });
     const after = await styles.update(actor.studioId, id, req.body);
     await audit.record(actor, 'update', 'style', id, presentStyle(before), presentStyle(after));
+    res.json({ style: presentStyle(after) });
+  });
+  /** Choose the blocks (or a preset) the pieces are drafted from and the fabric each material is cut from. */
+  r.put('/:id/composition', requirePermission('styles:write'), validate({ params: idParam, body: putCompositionInput }), async (req, res) => {
+    const actor = actorOf(req);
+    const id = Number(req.params.id);
+    const before = await styles.get(actor.studioId, id);
+    if (!before) throw notFound('Style');
+    const links: Record<string, number> = req.body.materialFabrics;
+    const known = await styles.fabricIds(actor.studioId);
+    const fields: Record<string, string> = {};
+    for (const [material, fabricId] of Object.entries(links)) if (!known.has(fabricId)) fields[`materialFabrics.${material}`] = 'No such fabric in this studio';
+    if (Object.keys(fields).length) throw badRequest(`${Object.keys(fields)[0]}: no such fabric in this studio`, fields);
+    const after = await styles.update(actor.studioId, id, { composition: req.body.composition, materialFabrics: Object.keys(links).length ? links : null });
+    await audit.record(actor, 'update_composition', 'style', id, { composition: before.composition, materialFabrics: before.materialFabrics }, { composition: after.composition, materialFabrics: after.materialFabrics });
     res.json({ style: presentStyle(after) });
   });
   return r;

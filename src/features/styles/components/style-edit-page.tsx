@@ -3,6 +3,7 @@ import { useNavigate, useParams } from 'react-router';
 import { Card, PageHeader, Spinner } from '@/components/ui/page';
 import { paths } from '@/config/paths';
 import { styleQueries } from '../api/style-queries';
+import { StyleBlocksCard } from './style-blocks-card';
 import { StyleFilesCard } from './style-files-card';
 import { StyleForm } from './style-form';
 
@@ -24,6 +25,7 @@ export function StyleDetailPage() {
     <>
       <PageHeader title={`${style.code} · ${style.name}`} subtitle={`Size run ${style.sizeRun.join(', ')} · base ${style.baseSize}`} />
       <Card title="Style details"><StyleForm style={style} onSaved={() => undefined} /></Card>
+      <div className="mt-4"><Card title="Blocks and materials"><StyleBlocksCard key={style.updatedAt} style={style} /></Card></div>
       <div className="mt-4"><StyleFilesCard styleId={style.id} /></div>
     </>
   );

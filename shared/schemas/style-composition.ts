@@ -1,0 +1,71 @@
+import { z } from 'zod';
+import { blockSpecInput } from './pattern-draft';
+
+/** 1 in in mm. */
+const IN = 25.4;
+
+/** Presets the owner can start a style from. */
+export const STYLE_PRESET_IDS = ['shirt-dress', 'lined-fitted-dress'] as const;
+export type StylePresetId = (typeof STYLE_PRESET_IDS)[number];
+
+/** Materials every style may use; an owner may name others (letters, digits, - and spaces). */
+export const STANDARD_MATERIALS = ['self', 'lining', 'contrast', 'interfacing'] as const;
+const materialName = z.string().trim().min(1, 'Name the material').max(40, 'At most 40 characters').regex(/^[A-Za-z0-9 -]+$/, 'Letters, digits, spaces and - only');
+
+/**
+ * A style's composition: the blocks its pieces are drafted from, in order (the `blocks` of `npm run pattern:draft`).
+ * The shirt-dress preset keeps the demo's own drafting (collar band, patch pocket and belt are not blocks yet), so
+ * its block list is empty; every other composition needs at least one block.
+ */
+export const styleComposition = z
+  .object({
+    preset: z.enum(STYLE_PRESET_IDS).nullable().default(null),
+    blocks: z.array(blockSpecInput).max(40, 'At most 40 blocks').default([]),
+  })
+  .strict()
+  .refine((c) => c.preset === 'shirt-dress' || c.blocks.length > 0, { message: 'Choose at least one block or a preset', path: ['blocks'] });
+export type StyleComposition = z.infer<typeof styleComposition>;
+export type BlockSpecInput = z.infer<typeof blockSpecInput>;
+
+/** Which fabric (id) each material of the style is cut from. */
+export const materialFabrics = z.record(materialName, z.number().int().positive('Choose a fabric'));
+export type MaterialFabrics = z.infer<typeof materialFabrics>;
+
+/** Body of PUT /api/styles/:id/composition. */
+export const putCompositionInput = z.object({ composition: styleComposition.nullable(), materialFabrics: materialFabrics.default({}) }).strict();
+export type PutCompositionInput = z.input<typeof putCompositionInput>;
+
+/** The presets: a name, a line for the owner and the composition they start from (edit freely afterwards). */
+export const STYLE_PRESETS: { id: StylePresetId; name: string; description: string; composition: StyleComposition }[] = [
+  {
+    id: 'shirt-dress',
+    name: 'Shirt dress',
+    description: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
+    composition: { preset: 'shirt-dress', blocks: [] },
+  },
+  {
+    id: 'lined-fitted-dress',
+    name: 'Lined fitted dress',
+    description:
+      'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
+    composition: {
+      preset: 'lined-fitted-dress',
+      blocks: [
+        { block: 'bodice', neckline: { shape: 'v', depthMm: 7 * IN }, shoulderPads: {}, centreBackOpening: {} },
+        { block: 'sleeve', length: 'long' },
+        { block: 'peplum', shape: 'circle', innerEdge: { times: 2, plusMm: 10 * IN }, cut: 'ring', material: 'contrast' },
+        { block: 'skirt', shape: 'straight', centreBackOpening: {} },
+        { block: 'facing', of: 'neckline' },
+        { block: 'bodice', neckline: { shape: 'v', depthMm: 7 * IN }, shoulderPads: {}, centreBackOpening: {}, material: 'lining' },
+        { block: 'skirt', shape: 'straight', centreBackOpening: {}, material: 'lining' },
+      ],
+    },
+  },
+];
+
+/** The composition of a preset (a fresh copy). */
+export function presetComposition(id: StylePresetId): StyleComposition {
+  const p = STYLE_PRESETS.find((x) => x.id === id);
+  if (!p) throw new RangeError(`unknown preset ${id}`);
+  return structuredClone(p.composition);
+}

@@ -1,0 +1,209 @@
+import { useQuery } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router';
+import { cuttingOutline, draftStyle, type BlockSpec, type BodyMeasurements, type DraftedPiece } from '@grading';
+import { formatLength, parseLength } from '@shared/units/length-format';
+import { presetComposition, STYLE_PRESETS, type BlockSpecInput, type StyleComposition } from '@shared/schemas/style-composition';
+import type { StyleDto } from '@shared/schemas/styles';
+import { ErrorNote } from '@/components/ui/page';
+import { fabricQueries } from '@/features/cutting/api/cutting-queries';
+import { gradingQueries } from '@/features/grading/api/grading-queries';
+import { useLength } from '@/features/grading/hooks/use-length';
+import { useCan } from '@/lib/auth';
+import { useSaveComposition } from '../api/style-queries';
+import { BLOCK_FIELDS, BLOCK_LABELS, getAt, materialsOf, setAt, type BlockField, type BlockName } from './block-fields';
+
+const MATERIAL_CHOICES = ['self', 'lining', 'contrast', 'interfacing'];
+
+/**
+ * The pattern room's first step: the blocks a style's pieces are drafted from (a preset or a list of blocks with
+ * their options, defaults shown), the fabric each material is cut from, and a drawing to scale of the base size.
+ */
+export function StyleBlocksCard({ style }: { style: StyleDto }) {
+  const canEdit = useCan('styles:write');
+  const [comp, setComp] = useState<StyleComposition>(style.composition ?? { preset: null, blocks: [] });
+  const [links, setLinks] = useState<Record<string, number>>(style.materialFabrics);
+  const [adding, setAdding] = useState<BlockName>('bodice');
+  const save = useSaveComposition(style.id);
+  const fabrics = useQuery({ ...fabricQueries.list(), enabled: canEdit });
+  const materials = materialsOf(comp.blocks, comp.preset);
+  const setBlock = (i: number, b: BlockSpecInput) => setComp({ ...comp, preset: comp.preset === 'shirt-dress' ? null : comp.preset, blocks: comp.blocks.map((x, k) => (k === i ? b : x)) });
+  const submit = () => {
+    const keep = Object.fromEntries(Object.entries(links).filter(([m]) => materials.includes(m)));
+    save.mutate({ composition: comp, materialFabrics: keep });
+  };
+  return (
+    <div className="grid gap-4" data-testid="style-blocks">
+      <div className="flex flex-wrap items-center gap-2">
+        <span className="text-sm text-ink-600">Start from a preset:</span>
+        {STYLE_PRESETS.map((p) => (
+          <button key={p.id} type="button" className={comp.preset === p.id ? 'btn-primary' : 'btn-quiet'} disabled={!canEdit} title={p.description} onClick={() => setComp(presetComposition(p.id))}>
+            {p.name}
+          </button>
+        ))}
+      </div>
+      {comp.preset === 'shirt-dress' ? (
+        <p className="text-sm text-ink-600">{STYLE_PRESETS[0].description} Drafted as the demo shirt dress: its collar band, pockets and belt are not blocks yet.</p>
+      ) : (
+        <ol className="grid gap-3">
+          {comp.blocks.map((b, i) => (
+            <BlockEditor key={i} index={i} spec={b} canEdit={canEdit} onChange={(s) => setBlock(i, s)} onRemove={() => setComp({ ...comp, blocks: comp.blocks.filter((_, k) => k !== i) })} />
+          ))}
+        </ol>
+      )}
+      {canEdit ? (
+        <div className="flex flex-wrap items-end gap-2">
+          <label className="text-sm">
+            <span className="field-label">Add a block</span>
+            <select className="field-input" value={adding} onChange={(e) => setAdding(e.target.value as BlockName)} aria-label="Block to add">
+              {Object.entries(BLOCK_LABELS).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
+            </select>
+          </label>
+          <button type="button" className="btn-quiet" onClick={() => setComp({ preset: null, blocks: [...(comp.preset === 'shirt-dress' ? [] : comp.blocks), { block: adding } as BlockSpecInput] })}>Add block</button>
+        </div>
+      ) : null}
+      <fieldset className="grid gap-2 sm:grid-cols-2">
+        <legend className="field-label">Fabric of each material</legend>
+        {materials.map((m) => (
+          <label key={m} className="text-sm">
+            <span className="field-label capitalize">{m}</span>
+            <select className="field-input" aria-label={`Fabric for ${m}`} disabled={!canEdit} value={links[m] ?? ''} onChange={(e) => setLinks({ ...links, [m]: Number(e.target.value) })}>
+              <option value="">Not linked yet</option>
+              {(fabrics.data ?? []).map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
+            </select>
+            {save.error && 'fields' in save.error ? <span className="field-error">{(save.error.fields as Record<string, string>)[`materialFabrics.${m}`]}</span> : null}
+          </label>
+        ))}
+      </fieldset>
+      {canEdit ? (
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="button" className="btn-primary" disabled={save.isPending} onClick={submit}>{save.isPending ? 'Saving…' : 'Save blocks and materials'}</button>
+          <Link className="btn-quiet" to={`/styles/${style.id}/grading`}>Pattern &amp; grading</Link>
+          {save.isSuccess ? <span className="text-sm text-ink-600" role="status">Saved. Propose rules from the chart on Pattern &amp; grading to draft the pieces.</span> : null}
+        </div>
+      ) : null}
+      {save.error ? <ErrorNote error={save.error} /> : null}
+      <BaseSizeDrawing styleId={style.id} baseSize={style.baseSize} composition={comp} />
+    </div>
+  );
+}
+
+function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: number; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void; onRemove: () => void }) {
+  return (
+    <li className="rounded-lg border border-calico-200 p-3" data-testid={`block-${index}`}>
+      <div className="mb-2 flex flex-wrap items-center gap-3">
+        <strong>{BLOCK_LABELS[spec.block]}</strong>
+        <label className="text-sm">
+          Material{' '}
+          <select className="field-input inline-block w-auto" aria-label={`Material of block ${index + 1}`} disabled={!canEdit} value={spec.material ?? 'self'} onChange={(e) => onChange(setAt(spec, 'material', e.target.value === 'self' ? undefined : e.target.value))}>
+            {[...new Set([...MATERIAL_CHOICES, spec.material ?? 'self'])].map((m) => <option key={m} value={m}>{m}</option>)}
+          </select>
+        </label>
+        {canEdit ? <button type="button" className="btn-quiet ml-auto" onClick={onRemove}>Remove</button> : null}
+      </div>
+      <div className="grid gap-2 sm:grid-cols-3">
+        {BLOCK_FIELDS[spec.block].map((f) => <OptionField key={f.path} index={index} field={f} spec={spec} canEdit={canEdit} onChange={onChange} />)}
+      </div>
+    </li>
+  );
+}
+
+function OptionField({ index, field: f, spec, canEdit, onChange }: { index: number; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
+  const { len, system } = useLength();
+  const unit = system === 'metric' ? 'cm' : 'in';
+  const cell = (v: number) => (system === 'metric' ? String(Number((v / 10).toFixed(2))) : formatLength(v, system).replace('"', ''));
+  const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
+  const value = getAt(spec, f.path);
+  const id = `b${index}-${f.path}`;
+  const set = (v: unknown) => onChange(setAt(spec, f.path, v));
+  if (f.kind === 'switch') {
+    const on = value === undefined ? f.default : value !== false && value !== null;
+    return (
+      <label className="flex items-center gap-2 text-sm" htmlFor={id}>
+        <input id={id} type="checkbox" disabled={!canEdit} checked={on} onChange={(e) => set(e.target.checked === f.default ? undefined : e.target.checked ? f.on : f.on === true ? false : null)} />
+        {f.label}
+      </label>
+    );
+  }
+  if (f.kind === 'choice') {
+    return (
+      <label className="text-sm" htmlFor={id}>
+        <span className="field-label">{f.label}</span>
+        <select id={id} className="field-input" disabled={!canEdit} value={(value as string | undefined) ?? ''} onChange={(e) => set(e.target.value || undefined)}>
+          <option value="">Default ({f.default})</option>
+          {f.choices.map((c) => <option key={c} value={c}>{c}</option>)}
+        </select>
+      </label>
+    );
+  }
+  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : String(f.default)) : f.default;
+  return (
+    <label className="text-sm" htmlFor={id}>
+      <span className="field-label">{f.label}{f.kind === 'length' ? ` (${unit})` : ''}</span>
+      <input
+        id={id} className="field-input" disabled={!canEdit} placeholder={`Default ${shown}`}
+        defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : String(value)}
+        onBlur={(e) => {
+          const t = e.target.value.trim();
+          if (!t) return set(undefined);
+          const v = f.kind === 'length' ? parseCell(t) : Number(t);
+          if (v !== null && Number.isFinite(v)) set(v);
+        }}
+      />
+    </label>
+  );
+}
+
+/** The base size's pieces drafted in the browser from the blocks as edited, to scale (sewing line, cutting line, grain). */
+function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; baseSize: string; composition: StyleComposition }) {
+  const { len } = useLength();
+  const grading = useQuery(gradingQueries.detail(styleId));
+  const chart = grading.data?.chart;
+  const drafted = useMemo((): { pieces: DraftedPiece[] } | { error: string } | null => {
+    if (!chart) return null;
+    const k = chart.sizes.indexOf(baseSize);
+    if (k < 0) return null;
+    const m = Object.fromEntries(chart.rows.map((r) => [r.pointOfMeasure, r.values[k]])) as BodyMeasurements;
+    try {
+      return { pieces: draftStyle(m, { preset: composition.preset, blocks: composition.blocks as BlockSpec[] }) };
+    } catch (err) {
+      return { error: err instanceof Error ? err.message : String(err) };
+    }
+  }, [chart, baseSize, composition]);
+  if (!chart) return <p className="text-sm text-ink-600">Import the size chart on Pattern &amp; grading to see the pieces drawn here.</p>;
+  if (!drafted) return null;
+  if ('error' in drafted) return <p className="field-error" role="alert">These blocks cannot be drafted yet: {drafted.error}</p>;
+  if (!drafted.pieces.length) return null;
+  const gap = 40;
+  let x = 0;
+  const laid = drafted.pieces.map((p) => {
+    const cut = cuttingOutline(p);
+    const pts = cut.length ? cut : p.outline;
+    const minX = Math.min(...pts.map((q) => q.x)), maxX = Math.max(...pts.map((q) => q.x));
+    const minY = Math.min(...pts.map((q) => -q.y)), maxY = Math.max(...pts.map((q) => -q.y));
+    const dx = x - minX;
+    x += maxX - minX + gap;
+    return { p, cut, dx, dy: -minY, h: maxY - minY };
+  });
+  const font = Math.max(18, x / 90);
+  const k = Math.max(1, x / 900); // stroke widths in screen-ish pixels
+  const height = Math.max(...laid.map((l) => l.h)) + 3 * font + 20;
+  const d = (pts: { x: number; y: number }[], dx: number, dy: number) => `M${pts.map((q) => `${(q.x + dx).toFixed(1)},${(-q.y + dy).toFixed(1)}`).join('L')}Z`;
+  return (
+    <figure>
+      <svg viewBox={`-20 -20 ${x + 20} ${height + 20}`} className="h-96 w-full rounded-lg border border-calico-200 bg-calico-50" role="img" aria-label={`${drafted.pieces.length} pieces of size ${baseSize} to scale`} data-testid="blocks-drawing">
+        {laid.map(({ p, cut, dx, dy, h }, i) => (
+          <g key={p.id} data-piece={p.id}>
+            <path d={d(cut, dx, dy)} fill="none" stroke="#C9B48F" strokeWidth={1.5 * k} />
+            <path d={d(p.outline, dx, dy)} fill={p.material === 'lining' ? 'rgba(120,90,160,0.08)' : p.material === 'contrast' ? 'rgba(190,90,60,0.1)' : 'rgba(15,76,92,0.06)'} stroke="#0F4C5C" strokeWidth={1.5 * k} />
+            <line x1={p.grainLine.from.x + dx} y1={-p.grainLine.from.y + dy} x2={p.grainLine.to.x + dx} y2={-p.grainLine.to.y + dy} stroke="#434B50" strokeWidth={k} strokeDasharray={`${6 * k} ${3 * k}`} />
+            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{p.name} ×{p.copies}</text>
+          </g>
+        ))}
+        <line x1={0} y1={height} x2={100} y2={height} stroke="#434B50" strokeWidth={2 * k} />
+        <text x={110} y={height + font / 3} fontSize={font} fill="#434B50">{len(100)}</text>
+      </svg>
+      <figcaption className="mt-1 text-xs text-ink-600">Size {baseSize}, drafted from the blocks as edited: sewing line dark, cutting line pale, grain dashed; self teal, lining violet, contrast rust; the bar is {len(100)}.</figcaption>
+    </figure>
+  );
+}
