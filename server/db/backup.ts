@@ -11,7 +11,9 @@ export async function backupDatabase(source: string, target: string): Promise<st
   mkdirSync(dirname(target), { recursive: true });
   const db = new Database(source, { readonly: true, fileMustExist: true });
   try {
-    await db.backup(target);
+    // After the first cycle, copy every remaining page in one step: a writer on another connection restarts a
+    // backup that yields between small steps, and a busy floor would keep restarting it.
+    await db.backup(target, { progress: () => 1_000_000 });
   } finally {
     db.close();
   }
