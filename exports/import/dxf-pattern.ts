@@ -81,11 +81,17 @@ interface Group { blockName?: string; items: Item[] }
 export function readDxfPattern(text: string, options: PatternReadOptions = {}): PatternImportResult {
   const problems: ImportProblem[] = [];
   let parsed: { header?: Record<string, unknown>; entities?: DxfEntity[]; blocks?: Record<string, DxfBlock> } | null;
+  // dxf-parser prints a warning line for unknown group codes; keep the caller's output clean.
+  const log = console.log;
   try {
+    console.log = () => undefined;
     parsed = new DxfParser().parseSync(text) as typeof parsed;
   } catch (e) {
     return { pieces: [], problems: [{ entity: 'file', reason: `not a readable DXF file (${(e as Error).message.split('\n')[0]})` }], units: 'unknown', unitsFrom: 'none' };
+  } finally {
+    console.log = log;
   }
+  problems.push(...skippedEntityTypes(text));
   if (!parsed || !parsed.entities) return { pieces: [], problems: [{ entity: 'file', reason: 'not a DXF file: no ENTITIES section' }], units: 'unknown', unitsFrom: 'none' };
   const entities = parsed.entities;
   const blocks = parsed.blocks ?? {};
@@ -248,6 +254,23 @@ export function readDxfPattern(text: string, options: PatternReadOptions = {}): 
   }
   if (pieces.length === 0 && problems.length === 0) problems.push({ entity: 'file', reason: 'no closed piece outline found' });
   return { pieces, problems, units, unitsFrom };
+}
+
+/** Entity types dxf-parser reads; others it drops without a word, so they are counted from the text here. */
+const PARSED_TYPES = new Set(['3DFACE', 'ARC', 'ATTDEF', 'CIRCLE', 'DIMENSION', 'ELLIPSE', 'INSERT', 'LINE', 'LWPOLYLINE', 'MTEXT', 'POINT', 'POLYLINE', 'SOLID', 'SPLINE', 'TEXT']);
+
+function skippedEntityTypes(text: string): ImportProblem[] {
+  const lines = text.split(/\r\n|\r|\n/);
+  const counts = new Map<string, number>();
+  let section = '';
+  for (let i = 0; i + 1 < lines.length; i += 2) {
+    const code = lines[i].trim(), value = lines[i + 1].trim();
+    if (code === '2' && lines[i - 1]?.trim() === 'SECTION') section = value;
+    if (code !== '0' || (section !== 'ENTITIES' && section !== 'BLOCKS')) continue;
+    if (['SECTION', 'ENDSEC', 'EOF', 'BLOCK', 'ENDBLK', 'VERTEX', 'SEQEND', 'ATTRIB'].includes(value) || PARSED_TYPES.has(value)) continue;
+    counts.set(value, (counts.get(value) ?? 0) + 1);
+  }
+  return [...counts].map(([type, n]) => ({ entity: `${n} ${type} entit${n === 1 ? 'y' : 'ies'}`, reason: `${type} entities are not read` }));
 }
 
 function label(e: DxfEntity, where: string): string {

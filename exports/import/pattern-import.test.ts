@@ -138,6 +138,12 @@ describe('readDxfPattern', () => {
     expect(res.problems).toEqual([{ entity: 'SOLID #A1 on layer 1', reason: 'SOLID entities are not read' }]);
   });
 
+  it('names entity types the parser drops silently, such as HATCH', () => {
+    const res = readDxfPattern(dxf([...lwpoly('1', [[0, 0], [10, 0], [10, 10], [0, 10]]), [0, 'HATCH'], [8, '1'], [0, 'HATCH'], [8, '1']], { insunits: 4 }));
+    expect(res.pieces).toHaveLength(1);
+    expect(res.problems).toEqual([{ entity: '2 HATCH entities', reason: 'HATCH entities are not read' }]);
+  });
+
   it('answers with a problem, not an exception, for text that is not DXF', () => {
     const res = readPatternFile('hello\nworld');
     expect(res.pieces).toEqual([]);
