@@ -188,3 +188,26 @@ export const patternAcceptInput = z.object({
     .max(200, 'At most 200 pieces'),
 });
 export type PatternAcceptInput = z.infer<typeof patternAcceptInput>;
+
+/** A piece previewed from a pattern file: millimetres, y up, outline counter-clockwise. */
+export interface PatternPreviewPieceDto {
+  name: string;
+  size?: string;
+  quantity?: number;
+  material?: string;
+  outline: [number, number][];
+  grainLine?: { from: [number, number]; to: [number, number] };
+  notches?: [number, number][];
+  drillHoles?: [number, number][];
+  areaMm2: number;
+  perimeterMm: number;
+  widthMm: number;
+  heightMm: number;
+}
+
+/** POST /styles/:id/pattern/import answer: nothing is saved until the pieces are accepted. */
+export interface PatternPreviewDto {
+  units: string;
+  outlineIs: 'sewing' | 'cutting';
+  pieces: PatternPreviewPieceDto[];
+}
