@@ -118,6 +118,39 @@ describe('readDxfPattern', () => {
     expect(res.pieces[1].areaMm2).toBeCloseTo(600, 9);
   });
 
+  it('reads an R12 POLYLINE/VERTEX boundary with a bulge, notches on layer 4, a drill point on 13 and a line on 8', () => {
+    // D6673 names AutoCAD R13 DXF (reference §4.1 [quoted]), so POLYLINE + VERTEX sequences must be read
+    // (§4.3 item 5 [computed]); layer numbers 4 notch, 8 internal, 13 drill: §4.2 [from memory], kupdf agrees.
+    const vertex = (x: number, y: number, bulge = 0) => [[0, 'VERTEX'], [8, '1'], [10, x], [20, y], ...(bulge ? [[42, bulge]] : [])];
+    const ents = [
+      [0, 'POLYLINE'], [8, '1'], [66, 1], [70, 1], [10, 0], [20, 0],
+      ...vertex(0, 0), ...vertex(100, 0), ...vertex(100, 60, 1), ...vertex(0, 60), [0, 'SEQEND'], [8, '1'],
+      ...line('4', [50, 0], [50, 5]), [0, 'POINT'], [8, '13'], [10, 30], [20, 30], ...line('8', [10, 10], [90, 10]),
+    ];
+    const res = readDxfPattern(dxf(ents, { insunits: 4 }));
+    expect(res.problems).toEqual([]);
+    const p = res.pieces[0];
+    // Rectangle 100 × 60 with a half-disc of radius 50 on its top edge (bulge 1 from (100,60) to (0,60)):
+    // 6000 + π·50²/2 (analytic), less at most arc length × tolerance.
+    const exact = 6000 + (Math.PI * 2500) / 2;
+    expect(exact - p.areaMm2).toBeGreaterThanOrEqual(0);
+    expect(exact - p.areaMm2).toBeLessThanOrEqual(Math.PI * 50 * IMPORT_CHORD_TOLERANCE_MM);
+    expect(Math.max(...p.outline.map((v) => v.y))).toBeCloseTo(110, 9);
+    expect(p.notches).toEqual([{ x: 50, y: 0 }]);
+    expect(p.drillHoles).toEqual([{ x: 30, y: 30 }]);
+    expect(p.internalLines).toEqual([[{ x: 10, y: 10 }, { x: 90, y: 10 }]]);
+  });
+
+  it('mirrors a block inserted with a negative x scale and keeps its outline counter-clockwise', () => {
+    const blocks = [[0, 'BLOCK'], [8, '0'], [2, 'P'], [70, 0], [10, 0], [20, 0], ...lwpoly('CUT', [[0, 0], [40, 0], [0, 30]]), [0, 'ENDBLK'], [8, '0']];
+    const res = readDxfPattern(dxf([[0, 'INSERT'], [8, '0'], [2, 'P'], [10, 0], [20, 0], [41, -1], [42, 1]], { insunits: 4, blocks }));
+    const p = res.pieces[0];
+    expect(p.areaMm2).toBeCloseTo(600, 9); // right triangle 40 × 30 / 2
+    expect(Math.min(...p.outline.map((v) => v.x))).toBeCloseTo(-40, 9);
+    const signed = p.outline.reduce((s, a, i) => { const b = p.outline[(i + 1) % p.outline.length]; return s + a.x * b.y - b.x * a.y; }, 0) / 2;
+    expect(signed).toBeGreaterThan(0);
+  });
+
   it('says the units are unknown and gives no pieces when $INSUNITS is absent and the caller gave none', () => {
     const file = dxf(lwpoly('1', [[0, 0], [10, 0], [10, 10], [0, 10]]));
     const res = readDxfPattern(file);
