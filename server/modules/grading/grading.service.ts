@@ -99,7 +99,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
     /** Read a DXF or SVG pattern file into a to-scale preview; nothing is saved. */
     async previewPattern(actor: Actor, styleId: number, file: { buffer: Buffer; originalname: string } | undefined, input: PatternImportInput) {
       await styleOf(actor, styleId);
-      return previewPatternFile(file, input);
+      return previewPatternFile(file, input, (text, units) => runCpuTask('pattern-file', { text, units }));
     },
 
     /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules. */

@@ -1,4 +1,4 @@
-import { readPatternFile, type ImportedPiece } from '@exports/import/index';
+import type { ImportedPiece, PatternImportResult, PatternUnit } from '@exports/import/index';
 import { polygonArea, polygonBBox, polygonSignedArea } from '@shared/geometry/polygon';
 import { polygonIsSimple } from '@shared/geometry/polyline';
 import type { Point } from '@shared/geometry/types';
@@ -56,14 +56,19 @@ function present(p: ImportedPiece): PatternPreviewPiece {
 }
 
 /**
- * Read an uploaded pattern file into a preview. Any entity that could not be read, or unknown units, is a 400
- * listing each one (entity: reason); nothing is kept on the server.
+ * Read an uploaded pattern file into a preview with `read` (the CPU pool's 'pattern-file' task in the server).
+ * Any entity that could not be read, or unknown units, is a 400 listing each one (entity: reason); nothing is
+ * kept on the server.
  */
-export function previewPatternFile(file: { buffer: Buffer; originalname: string } | undefined, input: PatternImportInput): PatternPreview {
+export async function previewPatternFile(
+  file: { buffer: Buffer; originalname: string } | undefined,
+  input: PatternImportInput,
+  read: (text: string, units?: PatternUnit) => Promise<PatternImportResult>,
+): Promise<PatternPreview> {
   if (!file) throw badRequest('file: attach a DXF or SVG file', { file: 'Attach a DXF or SVG file' });
   const text = file.buffer.toString('utf8');
   if (text.includes('\u0000')) throw badRequest('file: binary DXF is not read; save the pattern as ASCII DXF or SVG', { file: 'Save the pattern as ASCII DXF or SVG' });
-  const res = readPatternFile(text, { units: input.units });
+  const res = await read(text, input.units);
   if (res.units === 'unknown' && !res.pieces.length && res.problems.some((p) => /units|size/.test(p.reason))) {
     throw badRequest('units: the file does not say its units; choose mm, cm or in', { units: 'The file does not say its units: choose mm, cm or in' });
   }
