@@ -210,4 +210,9 @@ export interface PatternPreviewDto {
   units: string;
   outlineIs: 'sewing' | 'cutting';
   pieces: PatternPreviewPieceDto[];
+  /** The style's base size; of a graded file, the pieces in this size are the ones to keep. */
+  baseSize: string;
+  /** Sizes named in the file's piece text, and those of them that are not in the style's size run. */
+  sizesInFile: string[];
+  sizesNotInRun: string[];
 }

@@ -79,6 +79,19 @@ describe('POST /api/styles/:id/pattern/import (preview)', () => {
     expect(res.body.preview.pieces[0].areaMm2).toBeCloseTo(front.measurements[base].areaMm2, 0);
   });
 
+  it('lists the sizes of a graded file and those outside the style\'s run', async () => {
+    // One block per size with `Size:` piece text (reference §4.2 [from memory]); the style's run is S, M, L.
+    const block = (size: string, w: number) => [[0, 'BLOCK'], [8, '0'], [2, `FRONT-${size}`], [70, 0], [10, 0], [20, 0],
+      ...rect('1', w, 50), [0, 'TEXT'], [8, '1'], [10, 5], [20, 5], [40, 3], [1, `Size: ${size}`], [0, 'ENDBLK'], [8, '0']];
+    const ins = (size: string) => [[0, 'INSERT'], [8, '0'], [2, `FRONT-${size}`], [10, 0], [20, 0]];
+    const file = [[0, 'SECTION'], [2, 'HEADER'], [9, '$INSUNITS'], [70, 4], [0, 'ENDSEC'], [0, 'SECTION'], [2, 'BLOCKS'], ...block('M', 100), ...block('XL', 120), [0, 'ENDSEC'],
+      [0, 'SECTION'], [2, 'ENTITIES'], ...ins('M'), ...ins('XL'), [0, 'ENDSEC'], [0, 'EOF']].map(([c, v]) => `${c}\n${v}`).join('\n') + '\n';
+    const res = await preview(file, 'graded.dxf', { outlineIs: 'sewing' });
+    expect(res.status).toBe(200);
+    expect(res.body.preview).toMatchObject({ baseSize: 'M', sizesInFile: ['M', 'XL'], sizesNotInRun: ['XL'] });
+    expect(res.body.preview.pieces.map((p: { size: string; areaMm2: number }) => [p.size, p.areaMm2])).toEqual([['M', 5000], ['XL', 6000]]);
+  });
+
   it('lets only the owner import a pattern', async () => {
     expect((await cutter.post(`/api/styles/${styleId}/pattern/import`).set('X-Seamrun-Csrf', '1').field('outlineIs', 'sewing').attach('file', Buffer.from(dxf(halfDisc, 4)), 'h.dxf')).status).toBe(403);
     expect((await machinist.post(`/api/styles/${styleId}/pattern/accept`).send({})).status).toBe(403);

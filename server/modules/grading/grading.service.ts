@@ -98,8 +98,10 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
 
     /** Read a DXF or SVG pattern file into a to-scale preview; nothing is saved. */
     async previewPattern(actor: Actor, styleId: number, file: { buffer: Buffer; originalname: string } | undefined, input: PatternImportInput) {
-      await styleOf(actor, styleId);
-      return previewPatternFile(file, input, (text, units) => runCpuTask('pattern-file', { text, units }));
+      const style = await styleOf(actor, styleId);
+      const preview = await previewPatternFile(file, input, (text, units) => runCpuTask('pattern-file', { text, units }));
+      const sizes = [...new Set(preview.pieces.flatMap((p) => (p.size ? [p.size] : [])))];
+      return { ...preview, baseSize: style.baseSize, sizesInFile: sizes, sizesNotInRun: sizes.filter((s) => !style.sizeRun.includes(s)) };
     },
 
     /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules. */

@@ -37,7 +37,8 @@ export function PatternImportCard({ styleId }: { styleId: number }) {
   const pieces = preview.data?.pieces ?? [];
   const set = (i: number, patch: Partial<Settings>) => setSettings((s) => s.map((x, k) => (k === i ? { ...x, ...patch } : x)));
   const read = () => file && outlineIs && preview.mutate({ file, units: units || undefined, outlineIs }, {
-    onSuccess: (d) => setSettings(d.pieces.map((p) => ({ use: true, cut: 'cut1', copies: String(p.quantity ?? 1), material: p.material ?? '', seam: '10' }))),
+    // Of a graded file, the base size's pieces are kept: grading makes the other sizes from the style's rules.
+    onSuccess: (d) => setSettings(d.pieces.map((p) => ({ use: !p.size || !d.sizesInFile.includes(d.baseSize) || p.size === d.baseSize, cut: 'cut1', copies: String(p.quantity ?? 1), material: p.material ?? '', seam: '10' }))),
   });
   const doAccept = () => preview.data && accept.mutate({
     outlineIs: preview.data.outlineIs,
@@ -76,6 +77,13 @@ export function PatternImportCard({ styleId }: { styleId: number }) {
       <ErrorNote error={preview.error} />
       {pieces.length ? (
         <div className="space-y-3" data-testid="pattern-preview">
+          {preview.data && preview.data.sizesInFile.length > 1 ? (
+            <p className="text-sm text-ink-600">
+              The file holds sizes {preview.data.sizesInFile.join(', ')}.{' '}
+              {preview.data.sizesInFile.includes(preview.data.baseSize) ? `Only the base size ${preview.data.baseSize} is ticked: the style's grade rules make the other sizes.` : `None is the style's base size ${preview.data.baseSize}: tick the pieces to keep.`}
+              {preview.data.sizesNotInRun.length ? ` Not in the style's size run: ${preview.data.sizesNotInRun.join(', ')}.` : ''}
+            </p>
+          ) : null}
           <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             {pieces.map((p, i) => (
               <div key={i} className="rounded border border-calico-200 p-2 text-sm">
