@@ -42,6 +42,8 @@ export interface Piece {
   internalLines: InternalLine[];
   cut: CutInstruction;
   quantity: number;
+  /** The cloth the piece is cut from when it is not the style's main fabric (e.g. from an imported file). */
+  material?: string;
   landmarks: Record<string, number>;
   curveToleranceMm: number;
 }

@@ -1,6 +1,7 @@
 import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
 import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
 import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
+import { readPatternFile, type PatternUnit } from '@exports/import/index';
 import { tiledPiecePdf } from '@exports/pdf/tiled-piece';
 import { buildBundleRegisterXlsx } from '@exports/xlsx/bundle-register.xlsx';
 import { buildCostingSheetXlsx } from '@exports/xlsx/costing-sheet.xlsx';
@@ -33,6 +34,8 @@ export const CPU_TASKS = {
     Buffer.from(await tiledPiecePdf(input.piece, input.options)),
   /** Cutting pieces of a style per size from its grading set (grading, seam allowance, unfolding). */
   'cutting-pieces': async (input: { set: Parameters<typeof cuttingPiecesOf>[0]; baseSize: string }) => cuttingPiecesOf(input.set, input.baseSize),
+  /** Pieces read from an uploaded DXF or SVG pattern file (text), with a problem per entity not read. */
+  'pattern-file': async (input: { text: string; units?: PatternUnit }) => readPatternFile(input.text, { units: input.units }),
   /** A grading set graded over its run, with its seam checks and errors. */
   grading: async (input: { set: Parameters<typeof computeGrading>[0]; styleBase: string }) => computeGrading(input.set, input.styleBase),
   /** The shared-operations line solve (HiGHS, loaded once per thread). */

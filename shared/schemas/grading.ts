@@ -159,3 +159,62 @@ export interface SizeMixDto {
   /** Counts per EN 13402-3 bust interval (cm), with below/above the table. */
   en13402: { label: string; count: number }[];
 }
+
+/** POST /styles/:id/pattern/import (multipart, with `file`): whether the file's outline is the sewing or the cutting line must be said. */
+export const patternImportInput = z.object({
+  units: z.enum(['mm', 'cm', 'in'], { error: 'Give the units as mm, cm or in' }).optional(),
+  outlineIs: z.enum(['sewing', 'cutting'], { error: 'Say whether the outline in the file is the sewing line or the cutting line' }),
+});
+export type PatternImportInput = z.infer<typeof patternImportInput>;
+
+const xy = z.tuple([z.number().finite().min(-1e6).max(1e6), z.number().finite().min(-1e6).max(1e6)]);
+
+/** POST /styles/:id/pattern/accept: the previewed pieces with the owner's settings; they replace the style's pieces. */
+export const patternAcceptInput = z.object({
+  outlineIs: z.enum(['sewing', 'cutting'], { error: 'Say whether the outline is the sewing line or the cutting line' }),
+  pieces: z
+    .array(
+      z.object({
+        name: z.string().trim().min(1, 'Name the piece').max(80, 'At most 80 characters'),
+        outline: z.array(xy).min(3, 'An outline needs at least 3 points').max(20000, 'At most 20000 points'),
+        grainLine: z.object({ from: xy, to: xy }).optional(),
+        notches: z.array(xy).max(500).optional(),
+        drillHoles: z.array(xy).max(500).optional(),
+        cut: z.enum(['cut1', 'pair', 'fold'], { error: 'Choose cut once, cut a pair or cut on the fold' }),
+        copies: z.number().int('Whole copies only').min(1, 'At least 1').max(50, 'At most 50'),
+        material: z.string().trim().max(80, 'At most 80 characters').optional(),
+        seamAllowanceMm: z.number().finite().min(0, 'Cannot be negative').max(100, 'At most 100 mm'),
+      }),
+    )
+    .min(1, 'Accept at least one piece')
+    .max(200, 'At most 200 pieces'),
+});
+export type PatternAcceptInput = z.infer<typeof patternAcceptInput>;
+
+/** A piece previewed from a pattern file: millimetres, y up, outline counter-clockwise. */
+export interface PatternPreviewPieceDto {
+  name: string;
+  size?: string;
+  quantity?: number;
+  material?: string;
+  outline: [number, number][];
+  grainLine?: { from: [number, number]; to: [number, number] };
+  notches?: [number, number][];
+  drillHoles?: [number, number][];
+  areaMm2: number;
+  perimeterMm: number;
+  widthMm: number;
+  heightMm: number;
+}
+
+/** POST /styles/:id/pattern/import answer: nothing is saved until the pieces are accepted. */
+export interface PatternPreviewDto {
+  units: string;
+  outlineIs: 'sewing' | 'cutting';
+  pieces: PatternPreviewPieceDto[];
+  /** The style's base size; of a graded file, the pieces in this size are the ones to keep. */
+  baseSize: string;
+  /** Sizes named in the file's piece text, and those of them that are not in the style's size run. */
+  sizesInFile: string[];
+  sizesNotInRun: string[];
+}

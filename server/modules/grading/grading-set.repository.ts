@@ -33,6 +33,21 @@ export function createGradingSetRepository(ds: DataSource) {
       const e = await repo.findOne({ where: { studioId, styleId } });
       return e ? toStored(e) : null;
     },
+    /**
+     * Replace the pieces of a style's stored set in one transaction (the grade rules of the old pieces go with
+     * them): either all the imported pieces are stored or none. Null when the style has no set yet.
+     */
+    async replacePieces(studioId: number, styleId: number, pieces: Piece[]): Promise<{ before: StoredGradingSet; after: StoredGradingSet } | null> {
+      return ds.transaction(async (m) => {
+        const r = m.getRepository(GradingSetEntity);
+        const e = await r.findOne({ where: { studioId, styleId } });
+        if (!e) return null;
+        const before = toStored(e);
+        e.pieces = pieces;
+        e.gradeRules = {};
+        return { before, after: toStored(await r.save(e)) };
+      });
+    },
     /** Insert or replace the parts given; returns the stored set. */
     async save(studioId: number, styleId: number, patch: Partial<Omit<StoredGradingSet, 'id' | 'styleId' | 'updatedAt'>>): Promise<StoredGradingSet> {
       const existing = await repo.findOne({ where: { studioId, styleId } });

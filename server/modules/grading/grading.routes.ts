@@ -1,7 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import {
-  chartExportQuery, gradingParams, gradingPieceParams, pieceDownloadQuery, putGradeRuleInput, putSizeChartInput, sizeMixInput,
+  chartExportQuery, gradingParams, gradingPieceParams, patternAcceptInput, patternImportInput, pieceDownloadQuery, putGradeRuleInput, putSizeChartInput, sizeMixInput,
 } from '../../../shared/schemas/grading';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest } from '../../errors';
@@ -9,6 +9,7 @@ import { validate } from '../../middleware/validate';
 import type { Download, GradingService } from './grading.service';
 import { sendDownload } from '../../middleware/download';
 import { memoryUpload } from '../uploads/memory-upload';
+import { PATTERN_UPLOAD_LIMIT_BYTES } from './pattern-import';
 
 /** Largest upload accepted for charts and customer measurements. */
 export const GRADING_UPLOAD_LIMIT_BYTES = 2 * 1024 * 1024;
@@ -21,6 +22,18 @@ const singleFile: RequestHandler = (req, res, next) =>
     if (!err) return next();
     const m = err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE'
       ? `The file is larger than ${GRADING_UPLOAD_LIMIT_BYTES / 1024 / 1024} MB`
+      : (err as Error).message;
+    next(badRequest(`file: ${m}`, { file: m }));
+  });
+
+const patternUpload = memoryUpload({ fileSize: PATTERN_UPLOAD_LIMIT_BYTES, files: 1, fields: 10 });
+
+/** One pattern file in field `file` (DXF or SVG, at most PATTERN_UPLOAD_LIMIT_BYTES). */
+const patternFile: RequestHandler = (req, res, next) =>
+  patternUpload.single('file')(req, res, (err: unknown) => {
+    if (!err) return next();
+    const m = err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE'
+      ? `The file is larger than ${PATTERN_UPLOAD_LIMIT_BYTES / 1024 / 1024} MB`
       : (err as Error).message;
     next(badRequest(`file: ${m}`, { file: m }));
   });
@@ -59,6 +72,12 @@ export function gradingRoutes(service: GradingService) {
       send(res, await service.pieceFile(actorOf(req), id(req.params), String(req.params.pieceId), kind, q));
     });
   }
+  r.post('/:id/pattern/import', write, patternFile, validate({ params: gradingParams, body: patternImportInput }), async (req, res) => {
+    res.json({ preview: await service.previewPattern(actorOf(req), id(req.params), req.file, req.body) });
+  });
+  r.post('/:id/pattern/accept', write, validate({ params: gradingParams, body: patternAcceptInput }), async (req, res) => {
+    res.json({ grading: await service.acceptPattern(actorOf(req), id(req.params), req.body) });
+  });
   r.post('/:id/grading/size-mix', write, singleFile, validate({ params: gradingParams, body: sizeMixInput }), async (req, res) => {
     res.json({ sizeMix: await service.sizeMix(actorOf(req), id(req.params), req.file, req.body) });
   });

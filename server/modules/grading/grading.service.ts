@@ -15,6 +15,8 @@ import type { GradingSetRepository, StoredGradingSet } from './grading-set.repos
 import { presentChart, presentGrading } from './grading.presenter';
 import { readTable, rowsToCsv, rowsToXlsx, type UploadedTable } from './table-io';
 import { LISTED_ERRORS } from '../uploads/table-limits';
+import type { PatternAcceptInput, PatternImportInput } from '../../../shared/schemas/grading';
+import { acceptedPieces, previewPatternFile } from './pattern-import';
 
 export interface GradingServiceDeps {
   styles: StyleRepository;
@@ -103,6 +105,26 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
         ? Object.fromEntries(Object.entries(input.eases).map(([k, v]) => [k, { easeMm: mm(v.easeMm), toleranceMm: mm(v.toleranceMm) }]))
         : undefined;
       return saveChart(actor, styleId, chart, eases, 'update_chart');
+    },
+
+    /** Read a DXF or SVG pattern file into a to-scale preview; nothing is saved. */
+    async previewPattern(actor: Actor, styleId: number, file: { buffer: Buffer; originalname: string } | undefined, input: PatternImportInput) {
+      const style = await styleOf(actor, styleId);
+      const preview = await previewPatternFile(file, input, (text, units) => runCpuTask('pattern-file', { text, units }));
+      const sizes = [...new Set(preview.pieces.flatMap((p) => (p.size ? [p.size] : [])))];
+      return { ...preview, baseSize: style.baseSize, sizesInFile: sizes, sizesNotInRun: sizes.filter((s) => !style.sizeRun.includes(s)) };
+    },
+
+    /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules. */
+    async acceptPattern(actor: Actor, styleId: number, input: PatternAcceptInput) {
+      await styleOf(actor, styleId);
+      const pieces = acceptedPieces(input);
+      const set = await sets.byStyle(actor.studioId, styleId);
+      if (!set?.sizeChart) throw badRequest("sizeChart: put in the style's size chart before accepting pieces", { sizeChart: "Put in the style's size chart first (Pattern & grading)" });
+      const replaced = await sets.replacePieces(actor.studioId, styleId, pieces);
+      if (!replaced) throw notFound('Grading set');
+      await audit.record(actor, 'import_pattern', 'grading_set', replaced.after.id, { pieces: replaced.before.pieces.map((p) => p.id) }, { pieces: pieces.map((p) => p.id), outlineIs: input.outlineIs });
+      return get(actor, styleId);
     },
 
     /** Import a chart from CSV or XLSX: every bad cell reported (row, column, why), nothing saved on error. */

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { GradingDto, PutGradeRuleInput, PutSizeChartInput, SizeMixDto } from '@shared/schemas/grading';
+import type { GradingDto, PatternAcceptInput, PatternPreviewDto, PutGradeRuleInput, PutSizeChartInput, SizeMixDto } from '@shared/schemas/grading';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -57,4 +57,21 @@ export const useSizeMix = (styleId: number) =>
       if (v.column) form.append('column', v.column);
       return (await api.post<{ sizeMix: SizeMixDto }>(`/styles/${styleId}/grading/size-mix`, form)).sizeMix;
     },
+  });
+
+export const usePatternPreview = (styleId: number) =>
+  useMutation({
+    mutationFn: async (v: { file: File; units?: string; outlineIs: string }) => {
+      const form = new FormData();
+      form.append('file', v.file);
+      if (v.units) form.append('units', v.units);
+      form.append('outlineIs', v.outlineIs);
+      return (await api.post<{ preview: PatternPreviewDto }>(`/styles/${styleId}/pattern/import`, form)).preview;
+    },
+  });
+
+export const useAcceptPattern = (styleId: number) =>
+  useMutation({
+    mutationFn: async (v: PatternAcceptInput) => (await api.post<{ grading: GradingDto }>(`/styles/${styleId}/pattern/accept`, v)).grading,
+    onSuccess: settle(styleId),
   });

@@ -7,6 +7,7 @@ import { useCan } from '@/lib/auth';
 import { gradingQueries, useProposeRules } from '../api/grading-queries';
 import { GradeRuleEditor } from './grade-rule-editor';
 import { GradedSetDrawing } from './graded-set-drawing';
+import { PatternImportCard } from './pattern-import-card';
 import { PieceMeasurements } from './piece-measurements';
 import { SeamReport } from './seam-report';
 import { SizeChartGrid } from './size-chart-grid';
@@ -66,6 +67,7 @@ export function GradingPage() {
         {piece ? <Card title="Measurements per size"><PieceMeasurements piece={piece} sizes={g.sizes} baseSize={g.baseSize} /></Card> : null}
         <Card title="Seam matching"><SeamReport grading={g} /></Card>
         <Card title="Size chart"><SizeChartGrid styleId={styleId} grading={g} canEdit={canEdit} /></Card>
+        {canEdit ? <Card title="Import pattern file"><PatternImportCard styleId={styleId} /></Card> : null}
         {canEdit ? <Card title="Size mix for a batch"><SizeMixTool styleId={styleId} /></Card> : null}
       </div>
     </>
