@@ -12,7 +12,8 @@ export interface Nfp {
   maxY: number;
   /**
    * Fail-fast surrogate: a G × G grid over the bounding box; each cell is CELL_OUT or CELL_IN when
-   * no NFP edge comes near it (then every point of the cell is outside or inside), else CELL_MIXED.
+   * no NFP edge comes near it (then every point of the cell is outside or inside), else CELL_MIXED;
+   * CELL_UNKNOWN until first used.
    */
   grid: Uint8Array;
   gridSize: number;
@@ -28,6 +29,8 @@ export interface Nfp {
 const CELL_OUT = 0;
 const CELL_IN = 1;
 const CELL_MIXED = 2;
+/** Not classified yet: cells are classified on first use, so fine grids cost nothing unused. */
+const CELL_UNKNOWN = 3;
 
 /** What the cache needs to know of a variant: which piece, mirror state and rotation it is. */
 export interface VariantKey {
@@ -65,7 +68,7 @@ function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
     if (y < minY) minY = y;
     if (y > maxY) maxY = y;
   }
-  const gridSize = Math.max(4, Math.min(32, 2 * Math.ceil(Math.sqrt(coords.length / 2))));
+  const gridSize = Math.max(8, Math.min(64, 4 * Math.ceil(Math.sqrt(coords.length / 2))));
   const gx = gridSize / (maxX - minX || 1);
   const gy = gridSize / (maxY - minY || 1);
   const prev = new Int32Array(coords.length / 2);
@@ -73,7 +76,7 @@ function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
     for (let i = ringStarts[r]; i < ringStarts[r + 1]; i++) prev[i] = i === ringStarts[r] ? ringStarts[r + 1] - 1 : i - 1;
   }
   const nfp: Nfp = {
-    coords, ringStarts, minX, maxX, minY, maxY, grid: new Uint8Array(gridSize * gridSize), gridSize, gx, gy,
+    coords, ringStarts, minX, maxX, minY, maxY, grid: new Uint8Array(gridSize * gridSize).fill(CELL_UNKNOWN), gridSize, gx, gy,
     near: new Array<Int32Array | undefined>(gridSize * gridSize), prev,
   };
   classifyCells(nfp);
@@ -85,10 +88,7 @@ function cellIndex(v: number, lo: number, g: number, size: number): number {
   return c < 0 ? 0 : c >= size ? size - 1 : c;
 }
 
-/**
- * Marks every cell an edge's (slightly grown) bounding box touches as mixed, then classifies the
- * others by their centre: no edge passes through them, so the whole cell shares the centre's side.
- */
+/** Marks every cell an edge comes within eps of as mixed (row by row, conservatively). */
 function classifyCells(nfp: Nfp): void {
   const { coords: c, ringStarts: rs, grid, gridSize: G, gx, gy, minX, minY } = nfp;
   const eps = 1e-9 * Math.max(nfp.maxX - nfp.minX, nfp.maxY - nfp.minY, 1e-300);
@@ -97,20 +97,33 @@ function classifyCells(nfp: Nfp): void {
     let ax = c[2 * (e - 1)], ay = c[2 * (e - 1) + 1];
     for (let i = s; i < e; i++) {
       const bx = c[2 * i], by = c[2 * i + 1];
-      const cx0 = cellIndex(Math.min(ax, bx) - eps, minX, gx, G), cx1 = cellIndex(Math.max(ax, bx) + eps, minX, gx, G);
       const cy0 = cellIndex(Math.min(ay, by) - eps, minY, gy, G), cy1 = cellIndex(Math.max(ay, by) + eps, minY, gy, G);
-      for (let cy = cy0; cy <= cy1; cy++) for (let cx = cx0; cx <= cx1; cx++) grid[cy * G + cx] = CELL_MIXED;
+      for (let cy = cy0; cy <= cy1; cy++) {
+        // The part of the edge inside this row's band (grown by eps), then the cells it spans.
+        let xa = Math.min(ax, bx), xb = Math.max(ax, bx);
+        if (ay !== by) {
+          const lo = minY + cy / gy - eps, hi = minY + (cy + 1) / gy + eps;
+          const t0 = Math.min(1, Math.max(0, (lo - ay) / (by - ay))), t1 = Math.min(1, Math.max(0, (hi - ay) / (by - ay)));
+          const u = ax + (bx - ax) * t0, v = ax + (bx - ax) * t1;
+          xa = Math.max(xa, Math.min(u, v));
+          xb = Math.min(xb, Math.max(u, v));
+        }
+        const cx1 = cellIndex(xb + eps, minX, gx, G);
+        for (let cx = cellIndex(xa - eps, minX, gx, G); cx <= cx1; cx++) grid[cy * G + cx] = CELL_MIXED;
+      }
       ax = bx;
       ay = by;
     }
   }
-  for (let cy = 0; cy < G; cy++) {
-    for (let cx = 0; cx < G; cx++) {
-      const k = cy * G + cx;
-      if (grid[k] === CELL_MIXED) continue;
-      grid[k] = insideEvenOdd(nfp, minX + (cx + 0.5) / gx, minY + (cy + 0.5) / gy) ? CELL_IN : CELL_OUT;
-    }
-  }
+}
+
+/** Classify a cell no edge comes near by its centre (the whole cell is on the same side). */
+function classifyCell(nfp: Nfp, k: number): number {
+  const G = nfp.gridSize;
+  const cx = k % G, cy = (k - cx) / G;
+  const cell = insideEvenOdd(nfp, nfp.minX + (cx + 0.5) / nfp.gx, nfp.minY + (cy + 0.5) / nfp.gy) ? CELL_IN : CELL_OUT;
+  nfp.grid[k] = cell;
+  return cell;
 }
 
 function segmentDist2(c: Float64Array, a: number, b: number, px: number, py: number): number {
@@ -257,7 +270,8 @@ export function nfpDepth(nfp: Nfp, px: number, py: number): number {
   if (px <= nfp.minX || px >= nfp.maxX || py <= nfp.minY || py >= nfp.maxY) return 0;
   const G = nfp.gridSize;
   const k = cellIndex(py, nfp.minY, nfp.gy, G) * G + cellIndex(px, nfp.minX, nfp.gx, G);
-  const cell = nfp.grid[k];
+  let cell = nfp.grid[k];
+  if (cell === CELL_UNKNOWN) cell = classifyCell(nfp, k);
   if (cell === CELL_OUT) return 0;
   if (cell === CELL_MIXED && !insideEvenOdd(nfp, px, py)) return 0;
   const edges = nfp.near[k] ?? (nfp.near[k] = nearEdges(nfp, k));
