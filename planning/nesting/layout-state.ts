@@ -26,6 +26,18 @@ export class LayoutState {
   private readonly bx1: Float64Array;
   private readonly by0: Float64Array;
   private readonly by1: Float64Array;
+  /**
+   * Broad phase: the strip cut into columns of fixed width along x; `colBits` holds, per column, a
+   * bitset of the placed items whose packed-shape box reaches into it. Candidates come out in
+   * ascending item order, so sums and early cut-offs are those of a plain scan over all items.
+   */
+  private readonly words: number;
+  private readonly colWidth: number;
+  private readonly cols: number;
+  private readonly colBits: Int32Array;
+  private readonly itemC0: Int32Array;
+  private readonly itemC1: Int32Array;
+  private readonly query: Int32Array;
 
   constructor(readonly model: NestModel) {
     const n = model.items.length;
@@ -40,6 +52,44 @@ export class LayoutState {
     this.bx1 = new Float64Array(n);
     this.by0 = new Float64Array(n);
     this.by1 = new Float64Array(n);
+    this.words = Math.max(1, Math.ceil(n / 32));
+    let sumW = 0;
+    for (const it of model.items) {
+      const v = model.variants[it.variants[0]];
+      sumW += v.sMaxX - v.sMinX;
+    }
+    this.colWidth = n > 0 ? Math.max(sumW / n, 1e-12) : 1;
+    // Any marker the engine builds is shorter than all boxes side by side; positions beyond the last
+    // column fold into it (still correct, only less selective).
+    this.cols = Math.min(4096, Math.ceil(sumW / this.colWidth) + 2);
+    this.colBits = new Int32Array(this.cols * this.words);
+    this.itemC0 = new Int32Array(n).fill(-1);
+    this.itemC1 = new Int32Array(n).fill(-1);
+    this.query = new Int32Array(this.words);
+  }
+
+  private col(x: number): number {
+    const c = Math.floor(x / this.colWidth);
+    return c < 0 ? 0 : c >= this.cols ? this.cols - 1 : c;
+  }
+
+  /** Fill `query` with the items whose columns meet [x0, x1]. */
+  private gather(x0: number, x1: number): void {
+    const W = this.words, q = this.query, bits = this.colBits;
+    q.fill(0);
+    const c1 = this.col(x1);
+    for (let c = this.col(x0); c <= c1; c++) {
+      const o = c * W;
+      for (let w = 0; w < W; w++) q[w] |= bits[o + w];
+    }
+  }
+
+  private register(i: number, on: boolean): void {
+    const W = this.words, word = i >>> 5, bit = 1 << (i & 31);
+    for (let c = this.itemC0[i]; c >= 0 && c <= this.itemC1[i]; c++) {
+      if (on) this.colBits[c * W + word] |= bit;
+      else this.colBits[c * W + word] &= ~bit;
+    }
   }
 
   /** Depth of item i (variant vi at xi, yi) into placed item j; 0 when apart or merely touching. */
@@ -55,14 +105,23 @@ export class LayoutState {
 
   /** Weighted overlap of item i at a trial position; stops early once it exceeds `cutoff`. */
   evaluate(i: number, vi: number, xi: number, yi: number, cutoff: number): number {
+    const s = this.model.variants[vi];
+    this.gather(xi + s.sMinX, xi + s.sMaxX);
     let sum = 0;
     const row = i * this.n;
-    for (let j = 0; j < this.n; j++) {
-      if (j === i || !this.placed[j]) continue;
-      const d = this.pairDepth(i, vi, xi, yi, j);
-      if (d > 0) {
-        sum += this.w[row + j] * d;
-        if (sum > cutoff) return sum;
+    const q = this.query;
+    for (let w = 0; w < this.words; w++) {
+      let m = q[w];
+      while (m !== 0) {
+        const low = m & -m;
+        const j = (w << 5) + (31 - Math.clz32(low));
+        m ^= low;
+        if (j === i) continue;
+        const d = this.pairDepth(i, vi, xi, yi, j);
+        if (d > 0) {
+          sum += this.w[row + j] * d;
+          if (sum > cutoff) return sum;
+        }
       }
     }
     return sum;
@@ -71,6 +130,7 @@ export class LayoutState {
   /** Put item i at a position and refresh its row and column of depths. */
   place(i: number, vi: number, xi: number, yi: number): void {
     const s = this.model.variants[vi];
+    if (this.placed[i]) this.register(i, false);
     this.v[i] = vi;
     this.x[i] = xi;
     this.y[i] = yi;
@@ -81,11 +141,26 @@ export class LayoutState {
     this.by1[i] = yi + s.sMaxY;
     const n = this.n;
     for (let j = 0; j < n; j++) {
-      if (j === i) continue;
-      const d = this.placed[j] ? this.pairDepth(i, vi, xi, yi, j) : 0;
-      this.ov[i * n + j] = d;
-      this.ov[j * n + i] = d;
+      this.ov[i * n + j] = 0;
+      this.ov[j * n + i] = 0;
     }
+    this.gather(this.bx0[i], this.bx1[i]);
+    const q = this.query;
+    for (let w = 0; w < this.words; w++) {
+      let m = q[w];
+      while (m !== 0) {
+        const low = m & -m;
+        const j = (w << 5) + (31 - Math.clz32(low));
+        m ^= low;
+        if (j === i) continue;
+        const d = this.pairDepth(i, vi, xi, yi, j);
+        this.ov[i * n + j] = d;
+        this.ov[j * n + i] = d;
+      }
+    }
+    this.itemC0[i] = this.col(this.bx0[i]);
+    this.itemC1[i] = this.col(this.bx1[i]);
+    this.register(i, true);
   }
 
   overlapOf(i: number): number {
@@ -135,6 +210,9 @@ export class LayoutState {
   /** Rebuild all positions and depths from a snapshot (every item placed). */
   restore(s: LayoutSnapshot): void {
     this.placed.fill(0);
+    this.colBits.fill(0);
+    this.itemC0.fill(-1);
+    this.itemC1.fill(-1);
     for (let i = 0; i < this.n; i++) this.place(i, s.v[i], s.x[i], s.y[i]);
   }
 }

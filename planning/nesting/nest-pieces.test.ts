@@ -41,6 +41,24 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     expect(r.length).toBeLessThan(100 + 1e-6);
   });
 
+  it.skipIf(!hasDatasets)('nests shapes0 (Oliveira et al. 2000, esicup/shapes/shapes0.xml) into a layout the independent checker accepts', () => {
+    const { input } = parseEsicupXml(readFileSync(esicup('shapes', 'shapes0.xml'), 'utf8'));
+    const r = nestPieces(input, { seed: 1, maxIterations: 400 });
+    const check = checkLayout(input, r);
+    expect(check.errors).toEqual([]);
+    expect(r.placements).toHaveLength(43);
+  });
+
+  // Recorded from the engine at commit b9f4f27 (before the fail-fast cell grids and the column
+  // bitsets), seed 1, 400 iterations: L = 67.79405976. The faster overlap tests must not change the
+  // search, so the same budget reaches at least that marker (in fact the identical one).
+  it.skipIf(!hasDatasets)('reaches at least the density of the engine before the fail-fast overlap tests on the same iteration budget', () => {
+    const { input } = parseEsicupXml(readFileSync(esicup('shapes', 'shapes0.xml'), 'utf8'));
+    const r = nestPieces(input, { seed: 1, maxIterations: 400 });
+    expect(checkLayout(input, r).errors).toEqual([]);
+    expect(r.length).toBeLessThanOrEqual(67.79405976 + 1e-9);
+  });
+
   const shirtLike: NestingInput = {
     stripWidth: mm(30),
     pieces: [

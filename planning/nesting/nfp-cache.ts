@@ -10,7 +10,27 @@ export interface Nfp {
   maxX: number;
   minY: number;
   maxY: number;
+  /**
+   * Fail-fast surrogate: a G × G grid over the bounding box; each cell is CELL_OUT or CELL_IN when
+   * no NFP edge comes near it (then every point of the cell is outside or inside), else CELL_MIXED;
+   * CELL_UNKNOWN until first used.
+   */
+  grid: Uint8Array;
+  gridSize: number;
+  /** Cells per unit length along x and y. */
+  gx: number;
+  gy: number;
+  /** Per cell, built on first use: the edges (by end-point index) that can be nearest to a point of the cell. */
+  near: (Int32Array | undefined)[];
+  /** Start-point index of the edge ending at each point (rings are closed). */
+  prev: Int32Array;
 }
+
+const CELL_OUT = 0;
+const CELL_IN = 1;
+const CELL_MIXED = 2;
+/** Not classified yet: cells are classified on first use, so fine grids cost nothing unused. */
+const CELL_UNKNOWN = 3;
 
 /** What the cache needs to know of a variant: which piece, mirror state and rotation it is. */
 export interface VariantKey {
@@ -48,7 +68,121 @@ function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
     if (y < minY) minY = y;
     if (y > maxY) maxY = y;
   }
-  return { coords, ringStarts, minX, maxX, minY, maxY };
+  const gridSize = Math.max(8, Math.min(64, 4 * Math.ceil(Math.sqrt(coords.length / 2))));
+  const gx = gridSize / (maxX - minX || 1);
+  const gy = gridSize / (maxY - minY || 1);
+  const prev = new Int32Array(coords.length / 2);
+  for (let r = 0; r < ringStarts.length - 1; r++) {
+    for (let i = ringStarts[r]; i < ringStarts[r + 1]; i++) prev[i] = i === ringStarts[r] ? ringStarts[r + 1] - 1 : i - 1;
+  }
+  const nfp: Nfp = {
+    coords, ringStarts, minX, maxX, minY, maxY, grid: new Uint8Array(gridSize * gridSize).fill(CELL_UNKNOWN), gridSize, gx, gy,
+    near: new Array<Int32Array | undefined>(gridSize * gridSize), prev,
+  };
+  classifyCells(nfp);
+  return nfp;
+}
+
+function cellIndex(v: number, lo: number, g: number, size: number): number {
+  const c = Math.floor((v - lo) * g);
+  return c < 0 ? 0 : c >= size ? size - 1 : c;
+}
+
+/** Marks every cell an edge comes within eps of as mixed (row by row, conservatively). */
+function classifyCells(nfp: Nfp): void {
+  const { coords: c, ringStarts: rs, grid, gridSize: G, gx, gy, minX, minY } = nfp;
+  const eps = 1e-9 * Math.max(nfp.maxX - nfp.minX, nfp.maxY - nfp.minY, 1e-300);
+  for (let r = 0; r < rs.length - 1; r++) {
+    const s = rs[r], e = rs[r + 1];
+    let ax = c[2 * (e - 1)], ay = c[2 * (e - 1) + 1];
+    for (let i = s; i < e; i++) {
+      const bx = c[2 * i], by = c[2 * i + 1];
+      const cy0 = cellIndex(Math.min(ay, by) - eps, minY, gy, G), cy1 = cellIndex(Math.max(ay, by) + eps, minY, gy, G);
+      for (let cy = cy0; cy <= cy1; cy++) {
+        // The part of the edge inside this row's band (grown by eps), then the cells it spans.
+        let xa = Math.min(ax, bx), xb = Math.max(ax, bx);
+        if (ay !== by) {
+          const lo = minY + cy / gy - eps, hi = minY + (cy + 1) / gy + eps;
+          const t0 = Math.min(1, Math.max(0, (lo - ay) / (by - ay))), t1 = Math.min(1, Math.max(0, (hi - ay) / (by - ay)));
+          const u = ax + (bx - ax) * t0, v = ax + (bx - ax) * t1;
+          xa = Math.max(xa, Math.min(u, v));
+          xb = Math.min(xb, Math.max(u, v));
+        }
+        const cx1 = cellIndex(xb + eps, minX, gx, G);
+        for (let cx = cellIndex(xa - eps, minX, gx, G); cx <= cx1; cx++) grid[cy * G + cx] = CELL_MIXED;
+      }
+      ax = bx;
+      ay = by;
+    }
+  }
+}
+
+/** Classify a cell no edge comes near by its centre (the whole cell is on the same side). */
+function classifyCell(nfp: Nfp, k: number): number {
+  const G = nfp.gridSize;
+  const cx = k % G, cy = (k - cx) / G;
+  const cell = insideEvenOdd(nfp, nfp.minX + (cx + 0.5) / nfp.gx, nfp.minY + (cy + 0.5) / nfp.gy) ? CELL_IN : CELL_OUT;
+  nfp.grid[k] = cell;
+  return cell;
+}
+
+function segmentDist2(c: Float64Array, a: number, b: number, px: number, py: number): number {
+  const ax = c[2 * a], ay = c[2 * a + 1];
+  const dx = c[2 * b] - ax, dy = c[2 * b + 1] - ay;
+  const len2 = dx * dx + dy * dy;
+  let t = len2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / len2 : 0;
+  t = t < 0 ? 0 : t > 1 ? 1 : t;
+  const ex = ax + t * dx - px, ey = ay + t * dy - py;
+  return ex * ex + ey * ey;
+}
+
+/**
+ * Edges that may be nearest to some point of cell k. The distance to a segment is convex, so its
+ * largest value over the cell is at a corner: U = min over edges of that corner maximum bounds the
+ * nearest distance of every point in the cell; an edge whose bounding box is farther than U from
+ * the cell can never be nearest. A small slack covers points rounded into the cell.
+ */
+function nearEdges(nfp: Nfp, k: number): Int32Array {
+  const { coords: c, prev, gridSize: G, gx, gy } = nfp;
+  const slack = 1e-9 * Math.max(nfp.maxX - nfp.minX, nfp.maxY - nfp.minY);
+  const cx = k % G, cy = (k - cx) / G;
+  const x0 = nfp.minX + cx / gx - slack, x1 = nfp.minX + (cx + 1) / gx + slack;
+  const y0 = nfp.minY + cy / gy - slack, y1 = nfp.minY + (cy + 1) / gy + slack;
+  const m = prev.length;
+  let u2 = Infinity;
+  for (let i = 0; i < m; i++) {
+    const a = prev[i];
+    const far = Math.max(segmentDist2(c, a, i, x0, y0), segmentDist2(c, a, i, x1, y0), segmentDist2(c, a, i, x0, y1), segmentDist2(c, a, i, x1, y1));
+    if (far < u2) u2 = far;
+  }
+  const u = Math.sqrt(u2) + slack;
+  const out: number[] = [];
+  for (let i = 0; i < m; i++) {
+    const a = prev[i];
+    const ex0 = Math.min(c[2 * a], c[2 * i]), ex1 = Math.max(c[2 * a], c[2 * i]);
+    const ey0 = Math.min(c[2 * a + 1], c[2 * i + 1]), ey1 = Math.max(c[2 * a + 1], c[2 * i + 1]);
+    const dx = ex0 > x1 ? ex0 - x1 : x0 > ex1 ? x0 - ex1 : 0;
+    const dy = ey0 > y1 ? ey0 - y1 : y0 > ey1 ? y0 - ey1 : 0;
+    if (dx * dx + dy * dy <= u * u) out.push(i);
+  }
+  return Int32Array.from(out);
+}
+
+function insideEvenOdd(nfp: Nfp, px: number, py: number): boolean {
+  const c = nfp.coords;
+  const rs = nfp.ringStarts;
+  let inside = false;
+  for (let r = 0; r < rs.length - 1; r++) {
+    const s = rs[r], e = rs[r + 1];
+    let ax = c[2 * (e - 1)], ay = c[2 * (e - 1) + 1];
+    for (let i = s; i < e; i++) {
+      const bx = c[2 * i], by = c[2 * i + 1];
+      if (ay > py !== by > py && px < ((bx - ax) * (py - ay)) / (by - ay) + ax) inside = !inside;
+      ax = bx;
+      ay = by;
+    }
+  }
+  return inside;
 }
 
 const normalise = (deg: number) => ((deg % 360) + 360) % 360;
@@ -134,36 +268,20 @@ export class NfpCache {
  */
 export function nfpDepth(nfp: Nfp, px: number, py: number): number {
   if (px <= nfp.minX || px >= nfp.maxX || py <= nfp.minY || py >= nfp.maxY) return 0;
+  const G = nfp.gridSize;
+  const k = cellIndex(py, nfp.minY, nfp.gy, G) * G + cellIndex(px, nfp.minX, nfp.gx, G);
+  let cell = nfp.grid[k];
+  if (cell === CELL_UNKNOWN) cell = classifyCell(nfp, k);
+  if (cell === CELL_OUT) return 0;
+  if (cell === CELL_MIXED && !insideEvenOdd(nfp, px, py)) return 0;
+  const edges = nfp.near[k] ?? (nfp.near[k] = nearEdges(nfp, k));
   const c = nfp.coords;
-  const rs = nfp.ringStarts;
-  let inside = false;
-  for (let r = 0; r < rs.length - 1; r++) {
-    const s = rs[r], e = rs[r + 1];
-    let ax = c[2 * (e - 1)], ay = c[2 * (e - 1) + 1];
-    for (let i = s; i < e; i++) {
-      const bx = c[2 * i], by = c[2 * i + 1];
-      if (ay > py !== by > py && px < ((bx - ax) * (py - ay)) / (by - ay) + ax) inside = !inside;
-      ax = bx;
-      ay = by;
-    }
-  }
-  if (!inside) return 0;
+  const prev = nfp.prev;
   let best = Infinity;
-  for (let r = 0; r < rs.length - 1; r++) {
-    const s = rs[r], e = rs[r + 1];
-    let ax = c[2 * (e - 1)], ay = c[2 * (e - 1) + 1];
-    for (let i = s; i < e; i++) {
-      const bx = c[2 * i], by = c[2 * i + 1];
-      const dx = bx - ax, dy = by - ay;
-      const len2 = dx * dx + dy * dy;
-      let t = len2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / len2 : 0;
-      t = t < 0 ? 0 : t > 1 ? 1 : t;
-      const ex = ax + t * dx - px, ey = ay + t * dy - py;
-      const d2 = ex * ex + ey * ey;
-      if (d2 < best) best = d2;
-      ax = bx;
-      ay = by;
-    }
+  for (let e = 0; e < edges.length; e++) {
+    const i = edges[e];
+    const d2 = segmentDist2(c, prev[i], i, px, py);
+    if (d2 < best) best = d2;
   }
   return Math.sqrt(best);
 }

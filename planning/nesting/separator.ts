@@ -43,7 +43,8 @@ function descend(layout: LayoutState, i: number, p: Pose, rng: Rng): void {
     const alongX = sx > minSx && (sy <= minSy || rng() < 0.5);
     const sign = rng() < 0.5 ? 1 : -1;
     let improved = false;
-    for (const d of [sign, -sign]) {
+    for (let t = 0; t < 2; t++) {
+      const d = t === 0 ? sign : -sign;
       const nx = alongX ? clamp(p.x + d * sx, x0, x1) : p.x;
       const ny = alongX ? p.y : clamp(p.y + d * sy, y0, y1);
       const e = layout.evaluate(i, p.v, nx, ny, p.e);
@@ -70,13 +71,18 @@ function consider(layout: LayoutState, i: number, best: Pose, v: number, x: numb
   }
 }
 
+function fitsStrip(layout: LayoutState, v: number): boolean {
+  const s = layout.model.variants[v];
+  return layout.length - s.maxX >= -s.minX;
+}
+
 /** Move item i to the best of sampled positions after descent (never worse than where it is). */
 export function moveItem(layout: LayoutState, i: number, rng: Rng, cfg: SeparatorConfig): void {
   const item = layout.model.items[i];
   const cur: Pose = { v: layout.v[i], x: layout.x[i], y: layout.y[i], e: 0 };
   cur.e = layout.evaluate(i, cur.v, cur.x, cur.y, Infinity);
   const best: Pose = { ...cur };
-  const fits = item.variants.filter((v) => layout.xRange(v)[1] >= layout.xRange(v)[0]);
+  const fits = item.variants.every((v) => fitsStrip(layout, v)) ? item.variants : item.variants.filter((v) => fitsStrip(layout, v));
   for (let k = 0; k < cfg.uniformSamples && best.e > 0; k++) {
     const v = fits[rngInt(rng, fits.length)];
     const [x0, x1] = layout.xRange(v);

@@ -2,8 +2,9 @@
  * Marker-nesting benchmark on the public strip-packing instances in ../shared/datasets/nesting/json.
  *
  *   npm run bench:nesting -- --instance FILE --seconds N [--seed S] --json
- *     one instance; prints ONE JSON line: {instance, stripWidth, length, density, seconds, valid,
- *     placements: [{item, rotation, x, y}]} (rotate the item polygon about its origin, then translate).
+ *     one instance; prints ONE JSON line: {instance, stripWidth, length, density, ratio (to the best
+ *     known), loadAverage, seconds, valid, placements: [{item, rotation, x, y}]} (rotate the item
+ *     polygon about its origin, then translate).
  *   npm run bench:nesting -- --all --seconds N [--seed S]
  *     every instance in the folder; prints a table of density against the best known.
  *
@@ -12,6 +13,7 @@
  * Not a timed test; it never runs inside npm test.
  */
 import { readdirSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { checkLayout, type NestingResult } from '../../planning/nesting';
@@ -85,6 +87,10 @@ async function benchInstance(file: string, seconds: number, seed: number) {
     stripWidth: inst.strip_height,
     length: r.length,
     density: r.utilisation, // total item area ÷ (length × strip_height)
+    // Density ÷ best known density (null for an instance without a reference).
+    ratio: BEST_KNOWN[inst.name] ? Number(((r.utilisation * 100) / BEST_KNOWN[inst.name]).toFixed(4)) : null,
+    // 1-minute load average at the end: the machine is shared, so wall-clock figures vary with it.
+    loadAverage: Number(loadavg()[0].toFixed(2)),
     seconds,
     valid: check.valid,
     placements: r.placements.map((p) => ({ item: Number(p.pieceId), rotation: p.rotation, x: p.x, y: p.y })),
@@ -102,13 +108,13 @@ async function main(): Promise<void> {
   }
   const dir = datasetDir('json');
   const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
-  const rows: string[] = ['| instance | density % | best known % (sparrow S1-rec) | ratio | length | valid |', '|---|---|---|---|---|---|'];
+  const rows: string[] = ['| instance | density % | best known % (sparrow S1-rec) | ratio | length | valid | load avg |', '|---|---|---|---|---|---|---|'];
   process.stdout.write(rows.join('\n') + '\n');
   for (const f of files) {
     const r = await benchInstance(path.join(dir, f), args.seconds, args.seed);
     const best = BEST_KNOWN[r.instance];
     const d = r.density * 100;
-    const line = `| ${r.instance} | ${d.toFixed(2)} | ${best?.toFixed(2) ?? '–'} | ${best ? (d / best).toFixed(3) : '–'} | ${r.length.toFixed(3)} | ${r.valid} |`;
+    const line = `| ${r.instance} | ${d.toFixed(2)} | ${best?.toFixed(2) ?? '–'} | ${r.ratio?.toFixed(3) ?? '–'} | ${r.length.toFixed(3)} | ${r.valid} | ${r.loadAverage} |`;
     process.stdout.write(line + '\n');
   }
 }
