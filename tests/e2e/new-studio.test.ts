@@ -76,7 +76,12 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     // Fabric and lining, each with a roll.
     await owner.getByRole('link', { name: 'Fabric' }).click();
     await expect.poll(() => owner.getByText('No fabric yet').isVisible()).toBe(true);
-    for (const f of [{ name: 'Navy crepe', width: '145', price: '650', roll: 'NC-01', metres: '80' }, { name: 'Ivory lining', width: '140', price: '220', roll: 'IL-01', metres: '60' }]) {
+    const fabrics = [
+      { name: 'Navy crepe', width: '145', price: '650', roll: 'NC-01', metres: '80' },
+      { name: 'Ivory lining', width: '140', price: '220', roll: 'IL-01', metres: '60' },
+      { name: 'Blush georgette', width: '140', price: '480', roll: 'BG-01', metres: '30' },
+    ];
+    for (const f of fabrics) {
       const form = owner.getByRole('form', { name: 'Add a fabric' });
       await form.getByLabel('Name', { exact: true }).fill(f.name);
       await form.getByLabel('Cuttable width (cm)').fill(f.width);
@@ -99,6 +104,16 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     await owner.waitForURL(/\/styles\/\d+$/);
     const styleId = Number(/\/styles\/(\d+)$/.exec(owner.url())![1]);
 
+    // Its pieces come from blocks: the lined fitted dress (V-neck, long sleeves with shoulder pads, gathered
+    // circle peplum in a contrast fabric, centre-back zip), each material cut from one of the studio's fabrics.
+    await owner.getByRole('button', { name: 'Lined fitted dress' }).click();
+    await owner.getByLabel('Fabric for self').selectOption({ label: 'Navy crepe' });
+    await owner.getByLabel('Fabric for lining').selectOption({ label: 'Ivory lining' });
+    await owner.getByLabel('Fabric for contrast').selectOption({ label: 'Blush georgette' });
+    await owner.getByRole('button', { name: 'Save blocks and materials' }).click();
+    await expect.poll(() => owner.getByRole('button', { name: 'Save blocks and materials' }).isEnabled()).toBe(true);
+    await shot(owner, 'new-studio-blocks');
+
     // Its size chart, then the pieces drafted from the base size.
     await owner.goto(`${baseUrl()}/styles/${styleId}/grading`);
     await expect.poll(() => owner.getByRole('button', { name: 'Import CSV or XLSX' }).isVisible()).toBe(true);
@@ -109,7 +124,11 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     await expect.poll(() => owner.getByTestId('size-chart').isVisible(), { timeout: 15_000 }).toBe(true);
     await owner.getByRole('button', { name: 'Propose rules from chart' }).click();
     await expect.poll(() => owner.getByRole('tablist', { name: 'Pieces' }).isVisible(), { timeout: 30_000 }).toBe(true);
-    expect(await owner.getByRole('tab').count()).toBeGreaterThanOrEqual(3);
+    expect(await owner.getByRole('tab').count()).toBeGreaterThanOrEqual(8);
+    // The studio's own dress, not the demo shirt dress: a peplum and lining pieces, no collar band.
+    expect(await owner.getByRole('tab', { name: /peplum/i }).count()).toBeGreaterThan(0);
+    expect(await owner.getByRole('tab', { name: /lining/i }).count()).toBeGreaterThan(0);
+    expect(await owner.getByRole('tab', { name: /collar band/i }).count()).toBe(0);
     await shot(owner, 'new-studio-pattern');
   });
 
