@@ -8,7 +8,7 @@ const PAGES: Record<string, { email: string; paths: string[] }> = {
   owner: {
     email: 'owner@tamarind.example',
     paths: [
-      '/', '/styles', '/styles/new', '/styles/1', '/styles/1/grading', '/grading', '/batches', '/batches/new', '/batches/1',
+      '/', '/styles', '/styles/new', '/styles/1', '/styles/1/grading', '/styles/2', '/styles/2/grading', '/grading', '/batches', '/batches/new', '/batches/1',
       '/batches/1/costing', '/markers', '/fabrics', '/line', '/floor', '/pay', '/costing', '/purchasing', '/outbox',
       '/people', '/settings', '/audit', '/account',
     ],
@@ -18,8 +18,8 @@ const PAGES: Record<string, { email: string; paths: string[] }> = {
   finisher: { email: 'finisher1@tamarind.example', paths: ['/', '/account'] },
 };
 
-/** Pages that send on by design: with one style, the grading index opens that style's grading. */
-const LANDS_ON: Record<string, string> = { '/grading': '/styles/1/grading' };
+/** Pages that send on by design (none now: with the demo's two styles, the grading index lists them). */
+const LANDS_ON: Record<string, string> = {};
 
 let browser: Browser;
 beforeAll(async () => {
