@@ -32,7 +32,7 @@ const DEFAULT_MAX_CANDIDATES = 20_000;
  */
 export function planCutOrder(input: CutOrderInput): CutOrderPlan {
   const { sizes, maxPlies: H, maxGarmentsPerMarker: K } = input;
-  validate(input);
+  validateCutOrder(input);
   const e = input.endAllowance ?? DEFAULT_END_ALLOWANCE_PER_PLY_MM;
   const lengthOf = input.markerLength ?? defaultMarkerLength(input.garmentLength, sizes);
   const q = sizes.map((s) => input.quantities[s] ?? 0);
@@ -174,15 +174,17 @@ function buildPlan(
   };
 }
 
-function defaultMarkerLength(garmentLength: Record<string, Millimetres> | undefined, sizes: string[]) {
-  if (!garmentLength) throw new RangeError('give garmentLength or a markerLength callback');
+/** Marker length of a ratio as the sum of its garments' lengths (checked for every size of the run). */
+export function defaultMarkerLength(garmentLength: Record<string, Millimetres> | undefined, sizes: string[], missing = 'give garmentLength or a markerLength callback') {
+  if (!garmentLength) throw new RangeError(missing);
   sizes.forEach((s) => {
     if (!(garmentLength[s] > 0)) throw new RangeError(`garmentLength missing for size ${s}`);
   });
   return (ratio: SizeRatio): Millimetres => mm(Object.entries(ratio).reduce((acc, [s, n]) => acc + n * garmentLength[s], 0));
 }
 
-function validate(input: CutOrderInput): void {
+/** RangeError for an order the cores cannot take (plies, garments per marker, sizes, quantities, over-cut). */
+export function validateCutOrder(input: CutOrderInput): void {
   const isCount = (v: number) => Number.isInteger(v) && v >= 0;
   if (!(Number.isInteger(input.maxPlies) && input.maxPlies >= 1)) throw new RangeError('maxPlies must be an integer ≥ 1');
   if (!(Number.isInteger(input.maxGarmentsPerMarker) && input.maxGarmentsPerMarker >= 1))

@@ -1,9 +1,9 @@
 import type { Highs, Model } from 'highs';
 import { mm, type Millimetres } from '@shared/units';
-import type { CutCosts, CutOrderInput, CutOrderPlan, Lay, SizeRatio } from './cut-order.types';
+import type { CutCosts, CutOrderInput, CutOrderPlan, Lay } from './cut-order.types';
 import { countRatios, enumerateRatios, toSizeRatio, type RatioCandidate } from './ratio-candidates';
 import { solveCoveringLp } from './lp-bound';
-import { planCutOrder } from './plan-cut-order';
+import { defaultMarkerLength, planCutOrder, validateCutOrder } from './plan-cut-order';
 import { DEFAULT_END_ALLOWANCE_PER_PLY_MM } from './spreading-constants';
 
 /** The part of a loaded HiGHS runtime the solve needs; the caller loads it (`await highsLoader()`), the core does no I/O. */
@@ -136,7 +136,7 @@ function validateCosts(costs: CutCosts | undefined): void {
 
 function candidatesFor(input: CutOrderInput, e: Millimetres, u: number[]): Candidates {
   const { sizes, maxGarmentsPerMarker: K } = input;
-  validateOrder(input);
+  validateCutOrder(input);
   const table = input.maxMarkerLength ?? Infinity;
   const fits = (c: RatioCandidate) => c.counts.every((v, i) => v <= u[i]);
   if (input.markers) {
@@ -363,22 +363,5 @@ function emptyPlan(base: PlanBase): CutOrderPlan {
   };
 }
 
-function garmentSum(garmentLength: Record<string, Millimetres> | undefined, sizes: string[]) {
-  if (!garmentLength) throw new RangeError('give garmentLength, markers or a markerLength callback');
-  sizes.forEach((s) => {
-    if (!(garmentLength[s] > 0)) throw new RangeError(`garmentLength missing for size ${s}`);
-  });
-  return (ratio: SizeRatio): Millimetres => mm(Object.entries(ratio).reduce((a, [s, n]) => a + n * garmentLength[s], 0));
-}
-
-function validateOrder(input: CutOrderInput): void {
-  const isCount = (v: number) => Number.isInteger(v) && v >= 0;
-  if (!(Number.isInteger(input.maxPlies) && input.maxPlies >= 1)) throw new RangeError('maxPlies must be an integer ≥ 1');
-  if (!(Number.isInteger(input.maxGarmentsPerMarker) && input.maxGarmentsPerMarker >= 1))
-    throw new RangeError('maxGarmentsPerMarker must be an integer ≥ 1');
-  if (new Set(input.sizes).size !== input.sizes.length) throw new RangeError('sizes must be distinct');
-  input.sizes.forEach((s) => {
-    if (!isCount(input.quantities[s] ?? 0)) throw new RangeError(`quantity for ${s} must be a non-negative integer`);
-    if (input.overcut && !isCount(input.overcut[s] ?? 0)) throw new RangeError(`overcut for ${s} must be a non-negative integer`);
-  });
-}
+const garmentSum = (garmentLength: Record<string, Millimetres> | undefined, sizes: string[]) =>
+  defaultMarkerLength(garmentLength, sizes, 'give garmentLength, markers or a markerLength callback');

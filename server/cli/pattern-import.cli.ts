@@ -1,5 +1,5 @@
 import { readFileSync, statSync } from 'node:fs';
-import { readPatternFile, type PatternUnit } from '../../exports/import/index';
+import { importedPieceJson, readPatternFile, type PatternUnit } from '../../exports/import/index';
 
 /** Largest pattern file read (bytes), the same cap as the upload route. */
 const MAX_BYTES = 20 * 1024 * 1024;
@@ -26,21 +26,8 @@ try {
   fail(`cannot read ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
 }
 const result = readPatternFile(text, { units: units as PatternUnit | undefined });
-const round = (v: number) => Math.round(v * 1000) / 1000;
-const xy = (p: { x: number; y: number }) => [round(p.x), round(p.y)];
 const out = {
-  pieces: result.pieces.map((p) => ({
-    name: p.name,
-    ...(p.size ? { size: p.size } : {}),
-    ...(p.quantity ? { quantity: p.quantity } : {}),
-    ...(p.material ? { material: p.material } : {}),
-    outline: p.outline.map(xy),
-    ...(p.grainLine ? { grainLine: { from: xy(p.grainLine.from), to: xy(p.grainLine.to) } } : {}),
-    ...(p.notches?.length ? { notches: p.notches.map(xy) } : {}),
-    ...(p.drillHoles?.length ? { drillHoles: p.drillHoles.map(xy) } : {}),
-    areaMm2: round(p.areaMm2),
-    perimeterMm: round(p.perimeterMm),
-  })),
+  pieces: result.pieces.map(importedPieceJson),
   problems: result.problems,
   units: result.units,
 };

@@ -1,4 +1,4 @@
-import type { ImportedPiece, PatternImportResult, PatternUnit } from '@exports/import/index';
+import { importedPieceJson, type ImportedPiece, type PatternImportResult, type PatternUnit } from '@exports/import/index';
 import { polygonArea, polygonBBox, polygonSignedArea } from '@shared/geometry/polygon';
 import { polygonIsSimple } from '@shared/geometry/polyline';
 import type { Point } from '@shared/geometry/types';
@@ -12,7 +12,6 @@ export const PATTERN_UPLOAD_LIMIT_BYTES = 20 * 1024 * 1024;
 
 type XY = [number, number];
 const r3 = (v: number) => Math.round(v * 1000) / 1000;
-const xy = (p: Point): XY => [r3(p.x), r3(p.y)];
 const pt = ([x, y]: XY): Point => ({ x, y });
 
 /** One previewed piece: to-scale data for drawing and the figures the owner checks. */
@@ -39,20 +38,7 @@ export interface PatternPreview {
 
 function present(p: ImportedPiece): PatternPreviewPiece {
   const box = polygonBBox(p.outline);
-  return {
-    name: p.name,
-    ...(p.size ? { size: p.size } : {}),
-    ...(p.quantity ? { quantity: p.quantity } : {}),
-    ...(p.material ? { material: p.material } : {}),
-    outline: p.outline.map(xy),
-    ...(p.grainLine ? { grainLine: { from: xy(p.grainLine.from), to: xy(p.grainLine.to) } } : {}),
-    ...(p.notches?.length ? { notches: p.notches.map(xy) } : {}),
-    ...(p.drillHoles?.length ? { drillHoles: p.drillHoles.map(xy) } : {}),
-    areaMm2: r3(p.areaMm2),
-    perimeterMm: r3(p.perimeterMm),
-    widthMm: r3(box.maxX - box.minX),
-    heightMm: r3(box.maxY - box.minY),
-  };
+  return { ...importedPieceJson(p), widthMm: r3(box.maxX - box.minX), heightMm: r3(box.maxY - box.minY) };
 }
 
 /**
