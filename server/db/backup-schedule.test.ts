@@ -65,6 +65,7 @@ describe('scheduled backups', () => {
       database: '/srv/seamrun/db.sqlite', dir: '/srv/seamrun/backups', everyMs: 24 * HOUR, keep: 14,
     });
     expect(backupPlan(loadEnv({ NODE_ENV: 'test' }))).toBeNull();
+    expect(backupPlan(loadEnv({ NODE_ENV: 'production', SESSION_SECRET: 'a-long-random-production-secret', DATABASE_PATH: ':memory:' }))).toBeNull();
     expect(backupPlan(loadEnv({ NODE_ENV: 'production', SESSION_SECRET: 'a-long-random-production-secret', BACKUP_EVERY_HOURS: '0' }))).toBeNull();
     expect(backupPlan(loadEnv({ NODE_ENV: 'test', BACKUP_EVERY_HOURS: '6', BACKUP_KEEP: '30', BACKUP_DIR: '/mnt/b' }))).toMatchObject({
       dir: '/mnt/b', everyMs: 6 * HOUR, keep: 30,

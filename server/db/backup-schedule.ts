@@ -31,6 +31,8 @@ export interface BackupPlan {
 export function backupPlan(env: Env): BackupPlan | null {
   const hours = env.BACKUP_EVERY_HOURS ?? (env.NODE_ENV === 'test' ? 0 : 24);
   if (!hours) return null;
+  // A database held in memory (tests, trials) has no file to copy.
+  if (!env.DATABASE_URL && env.DATABASE_PATH === ':memory:') return null;
   const database = env.DATABASE_URL || env.DATABASE_PATH;
   const dir = env.BACKUP_DIR || join(env.DATABASE_URL ? 'data' : dirname(env.DATABASE_PATH), 'backups');
   return { database, dir, everyMs: hours * HOUR_MS, keep: env.BACKUP_KEEP };
