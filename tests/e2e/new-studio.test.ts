@@ -145,6 +145,11 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     await owner.getByRole('button', { name: 'Plan the cut' }).click();
     await expect.poll(() => owner.getByLabel('Plan figures').isVisible(), { timeout: 60_000 }).toBe(true);
     await expect.poll(async () => (await owner.getByLabel('Plan figures').textContent()) ?? '').toMatch(/Fabric used .* m/);
+    // Materials to order follow the plan at once: the self fabric needed is what the plan spreads plus wastage.
+    const used = Number(/Fabric used ([\d.]+) m/.exec((await owner.getByLabel('Plan figures').textContent()) ?? '')![1]);
+    const needOf = async () => Number(/need ([\d.]+) m/.exec((await owner.getByText(/^need .* m ·/).first().textContent()) ?? '')?.[1] ?? NaN);
+    await expect.poll(needOf).toBeGreaterThanOrEqual(used);
+    expect(await needOf()).toBeLessThan(used * 1.1);
     await shot(owner, 'new-studio-cut-plan');
 
     // The cutter and a machinist join the studio.

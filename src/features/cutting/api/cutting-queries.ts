@@ -32,6 +32,9 @@ export const layQueries = {
 
 const invalidateCutting = () =>
   Promise.all([
+    // A plan or a cut changes consumption: the batch's costing and materials to order follow it.
+    queryClient.invalidateQueries({ queryKey: ['costing'] }),
+    queryClient.invalidateQueries({ queryKey: ['purchasing'] }),
     queryClient.invalidateQueries({ queryKey: fabricQueries.all().queryKey }),
     queryClient.invalidateQueries({ queryKey: cutPlanQueries.all().queryKey }),
     queryClient.invalidateQueries({ queryKey: layQueries.all().queryKey }),
