@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { IconAlert } from './icons';
+import { sentenceOf } from '@/lib/format';
 
 export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: ReactNode; actions?: ReactNode }) {
   return (
@@ -55,7 +56,7 @@ export function Caution({ title, items, source }: { title: string; items: string
 
 export function ErrorNote({ error }: { error: unknown }) {
   if (!error) return null;
-  const message = error instanceof Error ? error.message : String(error);
+  const message = sentenceOf(error instanceof Error ? error.message : String(error));
   return (
     <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
       {message}
