@@ -5,25 +5,13 @@ import { planCutOrder } from './plan-cut-order';
 import { countRatios } from './ratio-candidates';
 import { DEFAULT_END_ALLOWANCE_PER_PLY_MM, END_ALLOWANCE_EACH_END_NON_ELASTIC_MM } from './spreading-constants';
 import type { CutOrderInput } from './cut-order.types';
+import { expectCovers } from './cut-order.testing';
 
 const lengths = (sizes: string[], l = 1000): Record<string, Millimetres> =>
   Object.fromEntries(sizes.map((s) => [s, mm(l)]));
 const order = (sizes: string[], q: number[]) => Object.fromEntries(sizes.map((s, i) => [s, q[i]]));
 const lbLays = (total: number, k: number, h: number) => Math.ceil(total / (k * h));
 
-function expectCovers(input: CutOrderInput, plan: ReturnType<typeof planCutOrder>, allowed: Record<string, number> = {}) {
-  for (const s of input.sizes) {
-    const cut = plan.lays.reduce((acc, l) => acc + (l.ratio[s] ?? 0) * l.plies, 0);
-    expect(cut).toBeGreaterThanOrEqual(input.quantities[s] ?? 0);
-    expect(cut).toBeLessThanOrEqual((input.quantities[s] ?? 0) + (allowed[s] ?? 0));
-  }
-  for (const l of plan.lays) {
-    expect(l.plies).toBeGreaterThanOrEqual(1);
-    expect(l.plies).toBeLessThanOrEqual(input.maxPlies);
-    expect(Object.values(l.ratio).reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(input.maxGarmentsPerMarker);
-    if (input.maxMarkerLength !== undefined) expect(l.markerLength + plan.endAllowance).toBeLessThanOrEqual(input.maxMarkerLength);
-  }
-}
 
 describe('planCutOrder: published cut plans', () => {
   // Scribd presentation 575728029 "Cutting plan" (wording after Carr & Latham, ch. 2, from memory) [quoted]:

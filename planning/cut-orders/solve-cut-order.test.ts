@@ -5,6 +5,7 @@ import { mm, type Millimetres } from '@shared/units';
 import { solveCutOrder, type MipSolver } from './solve-cut-order';
 import { planCutOrder } from './plan-cut-order';
 import type { CutCosts, CutOrderInput, CutOrderPlan } from './cut-order.types';
+import { expectCovers } from './cut-order.testing';
 
 let solver: MipSolver;
 beforeAll(async () => {
@@ -16,18 +17,6 @@ const lengths = (sizes: string[], l: number[]): Record<string, Millimetres> => O
 const laysCost = (plan: CutOrderPlan, c: CutCosts, e: number) =>
   plan.lays.reduce((a, l) => a + l.plies * (((c.fabricCostPerMetre ?? 0) * (l.markerLength + e)) / 1000 + (c.plyCost ?? 0)) + (c.layCost ?? 0), 0);
 
-function expectValid(input: CutOrderInput, plan: CutOrderPlan, allowed: Record<string, number> = {}) {
-  for (const s of input.sizes) {
-    const cut = plan.lays.reduce((a, l) => a + (l.ratio[s] ?? 0) * l.plies, 0);
-    expect(cut).toBeGreaterThanOrEqual(input.quantities[s] ?? 0);
-    expect(cut).toBeLessThanOrEqual((input.quantities[s] ?? 0) + (allowed[s] ?? 0));
-  }
-  for (const l of plan.lays) {
-    expect(l.plies).toBeGreaterThanOrEqual(1);
-    expect(l.plies).toBeLessThanOrEqual(input.maxPlies);
-    expect(Object.values(l.ratio).reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(input.maxGarmentsPerMarker);
-  }
-}
 
 describe('solveCutOrder: the case of issue 18', () => {
   // Issue 18 (recomputed outside the project): S 30 / M 50 / L 20, 1000 / 1100 / 1200 mm, 20 mm end
@@ -42,7 +31,7 @@ describe('solveCutOrder: the case of issue 18', () => {
   };
   it('proves 3 lays at 109,680 mm where the old search gave up with 4 lays', () => {
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     expect(plan.fabricUsed).toBe(109_680);
     expect(plan.lays).toHaveLength(3);
     expect(plan.method).toBe('exact');
@@ -84,7 +73,7 @@ describe('solveCutOrder: published cut plans', () => {
     const sizes = ['10', '12', '14', '16', '18'];
     const input = { sizes, quantities: order(sizes, [40, 90, 80, 25, 25]), maxPlies: 50, maxGarmentsPerMarker: 4, garmentLength: lengths(sizes, [1000, 1000, 1000, 1000, 1000]) };
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     expect(plan.lays).toHaveLength(Math.ceil(260 / (4 * 50)));
     expect(plan.method).toBe('exact');
   });
@@ -92,7 +81,7 @@ describe('solveCutOrder: published cut plans', () => {
     const sizes = ['12', '14', '16', '18'];
     const input = { sizes, quantities: order(sizes, [100, 160, 120, 60]), maxPlies: 60, maxGarmentsPerMarker: 4, garmentLength: lengths(sizes, [1000, 1000, 1000, 1000]) };
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     expect(plan.lays).toHaveLength(Math.ceil(440 / (4 * 60)));
     expect(plan.method).toBe('exact');
   });
@@ -100,7 +89,7 @@ describe('solveCutOrder: published cut plans', () => {
     const sizes = ['S', 'M', 'L'];
     const input = { sizes, quantities: order(sizes, [300, 600, 400]), maxPlies: 75, maxGarmentsPerMarker: 5, garmentLength: lengths(sizes, [1000, 1000, 1000]) };
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     expect(plan.lays).toHaveLength(4); // ⌈1300 ÷ 375⌉ = 4, reference §3.2
     expect(plan.fabricUsed).toBe(260 * (5000 + 20)); // 260 plies of 5 garments
     expect(plan.method).toBe('exact');
@@ -139,7 +128,7 @@ describe('solveCutOrder: objective, markers and edge cases', () => {
       markers: [{ ratio: { S: 1, M: 1 }, length: mm(1700) }, { ratio: { S: 2, M: 2 }, length: mm(3300) }, { ratio: { S: 1 }, length: mm(900) }, { ratio: { M: 1 }, length: mm(950) }],
     };
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     expect(plan.markerLengths).toBe('measured');
     expect(plan.lays).toEqual([{ ratio: { S: 2, M: 2 }, plies: 10, markerLength: 3300 }]);
   });
@@ -158,7 +147,7 @@ describe('solveCutOrder: objective, markers and edge cases', () => {
       garmentLength: lengths(sizes, [900, 950, 1000, 1050, 1100, 1150, 1200, 1250]), timeLimitSeconds: 0.3,
     };
     const plan = solveCutOrder(input, solver);
-    expectValid(input, plan);
+    expectCovers(input, plan);
     if (plan.method === 'exact') expect(plan.gap).toBe(0);
     else expect(plan.gap).toBeGreaterThan(0);
     expect(plan.fabricUsed).toBeGreaterThanOrEqual(plan.lowerBound);
@@ -233,7 +222,7 @@ describe('solveCutOrder: agrees with an independent brute force on small random 
     const plan = solveCutOrder({ ...input, ...(costs ? { costs } : {}) }, solver);
     const truth = bruteForce(input, costs);
     const allowed = Object.fromEntries(input.sizes.map((s) => [s, Math.floor(((input.quantities[s] ?? 0) * (input.overcutPercent ?? 0)) / 100 + 1e-9)]));
-    expectValid(input, plan, allowed);
+    expectCovers(input, plan, allowed);
     expect(plan.method).toBe('exact');
     if ('cost' in truth) expect(laysCost(plan, costs!, input.endAllowance ?? 20)).toBeCloseTo(truth.cost, 6);
     else expect({ fabric: plan.fabricUsed, lays: plan.lays.length }).toEqual(truth);

@@ -7,6 +7,7 @@ import { promisify } from 'node:util';
 import Database from 'better-sqlite3';
 import pg from 'pg';
 import { afterAll, describe, expect, it } from 'vitest';
+import { addFreshBundles } from '../fixtures/fresh-bundles';
 import { createApp } from '../../server/app';
 import { hasPgDump, takeBackupIfDue } from '../../server/db/backup-schedule';
 import { openDatabase } from '../../server/db/data-source';
@@ -78,15 +79,8 @@ describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('restore drill: a schedu
     const sewingOps = ops.filter((o) => o.section !== 'finishing');
 
     // Fresh bundles, so every log below is a first log.
-    const seed = new Database(dbPath);
-    seed.pragma('busy_timeout = 5000');
-    const { layId, studioId } = seed.prepare('SELECT layId, studioId FROM bundles WHERE batchId = ? LIMIT 1').get(batchId) as { layId: number; studioId: number };
-    const insert = seed.prepare(
-      `INSERT INTO bundles (studioId, batchId, layId, number, size, shadeLot, plyFrom, plyTo, pieces, reopened) VALUES (?, ?, ?, ?, 'M', 'LOT-A', 1, 10, 10, '{}')`,
-    );
     const bundles = Array.from({ length: 12 }, (_, i) => 8000 + i);
-    for (const n of bundles) insert.run(studioId, batchId, layId, n);
-    seed.close();
+    addFreshBundles(dbPath, batchId, bundles);
 
     const acknowledged = new Set<string>();
     const jobs = bundles.flatMap((b) => sewingOps.map((o) => ({ b, o: o.id })));

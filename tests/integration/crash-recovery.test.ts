@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
+import { addFreshBundles } from '../fixtures/fresh-bundles';
 
 const dir = mkdtempSync(join(tmpdir(), 'seamrun-crash-'));
 const dbPath = join(dir, 'crash.sqlite');
@@ -67,15 +68,8 @@ describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('fault: SIGKILL while bu
     const ops: { id: number }[] = (bundle.bundle ?? bundle).operations;
     // Fresh bundles of the demo batch, so every log below is a first log.
     const batchId = bundle.batchId ?? bundle.bundle?.batchId;
-    const seedDb = new Database(dbPath);
-    seedDb.pragma('busy_timeout = 5000');
-    const { layId, studioId } = seedDb.prepare('SELECT layId, studioId FROM bundles WHERE batchId = ? LIMIT 1').get(batchId) as { layId: number; studioId: number };
-    const insert = seedDb.prepare(
-      `INSERT INTO bundles (studioId, batchId, layId, number, size, shadeLot, plyFrom, plyTo, pieces, reopened) VALUES (?, ?, ?, ?, 'M', 'LOT-A', 1, 10, 10, '{}')`,
-    );
     const bundles = Array.from({ length: 10 }, (_, i) => 9000 + i);
-    for (const n of bundles) insert.run(studioId, batchId, layId, n);
-    seedDb.close();
+    addFreshBundles(dbPath, batchId, bundles);
     const sewingOps = ops.filter((o) => (o as { section?: string }).section === 'sewing');
 
     const acknowledged: string[] = [];
