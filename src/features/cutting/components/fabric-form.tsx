@@ -7,10 +7,8 @@ import { ApiError, api } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
 import { purchasingQueries } from '@/features/purchasing/api/purchasing-queries';
+import { MM_PER_INCH, MM_PER_YARD } from './cutting-format';
 
-/** One yard is exactly 0.9144 m (international yard, 1959). */
-const MM_PER_YARD = 914.4;
-const MM_PER_INCH = 25.4;
 
 interface Draft {
   name: string;

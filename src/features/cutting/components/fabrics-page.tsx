@@ -6,10 +6,11 @@ import { ApiError } from '@/lib/api-client';
 import { useCan, useMe } from '@/lib/auth';
 import { formatMoney } from '@/lib/format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
-import { metres } from './cutting-format';
+import { fabricUnits } from './cutting-format';
 import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
+  const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   return (
     <div tabIndex={0} className="overflow-x-auto">
       <table className="w-full text-sm">
@@ -18,7 +19,7 @@ function RollTable({ rolls }: { rolls: RollDto[] }) {
           {rolls.map((r) => (
             <tr key={r.id} className="border-t border-calico-200">
               <td className="py-1 font-medium">{r.label} {r.isRemnant ? <Badge tone="gold">remnant</Badge> : null}</td>
-              <td>{r.shadeLot}</td><td>{metres(r.lengthMm)}</td><td>{metres(r.remainingMm)}</td><td>{r.reservedMm > 0 ? metres(r.reservedMm) : '—'}</td><td>{Math.round(r.widthMm / 10)} cm</td><td>{r.receivedDate}</td>
+              <td>{r.shadeLot}</td><td>{u.length(r.lengthMm)}</td><td>{u.length(r.remainingMm)}</td><td>{r.reservedMm > 0 ? u.length(r.reservedMm) : '—'}</td><td>{u.width(r.widthMm)}</td><td>{r.receivedDate}</td>
             </tr>
           ))}
         </tbody>
@@ -29,11 +30,12 @@ function RollTable({ rolls }: { rolls: RollDto[] }) {
 
 function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number }) {
   const add = useAddRolls(fabricId);
-  const [f, setF] = useState({ label: '', lengthM: '', widthCm: String(Math.round(widthMm / 10) + 2), shadeLot: '', receivedDate: new Date().toISOString().slice(0, 10) });
+  const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
+  const [f, setF] = useState({ label: '', lengthM: '', widthCm: String(Math.round(((widthMm + 20) / u.mmPerWidth) * 8) / 8), shadeLot: '', receivedDate: new Date().toISOString().slice(0, 10) });
   const fields = add.error instanceof ApiError ? add.error.fields : {};
   const handleSubmit = (e: FormEvent) => {
     e.preventDefault();
-    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * 1000), widthMm: Math.round(Number(f.widthCm) * 10), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
+    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * u.mmPerLength), widthMm: Math.round(Number(f.widthCm) * u.mmPerWidth), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
       onSuccess: () => setF({ ...f, label: '', lengthM: '' }),
     });
   };
@@ -47,8 +49,8 @@ function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number 
   return (
     <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
       {input('label', 'Roll label', 'text', fields['rolls.0.label'])}
-      {input('lengthM', 'Length (m)', 'number', fields['rolls.0.lengthMm'])}
-      {input('widthCm', 'Width (cm)', 'number', fields['rolls.0.widthMm'])}
+      {input('lengthM', `Length (${u.lengthUnit})`, 'number', fields['rolls.0.lengthMm'])}
+      {input('widthCm', `Width (${u.widthUnit})`, 'number', fields['rolls.0.widthMm'])}
       {input('shadeLot', 'Shade lot', 'text', fields['rolls.0.shadeLot'])}
       {input('receivedDate', 'Received', 'date', fields['rolls.0.receivedDate'])}
       <button type="submit" className="btn-primary" disabled={add.isPending}>Add roll</button>
@@ -82,6 +84,7 @@ export function FabricsPage() {
   const detail = useQuery({ ...fabricQueries.detail(id ?? 0), enabled: id !== null });
   const canWrite = useCan('fabric:write');
   const currency = useMe().data?.currency ?? 'KES';
+  const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   if (isLoading || !fabrics) return <Spinner />;
   return (
     <>
@@ -91,9 +94,9 @@ export function FabricsPage() {
         {fabrics.map((f) => (
           <button type="button" key={f.id} onClick={() => setOpenId(f.id)} className={`card p-4 text-left ${f.id === id ? 'ring-2 ring-thread-700' : ''}`}>
             <p className="font-semibold text-thread-800">{f.name}</p>
-            <p className="text-sm text-ink-600">{f.composition} · {Math.round(f.widthMm / 10)} cm cuttable {f.isDirectional ? '· one way' : ''}</p>
-            <p className="mt-1 text-sm">{f.rollCount} rolls · {metres(f.totalRemainingMm)} in stock</p>
-            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(f.pricePerMetreMinor, currency)} per metre</p> : null}
+            <p className="text-sm text-ink-600">{[f.composition, `${u.width(f.widthMm)} cuttable`, f.isDirectional ? 'one way' : ''].filter(Boolean).join(' · ')}</p>
+            <p className="mt-1 text-sm">{f.rollCount} rolls · {u.length(f.totalRemainingMm)} in stock</p>
+            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency)} per {u.pricePer}</p> : null}
           </button>
         ))}
       </div>
