@@ -64,7 +64,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           environment: 'node',
-          include: ['{shared,grading,planning,exports,server,src}/**/*.test.{ts,tsx}'],
+          include: ['{shared,grading,planning,exports,server,src}/**/*.test.{ts,tsx}', 'tests/architecture/**/*.test.ts'],
           setupFiles: ['tests/fixtures/setup-unit.ts'],
         },
       },

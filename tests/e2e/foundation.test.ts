@@ -18,6 +18,10 @@ describe('journey 1: the owner plans a run of 40 dresses in five sizes', () => {
     await shot(page, 'owner-home');
     await page.getByRole('link', { name: 'Batches' }).click();
     await page.getByRole('link', { name: 'New batch' }).click();
+    // Other tests add styles of their own: pick the demo shirt dress by its code.
+    const styleSelect = page.getByLabel('Style', { exact: true });
+    const demo = await styleSelect.locator('option', { hasText: 'SR-101' }).getAttribute('value');
+    await styleSelect.selectOption(demo!);
     const sizes = { XS: 4, S: 8, M: 12, L: 10, XL: 6 };
     for (const [size, n] of Object.entries(sizes)) await page.getByLabel(`Quantity ${size}`, { exact: true }).fill(String(n));
     expect(await page.getByLabel('Total garments').textContent()).toBe('40');

@@ -54,7 +54,7 @@ export function PurchasingPage() {
     return (
     <div className="flex flex-wrap gap-1">
       {o.status !== 'received' ? (
-        <button type="button" className="btn-primary px-2 py-1 text-xs" aria-label={`Send ${o.number} to ${o.supplierName}`} disabled={send.isPending} onClick={() => send.mutate(o.id)}>
+        <button type="button" className="btn-primary px-2 py-1 text-xs" aria-label={`${o.status === 'draft' ? 'Send' : 'Send again'} ${o.number} to ${o.supplierName}`} disabled={send.isPending} onClick={() => send.mutate(o.id)}>
           {o.status === 'draft' ? 'Send' : 'Send again'}
         </button>
       ) : null}
