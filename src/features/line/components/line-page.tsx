@@ -75,7 +75,7 @@ function OperationsCard({ styleId }: { styleId: number }) {
         <button type="button" className="btn-quiet" disabled={!from || copy.isPending} onClick={() => copy.mutate(Number(from))}>Copy</button>
       </div>
       <ErrorNote error={imp.error ?? copy.error ?? ops.error} />
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Operations of the style" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="operations">
           <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Code</th><th>Operation</th><th>Machine</th><th className="text-right">SAM</th><th className="pl-4">After</th>{rows.some((r) => r.pieceRateMinor !== undefined) ? <th className="text-right">Piece rate</th> : null}</tr></thead>
           {sections.map((sec) => (
