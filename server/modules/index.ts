@@ -51,7 +51,7 @@ export function createModules(base: Omit<ModuleContext, 'audit'>, opts: ModuleOp
     batches,
     cuttingPieces,
     fabrics: { get: (studioId, id) => cutting.services.fabrics.get(studioId, id) },
-    onMarkerDone: (studioId, markerId) => cutting.services.cutting.onMarkerDone(studioId, markerId),
+    onMarkerDone: (studioId, markerId) => cutting.services.onMarkerDone(studioId, markerId),
     queueOptions: opts.markerQueue,
   });
   const cutting = createCuttingModule(ctx, {
@@ -79,11 +79,9 @@ export function createModules(base: Omit<ModuleContext, 'audit'>, opts: ModuleOp
       grading: grading.services,
       markers: markers.services,
       cutting: cutting.services,
-      line: line.services,
       floor: floor.services,
       pay: pay.services,
       costing: costing.services,
-      purchasing: purchasing.services,
     },
   };
 }

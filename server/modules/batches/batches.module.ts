@@ -2,6 +2,7 @@ import type { ApiModule, ModuleContext } from '../module';
 import type { StyleRepository } from '../styles/style.repository';
 import { createBatchRepository } from './batch.repository';
 import { batchRoutes } from './batch.routes';
+import { createBatchService } from './batch.service';
 
 /** Batches (a style in quantities per size, due on a date) at /api/batches; markers, cutting and line read `batches`. */
 export function createBatchesModule(ctx: ModuleContext, deps: { styles: StyleRepository }) {
@@ -10,7 +11,7 @@ export function createBatchesModule(ctx: ModuleContext, deps: { styles: StyleRep
     name: 'batches',
     services: { batches },
     mount(api) {
-      api.use('/batches', batchRoutes(batches, deps.styles, ctx.audit));
+      api.use('/batches', batchRoutes(createBatchService({ batches, styles: deps.styles, audit: ctx.audit })));
     },
   } satisfies ApiModule & { services: unknown };
 }

@@ -1,6 +1,7 @@
 import type { ApiModule, ModuleContext } from '../module';
 import { createStyleRepository } from './style.repository';
 import { styleRoutes } from './style.routes';
+import { createStyleService } from './style.service';
 
 /** Styles (code, size run, base size, composition) at /api/styles; grading, markers, line and batches read `styles`. */
 export function createStylesModule(ctx: ModuleContext) {
@@ -9,7 +10,7 @@ export function createStylesModule(ctx: ModuleContext) {
     name: 'styles',
     services: { styles },
     mount(api) {
-      api.use('/styles', styleRoutes(styles, ctx.audit));
+      api.use('/styles', styleRoutes(createStyleService({ styles, audit: ctx.audit })));
     },
   } satisfies ApiModule & { services: unknown };
 }

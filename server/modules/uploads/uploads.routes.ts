@@ -8,7 +8,7 @@ import type { UploadEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
-import type { ModuleContext } from '../module';
+import type { RouteContext } from '../module';
 import { ACCEPTED, sniffUpload, svgProblems } from './upload-sniff';
 import type { UploadsRepository } from './uploads.repository';
 import { sendDownload } from '../../middleware/download';
@@ -37,7 +37,7 @@ export function uploadsDir(databasePath: string | undefined): string {
 const safeName = (name: string) => basename(name.replace(/\\/g, '/')).replace(/[\x00-\x1F\x7F]/g, '').slice(0, 200) || 'file';
 
 /** /api/uploads: sketches, photos, swatches, packing lists, measurement files (owner only). */
-export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
+export function uploadsRoutes(repo: UploadsRepository, ctx: RouteContext) {
   const r = Router();
   const maxBytes = ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024;
   const dir = uploadsDir(ctx.env.DATABASE_PATH);
