@@ -92,11 +92,35 @@ export default tseslint.config(
     rules: pureCoreRules,
   },
   {
+    // The database stops at each module's setup: only the data layer and the files that build it import TypeORM
+    // (tests/architecture/house.test.ts checks the same from the import graph).
     files: ['server/**/*.ts'],
+    ignores: [
+      'server/**/*.repository.ts',
+      'server/**/*.entity.ts',
+      'server/db/**',
+      'server/**/*.module.ts',
+      'server/modules/module.ts',
+      'server/app.ts',
+      'server/seed/**',
+    ],
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['typeorm'], importNames: ['Repository'], message: 'Query through *.repository.ts.' }] },
+        {
+          paths: [{ name: 'typeorm', message: 'Only repositories, entities, migrations, server/db, module setup and the seed import TypeORM: query through a *.repository.ts.' }],
+          patterns: [{ group: ['typeorm/*'], message: 'Only repositories, entities, migrations, server/db, module setup and the seed import TypeORM.' }],
+        },
+      ],
+    },
+  },
+  {
+    // Inside the data layer and setup, the Repository class still stays behind our own repository functions.
+    files: ['server/**/*.repository.ts', 'server/**/*.entity.ts', 'server/db/**/*.ts', 'server/**/*.module.ts', 'server/modules/module.ts', 'server/app.ts', 'server/seed/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { paths: [{ name: 'typeorm', importNames: ['Repository'], message: 'Query through *.repository.ts.' }] },
       ],
     },
   },

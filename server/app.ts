@@ -5,31 +5,13 @@ import express, { Router, type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import type { DataSource } from 'typeorm';
-import { configurePassport } from './auth/passport';
 import { requirePasswordChanged } from './auth/require';
-import { DatabaseSessionStore } from './auth/session-store';
-import { createThrottleCounter, SharedThrottleStore } from './auth/throttle-store';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
-import { createAuditRepository } from './modules/audit/audit.repository';
-import { auditRoutes } from './modules/audit/audit.routes';
-import { authRoutes } from './modules/auth/auth.routes';
-import { createAuthService } from './modules/auth/auth.service';
-import { createFloorDeviceRepository } from './modules/auth/floor-device.repository';
-import { createSignInThrottleRepository } from './modules/auth/sign-in-throttle.repository';
-import { createBatchRepository } from './modules/batches/batch.repository';
-import { batchRoutes } from './modules/batches/batch.routes';
-import { createSessionRepository } from './modules/sessions/session.repository';
-import { createStudioRepository, studioRoutes } from './modules/studios/studio.routes';
-import { createStyleRepository } from './modules/styles/style.repository';
-import { styleRoutes } from './modules/styles/style.routes';
-import { createUserRepository } from './modules/users/user.repository';
-import { userRoutes } from './modules/users/user.routes';
-import { createFeatureModules } from './modules';
+import { createModules } from './modules';
 import type { MarkerQueueOptions } from './modules/markers/marker-queue';
-import type { ApiModule, ModuleContext } from './modules/module';
-import { createUserService } from './modules/users/user.service';
+import type { ApiModule } from './modules/module';
 import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
 import { requestLogger } from './observability/logger';
 import type { Logger } from 'pino';
@@ -59,11 +41,11 @@ export interface AppControl {
   modules: Record<string, ApiModule>;
   /** Starts every module's background work, in mount order. */
   start(): Promise<void>;
-  /** Stops it in reverse order, then the job runner and the sign-in throttle counter. */
+  /** Stops it in reverse order (auth last: its sign-in throttle counter), then the job runner. */
   stop(): Promise<void>;
 }
 
-export type AppServices = ReturnType<typeof createFeatureModules>['services'];
+export type AppServices = ReturnType<typeof createModules>['services'];
 
 /** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
 const RENEW_SESSION_EVERY_MS = 5 * 60 * 1000;
@@ -108,13 +90,10 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  const audit = createAuditRepository(ds);
-  const users = createUserRepository(ds);
-  const styles = createStyleRepository(ds);
-  const batches = createBatchRepository(ds);
-  const studios = createStudioRepository(ds);
-  const auth = createAuthService({ ds, users, audit, lockAfter: env.LOGIN_LOCK_AFTER, now });
-  const passport = configurePassport(auth);
+  const jobs = deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined);
+  const { modules, services } = createModules({ ds, env, now, jobs }, { limits: env, markerQueue: deps.markerQueue });
+  const { passport, sessionStore } = services.auth;
+  const database = { driver: String(ds.options.type), ping: () => ds.query('SELECT 1') };
 
   const api = Router();
   api.use(express.json({ limit: '2mb' }));
@@ -124,14 +103,14 @@ export function createApp(deps: AppDeps): Express {
     res.json({ ok: true });
   });
   api.get('/health/ready', async (_req, res) => {
-    const report = await readiness({ ds, redisUrl: env.REDIS_URL || undefined });
+    const report = await readiness({ database, redisUrl: env.REDIS_URL || undefined });
     res.status(report.ready ? 200 : 503).json(report);
   });
   api.use(
     session({
       name: 'seamrun.sid',
       secret: env.SESSION_SECRET,
-      store: new DatabaseSessionStore(createSessionRepository(ds)),
+      store: sessionStore,
       resave: false,
       saveUninitialized: false,
       // Rolling expiry, renewed once per RENEW_SESSION_EVERY_MS of use (below) rather than a new signed
@@ -152,25 +131,6 @@ export function createApp(deps: AppDeps): Express {
   api.use(csrfGuard);
   api.use(requirePasswordChanged);
 
-  // Sign-in attempts are counted where every web process sees them (the database, or Redis when set).
-  const throttle = createThrottleCounter({ repo: createSignInThrottleRepository(ds), redisUrl: env.REDIS_URL || undefined });
-  const throttleStore = (name: string) => new SharedThrottleStore(throttle, name);
-  api.use(
-    '/auth',
-    authRoutes(auth, passport, {
-      loginLimit: env.LOGIN_RATE_LIMIT,
-      ipFailureLimit: env.LOGIN_IP_FAILURE_LIMIT,
-      devices: createFloorDeviceRepository(ds),
-      throttleStore,
-    }),
-  );
-  api.use('/users', userRoutes(createUserService({ users, audit })));
-  api.use('/studio', studioRoutes(studios, audit));
-  api.use('/styles', styleRoutes(styles, audit));
-  api.use('/batches', batchRoutes(batches, styles, audit));
-  api.use('/audit', auditRoutes(audit));
-  const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined) };
-  const { modules, services } = createFeatureModules(ctx, { styles, batches, markerQueue: deps.markerQueue });
   const list: ApiModule[] = Object.values(modules);
   for (const m of list) m.mount(api);
   if (deps.control) {
@@ -182,8 +142,7 @@ export function createApp(deps: AppDeps): Express {
       },
       async stop() {
         for (const m of [...list].reverse()) await m.stop?.();
-        await ctx.jobs.stop();
-        await throttle.close();
+        await jobs.stop();
       },
     };
   }

@@ -1,6 +1,6 @@
 import type { Options, Store, IncrementResponse, ClientRateLimitInfo } from 'express-rate-limit';
 import type { Redis } from 'ioredis';
-import { redisConnection } from '../modules/markers/marker-queue-redis';
+import { redisConnection } from '../jobs/redis-connection';
 import type { SignInThrottleRepository } from '../modules/auth/sign-in-throttle.repository';
 
 /**

@@ -1,7 +1,7 @@
 import { deserialize, serialize } from 'node:v8';
 import { Queue, QueueEvents, Worker } from 'bullmq';
 import PQueue from 'p-queue';
-import { redisConnection } from '../modules/markers/marker-queue-redis';
+import { redisConnection } from './redis-connection';
 import { closeCpuPool, runCpuTask } from './cpu-pool';
 import { isCpuTaskName } from './cpu-tasks';
 import { isJobName, JOB_HANDLERS, type JobInput, type JobName, type JobOutput } from './handlers';

@@ -14,6 +14,9 @@ export interface ModuleContext {
   jobs: JobRunner;
 }
 
+/** What a route file may be handed besides its services: never the data source. */
+export type RouteContext = Omit<ModuleContext, 'ds'>;
+
 /**
  * An area of the API as createApp holds it. Each area's `create<Area>Module(ctx, deps)` builds its
  * repositories once, hands them to its services, and returns them as `services` beside this: its routes

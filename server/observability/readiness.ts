@@ -1,7 +1,7 @@
 import { Queue } from 'bullmq';
-import type { DataSource } from 'typeorm';
 import { JOB_QUEUE_NAME } from '../jobs/job-runner';
-import { MARKER_QUEUE_NAME, redisConnection } from '../modules/markers/marker-queue-redis';
+import { redisConnection } from '../jobs/redis-connection';
+import { MARKER_QUEUE_NAME } from '../modules/markers/marker-queue-redis';
 
 export interface ReadinessReport {
   ready: boolean;
@@ -23,14 +23,20 @@ function within<T>(p: Promise<T>, ms = TIMEOUT_MS): Promise<T> {
  * For a process manager or load balancer: is the database answering, and (with REDIS_URL) Redis and
  * the two job queues? Each check has its own time limit; any failure makes the whole answer not ready.
  */
-export async function readiness(deps: { ds: DataSource; redisUrl?: string }): Promise<ReadinessReport> {
+/** The database as the probe sees it: its driver's name and a trivial query (createApp builds it from the data source). */
+export interface DatabaseProbe {
+  driver: string;
+  ping(): Promise<unknown>;
+}
+
+export async function readiness(deps: { database: DatabaseProbe; redisUrl?: string }): Promise<ReadinessReport> {
   const t0 = performance.now();
   let database: ReadinessReport['database'];
   try {
-    await within(deps.ds.query('SELECT 1'));
-    database = { ok: true, driver: deps.ds.options.type, ms: Math.round(performance.now() - t0) };
+    await within(deps.database.ping());
+    database = { ok: true, driver: deps.database.driver, ms: Math.round(performance.now() - t0) };
   } catch (err) {
-    database = { ok: false, driver: deps.ds.options.type, ms: Math.round(performance.now() - t0), error: (err as Error).message };
+    database = { ok: false, driver: deps.database.driver, ms: Math.round(performance.now() - t0), error: (err as Error).message };
   }
   if (!deps.redisUrl) return { ready: database.ok, database, jobs: 'in-process' };
 

@@ -22,6 +22,11 @@ export const markerListQuery = z.object({
   batchId: z.coerce.number().int().positive().optional(),
 });
 
+/** GET /api/markers/:id: the drawing comes along unless `drawing=false` (a list polling progress leaves it out). */
+export const markerQuery = z.object({
+  drawing: z.unknown().optional().transform((v) => v !== 'false'),
+});
+
 /** One placed copy, drawn from its piece outline: mirror (x → −x) if mirrored, rotate, then translate. */
 export interface MarkerPlacementDto {
   pieceKey: string;

@@ -1,23 +1,12 @@
 import { Router } from 'express';
 import { actorOf, requirePermission } from '../../auth/require';
+import { presentAuditEntry } from './audit.presenter';
 import type { AuditRepository } from './audit.repository';
 
-export function auditRoutes(audit: AuditRepository) {
+export function auditRoutes(audit: Pick<AuditRepository, 'list'>) {
   const r = Router();
   r.get('/', requirePermission('audit:read'), async (req, res) => {
-    const rows = await audit.list(actorOf(req).studioId);
-    res.json({
-      entries: rows.map((e) => ({
-        id: e.id,
-        userName: e.userName,
-        action: e.action,
-        entity: e.entity,
-        entityId: e.entityId,
-        before: e.before,
-        after: e.after,
-        createdAt: new Date(e.createdAt).toISOString(),
-      })),
-    });
+    res.json({ entries: (await audit.list(actorOf(req).studioId)).map(presentAuditEntry) });
   });
   return r;
 }

@@ -1,10 +1,10 @@
-import type { DataSource } from 'typeorm';
 import type { ChangePasswordInput, CreateStudioInput } from '../../../shared/schemas/auth';
-import { StudioEntity, UserEntity } from '../../entities';
+import type { UserEntity } from '../../entities';
 import { hashSecret, verifySecret } from '../../auth/password';
 import type { Actor } from '../../auth/require';
 import { AppError, badRequest, conflict } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
+import type { StudioRepository } from '../studios/studio.repository';
 import type { SecretKind, UserRepository } from '../users/user.repository';
 import { normaliseEmail } from '../../../shared/schemas/auth';
 
@@ -13,13 +13,13 @@ export type AuthService = ReturnType<typeof createAuthService>;
 const LOCK_MS = 15 * 60 * 1000;
 
 export function createAuthService(deps: {
-  ds: DataSource;
   users: UserRepository;
+  studios: Pick<StudioRepository, 'open'>;
   audit: AuditRepository;
   lockAfter: number;
   now: () => Date;
 }) {
-  const { ds, users, audit, lockAfter, now } = deps;
+  const { users, studios, audit, lockAfter, now } = deps;
 
   /**
    * The actor of a session. A temporary password must be replaced before anything else, but only in a
@@ -116,24 +116,10 @@ export function createAuthService(deps: {
         throw conflict('Someone already signs in with that email', { email: 'Already in use' });
       }
       const passwordHash = await hashSecret(input.password);
-      const owner = await ds.transaction(async (m) => {
-        const studio = await m.getRepository(StudioEntity).save({
-          name: input.studioName,
-          currency: input.currency,
-          unitSystem: input.unitSystem,
-          workingDayHours: 8,
-        });
-        const user = await m.getRepository(UserEntity).save({
-          studioId: studio.id,
-          name: input.ownerName,
-          email: input.email,
-          role: 'owner',
-          passwordHash,
-          active: true,
-        });
-        await audit.record({ id: user.id, studioId: studio.id, name: user.name }, 'create', 'studio', studio.id, undefined, { name: studio.name }, m);
-        return user;
-      });
+      const owner = await studios.open(
+        { name: input.studioName, currency: input.currency, unitSystem: input.unitSystem, workingDayHours: 8 },
+        { name: input.ownerName, email: input.email, passwordHash },
+      );
       return toActor(owner);
     },
   };

@@ -5,7 +5,7 @@ import type { SupplierEntity, TrimEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
-import type { ModuleContext } from '../module';
+import type { RouteContext } from '../module';
 import type { CostingRepository } from './costing.repository';
 import { presentSettings, type CostingService } from './costing.service';
 import { sendDownload } from '../../middleware/download';
@@ -23,7 +23,7 @@ export const presentTrim = (t: TrimEntity, suppliers: SupplierEntity[]): TrimDto
 });
 
 /** GET /api/batches/:id/costing and /costing.xlsx — owner only (costs:read). */
-export function batchCostingRoutes(service: CostingService, ctx: ModuleContext) {
+export function batchCostingRoutes(service: CostingService, ctx: RouteContext) {
   const r = Router();
   r.get('/:id/costing', requirePermission('costs:read'), validate({ params: idParam, query: costingQuery }), async (req, res) => {
     const basis = (req.query as { labourBasis: LabourBasis }).labourBasis;
@@ -39,7 +39,7 @@ export function batchCostingRoutes(service: CostingService, ctx: ModuleContext) 
 }
 
 /** /api/costing: the bill of materials (trims) and costing settings of a style. */
-export function costingRoutes(repo: CostingRepository, ctx: ModuleContext) {
+export function costingRoutes(repo: CostingRepository, ctx: RouteContext) {
   const r = Router();
   const styleOr404 = async (studioId: number, styleId: number) => {
     if (!(await repo.styleExists(studioId, styleId))) throw notFound('Style');

@@ -22,8 +22,8 @@ export function createCuttingModule(ctx: ModuleContext, deps: CuttingModuleDeps)
   const cutting = createCuttingService({ ...deps, plans, fabrics, jobs: ctx.jobs, audit: ctx.audit, now: ctx.now });
   return {
     name: 'cutting',
-    /** `fabrics` answers the markers area's fabric lookups; `cutting.onMarkerDone` is the marker queue's completion hook. */
-    services: { cutting, fabrics },
+    /** `fabrics` answers the markers area's fabric lookups; `onMarkerDone` is the marker queue's completion hook. */
+    services: { fabrics, onMarkerDone: cutting.onMarkerDone },
     mount(api) {
       api.use('/fabrics', fabricRoutes(fabrics, ctx.audit, { maxUploadBytes: ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024, now: ctx.now }));
       const routes = cuttingRoutes(cutting);

@@ -3,7 +3,7 @@ import { idParam } from '../../../shared/schemas/common';
 import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
 import { sendDownload } from '../../middleware/download';
-import { validate } from '../../middleware/validate';
+import { validated } from '../../middleware/validate';
 import type { BatchDocument, CuttingService, LayDocument } from './cutting.service';
 
 const BATCH_DOCUMENTS: BatchDocument[] = ['marker-list.xlsx', 'marker-list.pdf', 'bundle-register.xlsx', 'bundle-tickets.pdf'];
@@ -13,41 +13,44 @@ const LAY_DOCUMENTS: LayDocument[] = ['cut-ticket.pdf', 'marker-list.xlsx', 'mar
 export function cuttingRoutes(service: CuttingService) {
   const batches = Router();
   const lays = Router();
+  const planner = requirePermission('cutplans:write');
+  const plannerOrCutter = requirePermission('cutplans:write', 'cutting:work');
+  const cutter = requirePermission('cutting:work');
 
-  batches.get('/:id/cut-plan', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
-    res.json({ cutPlan: await service.cutPlan(actorOf(req), Number(req.params.id)) });
-  });
-  batches.post('/:id/cut-plan', requirePermission('cutplans:write'), validate({ params: idParam, body: createCutPlanInput }), async (req, res) => {
-    res.status(201).json({ cutPlan: await service.planCut(actorOf(req), Number(req.params.id), req.body) });
-  });
+  batches.get('/:id/cut-plan', plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
+    res.json({ cutPlan: await service.cutPlan(actorOf(req), params.id) });
+  }));
+  batches.post('/:id/cut-plan', planner, ...validated({ params: idParam, body: createCutPlanInput }, async ({ params, body }, req, res) => {
+    res.status(201).json({ cutPlan: await service.planCut(actorOf(req), params.id, body) });
+  }));
   for (const doc of BATCH_DOCUMENTS) {
-    batches.get(`/:id/${doc}`, requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam }), async (req, res) => {
-      sendDownload(res, await service.batchDocument(actorOf(req).studioId, Number(req.params.id), doc));
-    });
+    batches.get(`/:id/${doc}`, plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
+      sendDownload(res, await service.batchDocument(actorOf(req).studioId, params.id, doc));
+    }));
   }
-  batches.get('/:id/bundles', requirePermission('bundles:read'), validate({ params: idParam }), async (req, res) => {
-    res.json({ bundles: await service.bundlesOfBatch(actorOf(req).studioId, Number(req.params.id)) });
-  });
+  batches.get('/:id/bundles', requirePermission('bundles:read'), ...validated({ params: idParam }, async ({ params }, req, res) => {
+    res.json({ bundles: await service.bundlesOfBatch(actorOf(req).studioId, params.id) });
+  }));
 
-  lays.get('/', requirePermission('cutting:work'), async (req, res) => {
+  lays.get('/', cutter, async (req, res) => {
     res.json({ lays: await service.liveLays(actorOf(req).studioId) });
   });
-  lays.get('/shortages', requirePermission('cutplans:write', 'cutting:work'), async (req, res) => {
+  lays.get('/shortages', plannerOrCutter, async (req, res) => {
     res.json({ shortages: await service.shortages(actorOf(req).studioId) });
   });
-  lays.get('/:id', requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
-    res.json(await service.lay(actorOf(req).studioId, Number(req.params.id)));
-  });
-  lays.put('/:id', requirePermission('cutting:work'), validate({ params: idParam, body: recordLayInput }), async (req, res) => {
-    res.json({ lay: await service.recordLay(actorOf(req), Number(req.params.id), req.body) });
-  });
-  lays.post('/:id/cut', requirePermission('cutting:work'), validate({ params: idParam, body: cutLayInput }), async (req, res) => {
-    res.json(await service.cutLay(actorOf(req), Number(req.params.id), req.body));
-  });
+  lays.get('/:id', cutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
+    res.json(await service.lay(actorOf(req).studioId, params.id));
+  }));
+  lays.put('/:id', cutter, ...validated({ params: idParam, body: recordLayInput }, async ({ params, body }, req, res) => {
+    res.json({ lay: await service.recordLay(actorOf(req), params.id, body) });
+  }));
+  lays.post('/:id/cut', cutter, ...validated({ params: idParam, body: cutLayInput }, async ({ params, body }, req, res) => {
+    res.json(await service.cutLay(actorOf(req), params.id, body));
+  }));
   for (const doc of LAY_DOCUMENTS) {
-    lays.get(`/:id/${doc}`, requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
-      sendDownload(res, await service.layDocument(actorOf(req).studioId, Number(req.params.id), doc));
-    });
+    lays.get(`/:id/${doc}`, cutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
+      sendDownload(res, await service.layDocument(actorOf(req).studioId, params.id, doc));
+    }));
   }
   return { batches, lays };
 }

@@ -10,7 +10,7 @@ import type { AuditRepository } from '../audit/audit.repository';
 import type { FabricRepository } from './fabric.repository';
 import { presentFabric, presentRoll } from './fabric.presenter';
 import { parsePackingList } from './packing-list';
-import { memoryUpload } from '../uploads/memory-upload';
+import { uploadFile } from '../../middleware/upload';
 import { LISTED_ERRORS } from '../uploads/table-limits';
 
 /**
@@ -30,7 +30,7 @@ function refuseImport(res: Response, problems: { key: string; row: number; colum
 
 export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, opts: { maxUploadBytes: number; now: () => Date }) {
   const r = Router();
-  const upload = memoryUpload({ fileSize: opts.maxUploadBytes, files: 1 });
+  const packingList = uploadFile({ maxBytes: opts.maxUploadBytes });
   const load = async (actor: Actor, id: number) => {
     const f = await fabrics.get(actor.studioId, id);
     if (!f) throw notFound('Fabric');
@@ -115,7 +115,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     res.status(201).json({ rolls: saved.map(presentRoll) });
   });
 
-  r.post('/:id/rolls/import', requirePermission('fabric:write'), validate({ params: idParam }), upload.single('file'), async (req, res) => {
+  r.post('/:id/rolls/import', requirePermission('fabric:write'), validate({ params: idParam }), packingList, async (req, res) => {
     const actor = actorOf(req);
     const f = await load(actor, Number(req.params.id));
     if (!req.file) throw badRequest('file: attach the packing list (CSV or XLSX)', { file: 'Attach the packing list' });

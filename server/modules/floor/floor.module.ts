@@ -11,7 +11,7 @@ export function createFloorModule(ctx: ModuleContext) {
   const progress = createFloorProgressService({ repo, floor, now: ctx.now });
   return {
     name: 'floor',
-    services: { floor, progress },
+    services: { progress },
     mount(api) {
       api.use('/floor', floorRoutes(floor, progress));
     },

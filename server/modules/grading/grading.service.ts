@@ -17,6 +17,7 @@ import { readTable, rowsToCsv, rowsToXlsx, type UploadedTable } from './table-io
 import { LISTED_ERRORS } from '../uploads/table-limits';
 import type { PatternAcceptInput, PatternImportInput } from '../../../shared/schemas/grading';
 import { acceptedPieces, previewPatternFile } from './pattern-import';
+import type { Download } from '../../middleware/download';
 
 export interface GradingServiceDeps {
   styles: StyleRepository;
@@ -27,12 +28,6 @@ export interface GradingServiceDeps {
 
 export type GradingService = ReturnType<typeof createGradingService>;
 
-/** A file to send: bytes, content type and file name. */
-export interface Download {
-  body: Buffer | string;
-  type: string;
-  filename: string;
-}
 
 /** The first problems of a table as field errors; the message gives the total. */
 const tableErrorFields = (errors: TableError[]) =>

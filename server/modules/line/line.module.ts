@@ -20,7 +20,7 @@ export function createLineModule(ctx: ModuleContext, deps: { styles: StyleReposi
   });
   return {
     name: 'line',
-    services: { line },
+    services: {},
     mount(api) {
       api.use('/styles', operationRoutes(line));
       api.use('/line', linePlanRoutes(line));

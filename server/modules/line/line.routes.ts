@@ -1,16 +1,13 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
 import { copyOperationsInput, linePlanQuery, putOperationsInput, type LinePlanQuery } from '../../../shared/schemas/line';
 import { actorOf, requirePermission } from '../../auth/require';
-import { badRequest } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { LineService } from './line.service';
 import { sendDownload } from '../../middleware/download';
-import { memoryUpload } from '../uploads/memory-upload';
+import { uploadFile } from '../../middleware/upload';
 
-const upload = memoryUpload({ fileSize: 1024 * 1024, files: 1 });
-const singleFile: RequestHandler = (req, res, next) =>
-  upload.single('file')(req, res, (err: unknown) => (err ? next(badRequest(`file: ${(err as Error).message}`, { file: (err as Error).message })) : next()));
+const singleFile = uploadFile({ maxBytes: 1024 * 1024, tooLarge: 'field' });
 
 /** /api/styles/:id/operations… (the table) — mounted on /styles. */
 export function operationRoutes(service: LineService) {

@@ -5,7 +5,7 @@ import type { MailMessageEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
 import { notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
-import type { ModuleContext } from '../module';
+import type { RouteContext } from '../module';
 import type { MailRepository } from './mail.repository';
 import type { MailService } from './mail.service';
 
@@ -21,7 +21,7 @@ export const presentMail = (m: MailMessageEntity): MailMessageDto => ({
 });
 
 /** /api/mail: the outbox (suppliers:manage) and staff invitations (people:manage). */
-export function mailRoutes(repo: MailRepository, mail: MailService, ctx: ModuleContext) {
+export function mailRoutes(repo: MailRepository, mail: MailService, ctx: RouteContext) {
   const r = Router();
   r.get('/outbox', requirePermission('suppliers:manage'), async (req, res) => {
     res.json({ messages: (await repo.list(actorOf(req).studioId)).map(presentMail) });

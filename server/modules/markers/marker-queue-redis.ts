@@ -1,5 +1,5 @@
 import { Queue, QueueEvents, Worker, type Job } from 'bullmq';
-import { Redis } from 'ioredis';
+import { redisConnection } from '../../jobs/redis-connection';
 import type { NestingRunHandle } from '../../workers/nesting-runner';
 import type { MarkerJobInput } from './marker-input';
 import { executeMarkerJob, type LiveProgress } from './marker-job';
@@ -19,7 +19,7 @@ interface MarkerJobData {
   job: MarkerJobInput;
 }
 
-export const redisConnection = (url: string) => new Redis(url, { maxRetriesPerRequest: null });
+export { redisConnection };
 
 /**
  * The marker queue on Redis (BullMQ): the API process only enqueues, reads progress events and asks for

@@ -47,7 +47,7 @@ export function createMarkersModule(ctx: ModuleContext, deps: MarkersModuleDeps)
   return {
     name: 'markers',
     /** `queue()` is the running queue (tests wait on its `idle()`); `repository` answers the cutting area's marker lengths. */
-    services: { markers: service, queue: getQueue, repository: markers },
+    services: { queue: getQueue, repository: markers },
     mount(api) {
       api.use('/markers', markerRoutes(service));
     },

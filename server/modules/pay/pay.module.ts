@@ -44,7 +44,7 @@ export function createPayModule(ctx: ModuleContext, deps: { floor: FloorProgress
   return {
     name: 'pay',
     /** `fake` is the local payments stand-in (null with a live key); tests tell it to refuse an account. */
-    services: { pay, fake: secretKey ? null : ensureFake },
+    services: { fake: secretKey ? null : ensureFake },
     mount(api) {
       api.use('/pay', payRoutes(pay, mode, ctx.jobs));
     },

@@ -15,7 +15,7 @@ export function createPurchasingModule(ctx: ModuleContext, deps: { costing: Cost
   const purchasing = createPurchasingService({ repo, costing: () => deps.costing, mail: () => deps.mail, jobs: ctx.jobs, now: ctx.now });
   return {
     name: 'purchasing',
-    services: { purchasing },
+    services: {},
     mount(api) {
       api.use('/purchasing', purchasingRoutes(repo, purchasing, ctx));
     },

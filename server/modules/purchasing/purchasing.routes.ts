@@ -6,7 +6,7 @@ import type { PurchaseOrderEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
 import { conflict, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
-import type { ModuleContext } from '../module';
+import type { RouteContext } from '../module';
 import { poNumber, presentOrder, presentSupplier } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 import type { PurchasingService } from './purchasing.service';
@@ -15,7 +15,7 @@ import { sendDownload } from '../../middleware/download';
 const ordersQuery = z.object({ batchId: z.coerce.number().int().positive().optional() });
 
 /** /api/purchasing: suppliers, a batch's needs, purchase orders (suppliers:manage, owner only). */
-export function purchasingRoutes(repo: PurchasingRepository, service: PurchasingService, ctx: ModuleContext) {
+export function purchasingRoutes(repo: PurchasingRepository, service: PurchasingService, ctx: RouteContext) {
   const r = Router();
   r.use(requirePermission('suppliers:manage'));
 

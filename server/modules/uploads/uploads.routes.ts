@@ -1,18 +1,18 @@
 import { randomUUID } from 'node:crypto';
 import { mkdir, readFile, unlink, writeFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
 import { uploadFields, uploadListQuery, type UploadDto, type UploadKind } from '../../../shared/schemas/uploads';
 import type { UploadEntity } from '../../entities';
 import { actorOf, requirePermission } from '../../auth/require';
-import { AppError, badRequest, notFound } from '../../errors';
+import { badRequest, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
-import type { ModuleContext } from '../module';
+import type { RouteContext } from '../module';
 import { ACCEPTED, sniffUpload, svgProblems } from './upload-sniff';
 import type { UploadsRepository } from './uploads.repository';
 import { sendDownload } from '../../middleware/download';
-import { memoryUpload } from './memory-upload';
+import { uploadFile } from '../../middleware/upload';
 
 export const presentUpload = (u: UploadEntity): UploadDto => ({
   id: u.id,
@@ -32,24 +32,16 @@ export function uploadsDir(databasePath: string | undefined): string {
   return join(dirname(resolve(db)), 'uploads');
 }
 
-const megabytes = (n: number) => (n < 1024 * 1024 ? `${Math.round(n / 1024)} KB` : `${(n / (1024 * 1024)).toFixed(1)} MB`);
 /** A display name only: no folders, no control characters, at most 200 characters. */
 // eslint-disable-next-line no-control-regex
 const safeName = (name: string) => basename(name.replace(/\\/g, '/')).replace(/[\x00-\x1F\x7F]/g, '').slice(0, 200) || 'file';
 
 /** /api/uploads: sketches, photos, swatches, packing lists, measurement files (owner only). */
-export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
+export function uploadsRoutes(repo: UploadsRepository, ctx: RouteContext) {
   const r = Router();
   const maxBytes = ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024;
   const dir = uploadsDir(ctx.env.DATABASE_PATH);
-  const single = memoryUpload({ fileSize: maxBytes, files: 1, fields: 10 }).single('file');
-  const receive: RequestHandler = (req, res, next) =>
-    single(req, res, (err: unknown) => {
-      const code = (err as { code?: string } | undefined)?.code;
-      if (code === 'LIMIT_FILE_SIZE') return next(new AppError(413, 'too_large', `The file is larger than the ${megabytes(maxBytes)} limit; make it smaller and try again`));
-      if (err) return next(badRequest(`file: ${(err as Error).message}`, { file: (err as Error).message }));
-      next();
-    });
+  const receive = uploadFile({ maxBytes, maxFields: 10 });
   const owner = requirePermission('styles:write', 'suppliers:manage');
 
   r.post('/', owner, receive, validate({ body: uploadFields }), async (req, res) => {
@@ -83,9 +75,7 @@ export function uploadsRoutes(repo: UploadsRepository, ctx: ModuleContext) {
     if (!u) throw notFound('Upload');
     const bytes = await readFile(join(dir, basename(u.storedName))).catch(() => null);
     if (!bytes) throw notFound('Upload file');
-    res.setHeader('X-Content-Type-Options', 'nosniff');
-    res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; sandbox");
-    sendDownload(res, { body: bytes, type: u.mimeType, filename: u.originalName, inline: u.mimeType.startsWith('image/') });
+    sendDownload(res, { body: bytes, type: u.mimeType, filename: u.originalName, inline: u.mimeType.startsWith('image/'), untrusted: true });
   });
   r.delete('/:id', owner, validate({ params: idParam }), async (req, res) => {
     const actor = actorOf(req);

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
 import { createPersonInput, updatePersonInput } from '../../../shared/schemas/people';
 import { actorOf, requirePermission } from '../../auth/require';
-import { validate } from '../../middleware/validate';
+import { validate, validated } from '../../middleware/validate';
 import { presentPerson } from './user.presenter';
 import type { UserService } from './user.service';
 
@@ -15,9 +15,8 @@ export function userRoutes(service: UserService) {
   r.post('/', validate({ body: createPersonInput }), async (req, res) => {
     res.status(201).json({ user: presentPerson(await service.create(actorOf(req), req.body)) });
   });
-  r.patch('/:id', validate({ params: idParam, body: updatePersonInput }), async (req, res) => {
-    const id = (req.params as unknown as { id: number }).id;
-    res.json({ user: presentPerson(await service.update(actorOf(req), id, req.body)) });
-  });
+  r.patch('/:id', ...validated({ params: idParam, body: updatePersonInput }, async ({ params, body }, req, res) => {
+    res.json({ user: presentPerson(await service.update(actorOf(req), params.id, body)) });
+  }));
   return r;
 }

@@ -1,0 +1,11 @@
+import type { StudioDto } from '../../../shared/schemas/studio';
+import type { StudioEntity } from '../../entities';
+
+export const presentStudio = (s: StudioEntity): StudioDto => ({
+  id: s.id,
+  name: s.name,
+  currency: s.currency,
+  unitSystem: s.unitSystem,
+  workingDayHours: s.workingDayHours,
+  machines: s.machines ?? {},
+});
