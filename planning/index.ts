@@ -6,3 +6,4 @@ export * from './costing';
 export * from './bundles';
 export * from './floor';
 export * from './nesting';
+export * from './time-study';

@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import type { OperationTimeStudy } from '../../shared/schemas/line';
 
 @Entity('operations')
 @Index(['studioId', 'styleId', 'seq'])
@@ -38,4 +39,8 @@ export class OperationEntity {
 
   @Column({ type: 'integer', nullable: true })
   pieceRateMinor: number | null;
+
+  /** The time-study sheet that last set `sam` (elements, observations, allowances, result); null when typed in. */
+  @Column({ type: 'simple-json', nullable: true })
+  timeStudy: OperationTimeStudy | null;
 }

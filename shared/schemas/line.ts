@@ -19,6 +19,49 @@ export const operationInput = z.object({
 });
 export type OperationInput = z.input<typeof operationInput>;
 
+/** Params of /styles/:id/operations/:operationId/…. */
+export const operationParams = z.object({ id: z.coerce.number().int().positive(), operationId: z.coerce.number().int().positive() });
+
+/**
+ * PUT /styles/:id/operations/:operationId/time-study: a time-study sheet (ILO method, planning/time-study). Each
+ * element lists its timed cycles (observed seconds and the pace rated on the 0–100 scale, 100 = standard) and how
+ * often it happens per garment; allowances are percentages of basic time.
+ */
+export const timeStudyInput = z.object({
+  elements: z
+    .array(
+      z.object({
+        name: z.string().trim().min(1, 'Name the element').max(80, 'At most 80 characters'),
+        observations: z
+          .array(
+            z.object({
+              seconds: z.number({ error: 'Give seconds' }).finite().positive('Must be more than 0').max(3600, 'At most 3600 seconds'),
+              rating: z.number({ error: 'Give a rating' }).finite().positive('Must be more than 0').max(200, 'At most 200'),
+            }),
+          )
+          .min(1, 'Time at least one cycle')
+          .max(100, 'At most 100 cycles'),
+        frequency: z.number().finite().positive('Must be more than 0').max(100, 'At most 100 a garment').default(1),
+      }),
+    )
+    .min(1, 'Add at least one element')
+    .max(40, 'At most 40 elements'),
+  relaxationPercent: z.number({ error: 'Give a percentage' }).finite().min(0, 'Cannot be negative').max(100, 'At most 100 %'),
+  contingencyPercent: z.number().finite().min(0, 'Cannot be negative').max(20, 'At most 20 %').default(0),
+});
+export type TimeStudyInput = z.input<typeof timeStudyInput>;
+
+/** The sheet as stored on the operation, with its figures (minutes per garment). */
+export interface OperationTimeStudy {
+  elements: { name: string; observations: { seconds: number; rating: number }[]; frequency: number; basicMinutes: number }[];
+  relaxationPercent: number;
+  contingencyPercent: number;
+  basicMinutes: number;
+  standardMinutes: number;
+  studiedAt: string;
+  studiedBy: string;
+}
+
 /** PUT /styles/:id/operations: the whole table; codes unique, predecessors must name rows and form no cycle. */
 export const putOperationsInput = z
   .object({ operations: z.array(operationInput).max(200, 'At most 200 operations') })
@@ -77,6 +120,8 @@ export interface OperationDto {
   predecessors: string[];
   /** Present only for roles that may see pay or costs. */
   pieceRateMinor?: number | null;
+  /** The time study that set `sam`, when one did. */
+  timeStudy?: OperationTimeStudy | null;
 }
 
 export interface StationDto {

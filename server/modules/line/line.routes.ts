@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { copyOperationsInput, linePlanQuery, putOperationsInput, type LinePlanQuery } from '../../../shared/schemas/line';
+import { copyOperationsInput, linePlanQuery, operationParams, putOperationsInput, timeStudyInput, type LinePlanQuery } from '../../../shared/schemas/line';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest } from '../../errors';
 import { validate } from '../../middleware/validate';
@@ -22,6 +22,11 @@ export function operationRoutes(service: LineService) {
   });
   r.put('/:id/operations', plan, validate({ params: idParam, body: putOperationsInput }), async (req, res) => {
     res.json({ operations: await service.put(actorOf(req), id(req.params), req.body.operations) });
+  });
+  // Owner only: 'line:plan' is the owner's (shared/auth/permissions.ts).
+  r.put('/:id/operations/:operationId/time-study', plan, validate({ params: operationParams, body: timeStudyInput }), async (req, res) => {
+    const p = req.params as unknown as { id: number; operationId: number };
+    res.json({ operation: await service.timeStudy(actorOf(req), Number(p.id), Number(p.operationId), req.body) });
   });
   r.post('/:id/operations/copy', plan, validate({ params: idParam, body: copyOperationsInput }), async (req, res) => {
     res.json({ operations: await service.copy(actorOf(req), id(req.params), req.body.fromStyleId) });

@@ -1,13 +1,13 @@
 import { format } from 'date-fns';
 import { can } from '../../../shared/auth/permissions';
-import { putOperationsInput, type LinePlanDto, type LinePlanQuery, type OperationDto, type OperationInput } from '../../../shared/schemas/line';
+import { putOperationsInput, type LinePlanDto, type OperationTimeStudy, type TimeStudyInput, type LinePlanQuery, type OperationDto, type OperationInput } from '../../../shared/schemas/line';
 import type { OperationEntity } from '../../entities';
 import type { Actor } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import type { StaffLineInput } from '@planning';
+import { studyStandardMinutes, type StaffLineInput } from '@planning';
 import { planLine, staffingProblem, type CrewPerson, type StaffCount, type StaffingOutcome } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
@@ -33,7 +33,7 @@ export const maySeeRates = (actor: Pick<Actor, 'role'>) => can(actor.role, 'pay:
 
 /** An operation row as the client sees it; pieceRateMinor left out unless `withRates`. */
 export function presentOperation(o: OperationEntity, withRates: boolean): OperationDto {
-  const dto: OperationDto = { id: o.id, seq: o.seq, code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors };
+  const dto: OperationDto = { id: o.id, seq: o.seq, code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors, timeStudy: o.timeStudy ?? null };
   if (withRates) dto.pieceRateMinor = o.pieceRateMinor;
   return dto;
 }
@@ -101,6 +101,41 @@ export function createLineService({ styles, batches, operations, studio, staff, 
     async put(actor: Actor, styleId: number, rows: OperationInput[]) {
       await styleOf(actor, styleId);
       return save(actor, styleId, rows, 'update_operations');
+    },
+    /**
+     * Set an operation's standard minutes from a time-study sheet (planning/time-study, ILO method) and keep the
+     * sheet on the operation. Standard minutes are stored to 0.0001 min.
+     */
+    async timeStudy(actor: Actor, styleId: number, operationId: number, input: TimeStudyInput) {
+      await styleOf(actor, styleId);
+      const op = (await operations.list(actor.studioId, styleId)).find((o) => o.id === operationId);
+      if (!op) throw notFound('Operation');
+      const elements = input.elements.map((e) => ({ name: e.name, frequency: e.frequency ?? 1, observations: e.observations }));
+      let result;
+      try {
+        result = studyStandardMinutes({
+          elements: elements.map((e) => ({ name: e.name, frequency: e.frequency, observations: e.observations.map((o) => ({ minutes: o.seconds / 60, rating: o.rating })) })),
+          relaxationPercent: input.relaxationPercent,
+          contingencyPercent: input.contingencyPercent ?? 0,
+        });
+      } catch (e) {
+        if (e instanceof RangeError) throw badRequest(`elements: ${e.message}`, { elements: e.message });
+        throw e;
+      }
+      const sam = Math.round(result.standardMinutes * 10_000) / 10_000;
+      if (!(sam > 0) || sam > 600) throw badRequest('elements: the study gives standard minutes outside 0–600', { elements: 'Standard minutes must be above 0 and at most 600' });
+      const study: OperationTimeStudy = {
+        elements: elements.map((e, i) => ({ ...e, basicMinutes: result.elements[i].basicMinutes })),
+        relaxationPercent: input.relaxationPercent,
+        contingencyPercent: input.contingencyPercent ?? 0,
+        basicMinutes: result.basicMinutes,
+        standardMinutes: sam,
+        studiedAt: now().toISOString(),
+        studiedBy: actor.name,
+      };
+      const saved = await operations.setStudy(actor.studioId, styleId, op.id, sam, study);
+      await audit.record(actor, 'time_study', 'operation', op.id, { sam: op.sam }, { sam, study });
+      return presentOperation(saved, maySeeRates(actor));
     },
     async copy(actor: Actor, styleId: number, fromStyleId: number) {
       await styleOf(actor, styleId);

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { LinePlanDto, OperationDto } from '@shared/schemas/line';
+import type { LinePlanDto, OperationDto, TimeStudyInput } from '@shared/schemas/line';
 import { api, ApiError } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -78,5 +78,12 @@ export const useCopyOperations = (styleId: number) =>
 export const useSaveOperations = (styleId: number) =>
   useMutation({
     mutationFn: async (operations: Omit<OperationDto, 'id' | 'seq'>[]) => (await api.put<{ operations: OperationDto[] }>(`/styles/${styleId}/operations`, { operations })).operations,
+    onSuccess: refresh,
+  });
+
+/** Owner: set an operation's standard minutes from a time-study sheet. */
+export const useTimeStudy = (styleId: number, operationId: number) =>
+  useMutation({
+    mutationFn: async (sheet: TimeStudyInput) => (await api.put<{ operation: OperationDto }>(`/styles/${styleId}/operations/${operationId}/time-study`, sheet)).operation,
     onSuccess: refresh,
   });
