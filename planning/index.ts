@@ -7,3 +7,4 @@ export * from './bundles';
 export * from './floor';
 export * from './nesting';
 export * from './time-study';
+export * from './pay';

@@ -7,7 +7,10 @@ export const MACHINE_TYPES = ['cutting', 'lockstitch', 'overlock', 'coverstitch'
 
 const code = z.string().trim().min(1, 'Code is required').max(12, 'At most 12 characters').regex(/^[A-Za-z0-9-_]+$/, 'Letters, digits, - and _ only');
 
-/** One row of the operations table. pieceRateMinor: integer minor units (pay data), optional. */
+/**
+ * One row of the operations table. pieceRateMinor: minor units per piece (pay data), optional, exact to 6 decimals
+ * (0.125 is a rate of an eighth of a minor unit).
+ */
 export const operationInput = z.object({
   code,
   name: z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters'),
@@ -15,7 +18,13 @@ export const operationInput = z.object({
   machineType: z.string().trim().min(1, 'Machine type is required').max(24, 'At most 24 characters'),
   sam: z.number({ error: 'Give minutes' }).finite().positive('Must be more than 0').max(600, 'At most 600 minutes'),
   predecessors: z.array(code).default([]),
-  pieceRateMinor: z.number().int('Whole minor units only').min(0, 'Cannot be negative').max(100_000_000).nullable().optional(),
+  pieceRateMinor: z
+    .number()
+    .min(0, 'Cannot be negative')
+    .max(100_000_000)
+    .refine((v) => /^\d+(\.\d{1,6})?$/.test(String(v)), 'At most 6 decimals of a minor unit')
+    .nullable()
+    .optional(),
 });
 export type OperationInput = z.input<typeof operationInput>;
 

@@ -5,7 +5,7 @@ import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
-import { logEarnedMinutes, logPayMinor } from './floor-math';
+import { logEarnedMinutes, logPayMinor, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
 import { batchCode } from '../batches/batch.routes';
@@ -231,7 +231,8 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
           userId: actor.id,
           pieces: bundle.pieces,
           earnedMinutes: logEarnedMinutes(bundle.pieces, op.sam, attempt),
-          payMinor: logPayMinor(bundle.pieces, op.pieceRateMinor, attempt),
+          payMinor: logPayMinor(bundle.pieces, operationRate(op), attempt),
+          pieceRate: attempt > 0 ? '' : operationRate(op),
           idempotencyKey: input.idempotencyKey,
           outcome: input.outcome ?? '',
           defect: input.outcome === 'fail' ? (input.defect ?? '') : '',

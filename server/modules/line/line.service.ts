@@ -10,6 +10,7 @@ import type { StyleRepository } from '../styles/style.repository';
 import { studyStandardMinutes, type StaffLineInput } from '@planning';
 import { planLine, staffingProblem, type CrewPerson, type StaffCount, type StaffingOutcome } from './line-plan';
 import type { OperationRepository } from './operation.repository';
+import { exactRateOf, operationRate } from '../floor/floor-math';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 import { LISTED_ERRORS } from '../uploads/table-limits';
 
@@ -34,11 +35,14 @@ export const maySeeRates = (actor: Pick<Actor, 'role'>) => can(actor.role, 'pay:
 /** An operation row as the client sees it; pieceRateMinor left out unless `withRates`. */
 export function presentOperation(o: OperationEntity, withRates: boolean): OperationDto {
   const dto: OperationDto = { id: o.id, seq: o.seq, code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors, timeStudy: o.timeStudy ?? null };
-  if (withRates) dto.pieceRateMinor = o.pieceRateMinor;
+  if (withRates) dto.pieceRateMinor = exactRateNumber(o);
   return dto;
 }
 
-const toInput = (o: OperationEntity): OperationInput => ({ code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors, pieceRateMinor: o.pieceRateMinor });
+/** The exact rate as a number for the client (0.125 is exact in the 6 decimals allowed); null without one. */
+const exactRateNumber = (o: Pick<OperationEntity, 'pieceRate' | 'pieceRateMinor'>) => (operationRate(o) === '' ? null : Number(operationRate(o)));
+
+const toInput = (o: OperationEntity): OperationInput => ({ code: o.code, name: o.name, section: o.section, machineType: o.machineType, sam: o.sam, predecessors: o.predecessors, pieceRateMinor: exactRateNumber(o) });
 
 /** Codes on a precedence cycle, found by depth-first search (empty when the table is a proper order). */
 function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] {
@@ -84,11 +88,12 @@ export function createLineService({ styles, batches, operations, studio, staff, 
     const before = (await operations.list(actor.studioId, styleId)).map(toInput);
     const withRates = maySeeRates(actor);
     const prior = new Map(before.map((b) => [b.code, b.pieceRateMinor ?? null]));
-    const saved = await operations.replace(actor.studioId, styleId, parsed.data.operations.map((o) => ({
-      ...o,
+    const saved = await operations.replace(actor.studioId, styleId, parsed.data.operations.map((o) => {
       // A role that cannot see rates cannot change them either: keep what was stored.
-      pieceRateMinor: withRates ? (o.pieceRateMinor ?? null) : (prior.get(o.code) ?? null),
-    })));
+      const rate = withRates ? (o.pieceRateMinor ?? null) : (prior.get(o.code) ?? null);
+      const exact = rate == null ? null : exactRateOf(rate);
+      return { ...o, pieceRateMinor: exact?.pieceRateMinor ?? null, pieceRate: exact?.pieceRate ?? null };
+    }));
     await audit.record(actor, action, 'operations', styleId, before, saved.map(toInput));
     return saved.map((o) => presentOperation(o, withRates));
   }

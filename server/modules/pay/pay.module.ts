@@ -41,8 +41,10 @@ export const payModule: ApiModule = {
     let client: PaymentsClient | null = null;
     const payments = async () => (client ??= createPaymentsClient({ secretKey, fakePort: async () => (await ensureFake(ctx)).port }));
     if (!secretKey) ctx.services.set(PAYMENTS_FAKE_SERVICE, () => ensureFake(ctx));
+    const repo = createPayRepository(ctx.ds);
     const pay = createPayService({
-      repo: createPayRepository(ctx.ds),
+      repo,
+      calendar: (studioId) => repo.calendar(studioId),
       audit: ctx.audit,
       floor: () => ctx.services.get(FLOOR_PROGRESS_SERVICE) as FloorProgressService,
       payments,

@@ -10,6 +10,7 @@ import { formatMoney } from '@/lib/format';
 import { operationQueries, useCopyOperations, useImportOperations } from '../api/line-queries';
 import { LinePlanPanel } from './line-plan-panel';
 import { OperationsEditor } from './operations-editor';
+import { rateToMajorText } from './rate-text';
 import { TimeStudyForm } from './time-study-form';
 
 const batchList = { queryKey: ['batches', 'list'] as const, queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches };
@@ -87,7 +88,7 @@ function OperationsCard({ styleId }: { styleId: number }) {
                 <tr key={r.id} className="border-b border-calico-100">
                   <td className="py-1 font-mono">{r.code}</td><td>{r.name}</td><td>{r.machineType}</td>
                   <td className="text-right tabular-nums">{r.sam.toFixed(r.timeStudy ? 3 : 1)}</td><td className="pl-4 font-mono text-xs">{r.predecessors.join(' ')}</td>
-                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : formatMoney(r.pieceRateMinor, currency)}</td> : null}
+                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : Number.isInteger(r.pieceRateMinor) ? formatMoney(r.pieceRateMinor, currency) : `${currency} ${rateToMajorText(r.pieceRateMinor, currency)}`}</td> : null}
                   <td className="pl-3 text-right">
                     <button type="button" className="text-sm underline" aria-label={`Time study, ${r.code}`} onClick={() => setStudying(studying === r.id ? null : r.id)}>
                       {r.timeStudy ? 'Time study ✓' : 'Time study'}
