@@ -3,7 +3,7 @@ import { createBatchRepository } from '../batches/batch.repository';
 import { createStyleRepository } from '../styles/style.repository';
 import { linePlanRoutes, operationRoutes } from './line.routes';
 import { createLineService } from './line.service';
-import { createCrewLookup, createOperationRepository, createStaffLookup, createStudioLookup } from './operation.repository';
+import { createCrewLookup, createOperationRepository, createPresentLookup, createStaffLookup, createStudioLookup } from './operation.repository';
 
 /** The line area: operations per style, line balancing, capacity and the batch schedule. */
 export const lineModule: ApiModule = {
@@ -16,6 +16,7 @@ export const lineModule: ApiModule = {
       studio: createStudioLookup(ctx.ds),
       staff: createStaffLookup(ctx.ds),
       crew: createCrewLookup(ctx.ds),
+      present: createPresentLookup(ctx.ds),
       solveStaffing: (input) => ctx.jobs.run('line-staffing', input),
       audit: ctx.audit,
       now: ctx.now,

@@ -23,6 +23,8 @@ export interface LineServiceDeps {
   staff: (studioId: number) => Promise<StaffCount>;
   /** Active people with their skills (People page). */
   crew: (studioId: number) => Promise<CrewPerson[]>;
+  /** People recorded in on a day (attendance); null when no attendance was recorded that day. */
+  present?: (studioId: number, day: string) => Promise<Set<number> | null>;
   /** Runs the shared-operations solve (the `line-staffing` job, server/jobs/handlers.ts). */
   solveStaffing: (input: StaffLineInput) => Promise<StaffingOutcome>;
   audit: AuditRepository;
@@ -66,7 +68,7 @@ function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] 
 export type LineService = ReturnType<typeof createLineService>;
 
 /** Operations tables per style and the line plan per batch. */
-export function createLineService({ styles, batches, operations, studio, staff, crew, solveStaffing, audit, now }: LineServiceDeps) {
+export function createLineService({ styles, batches, operations, studio, staff, crew, present, solveStaffing, audit, now }: LineServiceDeps) {
   async function styleOf(actor: Actor, styleId: number) {
     const s = await styles.get(actor.studioId, styleId);
     if (!s) throw notFound('Style');
@@ -174,17 +176,30 @@ export function createLineService({ styles, batches, operations, studio, staff, 
       const ops = await operations.list(actor.studioId, batch.styleId);
       const st = await studio(actor.studioId);
       const quantity = Object.values(batch.quantities).reduce((a, b) => a + b, 0);
-      const people = await crew(actor.studioId);
+      // People present: those recorded in today when attendance was taken, else everyone active on the People page.
+      const today = format(now(), 'yyyy-MM-dd');
+      const everyone = await crew(actor.studioId);
+      const inToday = present ? await present(actor.studioId, today) : null;
+      const people = inToday ? everyone.filter((p) => inToday.has(p.id)) : everyone;
+      const activeStaff = await staff(actor.studioId);
+      const count = (role: string) => people.filter((p) => p.role === role).length;
+      const staffNow = inToday ? { sewing: count('machinist'), cutting: count('cutter'), finishing: count('finisher') } : activeStaff;
       const minutesPerDay = Math.round((st?.workingDayHours ?? 8) * 60);
       const machines = st?.machines ?? {};
       // People mode shares the operations among the people present: the solve runs as a job.
       const asked = query.mode === 'people' ? staffingProblem({ operations: ops, crew: people, machines, minutesPerDay, query }) : null;
       const staffing = asked && 'problem' in asked ? await solveStaffing(asked.problem) : null;
       try {
-        return planLine({
-          batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today: format(now(), 'yyyy-MM-dd'),
-          minutesPerDay, operations: ops, query, staff: await staff(actor.studioId), crew: people, machines, staffing,
+        const plan = planLine({
+          batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today,
+          minutesPerDay, operations: ops, query, staff: staffNow, crew: people, machines, staffing,
         });
+        plan.assumptions.unshift(
+          inToday
+            ? `People present from today's attendance (${today}): ${people.length} of ${everyone.length} active.`
+            : `No attendance recorded today (${today}): everyone active on the People page is taken as present.`,
+        );
+        return plan;
       } catch (e) {
         if (e instanceof RangeError) throw badRequest(`plan: ${e.message}`, { plan: e.message });
         throw e;

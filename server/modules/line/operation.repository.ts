@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { defaultSkills } from '../../../shared/schemas/people';
-import { OperationEntity, StudioEntity, UserEntity } from '../../entities';
+import { AttendanceEntity, OperationEntity, StudioEntity, UserEntity } from '../../entities';
 
 export type OperationRepository = ReturnType<typeof createOperationRepository>;
 type OperationRow = Omit<OperationEntity, 'id' | 'studioId' | 'styleId' | 'seq' | 'timeStudy'>;
@@ -62,5 +62,14 @@ export function createCrewLookup(ds: DataSource) {
   return async (studioId: number) => {
     const active = await users.find({ where: { studioId, active: true }, select: { id: true, name: true, role: true, skills: true }, order: { name: 'ASC', id: 'ASC' } });
     return active.map((u) => ({ id: u.id, name: u.name, role: u.role, skills: u.skills ?? defaultSkills(u.role), skillsSet: u.skills != null }));
+  };
+}
+
+/** Ids of the people recorded in (minutes above 0) on a day; null when no attendance was recorded that day. */
+export function createPresentLookup(ds: DataSource) {
+  const repo = ds.getRepository(AttendanceEntity);
+  return async (studioId: number, day: string): Promise<Set<number> | null> => {
+    const rows = await repo.find({ where: { studioId, day } });
+    return rows.length ? new Set(rows.filter((r) => r.minutes > 0).map((r) => r.userId)) : null;
   };
 }
