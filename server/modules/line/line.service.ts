@@ -194,7 +194,7 @@ export function createLineService({ styles, batches, operations, studio, staff, 
           batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today,
           minutesPerDay, operations: ops, query, staff: staffNow, crew: people, machines, staffing,
         });
-        plan.assumptions.unshift(
+        plan.assumptions.push(
           inToday
             ? `People present from today's attendance (${today}): ${people.length} of ${everyone.length} active.`
             : `No attendance recorded today (${today}): everyone active on the People page is taken as present.`,
