@@ -28,6 +28,48 @@ export const operationInput = z.object({
 });
 export type OperationInput = z.input<typeof operationInput>;
 
+const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use 24-hour HH:mm, e.g. 08:00');
+
+/**
+ * PUT /line/calendar: the studio's working calendar. timeZone is an IANA name (checked on the server); workdays
+ * 0 = Sunday … 6 = Saturday; holidays are dates; the overtime limit is hours a week.
+ */
+export const workingCalendarInput = z.object({
+  timeZone: z.string().trim().min(1, 'Choose a time zone').max(64, 'At most 64 characters'),
+  workdays: z
+    .array(z.number().int().min(0, 'Days are 0 (Sunday) to 6 (Saturday)').max(6, 'Days are 0 (Sunday) to 6 (Saturday)'))
+    .min(1, 'Pick at least one working day')
+    .max(7)
+    .refine((v) => new Set(v).size === v.length, 'A day is listed twice'),
+  shiftStart: hhmm,
+  shiftEnd: hhmm,
+  breakMinutes: z.number({ error: 'Give minutes' }).int('Whole minutes only').min(0, 'Cannot be negative').max(600, 'At most 600 minutes'),
+  holidays: z.array(calendarDate).max(200, 'At most 200 holidays').default([]),
+  overtimeLimitHoursPerWeek: z.number().finite().min(0, 'Cannot be negative').max(80, 'At most 80 hours').nullable().default(null),
+}).refine((v) => v.shiftEnd > v.shiftStart, { path: ['shiftEnd'], message: 'The shift must end after it starts' });
+export type WorkingCalendarInput = z.input<typeof workingCalendarInput>;
+
+export interface WorkingCalendarDto {
+  timeZone: string;
+  workdays: number[];
+  shiftStart: string;
+  shiftEnd: string;
+  breakMinutes: number;
+  holidays: string[];
+  overtimeLimitHoursPerWeek: number | null;
+  /** Paid minutes a working day (shift − break). */
+  minutesPerDay: number;
+  hoursPerWeek: number;
+  /** Today in the studio's time zone. */
+  today: string;
+  /** False until the owner saves one: the defaults (Monday to Friday, the studio's working day, UTC) apply. */
+  entered: boolean;
+  /** The usual caution on working hours; local law decides. */
+  caution: string;
+  /** Over the ILO C1 figures (8 h a day, 48 h a week). */
+  exceedsIlo: boolean;
+}
+
 /** Params of /styles/:id/operations/:operationId/…. */
 export const operationParams = z.object({ id: z.coerce.number().int().positive(), operationId: z.coerce.number().int().positive() });
 

@@ -2,7 +2,9 @@ import type { ApiModule } from '../module';
 import { createFloorProgressService } from './floor-progress.service';
 import { createFloorRepository } from './floor.repository';
 import { floorRoutes } from './floor.routes';
-import { createFloorService, dayOf } from './floor.service';
+import { zonedDay } from '@planning';
+import { createFloorService } from './floor.service';
+import { createCalendarRepository } from '../line/studio-calendar.repository';
 import { createAttendanceService } from './attendance.service';
 
 /** ctx.services key of the floor's progress service ({ people, payLines, progress, daily }); the pay module reads it. */
@@ -16,7 +18,10 @@ export const floorModule: ApiModule = {
     const floor = createFloorService({ repo, audit: ctx.audit, now: ctx.now });
     const progress = createFloorProgressService({ repo, floor, now: ctx.now });
     ctx.services.set(FLOOR_PROGRESS_SERVICE, progress);
-    const attendance = createAttendanceService({ repo, audit: ctx.audit, today: async () => dayOf(ctx.now()) });
+    const calendars = createCalendarRepository(ctx.ds);
+    // The studio's today, in its time zone (working calendar).
+    const today = async (studioId: number) => zonedDay(ctx.now(), (await calendars.get(studioId)).calendar.timeZone);
+    const attendance = createAttendanceService({ repo, audit: ctx.audit, today });
     api.use('/floor', floorRoutes(floor, progress, attendance));
   },
 };

@@ -2,6 +2,7 @@ import type { ApiModule } from '../module';
 import { createBatchRepository } from '../batches/batch.repository';
 import { createStyleRepository } from '../styles/style.repository';
 import { linePlanRoutes, operationRoutes } from './line.routes';
+import { createCalendarRepository } from './studio-calendar.repository';
 import { createLineService } from './line.service';
 import { createCrewLookup, createOperationRepository, createPresentLookup, createStaffLookup, createStudioLookup } from './operation.repository';
 
@@ -17,6 +18,7 @@ export const lineModule: ApiModule = {
       staff: createStaffLookup(ctx.ds),
       crew: createCrewLookup(ctx.ds),
       present: createPresentLookup(ctx.ds),
+      calendar: createCalendarRepository(ctx.ds),
       solveStaffing: (input) => ctx.jobs.run('line-staffing', input),
       audit: ctx.audit,
       now: ctx.now,

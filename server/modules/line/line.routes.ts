@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { copyOperationsInput, linePlanQuery, operationParams, putOperationsInput, timeStudyInput, type LinePlanQuery } from '../../../shared/schemas/line';
+import { copyOperationsInput, linePlanQuery, operationParams, putOperationsInput, timeStudyInput, workingCalendarInput, type LinePlanQuery } from '../../../shared/schemas/line';
 import { actorOf, requirePermission } from '../../auth/require';
 import { badRequest } from '../../errors';
 import { validate } from '../../middleware/validate';
@@ -44,6 +44,12 @@ export function operationRoutes(service: LineService) {
 /** /api/line/batches/:id/plan — the balance, capacity and schedule of a batch. */
 export function linePlanRoutes(service: LineService) {
   const r = Router();
+  r.get('/calendar', requirePermission('line:plan'), async (req, res) => {
+    res.json({ calendar: await service.calendar(actorOf(req)) });
+  });
+  r.put('/calendar', requirePermission('line:plan'), validate({ body: workingCalendarInput }), async (req, res) => {
+    res.json({ calendar: await service.saveCalendar(actorOf(req), req.body) });
+  });
   r.get('/batches/:id/plan', requirePermission('line:plan'), validate({ params: idParam, query: linePlanQuery }), async (req, res) => {
     res.json({ plan: await service.plan(actorOf(req), Number(req.params.id), req.query as unknown as LinePlanQuery) });
   });

@@ -1,15 +1,16 @@
 import { format } from 'date-fns';
 import { can } from '../../../shared/auth/permissions';
-import { putOperationsInput, type LinePlanDto, type OperationTimeStudy, type TimeStudyInput, type LinePlanQuery, type OperationDto, type OperationInput } from '../../../shared/schemas/line';
+import { putOperationsInput, type LinePlanDto, type WorkingCalendarDto, type WorkingCalendarInput, type OperationTimeStudy, type TimeStudyInput, type LinePlanQuery, type OperationDto, type OperationInput } from '../../../shared/schemas/line';
 import type { OperationEntity } from '../../entities';
 import type { Actor } from '../../auth/require';
 import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { studyStandardMinutes, type StaffLineInput } from '@planning';
+import { checkWorkingHours, isTimeZone, shiftMinutes, studyStandardMinutes, zonedDay, WORKING_HOURS_CAUTION, type StaffLineInput } from '@planning';
 import { planLine, staffingProblem, type CrewPerson, type StaffCount, type StaffingOutcome } from './line-plan';
 import type { OperationRepository } from './operation.repository';
+import type { CalendarRepository } from './studio-calendar.repository';
 import { exactRateOf, operationRate } from '../floor/floor-math';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 import { LISTED_ERRORS } from '../uploads/table-limits';
@@ -23,6 +24,8 @@ export interface LineServiceDeps {
   staff: (studioId: number) => Promise<StaffCount>;
   /** Active people with their skills (People page). */
   crew: (studioId: number) => Promise<CrewPerson[]>;
+  /** The studio's working calendar (time zone, working days, shift, holidays). */
+  calendar?: CalendarRepository;
   /** People recorded in on a day (attendance); null when no attendance was recorded that day. */
   present?: (studioId: number, day: string) => Promise<Set<number> | null>;
   /** Runs the shared-operations solve (the `line-staffing` job, server/jobs/handlers.ts). */
@@ -68,7 +71,7 @@ function cycleCodes(rows: { code: string; predecessors: string[] }[]): string[] 
 export type LineService = ReturnType<typeof createLineService>;
 
 /** Operations tables per style and the line plan per batch. */
-export function createLineService({ styles, batches, operations, studio, staff, crew, present, solveStaffing, audit, now }: LineServiceDeps) {
+export function createLineService({ styles, batches, operations, studio, staff, crew, present, calendar, solveStaffing, audit, now }: LineServiceDeps) {
   async function styleOf(actor: Actor, styleId: number) {
     const s = await styles.get(actor.studioId, styleId);
     if (!s) throw notFound('Style');
@@ -144,6 +147,45 @@ export function createLineService({ styles, batches, operations, studio, staff, 
       await audit.record(actor, 'time_study', 'operation', op.id, { sam: op.sam }, { sam, study });
       return presentOperation(saved, maySeeRates(actor));
     },
+    /** The studio's working calendar with its weekly hours and the usual caution. */
+    async calendar(actor: Actor): Promise<WorkingCalendarDto> {
+      if (!calendar) throw notFound('Calendar');
+      const c = await calendar.get(actor.studioId);
+      const check = checkWorkingHours(c.working.minutesPerDay, c.working.workdays.length);
+      return {
+        ...c.calendar,
+        minutesPerDay: c.working.minutesPerDay,
+        hoursPerWeek: Math.round(check.hoursPerWeek * 100) / 100,
+        today: zonedDay(now(), c.calendar.timeZone),
+        entered: c.entered,
+        caution: WORKING_HOURS_CAUTION,
+        exceedsIlo: check.exceedsDaily || check.exceedsWeekly,
+      };
+    },
+    async saveCalendar(actor: Actor, input: WorkingCalendarInput): Promise<WorkingCalendarDto> {
+      if (!calendar) throw notFound('Calendar');
+      if (!isTimeZone(input.timeZone)) throw badRequest('timeZone: not a time zone name, e.g. Africa/Nairobi', { timeZone: 'Not a time zone name, e.g. Africa/Nairobi' });
+      const breakMinutes = input.breakMinutes;
+      try {
+        shiftMinutes(input.shiftStart, input.shiftEnd, breakMinutes);
+      } catch (e) {
+        if (e instanceof RangeError) throw badRequest(`breakMinutes: ${e.message}`, { breakMinutes: 'The break must be shorter than the shift' });
+        throw e;
+      }
+      const before = await calendar.get(actor.studioId);
+      const next = {
+        timeZone: input.timeZone,
+        workdays: [...input.workdays].sort((a, b) => a - b),
+        shiftStart: input.shiftStart,
+        shiftEnd: input.shiftEnd,
+        breakMinutes,
+        holidays: [...new Set(input.holidays ?? [])].sort(),
+        overtimeLimitHoursPerWeek: input.overtimeLimitHoursPerWeek ?? null,
+      };
+      await calendar.save(actor.studioId, next);
+      await audit.record(actor, 'working_calendar', 'studio', actor.studioId, before.entered ? before.calendar : undefined, next);
+      return this.calendar(actor);
+    },
     async copy(actor: Actor, styleId: number, fromStyleId: number) {
       await styleOf(actor, styleId);
       if (fromStyleId === styleId) throw badRequest('fromStyleId: choose another style', { fromStyleId: 'Choose another style' });
@@ -177,14 +219,16 @@ export function createLineService({ styles, batches, operations, studio, staff, 
       const st = await studio(actor.studioId);
       const quantity = Object.values(batch.quantities).reduce((a, b) => a + b, 0);
       // People present: those recorded in today when attendance was taken, else everyone active on the People page.
-      const today = format(now(), 'yyyy-MM-dd');
+      const cal = calendar ? await calendar.get(actor.studioId) : null;
+      // Today is the studio's own day, in its time zone.
+      const today = cal ? zonedDay(now(), cal.calendar.timeZone) : format(now(), 'yyyy-MM-dd');
       const everyone = await crew(actor.studioId);
       const inToday = present ? await present(actor.studioId, today) : null;
       const people = inToday ? everyone.filter((p) => inToday.has(p.id)) : everyone;
       const activeStaff = await staff(actor.studioId);
       const count = (role: string) => people.filter((p) => p.role === role).length;
       const staffNow = inToday ? { sewing: count('machinist'), cutting: count('cutter'), finishing: count('finisher') } : activeStaff;
-      const minutesPerDay = Math.round((st?.workingDayHours ?? 8) * 60);
+      const minutesPerDay = cal?.entered ? cal.working.minutesPerDay : Math.round((st?.workingDayHours ?? 8) * 60);
       const machines = st?.machines ?? {};
       // People mode shares the operations among the people present: the solve runs as a job.
       const asked = query.mode === 'people' ? staffingProblem({ operations: ops, crew: people, machines, minutesPerDay, query }) : null;
@@ -193,7 +237,13 @@ export function createLineService({ styles, batches, operations, studio, staff, 
         const plan = planLine({
           batchId: batch.id, styleId: batch.styleId, quantity, dueDate: batch.dueDate, today,
           minutesPerDay, operations: ops, query, staff: staffNow, crew: people, machines, staffing,
+          calendar: cal ? { workdays: cal.working.workdays, holidays: cal.working.holidays, timeZone: cal.calendar.timeZone, entered: cal.entered } : undefined,
         });
+        const limit = cal?.calendar.overtimeLimitHoursPerWeek;
+        const weeklyOvertime = (plan.schedule.overtimeMinutesPerDay * plan.workdays.length) / 60;
+        if (limit != null && plan.schedule.overtimeMinutesPerDay > 0 && weeklyOvertime > limit + 1e-9) {
+          plan.assumptions.push(`The due date needs about ${Math.round(weeklyOvertime * 10) / 10} h of overtime a week, above the studio's limit of ${limit} h.`);
+        }
         plan.assumptions.push(
           inToday
             ? `People present from today's attendance (${today}): ${people.length} of ${everyone.length} active.`

@@ -5,6 +5,7 @@ import type { ApiModule, ModuleContext } from '../module';
 import { createPaymentsClient, type PaymentsClient } from './payments-client';
 import { createPaymentsFake, type PaymentsFake } from './payments-fake';
 import { createPayRepository } from './pay.repository';
+import { createCalendarRepository } from '../line/studio-calendar.repository';
 import { payRoutes } from './pay.routes';
 import { createPayService, type PayService } from './pay.service';
 
@@ -42,9 +43,10 @@ export const payModule: ApiModule = {
     const payments = async () => (client ??= createPaymentsClient({ secretKey, fakePort: async () => (await ensureFake(ctx)).port }));
     if (!secretKey) ctx.services.set(PAYMENTS_FAKE_SERVICE, () => ensureFake(ctx));
     const repo = createPayRepository(ctx.ds);
+    const calendars = createCalendarRepository(ctx.ds);
     const pay = createPayService({
       repo,
-      calendar: (studioId) => repo.calendar(studioId),
+      calendar: async (studioId) => (await calendars.get(studioId)).working,
       audit: ctx.audit,
       floor: () => ctx.services.get(FLOOR_PROGRESS_SERVICE) as FloorProgressService,
       payments,

@@ -1,6 +1,5 @@
 import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
-import type { WorkingCalendar } from '@planning';
 import { Between, In, IsNull } from 'typeorm';
 import { AttendanceEntity, PayoutEntity, PayPeriodEntity, StudioEntity, StudioWorkRulesEntity, UserEntity, WorkLogEntity } from '../../entities';
 
@@ -48,11 +47,6 @@ export function createPayRepository(ds: DataSource) {
     /** Attended minutes per person and day over [fromDay, toDay] (the studio's days). */
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
       ds.getRepository(AttendanceEntity).find({ where: { studioId, day: Between(fromDay, toDay) }, order: { day: 'ASC', userId: 'ASC' } }),
-    /** The studio's working calendar: Monday to Friday at its working day's hours, no holidays. */
-    async calendar(studioId: number): Promise<WorkingCalendar> {
-      const studio = await ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId });
-      return { workdays: [1, 2, 3, 4, 5], minutesPerDay: Math.round(studio.workingDayHours * 60), holidays: [] };
-    },
     /** The studio's pay rules row; null until first saved. */
     workRules: (studioId: number) => ds.getRepository(StudioWorkRulesEntity).findOneBy({ studioId }),
     /** Save the pay rules, making the studio's row on first save (one row per studio: unique index). */

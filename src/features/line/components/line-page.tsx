@@ -12,6 +12,7 @@ import { LinePlanPanel } from './line-plan-panel';
 import { OperationsEditor } from './operations-editor';
 import { rateToMajorText } from './rate-text';
 import { TimeStudyForm } from './time-study-form';
+import { WorkingCalendarCard } from './working-calendar-card';
 
 const batchList = { queryKey: ['batches', 'list'] as const, queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches };
 const styleList = { queryKey: ['styles', 'list'] as const, queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles };
@@ -37,6 +38,7 @@ export function LinePage() {
           <div className="space-y-5">
             <LinePlanPanel key={batch.id} batch={batch} />
             <OperationsCard styleId={batch.styleId} />
+            <WorkingCalendarCard />
           </div>
         </>
       ) : <Card><p className="text-sm text-ink-600">No open batches.</p></Card>}
