@@ -244,3 +244,24 @@ export interface AttendanceDayDto {
   /** People with minutes above 0: who is in. */
   present: number;
 }
+
+/** A person's own count and earnings over some days (their own studio's days). */
+export interface MyFiguresDto {
+  fromDay: string;
+  toDay: string;
+  /** Pieces of first attempts (rework is not counted again). */
+  pieces: number;
+  /** Bundle operations logged, rework included. */
+  bundleOps: number;
+  /** Piece pay: each operation's pieces × rate, rounded once, as the pay period pays it. */
+  earningsMinor: number;
+}
+
+/** GET /floor/me/summary: today, this week (Monday on) and the pay period not yet approved. */
+export interface MySummaryDto {
+  currency: string;
+  today: MyFiguresDto;
+  week: MyFiguresDto;
+  /** Work not yet in an approved pay period: what the next approval pays (before any top-up or premium). */
+  payPeriod: MyFiguresDto;
+}

@@ -15,12 +15,13 @@ export const floorModule: ApiModule = {
   name: 'floor',
   register(api, ctx) {
     const repo = createFloorRepository(ctx.ds);
-    const floor = createFloorService({ repo, audit: ctx.audit, now: ctx.now });
+    const calendars = createCalendarRepository(ctx.ds);
+    const timeZone = async (studioId: number) => (await calendars.get(studioId)).calendar.timeZone;
+    const floor = createFloorService({ repo, audit: ctx.audit, now: ctx.now, timeZone });
     const progress = createFloorProgressService({ repo, floor, now: ctx.now });
     ctx.services.set(FLOOR_PROGRESS_SERVICE, progress);
-    const calendars = createCalendarRepository(ctx.ds);
     // The studio's today, in its time zone (working calendar).
-    const today = async (studioId: number) => zonedDay(ctx.now(), (await calendars.get(studioId)).calendar.timeZone);
+    const today = async (studioId: number) => zonedDay(ctx.now(), await timeZone(studioId));
     const attendance = createAttendanceService({ repo, audit: ctx.audit, today });
     api.use('/floor', floorRoutes(floor, progress, attendance));
   },

@@ -87,6 +87,16 @@ export function createFloorRepository(ds: DataSource) {
     floorPeople: (studioId: number) =>
       users.find({ where: { studioId, active: true, role: In(['machinist', 'finisher', 'cutter']) }, order: { name: 'ASC', id: 'ASC' } }),
     attendanceOn: (studioId: number, day: string) => attendance.find({ where: { studioId, day } }),
+    /** A person's logs no pay period has taken yet, made before `before`. */
+    unpaidLogsOf: (studioId: number, userId: number, before: Date) =>
+      logs
+        .createQueryBuilder('l')
+        .where('l.studioId = :studioId AND l.userId = :userId AND l.payPeriodId IS NULL', { studioId, userId })
+        .andWhere('l.createdAt < :before', { before: sqlTime(before) })
+        .orderBy('l.id', 'ASC')
+        .getMany(),
+    /** The approved pay period ending last, if any. */
+    lastPeriod: (studioId: number) => ds.getRepository(PayPeriodEntity).findOne({ where: { studioId }, order: { toDay: 'DESC', id: 'DESC' } }),
     /** The approved pay period covering `day`, if any (its attendance is frozen). */
     periodCovering: (studioId: number, day: string) =>
       ds.getRepository(PayPeriodEntity).createQueryBuilder('p').where('p.studioId = :studioId AND p.fromDay <= :day AND p.toDay >= :day', { studioId, day }).getOne(),

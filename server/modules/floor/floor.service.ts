@@ -1,11 +1,12 @@
 import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
-import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
+import { computePeriodPay, zonedDay, zonedDayStart } from '@planning';
+import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, MyFiguresDto, MySummaryDto, TodayDto } from '../../../shared/schemas/floor';
 import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
-import { logEarnedMinutes, logPayMinor, operationRate } from './floor-math';
+import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
 import { batchCode } from '../batches/batch.routes';
@@ -40,7 +41,22 @@ export function doneMap(bundle: BundleEntity, logs: WorkLogEntity[]) {
   return done;
 }
 
-export function createFloorService(deps: { repo: FloorRepository; audit: AuditRepository; now: () => Date }) {
+/** The day after `day` (calendar dates). */
+const nextDay = (day: string) => dayOf(new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000));
+
+/** Count and earnings of some logs: first-attempt pieces, every log as a bundle operation, pay rounded once per operation line. */
+function figuresOf(logs: WorkLogEntity[], fromDay: string, toDay: string): MyFiguresDto {
+  const first = logs.filter((l) => l.attempt === 0);
+  const pay = computePeriodPay({
+    work: first.map((l) => ({ personId: 'me', operationId: String(l.operationId), pieces: l.pieces, rate: logRate(l) })),
+    attendance: [],
+    scheduledMinutes: {},
+    rules: { minimumHourlyMinor: null, overtimePremiumPercent: null },
+  });
+  return { fromDay, toDay, pieces: first.reduce((a, l) => a + l.pieces, 0), bundleOps: logs.length, earningsMinor: pay[0]?.pieceMinor ?? 0 };
+}
+
+export function createFloorService(deps: { repo: FloorRepository; audit: AuditRepository; now: () => Date; timeZone?: (studioId: number) => Promise<string> }) {
   const { repo, audit, now } = deps;
   const clock = () => now().getTime();
   const opsMemo = memo<number, OperationEntity[]>(2000, clock);
@@ -275,10 +291,37 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       await audit.record(actor, 'undo', 'work_log', id, { bundleId: log.bundleId, operationId: log.operationId, attempt: log.attempt }, undefined);
     },
 
+    /**
+     * The signed-in person's own count and earnings today, this week (Monday to today) and in the pay period not yet
+     * approved (their logs no period has taken), on the studio's days in its time zone.
+     */
+    async summary(actor: Actor): Promise<MySummaryDto> {
+      const tz = deps.timeZone ? await deps.timeZone(actor.studioId) : 'UTC';
+      const today = zonedDay(now(), tz);
+      const weekday = new Date(`${today}T00:00:00Z`).getUTCDay();
+      const monday = dayOf(new Date(Date.parse(`${today}T00:00:00Z`) - ((weekday + 6) % 7) * 86_400_000));
+      const end = zonedDayStart(nextDay(today), tz);
+      const todayStart = zonedDayStart(today, tz).getTime();
+      const week = await repo.logsBetween(actor.studioId, zonedDayStart(monday, tz), end, actor.id);
+      const unpaid = await repo.unpaidLogsOf(actor.studioId, actor.id, end);
+      const last = await repo.lastPeriod(actor.studioId);
+      const firstUnpaid = unpaid.length ? zonedDay(new Date(unpaid[0].createdAt), tz) : today;
+      const periodFrom = last && nextDay(last.toDay) <= today ? nextDay(last.toDay) : firstUnpaid < today ? firstUnpaid : today;
+      return {
+        currency: await currency(actor.studioId),
+        today: figuresOf(week.filter((l) => new Date(l.createdAt).getTime() >= todayStart), today, today),
+        week: figuresOf(week, monday, today),
+        payPeriod: figuresOf(unpaid, periodFrom, today),
+      };
+    },
+
     /** Today's logs, pieces and earnings of the signed-in person only. */
     async today(actor: Actor): Promise<TodayDto> {
-      const from = dayStart(now());
-      const to = new Date(from.getTime() + 86_400_000);
+      // The studio's day, in its time zone (UTC until a working calendar says otherwise).
+      const tz = deps.timeZone ? await deps.timeZone(actor.studioId) : 'UTC';
+      const day = zonedDay(now(), tz);
+      const from = zonedDayStart(day, tz);
+      const to = zonedDayStart(nextDay(day), tz);
       const logs = (await repo.logsBetween(actor.studioId, from, to, actor.id)).reverse();
       const cur = await currency(actor.studioId);
       const dtos = [];
@@ -289,7 +332,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
         dtos.push(presentLog(l, bundle ?? { number: 0, batchId: 0 }, op ?? { code: '?', name: 'Operation removed' }, actor.name, cur));
       }
       return {
-        day: dayOf(from),
+        day,
         logs: dtos,
         pieces: logs.reduce((a, l) => a + l.pieces, 0),
         bundleOps: logs.length,
