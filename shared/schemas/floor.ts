@@ -265,3 +265,18 @@ export interface MySummaryDto {
   /** Work not yet in an approved pay period: what the next approval pays (before any top-up or premium). */
   payPeriod: MyFiguresDto;
 }
+
+/** A bundle operation sent back by a failed check to the person who did it: theirs to redo (not paid again). */
+export interface ReworkDto {
+  bundleNumber: number;
+  batchId: number;
+  batchCode: string;
+  operationId: number;
+  operationCode: string;
+  operationName: string;
+  /** The attempt to log now (1 for the first rework). */
+  attempt: number;
+  defect: string;
+  checkedBy: string;
+  checkedAt: string | null;
+}

@@ -87,6 +87,9 @@ export function createFloorRepository(ds: DataSource) {
     floorPeople: (studioId: number) =>
       users.find({ where: { studioId, active: true, role: In(['machinist', 'finisher', 'cutter']) }, order: { name: 'ASC', id: 'ASC' } }),
     attendanceOn: (studioId: number, day: string) => attendance.find({ where: { studioId, day } }),
+    /** Bundles with an operation sent back for rework (reopened not empty). */
+    reopenedBundles: (studioId: number) =>
+      bundles.createQueryBuilder('b').where('b.studioId = :studioId AND b.reopened <> :none', { studioId, none: '{}' }).orderBy('b.id', 'ASC').getMany(),
     /** A person's logs no pay period has taken yet, made before `before`. */
     unpaidLogsOf: (studioId: number, userId: number, before: Date) =>
       logs

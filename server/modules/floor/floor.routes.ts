@@ -33,6 +33,9 @@ export function floorRoutes(floor: FloorService, progress: FloorProgressService,
     await floor.undo(actorOf(req), Number(req.params.id));
     res.status(204).end();
   });
+  r.get('/me/rework', requirePermission('bundles:log'), async (req, res) => {
+    res.json({ rework: await floor.rework(actorOf(req)) });
+  });
   r.get('/me/summary', requirePermission('pay:own'), async (req, res) => {
     res.json(await floor.summary(actorOf(req)));
   });

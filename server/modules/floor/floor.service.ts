@@ -1,6 +1,6 @@
 import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
 import { computePeriodPay, zonedDay, zonedDayStart } from '@planning';
-import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, MyFiguresDto, MySummaryDto, TodayDto } from '../../../shared/schemas/floor';
+import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, MyFiguresDto, MySummaryDto, ReworkDto, TodayDto } from '../../../shared/schemas/floor';
 import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
@@ -33,6 +33,11 @@ function memo<K, V>(ttlMs: number, now: () => number) {
 
 /** The current attempt of an operation on a bundle: how many times it was sent back. */
 export const attemptOf = (b: Pick<BundleEntity, 'reopened'>, opId: number) => b.reopened?.[String(opId)] ?? 0;
+
+/** The log of the attempt before `attempt` of an operation on a bundle: whoever did it owns the rework. */
+export function reworkOwner(logs: WorkLogEntity[], opId: number, attempt: number): WorkLogEntity | null {
+  return logs.filter((l) => l.operationId === opId && l.attempt < attempt).sort((a, b) => b.attempt - a.attempt)[0] ?? null;
+}
 
 /** Which operations are done on a bundle now, from its logs (only the current attempt counts). */
 export function doneMap(bundle: BundleEntity, logs: WorkLogEntity[]) {
@@ -235,6 +240,12 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       if (prior) return { status: 201, result: await replay(actor, prior) };
       const existing = logs.find((l) => l.operationId === op.id && l.attempt === attempt);
       if (existing) throw await alreadyLogged(actor, existing, bundle, op);
+      // Rework goes back to the person who did the operation: only they (or the owner) redo it, and it is not paid again.
+      const sewnBy = attempt > 0 && !isCheck ? reworkOwner(logs, op.id, attempt) : null;
+      if (sewnBy && sewnBy.userId !== actor.id && actor.role !== 'owner') {
+        const who = await userName(actor.studioId, sewnBy.userId, actor);
+        throw new AppError(403, 'forbidden', `Bundle ${bundle.number} · ${op.code} ${op.name} went back for rework to ${who}, who did it`, { operationId: `Rework for ${who}` });
+      }
       const warnings = missingPredecessors(op, ops, doneMap(bundle, logs));
 
       let saved: WorkLogEntity;
@@ -263,7 +274,11 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
         if (winner) throw await alreadyLogged(actor, winner, bundle, op);
         throw e;
       }
-      if (rework) await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
+      if (rework) {
+        await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
+        const sewer = reworkOwner(logs, rework.id, attemptOf(bundle, rework.id) + 1);
+        if (sewer) warnings.push(`Sent back to ${await userName(actor.studioId, sewer.userId, actor)} for rework of ${rework.code} ${rework.name} (not paid again)`);
+      }
       const dto = presentLog(saved, bundle, op, actor.name, await currency(actor.studioId));
       // The work log is itself the record of who did what and when; the audit trail adds the exceptions
       // (a failed check that sent work back, an undo), so hundreds of logs a day do not bury them.
@@ -313,6 +328,36 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
         week: figuresOf(week, monday, today),
         payPeriod: figuresOf(unpaid, periodFrom, today),
       };
+    },
+
+    /** Bundle operations sent back for rework to the signed-in person (they did the attempt before), oldest first. */
+    async rework(actor: Actor): Promise<ReworkDto[]> {
+      const out: ReworkDto[] = [];
+      for (const bundle of await repo.reopenedBundles(actor.studioId)) {
+        const batch = await batchOf(actor.studioId, bundle.batchId);
+        if (!batch || batch.status === 'shipped' || batch.status === 'cancelled') continue;
+        const ops = await styleOps(actor.studioId, batch.styleId);
+        const logs = await repo.logsOfBundle(actor.studioId, bundle.id);
+        const failed = logs.filter((l) => l.outcome === 'fail').sort((a, b) => b.id - a.id)[0];
+        for (const op of ops) {
+          const attempt = attemptOf(bundle, op.id);
+          if (attempt === 0 || isCheckOperation(op) || logs.some((l) => l.operationId === op.id && l.attempt === attempt)) continue;
+          if (reworkOwner(logs, op.id, attempt)?.userId !== actor.id) continue;
+          out.push({
+            bundleNumber: bundle.number,
+            batchId: bundle.batchId,
+            batchCode: batchCode(bundle.batchId),
+            operationId: op.id,
+            operationCode: op.code,
+            operationName: op.name,
+            attempt,
+            defect: failed?.defect ?? '',
+            checkedBy: failed ? await userName(actor.studioId, failed.userId, actor) : '',
+            checkedAt: failed ? new Date(failed.createdAt).toISOString() : null,
+          });
+        }
+      }
+      return out;
     },
 
     /** Today's logs, pieces and earnings of the signed-in person only. */
