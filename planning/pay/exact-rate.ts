@@ -34,3 +34,16 @@ export function roundHalfUp(num: bigint, den: bigint): bigint {
   if (den <= 0n || num < 0n) throw new RangeError('roundHalfUp takes num ≥ 0 and den > 0');
   return (2n * num + den) / (2n * den);
 }
+
+/** An operation's exact piece rate as decimal text ("0.125"); '' without one. Rows from before exact rates use the whole minor units. */
+export function operationRate(op: { pieceRate?: string | null; pieceRateMinor: number | null }): string {
+  if (op.pieceRate) return op.pieceRate;
+  return op.pieceRateMinor == null ? '' : String(op.pieceRateMinor);
+}
+
+/** The exact rate of a rate typed as a number (at most 6 decimals) as canonical text, and its whole minor units (half up). */
+export function exactRateOf(value: number): { pieceRate: string; pieceRateMinor: number } | null {
+  const r = rateMillionths(value);
+  if (r == null) return null;
+  return { pieceRate: formatRate(r), pieceRateMinor: Number(roundHalfUp(r, RATE_SCALE)) };
+}

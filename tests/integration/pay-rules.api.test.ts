@@ -11,12 +11,12 @@ let machinistId: number;
 const WEEK = { fromDay: '2027-01-04', toDay: '2027-01-08' };
 
 /** Log `pieces` of an operation on a bundle for the machinist, at an exact rate, made on `day`. */
-async function logWork(opIndex: number, bundleIndex: number, pieces: number, rate: string, day: string) {
+async function logWork(opIndex: number, bundleIndex: number, pieces: number, rate: string, day: string, at = `${day}T10:00:00Z`) {
   const ops = await ds.getRepository(OperationEntity).find({ where: { studioId: 1, styleId: 1, section: 'sewing' }, order: { seq: 'ASC' } });
   const bundles = await ds.getRepository(BundleEntity).find({ where: { studioId: 1, number: In([9001, 9002, 9003]) }, order: { number: 'ASC' } });
   await ds.getRepository(WorkLogEntity).save({
     studioId: 1, bundleId: bundles[bundleIndex].id, operationId: ops[opIndex].id, attempt: 0, userId: machinistId, pieces,
-    earnedMinutes: 0, payMinor: 0, pieceRate: rate, idempotencyKey: `pay-rules-${opIndex}-${bundleIndex}-${day}`, outcome: '', defect: '', createdAt: new Date(`${day}T10:00:00Z`),
+    earnedMinutes: 0, payMinor: 0, pieceRate: rate, idempotencyKey: `pay-rules-${opIndex}-${bundleIndex}-${day}`, outcome: '', defect: '', createdAt: new Date(at),
   });
 }
 
@@ -95,5 +95,18 @@ describe('pay rules', () => {
     expect(again.body.same).toBe(true);
     expect((await owner.get(`/api/pay/periods/${period.id}`)).body.period.totalMinor).toBe(period.totalMinor);
     expect((await owner.post('/api/pay/periods').send(WEEK)).status).toBe(409);
+  });
+});
+
+describe('pay days in the studio time zone', () => {
+  it('pays a log made at 22:30 UTC on 1 March in the Nairobi studio’s 2 March, not its 1 March', async () => {
+    // Africa/Nairobi is UTC+3 all year (IANA tzdata): 22:30 UTC is 01:30 the next day there.
+    const cal = await owner.put('/api/line/calendar').send({ timeZone: 'Africa/Nairobi', workdays: [1, 2, 3, 4, 5], shiftStart: '08:00', shiftEnd: '17:00', breakMinutes: 60, holidays: [], overtimeLimitHoursPerWeek: null });
+    expect(cal.status).toBe(200);
+    await logWork(7, 0, 4, '10', '2027-03-01', '2027-03-01T22:30:00Z');
+    const first = (await owner.get('/api/pay/preview?from=2027-03-01&to=2027-03-01')).body.preview;
+    expect(first.people.find((p: { userId: number }) => p.userId === machinistId)).toBeUndefined();
+    const second = (await owner.get('/api/pay/preview?from=2027-03-02&to=2027-03-02')).body.preview;
+    expect(second.people.find((p: { userId: number }) => p.userId === machinistId)).toMatchObject({ pieces: 4, pieceMinor: 40 });
   });
 });

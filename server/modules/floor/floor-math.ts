@@ -19,18 +19,7 @@ export function logPayMinor(pieces: number, rate: string | number | null, attemp
   return Number(roundHalfUp(BigInt(pieces) * r, RATE_SCALE));
 }
 
-/** An operation's exact piece rate as decimal text ("0.125"); '' without one. Rows from before exact rates use the whole minor units. */
-export function operationRate(op: { pieceRate?: string | null; pieceRateMinor: number | null }): string {
-  if (op.pieceRate) return op.pieceRate;
-  return op.pieceRateMinor == null ? '' : String(op.pieceRateMinor);
-}
-
-/** The exact rate of a rate typed as a number (at most 6 decimals) as canonical text, and its whole minor units (half up). */
-export function exactRateOf(value: number): { pieceRate: string; pieceRateMinor: number } | null {
-  const r = rateMillionths(value);
-  if (r == null) return null;
-  return { pieceRate: formatRate(r), pieceRateMinor: Number(roundHalfUp(r, RATE_SCALE)) };
-}
+export { exactRateOf, operationRate } from '@planning';
 
 /** A log's exact rate for pay lines: the frozen rate, or for logs from before exact rates their pay ÷ pieces. */
 export function logRate(l: { pieceRate: string; payMinor: number; pieces: number }): string {

@@ -7,11 +7,10 @@ import { badRequest, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { StyleRepository } from '../styles/style.repository';
-import { checkWorkingHours, isTimeZone, shiftMinutes, studyStandardMinutes, zonedDay, WORKING_HOURS_CAUTION, type StaffLineInput } from '@planning';
+import { checkWorkingHours, exactRateOf, isTimeZone, operationRate, shiftMinutes, studyStandardMinutes, zonedDay, WORKING_HOURS_CAUTION, type StaffLineInput } from '@planning';
 import { planLine, staffingProblem, type CrewPerson, type StaffCount, type StaffingOutcome } from './line-plan';
 import type { OperationRepository } from './operation.repository';
 import type { CalendarRepository } from './studio-calendar.repository';
-import { exactRateOf, operationRate } from '../floor/floor-math';
 import { operationsFromXlsx, operationsToXlsx } from './operations-sheet';
 import { LISTED_ERRORS } from '../uploads/table-limits';
 

@@ -47,6 +47,7 @@ export const payModule: ApiModule = {
     const pay = createPayService({
       repo,
       calendar: async (studioId) => (await calendars.get(studioId)).working,
+      timeZone: async (studioId) => (await calendars.get(studioId)).calendar.timeZone,
       audit: ctx.audit,
       floor: () => ctx.services.get(FLOOR_PROGRESS_SERVICE) as FloorProgressService,
       payments,

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { computePeriodPay, formatRate, isWorkingDay, rateMillionths, type WorkingCalendar } from '@planning';
+import { computePeriodPay, formatRate, isWorkingDay, rateMillionths, zonedDay, zonedDayStart, type WorkingCalendar } from '@planning';
 import { PAY_RULES_CAUTION, type MyPayDto, type PayoutDto, type PayPeriodDto, type PayPeriodLine, type PayPeriodRules, type PayPersonLine, type PayPreviewDto, type PayRulesDto, type PayRulesInput } from '../../../shared/schemas/pay';
 import type { Actor } from '../../auth/require';
 import type { PayoutEntity, PayPeriodEntity, WorkLogEntity } from '../../entities';
@@ -67,6 +67,8 @@ export function scheduledMinutesOf(calendar: WorkingCalendar, fromDay: string, t
 }
 
 export function createPayService(deps: {
+  /** The studio's IANA time zone: pay days are its days. */
+  timeZone?: (studioId: number) => Promise<string>;
   /** The studio's working calendar (working days, minutes a day, holidays), for overtime. */
   calendar: (studioId: number) => Promise<WorkingCalendar>;
   repo: PayRepository;
@@ -84,11 +86,13 @@ export function createPayService(deps: {
    * on an already-approved day after its approval (a period closes its days; late work goes to the next one).
    */
   async function claimable(studioId: number, fromDay: string, toDay: string, periods: PayPeriodEntity[]) {
-    const from = new Date(`${fromDay}T00:00:00Z`);
-    const to = new Date(new Date(`${toDay}T00:00:00Z`).getTime() + DAY_MS);
+    // Days are the studio's own, in its time zone (UTC until its working calendar names one).
+    const tz = deps.timeZone ? await deps.timeZone(studioId) : 'UTC';
+    const from = zonedDayStart(fromDay, tz);
+    const to = zonedDayStart(realDay(dayOf(new Date(Date.parse(`${toDay}T00:00:00Z`) + DAY_MS))), tz);
     const open = await repo.unclaimedLogsBefore(studioId, to);
     const inDays = (l: WorkLogEntity) => new Date(l.createdAt).getTime() >= from.getTime();
-    const late = open.filter((l) => !inDays(l) && periods.some((p) => covers(p, dayOf(l.createdAt))));
+    const late = open.filter((l) => !inDays(l) && periods.some((p) => covers(p, zonedDay(new Date(l.createdAt), tz))));
     return { logs: [...open.filter(inDays), ...late], carried: late.length };
   }
 
