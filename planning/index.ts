@@ -6,3 +6,5 @@ export * from './costing';
 export * from './bundles';
 export * from './floor';
 export * from './nesting';
+export * from './time-study';
+export * from './pay';

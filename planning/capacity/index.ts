@@ -5,3 +5,4 @@ export { scheduleBatch } from './schedule-batch';
 export type { BatchStage, ScheduleBatchInput, ScheduledStage, BatchSchedule } from './schedule-batch';
 export { profileLoad } from './load-profile';
 export type { LoadUnit, LoadDay, LoadProfile } from './load-profile';
+export * from './studio-calendar';

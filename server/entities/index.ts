@@ -19,6 +19,7 @@ import { RollReservationEntity } from './roll-reservation.entity';
 import { SessionEntity } from './session.entity';
 import { SignInThrottleEntity } from './sign-in-throttle.entity';
 import { StudioEntity } from './studio.entity';
+import { StudioWorkRulesEntity } from './studio-work-rules.entity';
 import { StyleEntity } from './style.entity';
 import { SupplierEntity } from './supplier.entity';
 import { TrimEntity } from './trim.entity';
@@ -48,6 +49,7 @@ export {
   SessionEntity,
   SignInThrottleEntity,
   StudioEntity,
+  StudioWorkRulesEntity,
   StyleEntity,
   SupplierEntity,
   TrimEntity,
@@ -85,4 +87,5 @@ export const entities = [
   FloorDeviceEntity,
   RollReservationEntity,
   SignInThrottleEntity,
+  StudioWorkRulesEntity,
 ];

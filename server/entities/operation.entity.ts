@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import type { OperationTimeStudy } from '../../shared/schemas/line';
 
 @Entity('operations')
 @Index(['studioId', 'styleId', 'seq'])
@@ -36,6 +37,18 @@ export class OperationEntity {
   @Column({ type: 'simple-json' })
   predecessors: string[];
 
+  /** The piece rate rounded to whole minor units (costing's estimate); the exact rate is `pieceRate`. */
   @Column({ type: 'integer', nullable: true })
   pieceRateMinor: number | null;
+
+  /**
+   * The exact piece rate, minor units per piece as decimal text with up to 6 places ("0.125"). Null on rows saved
+   * before exact rates: their rate is `pieceRateMinor`.
+   */
+  @Column({ type: 'varchar', length: 24, nullable: true })
+  pieceRate: string | null;
+
+  /** The time-study sheet that last set `sam` (elements, observations, allowances, result); null when typed in. */
+  @Column({ type: 'simple-json', nullable: true })
+  timeStudy: OperationTimeStudy | null;
 }

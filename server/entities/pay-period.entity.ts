@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 import { TIMESTAMP } from './column-types';
+import type { PayPeriodLine, PayPeriodRules } from '../../shared/schemas/pay';
 
 @Entity('pay_periods')
 export class PayPeriodEntity {
@@ -21,9 +22,16 @@ export class PayPeriodEntity {
   @Column({ type: 'integer' })
   approvedBy: number;
 
-  /** Per person: pieces, amount in minor units, log ids covered. */
+  /**
+   * Per person: pieces and the amount in minor units (piece pay + overtime premium + minimum-wage top-up), with
+   * those parts; the parts are absent on periods approved before pay rules.
+   */
   @Column({ type: 'simple-json' })
-  lines: { userId: number; name: string; pieces: number; amountMinor: number }[];
+  lines: PayPeriodLine[];
+
+  /** The pay rules and scheduled minutes per day the period was approved with, so a re-run computes the same lines. */
+  @Column({ type: 'simple-json', nullable: true })
+  rules: PayPeriodRules | null;
 
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;

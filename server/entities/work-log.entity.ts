@@ -31,8 +31,16 @@ export class WorkLogEntity {
   @Column({ type: 'real' })
   earnedMinutes: number;
 
+  /** This log's own pay rounded to minor units, for the floor's running figures; pay lines use `pieceRate`. */
   @Column({ type: 'integer', default: 0 })
   payMinor: number;
+
+  /**
+   * The operation's exact piece rate when logged (decimal minor units per piece), frozen so a later rate change
+   * does not reprice done work. Empty on logs made before exact rates: their pay is `payMinor`.
+   */
+  @Column({ type: 'varchar', length: 24, default: '' })
+  pieceRate: string;
 
   /** Sent by the device so a retried log is never doubled. */
   @Index({ unique: true })

@@ -6,7 +6,7 @@ const DEMO_BUNDLE_SIZE = 10;
 const DAY_MS = 86_400_000;
 
 /** Used only when the line seed has not given the demo style its operations (our own invented list). */
-const FALLBACK_OPERATIONS: Omit<OperationEntity, 'id' | 'studioId' | 'styleId'>[] = [
+const FALLBACK_OPERATIONS: Omit<OperationEntity, 'id' | 'studioId' | 'styleId' | 'timeStudy' | 'pieceRate'>[] = [
   { seq: 1, code: 'OP01', name: 'Join shoulders', section: 'sewing', machineType: 'overlock', sam: 0.6, predecessors: [], pieceRateMinor: 600 },
   { seq: 2, code: 'OP02', name: 'Attach collar band', section: 'sewing', machineType: 'lockstitch', sam: 1.4, predecessors: ['OP01'], pieceRateMinor: 1400 },
   { seq: 3, code: 'OP03', name: 'Set sleeves', section: 'sewing', machineType: 'lockstitch', sam: 1.2, predecessors: ['OP01'], pieceRateMinor: 1200 },

@@ -209,3 +209,74 @@ export interface ProgressDto {
   people: PersonEfficiency[];
   packedPieces: number;
 }
+
+/** GET /floor/attendance?day=: one day's attendance (default: today in the studio). */
+export const attendanceQuery = z.object({ day: calendarDate.optional() });
+
+/** PUT /floor/attendance: minutes each person was at work on a day (0 = absent). */
+export const putAttendanceInput = z.object({
+  day: calendarDate,
+  entries: z
+    .array(
+      z.object({
+        userId: z.number({ error: 'Pick a person' }).int().positive('Pick a person'),
+        minutes: z.number({ error: 'Give minutes' }).int('Whole minutes only').min(0, 'Cannot be negative').max(1440, 'At most 24 hours'),
+      }),
+    )
+    .min(1, 'Enter at least one person')
+    .max(500, 'At most 500 people'),
+});
+export type PutAttendanceInput = z.infer<typeof putAttendanceInput>;
+
+/** One person's attendance on a day: minutes null when nothing was recorded. */
+export interface AttendanceRowDto {
+  userId: number;
+  name: string;
+  role: string;
+  minutes: number | null;
+}
+
+export interface AttendanceDayDto {
+  day: string;
+  /** Set when an approved pay period covers the day: its attendance is frozen. */
+  frozenByPeriodId: number | null;
+  people: AttendanceRowDto[];
+  /** People with minutes above 0: who is in. */
+  present: number;
+}
+
+/** A person's own count and earnings over some days (their own studio's days). */
+export interface MyFiguresDto {
+  fromDay: string;
+  toDay: string;
+  /** Pieces of first attempts (rework is not counted again). */
+  pieces: number;
+  /** Bundle operations logged, rework included. */
+  bundleOps: number;
+  /** Piece pay: each operation's pieces × rate, rounded once, as the pay period pays it. */
+  earningsMinor: number;
+}
+
+/** GET /floor/me/summary: today, this week (Monday on) and the pay period not yet approved. */
+export interface MySummaryDto {
+  currency: string;
+  today: MyFiguresDto;
+  week: MyFiguresDto;
+  /** Work not yet in an approved pay period: what the next approval pays (before any top-up or premium). */
+  payPeriod: MyFiguresDto;
+}
+
+/** A bundle operation sent back by a failed check to the person who did it: theirs to redo (not paid again). */
+export interface ReworkDto {
+  bundleNumber: number;
+  batchId: number;
+  batchCode: string;
+  operationId: number;
+  operationCode: string;
+  operationName: string;
+  /** The attempt to log now (1 for the first rework). */
+  attempt: number;
+  defect: string;
+  checkedBy: string;
+  checkedAt: string | null;
+}

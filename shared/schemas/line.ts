@@ -7,7 +7,10 @@ export const MACHINE_TYPES = ['cutting', 'lockstitch', 'overlock', 'coverstitch'
 
 const code = z.string().trim().min(1, 'Code is required').max(12, 'At most 12 characters').regex(/^[A-Za-z0-9-_]+$/, 'Letters, digits, - and _ only');
 
-/** One row of the operations table. pieceRateMinor: integer minor units (pay data), optional. */
+/**
+ * One row of the operations table. pieceRateMinor: minor units per piece (pay data), optional, exact to 6 decimals
+ * (0.125 is a rate of an eighth of a minor unit).
+ */
 export const operationInput = z.object({
   code,
   name: z.string().trim().min(1, 'Name is required').max(120, 'At most 120 characters'),
@@ -15,9 +18,100 @@ export const operationInput = z.object({
   machineType: z.string().trim().min(1, 'Machine type is required').max(24, 'At most 24 characters'),
   sam: z.number({ error: 'Give minutes' }).finite().positive('Must be more than 0').max(600, 'At most 600 minutes'),
   predecessors: z.array(code).default([]),
-  pieceRateMinor: z.number().int('Whole minor units only').min(0, 'Cannot be negative').max(100_000_000).nullable().optional(),
+  pieceRateMinor: z
+    .number()
+    .min(0, 'Cannot be negative')
+    .max(100_000_000)
+    .refine((v) => /^\d+(\.\d{1,6})?$/.test(String(v)), 'At most 6 decimals of a minor unit')
+    .nullable()
+    .optional(),
 });
 export type OperationInput = z.input<typeof operationInput>;
+
+const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use 24-hour HH:mm, e.g. 08:00');
+
+/**
+ * PUT /line/calendar: the studio's working calendar. timeZone is an IANA name (checked on the server); workdays
+ * 0 = Sunday … 6 = Saturday; holidays are dates; the overtime limit is hours a week.
+ */
+export const workingCalendarInput = z.object({
+  timeZone: z.string().trim().min(1, 'Choose a time zone').max(64, 'At most 64 characters'),
+  workdays: z
+    .array(z.number().int().min(0, 'Days are 0 (Sunday) to 6 (Saturday)').max(6, 'Days are 0 (Sunday) to 6 (Saturday)'))
+    .min(1, 'Pick at least one working day')
+    .max(7)
+    .refine((v) => new Set(v).size === v.length, 'A day is listed twice'),
+  shiftStart: hhmm,
+  shiftEnd: hhmm,
+  breakMinutes: z.number({ error: 'Give minutes' }).int('Whole minutes only').min(0, 'Cannot be negative').max(600, 'At most 600 minutes'),
+  holidays: z.array(calendarDate).max(200, 'At most 200 holidays').default([]),
+  overtimeLimitHoursPerWeek: z.number().finite().min(0, 'Cannot be negative').max(80, 'At most 80 hours').nullable().default(null),
+}).refine((v) => v.shiftEnd > v.shiftStart, { path: ['shiftEnd'], message: 'The shift must end after it starts' });
+export type WorkingCalendarInput = z.input<typeof workingCalendarInput>;
+
+export interface WorkingCalendarDto {
+  timeZone: string;
+  workdays: number[];
+  shiftStart: string;
+  shiftEnd: string;
+  breakMinutes: number;
+  holidays: string[];
+  overtimeLimitHoursPerWeek: number | null;
+  /** Paid minutes a working day (shift − break). */
+  minutesPerDay: number;
+  hoursPerWeek: number;
+  /** Today in the studio's time zone. */
+  today: string;
+  /** False until the owner saves one: the defaults (Monday to Friday, the studio's working day, UTC) apply. */
+  entered: boolean;
+  /** The usual caution on working hours; local law decides. */
+  caution: string;
+  /** Over the ILO C1 figures (8 h a day, 48 h a week). */
+  exceedsIlo: boolean;
+}
+
+/** Params of /styles/:id/operations/:operationId/…. */
+export const operationParams = z.object({ id: z.coerce.number().int().positive(), operationId: z.coerce.number().int().positive() });
+
+/**
+ * PUT /styles/:id/operations/:operationId/time-study: a time-study sheet (ILO method, planning/time-study). Each
+ * element lists its timed cycles (observed seconds and the pace rated on the 0–100 scale, 100 = standard) and how
+ * often it happens per garment; allowances are percentages of basic time.
+ */
+export const timeStudyInput = z.object({
+  elements: z
+    .array(
+      z.object({
+        name: z.string().trim().min(1, 'Name the element').max(80, 'At most 80 characters'),
+        observations: z
+          .array(
+            z.object({
+              seconds: z.number({ error: 'Give seconds' }).finite().positive('Must be more than 0').max(3600, 'At most 3600 seconds'),
+              rating: z.number({ error: 'Give a rating' }).finite().positive('Must be more than 0').max(200, 'At most 200'),
+            }),
+          )
+          .min(1, 'Time at least one cycle')
+          .max(100, 'At most 100 cycles'),
+        frequency: z.number().finite().positive('Must be more than 0').max(100, 'At most 100 a garment').default(1),
+      }),
+    )
+    .min(1, 'Add at least one element')
+    .max(40, 'At most 40 elements'),
+  relaxationPercent: z.number({ error: 'Give a percentage' }).finite().min(0, 'Cannot be negative').max(100, 'At most 100 %'),
+  contingencyPercent: z.number().finite().min(0, 'Cannot be negative').max(20, 'At most 20 %').default(0),
+});
+export type TimeStudyInput = z.input<typeof timeStudyInput>;
+
+/** The sheet as stored on the operation, with its figures (minutes per garment). */
+export interface OperationTimeStudy {
+  elements: { name: string; observations: { seconds: number; rating: number }[]; frequency: number; basicMinutes: number }[];
+  relaxationPercent: number;
+  contingencyPercent: number;
+  basicMinutes: number;
+  standardMinutes: number;
+  studiedAt: string;
+  studiedBy: string;
+}
 
 /** PUT /styles/:id/operations: the whole table; codes unique, predecessors must name rows and form no cycle. */
 export const putOperationsInput = z
@@ -77,6 +171,8 @@ export interface OperationDto {
   predecessors: string[];
   /** Present only for roles that may see pay or costs. */
   pieceRateMinor?: number | null;
+  /** The time study that set `sam`, when one did. */
+  timeStudy?: OperationTimeStudy | null;
 }
 
 export interface StationDto {

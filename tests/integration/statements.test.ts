@@ -37,7 +37,7 @@ describe('hot-path statements', () => {
     const createdAt = new Date('2026-12-01T09:15:30.250Z');
     const row = { studioId: bundle.studioId, bundleId: bundle.id, operationId: 999_999, attempt: 0, userId: 1, pieces: 10, earnedMinutes: 2.5, payMinor: 700, idempotencyKey: 'statements-test-1', outcome: '', defect: '', createdAt };
     const id = await sql.insert(WorkLogEntity, row);
-    expect(await ds.getRepository(WorkLogEntity).findOneByOrFail({ id })).toEqual({ ...row, payPeriodId: null, id });
+    expect(await ds.getRepository(WorkLogEntity).findOneByOrFail({ id })).toEqual({ ...row, payPeriodId: null, pieceRate: '', id });
     await expect(sql.insert(WorkLogEntity, { ...row, operationId: 999_998 })).rejects.toMatchObject({ name: 'QueryFailedError' });
 
     const auditId = await sql.insert(AuditEntryEntity, { studioId: 1, userId: 1, userName: 'T', action: 'x', entity: 'y', entityId: null, before: '', after: '' });

@@ -2,19 +2,30 @@
  * Earned minutes, efficiency and piece-rate pay of one log, through the planning core's floor module
  * (planning/floor via @planning). The service calls only these three functions.
  */
-import { computePiecePay, earnedMinutes, efficiencyPercent as sharedEfficiencyPercent } from '@planning';
-import { minor } from '@shared/units';
+import { earnedMinutes, efficiencyPercent as sharedEfficiencyPercent, formatRate, rateMillionths, RATE_SCALE, roundHalfUp } from '@planning';
 
 /** Earned (standard) minutes of a log: pieces × SAM; a rework attempt earns nothing again. */
 export function logEarnedMinutes(pieces: number, samMinutes: number, attempt: number): number {
   return attempt > 0 ? 0 : earnedMinutes([{ pieces, sam: samMinutes }]);
 }
 
-/** Piece-rate pay of a log in minor units: pieces × rate; rework (attempt > 0) is not paid twice. */
-export function logPayMinor(pieces: number, rateMinor: number | null, attempt: number): number {
-  if (!rateMinor) return 0;
-  const record = { personId: 'p', bundleId: 'b', operationId: 'o', pieces, date: '2000-01-01', isRework: attempt > 0 };
-  return computePiecePay({ records: [record], rates: { o: minor(rateMinor) }, from: '2000-01-01', to: '2000-01-01' }).total;
+/**
+ * Piece-rate pay of one log in minor units, for the floor's running figures: pieces × exact rate, rounded half up;
+ * rework (attempt > 0) is not paid twice. Pay periods never add these: they round each pay line once.
+ */
+export function logPayMinor(pieces: number, rate: string | number | null, attempt: number): number {
+  const r = rate === null || rate === '' ? null : rateMillionths(rate);
+  if (!r || attempt > 0) return 0;
+  return Number(roundHalfUp(BigInt(pieces) * r, RATE_SCALE));
+}
+
+export { exactRateOf, operationRate } from '@planning';
+
+/** A log's exact rate for pay lines: the frozen rate, or for logs from before exact rates their pay ÷ pieces. */
+export function logRate(l: { pieceRate: string; payMinor: number; pieces: number }): string {
+  if (l.pieceRate) return l.pieceRate;
+  if (!l.payMinor || !l.pieces) return '0';
+  return formatRate((BigInt(l.payMinor) * RATE_SCALE) / BigInt(l.pieces));
 }
 
 /**

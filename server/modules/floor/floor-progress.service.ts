@@ -2,13 +2,14 @@ import type { OperationProgress, PersonEfficiency, ProgressDto, SectionProgress 
 import { OPERATION_SECTIONS } from '../../../shared/schemas/floor';
 import type { OperationEntity, WorkLogEntity } from '../../entities';
 import { notFound } from '../../errors';
-import { efficiencyPercent } from './floor-math';
+import { computePeriodPay } from '@planning';
+import { efficiencyPercent, logRate } from './floor-math';
 import type { FloorRepository } from './floor.repository';
 import { dayOf, dayStart, doneMap, type FloorService } from './floor.service';
 
 export type FloorProgressService = ReturnType<typeof createFloorProgressService>;
 
-/** Pieces × rate per person and operation in a period; rework (attempt > 0) carries no pay. */
+/** Pieces × exact rate per person, operation and rate in a period, rounded once; rework (attempt > 0) carries no pay. */
 export interface PayLine {
   userId: number;
   name: string;
@@ -62,30 +63,37 @@ export function createFloorProgressService(deps: { repo: FloorRepository; floor:
     return payLinesOf(studioId, await repo.logsBetween(studioId, from, to, onlyUserId));
   }
 
-  /** Pay lines of these logs (a pay period's own), people by name, operations by code; rework is left out. */
+  /**
+   * Pay lines of these logs (a pay period's own), people by name, operations by code; rework is left out. One line
+   * per person, operation and exact rate, Σ pieces × rate rounded once (planning/pay computePeriodPay).
+   */
   async function payLinesOf(studioId: number, all: WorkLogEntity[]): Promise<PayLine[]> {
     const logs = all.filter((l) => l.attempt === 0);
     const users = new Map((await repo.usersByIds(studioId, [...new Set(logs.map((l) => l.userId))])).map((u) => [u.id, u.name]));
     const ops = new Map<number, OperationEntity | null>();
-    const lines = new Map<string, PayLine>();
-    for (const l of logs) {
-      if (!ops.has(l.operationId)) ops.set(l.operationId, await repo.operation(studioId, l.operationId));
-      const op = ops.get(l.operationId);
-      const key = `${l.userId}:${l.operationId}`;
-      const line = lines.get(key) ?? {
-        userId: l.userId,
-        name: users.get(l.userId) ?? '',
-        operationCode: op?.code ?? '?',
-        operationName: op?.name ?? 'Operation removed',
-        pieces: 0,
-        rateMinor: op?.pieceRateMinor ?? 0,
-        amountMinor: 0,
-      };
-      line.pieces += l.pieces;
-      line.amountMinor += l.payMinor;
-      lines.set(key, line);
-    }
-    return [...lines.values()].sort((a, b) => a.name.localeCompare(b.name) || a.operationCode.localeCompare(b.operationCode));
+    for (const id of new Set(logs.map((l) => l.operationId))) ops.set(id, await repo.operation(studioId, id));
+    const pay = computePeriodPay({
+      work: logs.map((l) => ({ personId: String(l.userId), operationId: String(l.operationId), pieces: l.pieces, rate: logRate(l) })),
+      attendance: [],
+      scheduledMinutes: {},
+      rules: { minimumHourlyMinor: null, overtimePremiumPercent: null },
+    });
+    return pay
+      .flatMap((p) =>
+        p.lines.map((line) => {
+          const op = ops.get(Number(line.operationId));
+          return {
+            userId: Number(p.personId),
+            name: users.get(Number(p.personId)) ?? '',
+            operationCode: op?.code ?? '?',
+            operationName: op?.name ?? 'Operation removed',
+            pieces: line.pieces,
+            rateMinor: Number(line.rate),
+            amountMinor: line.amountMinor,
+          };
+        }),
+      )
+      .sort((a, b) => a.name.localeCompare(b.name) || a.operationCode.localeCompare(b.operationCode) || a.rateMinor - b.rateMinor);
   }
 
   async function batchState(studioId: number, batchId: number) {

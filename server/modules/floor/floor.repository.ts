@@ -8,6 +8,7 @@ import {
   GradingSetEntity,
   LayEntity,
   OperationEntity,
+  PayPeriodEntity,
   StudioEntity,
   UserEntity,
   WorkLogEntity,
@@ -82,6 +83,36 @@ export function createFloorRepository(ds: DataSource) {
       return { ...l, payPeriodId: null, id: await sql.insert(WorkLogEntity, l) };
     },
     deleteLog: (studioId: number, id: number) => logs.delete({ studioId, id }),
+    /** Active people of the floor (machinists, finishers, cutters) by name, for the attendance sheet. */
+    floorPeople: (studioId: number) =>
+      users.find({ where: { studioId, active: true, role: In(['machinist', 'finisher', 'cutter']) }, order: { name: 'ASC', id: 'ASC' } }),
+    attendanceOn: (studioId: number, day: string) => attendance.find({ where: { studioId, day } }),
+    /** Bundles with an operation sent back for rework (reopened not empty). */
+    reopenedBundles: (studioId: number) =>
+      bundles.createQueryBuilder('b').where('b.studioId = :studioId AND b.reopened <> :none', { studioId, none: '{}' }).orderBy('b.id', 'ASC').getMany(),
+    /** A person's logs no pay period has taken yet, made before `before`. */
+    unpaidLogsOf: (studioId: number, userId: number, before: Date) =>
+      logs
+        .createQueryBuilder('l')
+        .where('l.studioId = :studioId AND l.userId = :userId AND l.payPeriodId IS NULL', { studioId, userId })
+        .andWhere('l.createdAt < :before', { before: sqlTime(before) })
+        .orderBy('l.id', 'ASC')
+        .getMany(),
+    /** The approved pay period ending last, if any. */
+    lastPeriod: (studioId: number) => ds.getRepository(PayPeriodEntity).findOne({ where: { studioId }, order: { toDay: 'DESC', id: 'DESC' } }),
+    /** The approved pay period covering `day`, if any (its attendance is frozen). */
+    periodCovering: (studioId: number, day: string) =>
+      ds.getRepository(PayPeriodEntity).createQueryBuilder('p').where('p.studioId = :studioId AND p.fromDay <= :day AND p.toDay >= :day', { studioId, day }).getOne(),
+    /** Set each person's minutes on a day in one transaction (one row per person and day: unique index). */
+    saveAttendance: (studioId: number, day: string, entries: { userId: number; minutes: number }[]) =>
+      ds.transaction(async (m) => {
+        const r = m.getRepository(AttendanceEntity);
+        for (const e of entries) {
+          const row = (await r.findOneBy({ studioId, userId: e.userId, day })) ?? r.create({ studioId, userId: e.userId, day });
+          row.minutes = e.minutes;
+          await r.save(row);
+        }
+      }),
     attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
       attendance.find({ where: { studioId, day: Between(fromDay, toDay) } }),
     usersByIds: (studioId: number, ids: number[]) =>

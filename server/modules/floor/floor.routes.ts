@@ -1,14 +1,22 @@
 import { Router } from 'express';
-import { batchIdParam, bundleLookupQuery, bundleMatchesQuery, logWorkInput } from '../../../shared/schemas/floor';
+import { attendanceQuery, batchIdParam, bundleLookupQuery, bundleMatchesQuery, logWorkInput, putAttendanceInput } from '../../../shared/schemas/floor';
 import { idParam } from '../../../shared/schemas/common';
 import { actorOf, requirePermission } from '../../auth/require';
 import { validate } from '../../middleware/validate';
+import type { AttendanceService } from './attendance.service';
 import type { FloorProgressService } from './floor-progress.service';
 import type { FloorService } from './floor.service';
 
 /** Routes under /api/floor: logging from the floor, and the owner's progress. */
-export function floorRoutes(floor: FloorService, progress: FloorProgressService) {
+export function floorRoutes(floor: FloorService, progress: FloorProgressService, attendance: AttendanceService) {
   const r = Router();
+  // Attendance is the owner's to record ('people:manage'): who is in on a day and for how long.
+  r.get('/attendance', requirePermission('people:manage'), validate({ query: attendanceQuery }), async (req, res) => {
+    res.json(await attendance.day(actorOf(req).studioId, (req.query as { day?: string }).day));
+  });
+  r.put('/attendance', requirePermission('people:manage'), validate({ body: putAttendanceInput }), async (req, res) => {
+    res.json(await attendance.save(actorOf(req), req.body));
+  });
   r.get('/bundles/lookup', requirePermission('bundles:log'), validate({ query: bundleLookupQuery }), async (req, res) => {
     const q = req.query as unknown as { number: number; batchId?: number };
     res.json({ bundle: await floor.lookup(actorOf(req), q.number, q.batchId) });
@@ -24,6 +32,12 @@ export function floorRoutes(floor: FloorService, progress: FloorProgressService)
   r.delete('/logs/:id', requirePermission('bundles:log'), validate({ params: idParam }), async (req, res) => {
     await floor.undo(actorOf(req), Number(req.params.id));
     res.status(204).end();
+  });
+  r.get('/me/rework', requirePermission('bundles:log'), async (req, res) => {
+    res.json({ rework: await floor.rework(actorOf(req)) });
+  });
+  r.get('/me/summary', requirePermission('pay:own'), async (req, res) => {
+    res.json(await floor.summary(actorOf(req)));
   });
   r.get('/me/today', requirePermission('pay:own'), async (req, res) => {
     res.json(await floor.today(actorOf(req)));

@@ -1,11 +1,12 @@
 import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
-import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, TodayDto } from '../../../shared/schemas/floor';
+import { computePeriodPay, zonedDay, zonedDayStart } from '@planning';
+import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, MyFiguresDto, MySummaryDto, ReworkDto, TodayDto } from '../../../shared/schemas/floor';
 import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
-import { logEarnedMinutes, logPayMinor } from './floor-math';
+import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
 import { batchCode } from '../batches/batch.routes';
@@ -33,6 +34,11 @@ function memo<K, V>(ttlMs: number, now: () => number) {
 /** The current attempt of an operation on a bundle: how many times it was sent back. */
 export const attemptOf = (b: Pick<BundleEntity, 'reopened'>, opId: number) => b.reopened?.[String(opId)] ?? 0;
 
+/** The log of the attempt before `attempt` of an operation on a bundle: whoever did it owns the rework. */
+export function reworkOwner(logs: WorkLogEntity[], opId: number, attempt: number): WorkLogEntity | null {
+  return logs.filter((l) => l.operationId === opId && l.attempt < attempt).sort((a, b) => b.attempt - a.attempt)[0] ?? null;
+}
+
 /** Which operations are done on a bundle now, from its logs (only the current attempt counts). */
 export function doneMap(bundle: BundleEntity, logs: WorkLogEntity[]) {
   const done = new Map<number, WorkLogEntity>();
@@ -40,7 +46,22 @@ export function doneMap(bundle: BundleEntity, logs: WorkLogEntity[]) {
   return done;
 }
 
-export function createFloorService(deps: { repo: FloorRepository; audit: AuditRepository; now: () => Date }) {
+/** The day after `day` (calendar dates). */
+const nextDay = (day: string) => dayOf(new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000));
+
+/** Count and earnings of some logs: first-attempt pieces, every log as a bundle operation, pay rounded once per operation line. */
+function figuresOf(logs: WorkLogEntity[], fromDay: string, toDay: string): MyFiguresDto {
+  const first = logs.filter((l) => l.attempt === 0);
+  const pay = computePeriodPay({
+    work: first.map((l) => ({ personId: 'me', operationId: String(l.operationId), pieces: l.pieces, rate: logRate(l) })),
+    attendance: [],
+    scheduledMinutes: {},
+    rules: { minimumHourlyMinor: null, overtimePremiumPercent: null },
+  });
+  return { fromDay, toDay, pieces: first.reduce((a, l) => a + l.pieces, 0), bundleOps: logs.length, earningsMinor: pay[0]?.pieceMinor ?? 0 };
+}
+
+export function createFloorService(deps: { repo: FloorRepository; audit: AuditRepository; now: () => Date; timeZone?: (studioId: number) => Promise<string> }) {
   const { repo, audit, now } = deps;
   const clock = () => now().getTime();
   const opsMemo = memo<number, OperationEntity[]>(2000, clock);
@@ -219,6 +240,12 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       if (prior) return { status: 201, result: await replay(actor, prior) };
       const existing = logs.find((l) => l.operationId === op.id && l.attempt === attempt);
       if (existing) throw await alreadyLogged(actor, existing, bundle, op);
+      // Rework goes back to the person who did the operation: only they (or the owner) redo it, and it is not paid again.
+      const sewnBy = attempt > 0 && !isCheck ? reworkOwner(logs, op.id, attempt) : null;
+      if (sewnBy && sewnBy.userId !== actor.id && actor.role !== 'owner') {
+        const who = await userName(actor.studioId, sewnBy.userId, actor);
+        throw new AppError(403, 'forbidden', `Bundle ${bundle.number} · ${op.code} ${op.name} went back for rework to ${who}, who did it`, { operationId: `Rework for ${who}` });
+      }
       const warnings = missingPredecessors(op, ops, doneMap(bundle, logs));
 
       let saved: WorkLogEntity;
@@ -231,7 +258,8 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
           userId: actor.id,
           pieces: bundle.pieces,
           earnedMinutes: logEarnedMinutes(bundle.pieces, op.sam, attempt),
-          payMinor: logPayMinor(bundle.pieces, op.pieceRateMinor, attempt),
+          payMinor: logPayMinor(bundle.pieces, operationRate(op), attempt),
+          pieceRate: attempt > 0 ? '' : operationRate(op),
           idempotencyKey: input.idempotencyKey,
           outcome: input.outcome ?? '',
           defect: input.outcome === 'fail' ? (input.defect ?? '') : '',
@@ -246,7 +274,11 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
         if (winner) throw await alreadyLogged(actor, winner, bundle, op);
         throw e;
       }
-      if (rework) await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
+      if (rework) {
+        await reopen(actor.studioId, bundle.id, [...new Set([rework.id, op.id])]);
+        const sewer = reworkOwner(logs, rework.id, attemptOf(bundle, rework.id) + 1);
+        if (sewer) warnings.push(`Sent back to ${await userName(actor.studioId, sewer.userId, actor)} for rework of ${rework.code} ${rework.name} (not paid again)`);
+      }
       const dto = presentLog(saved, bundle, op, actor.name, await currency(actor.studioId));
       // The work log is itself the record of who did what and when; the audit trail adds the exceptions
       // (a failed check that sent work back, an undo), so hundreds of logs a day do not bury them.
@@ -274,10 +306,67 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       await audit.record(actor, 'undo', 'work_log', id, { bundleId: log.bundleId, operationId: log.operationId, attempt: log.attempt }, undefined);
     },
 
+    /**
+     * The signed-in person's own count and earnings today, this week (Monday to today) and in the pay period not yet
+     * approved (their logs no period has taken), on the studio's days in its time zone.
+     */
+    async summary(actor: Actor): Promise<MySummaryDto> {
+      const tz = deps.timeZone ? await deps.timeZone(actor.studioId) : 'UTC';
+      const today = zonedDay(now(), tz);
+      const weekday = new Date(`${today}T00:00:00Z`).getUTCDay();
+      const monday = dayOf(new Date(Date.parse(`${today}T00:00:00Z`) - ((weekday + 6) % 7) * 86_400_000));
+      const end = zonedDayStart(nextDay(today), tz);
+      const todayStart = zonedDayStart(today, tz).getTime();
+      const week = await repo.logsBetween(actor.studioId, zonedDayStart(monday, tz), end, actor.id);
+      const unpaid = await repo.unpaidLogsOf(actor.studioId, actor.id, end);
+      const last = await repo.lastPeriod(actor.studioId);
+      const firstUnpaid = unpaid.length ? zonedDay(new Date(unpaid[0].createdAt), tz) : today;
+      const periodFrom = last && nextDay(last.toDay) <= today ? nextDay(last.toDay) : firstUnpaid < today ? firstUnpaid : today;
+      return {
+        currency: await currency(actor.studioId),
+        today: figuresOf(week.filter((l) => new Date(l.createdAt).getTime() >= todayStart), today, today),
+        week: figuresOf(week, monday, today),
+        payPeriod: figuresOf(unpaid, periodFrom, today),
+      };
+    },
+
+    /** Bundle operations sent back for rework to the signed-in person (they did the attempt before), oldest first. */
+    async rework(actor: Actor): Promise<ReworkDto[]> {
+      const out: ReworkDto[] = [];
+      for (const bundle of await repo.reopenedBundles(actor.studioId)) {
+        const batch = await batchOf(actor.studioId, bundle.batchId);
+        if (!batch || batch.status === 'shipped' || batch.status === 'cancelled') continue;
+        const ops = await styleOps(actor.studioId, batch.styleId);
+        const logs = await repo.logsOfBundle(actor.studioId, bundle.id);
+        const failed = logs.filter((l) => l.outcome === 'fail').sort((a, b) => b.id - a.id)[0];
+        for (const op of ops) {
+          const attempt = attemptOf(bundle, op.id);
+          if (attempt === 0 || isCheckOperation(op) || logs.some((l) => l.operationId === op.id && l.attempt === attempt)) continue;
+          if (reworkOwner(logs, op.id, attempt)?.userId !== actor.id) continue;
+          out.push({
+            bundleNumber: bundle.number,
+            batchId: bundle.batchId,
+            batchCode: batchCode(bundle.batchId),
+            operationId: op.id,
+            operationCode: op.code,
+            operationName: op.name,
+            attempt,
+            defect: failed?.defect ?? '',
+            checkedBy: failed ? await userName(actor.studioId, failed.userId, actor) : '',
+            checkedAt: failed ? new Date(failed.createdAt).toISOString() : null,
+          });
+        }
+      }
+      return out;
+    },
+
     /** Today's logs, pieces and earnings of the signed-in person only. */
     async today(actor: Actor): Promise<TodayDto> {
-      const from = dayStart(now());
-      const to = new Date(from.getTime() + 86_400_000);
+      // The studio's day, in its time zone (UTC until a working calendar says otherwise).
+      const tz = deps.timeZone ? await deps.timeZone(actor.studioId) : 'UTC';
+      const day = zonedDay(now(), tz);
+      const from = zonedDayStart(day, tz);
+      const to = zonedDayStart(nextDay(day), tz);
       const logs = (await repo.logsBetween(actor.studioId, from, to, actor.id)).reverse();
       const cur = await currency(actor.studioId);
       const dtos = [];
@@ -288,7 +377,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
         dtos.push(presentLog(l, bundle ?? { number: 0, batchId: 0 }, op ?? { code: '?', name: 'Operation removed' }, actor.name, cur));
       }
       return {
-        day: dayOf(from),
+        day,
         logs: dtos,
         pieces: logs.reduce((a, l) => a + l.pieces, 0),
         bundleOps: logs.length,

@@ -38,6 +38,7 @@ export const STAFF_TIME_LIMIT_S = 5;
  * Friday; breaks already out of the studio's working day.
  */
 export const WORKDAYS = [1, 2, 3, 4, 5];
+const DAY_NAMES = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'];
 
 export interface PlanInput {
   batchId: number;
@@ -55,6 +56,8 @@ export interface PlanInput {
   machines: Record<string, number>;
   /** The solved {@link staffingProblem} (people mode), or null when it was not asked for. */
   staffing: StaffingOutcome | null;
+  /** The studio's working days and holidays (its working calendar); default Monday to Friday, none. */
+  calendar?: { workdays: number[]; holidays: string[]; timeZone: string; entered: boolean };
 }
 
 /** What the line-staffing job answered: the plan, or the core's RangeError message. */
@@ -73,7 +76,7 @@ const people = (n: number, role: string) => `${n} ${role}${n === 1 ? '' : 's'}`;
  */
 export function planLine(input: PlanInput): LinePlanDto {
   const { query: q, quantity } = input;
-  const calendar: WorkingCalendar = { workdays: WORKDAYS, minutesPerDay: input.minutesPerDay, holidays: [] };
+  const calendar: WorkingCalendar = { workdays: input.calendar?.workdays ?? WORKDAYS, minutesPerDay: input.minutesPerDay, holidays: input.calendar?.holidays ?? [] };
   const start = q.start ?? workingDays(calendar, format(addDays(parseISO(input.today), 1), 'yyyy-MM-dd'), 1)[0];
   const sewing = input.operations.filter((o) => o.section === 'sewing');
   if (sewing.length === 0) throw badRequest('operations: the style has no sewing operations to balance', { operations: 'Add sewing operations first' });
@@ -160,13 +163,15 @@ export function planLine(input: PlanInput): LinePlanDto {
     mode: q.mode,
     efficiency: q.efficiency,
     minutesPerDay: input.minutesPerDay,
-    workdays: WORKDAYS,
+    workdays: calendar.workdays,
     assumptions: [
       `Staff from the People page: ${people(input.staff.sewing, 'machinist')}, each taken to run every sewing machine type; ${people(input.staff.cutting, 'cutter')}; ${people(input.staff.finishing, 'finisher')}.`,
       ...(['sewing', 'cutting', 'finishing'] as const)
         .filter((s) => input.staff[s] === 0)
         .map((s) => `Nobody active for ${s} on the People page: planned with one person.`),
-      `Working week Monday to Friday, ${input.minutesPerDay / 60} h a day (the studio's working day), no holidays entered.`,
+      input.calendar?.entered
+        ? `Working calendar: ${calendar.workdays.map((d) => DAY_NAMES[d]).join(', ')}, ${r2(input.minutesPerDay / 60)} h a day, ${calendar.holidays.length ? `${calendar.holidays.length} holiday${calendar.holidays.length === 1 ? '' : 's'}` : 'no holidays'}; days in ${input.calendar.timeZone}.`
+        : `Working week Monday to Friday, ${input.minutesPerDay / 60} h a day (the studio's working day), no holidays entered.`,
       `Operator efficiency ${Math.round(q.efficiency * 100)} %; one machine type per station; bundles of ${q.bundleSize}.`,
       `Shared operations: ${people(sewingCrew.length, 'person')} at the line, each running the machine types on their skills (People page) at their pace; ${Object.keys(input.machines).length ? `machines ${Object.entries(input.machines).map(([t, n]) => `${n} ${t}`).join(', ')}` : 'no machine counts entered (not limited)'}.`,
       'Minutes (SAM) are the demo estimates of the operations table, not published standard times.',

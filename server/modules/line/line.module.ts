@@ -2,8 +2,9 @@ import type { BatchRepository } from '../batches/batch.repository';
 import type { ApiModule, ModuleContext } from '../module';
 import type { StyleRepository } from '../styles/style.repository';
 import { linePlanRoutes, operationRoutes } from './line.routes';
+import { createCalendarRepository } from './studio-calendar.repository';
 import { createLineService } from './line.service';
-import { createCrewLookup, createOperationRepository, createStaffLookup, createStudioLookup } from './operation.repository';
+import { createCrewLookup, createOperationRepository, createPresentLookup, createStaffLookup, createStudioLookup } from './operation.repository';
 
 /** The line area: operations per style, line balancing, capacity and the batch schedule. */
 export function createLineModule(ctx: ModuleContext, deps: { styles: StyleRepository; batches: BatchRepository }) {
@@ -14,6 +15,8 @@ export function createLineModule(ctx: ModuleContext, deps: { styles: StyleReposi
     studio: createStudioLookup(ctx.ds),
     staff: createStaffLookup(ctx.ds),
     crew: createCrewLookup(ctx.ds),
+    present: createPresentLookup(ctx.ds),
+    calendar: createCalendarRepository(ctx.ds),
     solveStaffing: (input) => ctx.jobs.run('line-staffing', input),
     audit: ctx.audit,
     now: ctx.now,

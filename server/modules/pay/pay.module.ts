@@ -4,6 +4,7 @@ import type { ApiModule, ModuleContext } from '../module';
 import { createPaymentsClient, type PaymentsClient } from './payments-client';
 import { createPaymentsFake, type PaymentsFake } from './payments-fake';
 import { createPayRepository } from './pay.repository';
+import { createCalendarRepository } from '../line/studio-calendar.repository';
 import { payRoutes } from './pay.routes';
 import { createPayService } from './pay.service';
 
@@ -30,8 +31,11 @@ export function createPayModule(ctx: ModuleContext, deps: { floor: FloorProgress
   };
   let client: PaymentsClient | null = null;
   const payments = async () => (client ??= createPaymentsClient({ secretKey, fakePort: async () => (await ensureFake()).port }));
+  const calendars = createCalendarRepository(ctx.ds);
   const pay = createPayService({
     repo: createPayRepository(ctx.ds),
+    calendar: async (studioId) => (await calendars.get(studioId)).working,
+    timeZone: async (studioId) => (await calendars.get(studioId)).calendar.timeZone,
     audit: ctx.audit,
     floor: () => deps.floor,
     payments,

@@ -1,7 +1,7 @@
 import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
-import { In, IsNull } from 'typeorm';
-import { PayoutEntity, PayPeriodEntity, StudioEntity, UserEntity, WorkLogEntity } from '../../entities';
+import { Between, In, IsNull } from 'typeorm';
+import { AttendanceEntity, PayoutEntity, PayPeriodEntity, StudioEntity, StudioWorkRulesEntity, UserEntity, WorkLogEntity } from '../../entities';
 
 export type PayRepository = ReturnType<typeof createPayRepository>;
 
@@ -44,6 +44,18 @@ export function createPayRepository(ds: DataSource) {
       return payouts.findOneByOrFail({ studioId, id });
     },
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
+    /** Attended minutes per person and day over [fromDay, toDay] (the studio's days). */
+    attendanceBetween: (studioId: number, fromDay: string, toDay: string) =>
+      ds.getRepository(AttendanceEntity).find({ where: { studioId, day: Between(fromDay, toDay) }, order: { day: 'ASC', userId: 'ASC' } }),
+    /** The studio's pay rules row; null until first saved. */
+    workRules: (studioId: number) => ds.getRepository(StudioWorkRulesEntity).findOneBy({ studioId }),
+    /** Save the pay rules, making the studio's row on first save (one row per studio: unique index). */
+    async saveWorkRules(studioId: number, patch: Partial<StudioWorkRulesEntity>) {
+      const repo = ds.getRepository(StudioWorkRulesEntity);
+      const row = (await repo.findOneBy({ studioId })) ?? repo.create({ studioId });
+      return repo.save(Object.assign(row, patch));
+    },
+    setPeriodRules: (studioId: number, id: number, rules: PayPeriodEntity['rules']) => periods.update({ studioId, id }, { rules }),
     userName: async (studioId: number, id: number) => (await ds.getRepository(UserEntity).findOneBy({ studioId, id }))?.name ?? '',
     payoutAccount: async (studioId: number, id: number) => (await ds.getRepository(UserEntity).findOneBy({ studioId, id }))?.payoutAccount ?? '',
   };

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { JobRunner } from '../../jobs/job-runner';
 import { periodQuery } from '../../../shared/schemas/floor';
-import { approvePayPeriodInput, payoutParams, payPersonInput, type PayModeDto } from '../../../shared/schemas/pay';
+import { approvePayPeriodInput, payoutParams, payPersonInput, payRulesInput, type PayModeDto } from '../../../shared/schemas/pay';
 import { actorOf, requirePermission } from '../../auth/require';
 import { validate } from '../../middleware/validate';
 import type { PayService } from './pay.service';
@@ -20,6 +20,15 @@ export function payRoutes(pay: PayService, mode: () => PayModeDto, jobs: JobRunn
   r.get('/preview', requirePermission('pay:manage'), validate({ query: periodQuery }), async (req, res) => {
     const q = req.query as unknown as { from: string; to: string };
     res.json({ preview: await pay.preview(actorOf(req).studioId, q.from, q.to) });
+  });
+  r.get('/rules', requirePermission('pay:manage'), async (req, res) => {
+    res.json({ rules: await pay.rules(actorOf(req).studioId) });
+  });
+  r.put('/rules', requirePermission('pay:manage'), validate({ body: payRulesInput }), async (req, res) => {
+    res.json({ rules: await pay.saveRules(actorOf(req), req.body) });
+  });
+  r.get('/periods/:id/recompute', requirePermission('pay:manage'), validate({ params: payoutParams }), async (req, res) => {
+    res.json(await pay.recompute(actorOf(req).studioId, Number(req.params.id)));
   });
   r.get('/periods', requirePermission('pay:manage'), async (req, res) => {
     res.json({ periods: await pay.periods(actorOf(req).studioId) });

@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import type { MyPayDto, PayoutDto, PayPeriodDto, PayPersonLine, PayPreviewDto } from '../../../shared/schemas/pay';
+import { computePeriodPay, formatRate, isWorkingDay, rateMillionths, zonedDay, zonedDayStart, type WorkingCalendar } from '@planning';
+import { PAY_RULES_CAUTION, type MyPayDto, type PayoutDto, type PayPeriodDto, type PayPeriodLine, type PayPeriodRules, type PayPersonLine, type PayPreviewDto, type PayRulesDto, type PayRulesInput } from '../../../shared/schemas/pay';
 import type { Actor } from '../../auth/require';
 import type { PayoutEntity, PayPeriodEntity, WorkLogEntity } from '../../entities';
 import { badRequest, conflict, notFound } from '../../errors';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { FloorProgressService, PayLine } from '../floor/floor-progress.service';
+import { logRate } from '../floor/floor-math';
 import { dayOf } from '../floor/floor.service';
 import { isUniqueViolation } from '../../db/data-source';
 import type { PaymentsClient, TransferOutcome } from './payments-client';
@@ -52,7 +54,23 @@ const presentPayout = (p: PayoutEntity, name: string): PayoutDto => ({
   updatedAt: new Date(p.updatedAt).toISOString(),
 });
 
+/** Every day from `fromDay` to `toDay`, both included (calendar dates, no time zone). */
+export function daysBetween(fromDay: string, toDay: string): string[] {
+  const out: string[] = [];
+  for (let t = Date.parse(`${fromDay}T00:00:00Z`); out.length < 400 && dayOf(new Date(t)) <= toDay; t += DAY_MS) out.push(dayOf(new Date(t)));
+  return out;
+}
+
+/** Scheduled minutes per day of [fromDay, toDay]: the calendar's minutes on its working days; other days are left out (0). */
+export function scheduledMinutesOf(calendar: WorkingCalendar, fromDay: string, toDay: string): Record<string, number> {
+  return Object.fromEntries(daysBetween(fromDay, toDay).filter((d) => isWorkingDay(calendar, d)).map((d) => [d, calendar.minutesPerDay]));
+}
+
 export function createPayService(deps: {
+  /** The studio's IANA time zone: pay days are its days. */
+  timeZone?: (studioId: number) => Promise<string>;
+  /** The studio's working calendar (working days, minutes a day, holidays), for overtime. */
+  calendar: (studioId: number) => Promise<WorkingCalendar>;
   repo: PayRepository;
   audit: AuditRepository;
   floor: () => FloorProgressService;
@@ -68,11 +86,13 @@ export function createPayService(deps: {
    * on an already-approved day after its approval (a period closes its days; late work goes to the next one).
    */
   async function claimable(studioId: number, fromDay: string, toDay: string, periods: PayPeriodEntity[]) {
-    const from = new Date(`${fromDay}T00:00:00Z`);
-    const to = new Date(new Date(`${toDay}T00:00:00Z`).getTime() + DAY_MS);
+    // Days are the studio's own, in its time zone (UTC until its working calendar names one).
+    const tz = deps.timeZone ? await deps.timeZone(studioId) : 'UTC';
+    const from = zonedDayStart(fromDay, tz);
+    const to = zonedDayStart(realDay(dayOf(new Date(Date.parse(`${toDay}T00:00:00Z`) + DAY_MS))), tz);
     const open = await repo.unclaimedLogsBefore(studioId, to);
     const inDays = (l: WorkLogEntity) => new Date(l.createdAt).getTime() >= from.getTime();
-    const late = open.filter((l) => !inDays(l) && periods.some((p) => covers(p, dayOf(l.createdAt))));
+    const late = open.filter((l) => !inDays(l) && periods.some((p) => covers(p, zonedDay(new Date(l.createdAt), tz))));
     return { logs: [...open.filter(inDays), ...late], carried: late.length };
   }
 
@@ -82,23 +102,70 @@ export function createPayService(deps: {
     return byPerson;
   }
 
+  /** The rules a period approved now would take: the studio's pay rules and its calendar's minutes for these days. */
+  async function currentRules(studioId: number, fromDay: string, toDay: string): Promise<PayPeriodRules> {
+    const row = await repo.workRules(studioId);
+    const hourly = row?.minimumWageOn && row.minimumHourlyMinor ? row.minimumHourlyMinor : null;
+    return { minimumHourlyMinor: hourly, overtimePremiumPercent: row?.overtimePremiumPercent ?? 0, scheduledMinutes: scheduledMinutesOf(await deps.calendar(studioId), fromDay, toDay) };
+  }
+
+  /**
+   * Each person's pay for these logs and the attendance of [fromDay, toDay] under these rules (planning/pay
+   * computePeriodPay: each operation line rounded once, then overtime premium and minimum-wage top-up).
+   */
+  async function periodLines(studioId: number, logs: WorkLogEntity[], fromDay: string, toDay: string, rules: PayPeriodRules | null) {
+    const first = logs.filter((l) => l.attempt === 0);
+    const attendance = rules ? await repo.attendanceBetween(studioId, fromDay, toDay) : [];
+    const pay = computePeriodPay({
+      work: first.map((l) => ({ personId: String(l.userId), operationId: String(l.operationId), pieces: l.pieces, rate: logRate(l) })),
+      attendance: attendance.map((a) => ({ personId: String(a.userId), day: a.day, minutes: Math.round(a.minutes) })),
+      scheduledMinutes: rules?.scheduledMinutes ?? {},
+      rules: { minimumHourlyMinor: rules?.minimumHourlyMinor ?? null, overtimePremiumPercent: rules?.overtimePremiumPercent || null },
+    });
+    const names = new Map<number, string>();
+    for (const p of pay) names.set(Number(p.personId), await repo.userName(studioId, Number(p.personId)));
+    return pay
+      .map((p): PayPeriodLine & { ops: PayLine[] } => ({
+        userId: Number(p.personId),
+        name: names.get(Number(p.personId)) ?? '',
+        pieces: p.pieces,
+        amountMinor: p.totalMinor,
+        pieceMinor: p.pieceMinor,
+        overtimeMinor: p.overtimeMinor,
+        topUpMinor: p.topUpMinor,
+        attendedMinutes: p.attendedMinutes,
+        overtimeMinutes: p.overtimeMinutes,
+        ops: [],
+      }))
+      .filter((l) => l.amountMinor > 0 || l.pieces > 0)
+      .sort((a, b) => a.name.localeCompare(b.name) || a.userId - b.userId);
+  }
+
+  const stripOps = ({ ops: _ops, ...line }: PayPeriodLine & { ops: PayLine[] }): PayPeriodLine => line;
+
   async function preview(studioId: number, fromDay: string, toDay: string): Promise<PayPreviewDto> {
     const [people, studio, periods] = await Promise.all([floor().people(studioId, fromDay, toDay), repo.studio(studioId), repo.periods(studioId)]);
     const { logs, carried } = await claimable(studioId, fromDay, toDay, periods);
     const byPerson = personLines(await floor().payLinesOf(studioId, logs));
-    const result: PayPersonLine[] = [...byPerson.entries()].map(([userId, ops]) => {
-      const p = people.find((x) => x.userId === userId);
+    const lines = await periodLines(studioId, logs, fromDay, toDay, await currentRules(studioId, fromDay, toDay));
+    const result: PayPersonLine[] = lines.map((line) => {
+      const p = people.find((x) => x.userId === line.userId);
+      const ops = byPerson.get(line.userId) ?? [];
       return {
-        userId,
-        name: ops[0].name,
-        pieces: ops.reduce((a, l) => a + l.pieces, 0),
-        amountMinor: ops.reduce((a, l) => a + l.amountMinor, 0),
+        userId: line.userId,
+        name: line.name,
+        pieces: line.pieces,
+        amountMinor: line.amountMinor,
+        pieceMinor: line.pieceMinor ?? 0,
+        overtimeMinor: line.overtimeMinor ?? 0,
+        topUpMinor: line.topUpMinor ?? 0,
+        overtimeMinutes: line.overtimeMinutes ?? 0,
         earnedMinutes: p?.earnedMinutes ?? 0,
         attendedMinutes: p?.attendedMinutes ?? 0,
         efficiencyPercent: p?.efficiencyPercent ?? null,
         operations: ops.map((l) => ({ code: l.operationCode, name: l.operationName, pieces: l.pieces, rateMinor: l.rateMinor, amountMinor: l.amountMinor })),
       };
-    }).sort((a, b) => a.name.localeCompare(b.name));
+    });
     const overlap = periods.find((p) => realDay(p.fromDay) <= toDay && fromDay <= realDay(p.toDay));
     return {
       fromDay,
@@ -261,13 +328,11 @@ export function createPayService(deps: {
     if (overlap) throw conflict(`These days overlap pay period ${overlap.id}, already approved`, { fromDay: 'Overlaps an approved period' });
     const { logs } = await claimable(actor.studioId, fromDay, toDay, periods);
     if (!logs.some((l) => l.attempt === 0 && l.pieces > 0)) throw badRequest('fromDay: no logged work in these days', { fromDay: 'No logged work in these days' });
-    const saved = await repo.insertPeriod({ studioId: actor.studioId, fromDay, toDay, status: 'approved', approvedBy: actor.id, lines: [] });
+    const rules = await currentRules(actor.studioId, fromDay, toDay);
+    const saved = await repo.insertPeriod({ studioId: actor.studioId, fromDay, toDay, status: 'approved', approvedBy: actor.id, lines: [], rules });
     await repo.claimLogs(actor.studioId, saved.id, logs.map((l) => l.id));
     // The lines are what this period really took: a log another request took meanwhile is not paid twice.
-    const byPerson = personLines(await floor().payLinesOf(actor.studioId, await repo.logsOfPeriod(actor.studioId, saved.id)));
-    const lines = [...byPerson.entries()]
-      .map(([userId, ops]) => ({ userId, name: ops[0].name, pieces: ops.reduce((a, l) => a + l.pieces, 0), amountMinor: ops.reduce((a, l) => a + l.amountMinor, 0) }))
-      .sort((a, b) => a.name.localeCompare(b.name));
+    const lines = (await periodLines(actor.studioId, await repo.logsOfPeriod(actor.studioId, saved.id), fromDay, toDay, rules)).map(stripOps);
     await repo.setPeriodLines(actor.studioId, saved.id, lines);
     saved.lines = lines;
     await audit.record(actor, 'approve', 'pay_period', saved.id, undefined, { fromDay, toDay, totalMinor: lines.reduce((a, l) => a + l.amountMinor, 0) });
@@ -298,6 +363,39 @@ export function createPayService(deps: {
       const run = payOnce(actor, periodId, userId).finally(() => inFlight.delete(key));
       inFlight.set(key, run);
       return run;
+    },
+    /**
+     * The period's lines computed again from its own logs, the attendance of its days and the rules it was approved
+     * with: the same as the stored lines (a re-run never changes money). `same` says whether they agree.
+     */
+    async recompute(studioId: number, id: number) {
+      const period = await getPeriod(studioId, id);
+      const lines = (await periodLines(studioId, await repo.logsOfPeriod(studioId, period.id), period.fromDay, period.toDay, period.rules)).map(stripOps);
+      const stored = period.rules ? period.lines : period.lines.map((l) => ({ userId: l.userId, name: l.name, pieces: l.pieces, amountMinor: l.amountMinor }));
+      const comparable = period.rules ? lines : lines.map((l) => ({ userId: l.userId, name: l.name, pieces: l.pieces, amountMinor: l.amountMinor }));
+      return { lines, same: JSON.stringify(comparable) === JSON.stringify(stored) };
+    },
+    /** The studio's pay rules, with the caution that local law decides. */
+    async rules(studioId: number): Promise<PayRulesDto> {
+      const row = await repo.workRules(studioId);
+      const studio = await repo.studio(studioId);
+      return {
+        minimumWageOn: row?.minimumWageOn ?? false,
+        minimumHourlyMinor: row?.minimumHourlyMinor ? Number(row.minimumHourlyMinor) : null,
+        overtimePremiumPercent: row?.overtimePremiumPercent ?? 0,
+        currency: studio.currency,
+        caution: PAY_RULES_CAUTION,
+      };
+    },
+    /** Save the pay rules; approved periods keep the rules they were approved with. */
+    async saveRules(actor: Actor, input: PayRulesInput): Promise<PayRulesDto> {
+      const before = await repo.workRules(actor.studioId);
+      const hourly = input.minimumHourlyMinor == null ? null : rateMillionths(input.minimumHourlyMinor);
+      if (input.minimumHourlyMinor != null && hourly == null) throw badRequest('minimumHourlyMinor: at most 6 decimals', { minimumHourlyMinor: 'At most 6 decimals of a minor unit' });
+      const patch = { minimumWageOn: input.minimumWageOn, minimumHourlyMinor: hourly == null ? '' : formatRate(hourly), overtimePremiumPercent: input.overtimePremiumPercent };
+      await repo.saveWorkRules(actor.studioId, patch);
+      await audit.record(actor, 'pay_rules', 'studio', actor.studioId, before ? { minimumWageOn: before.minimumWageOn, minimumHourlyMinor: before.minimumHourlyMinor, overtimePremiumPercent: before.overtimePremiumPercent } : undefined, patch);
+      return this.rules(actor.studioId);
     },
     /** The signed-in person's own pay in a period. */
     async mine(actor: Actor, fromDay: string, toDay: string): Promise<MyPayDto> {

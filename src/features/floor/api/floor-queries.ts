@@ -1,11 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { BundleChoiceDto, BundleDto, DailyOutput, ProgressDto, TodayDto } from '@shared/schemas/floor';
+import type { BundleChoiceDto, BundleDto, DailyOutput, MySummaryDto, ProgressDto, ReworkDto, TodayDto } from '@shared/schemas/floor';
 import { api } from '@/lib/api-client';
 import { batchQueries } from '@/lib/queries';
 
 export const floorQueries = {
   all: () => ({ queryKey: ['floor'] as const }),
   today: () => queryOptions({ queryKey: ['floor', 'today'], queryFn: () => api.get<TodayDto>('/floor/me/today'), refetchInterval: 60_000 }),
+  /** Bundle operations a failed check sent back to the signed-in person. */
+  rework: () => queryOptions({ queryKey: ['floor', 'rework'], queryFn: async () => (await api.get<{ rework: ReworkDto[] }>('/floor/me/rework')).rework, refetchInterval: 60_000 }),
+  /** Own count and earnings this week and this pay period (under the 'floor' key, so a new log refreshes it). */
+  summary: () => queryOptions({ queryKey: ['floor', 'summary'], queryFn: () => api.get<MySummaryDto>('/floor/me/summary'), refetchInterval: 60_000 }),
   bundle: (number: number, batchId?: number) =>
     queryOptions({
       queryKey: ['floor', 'bundle', number, batchId ?? null],

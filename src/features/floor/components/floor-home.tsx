@@ -10,6 +10,7 @@ import { flushOutbox, newIdempotencyKey, othersWaiting, sendLog, waitingFor } fr
 import { BundleLogPanel, type LogChoice } from './bundle-log-panel';
 import { LogConfirmation } from './log-confirmation';
 import { QrScanner } from './qr-scanner';
+import { ReworkCard } from './rework-card';
 import { TodayCard } from './today-card';
 
 /**
@@ -130,6 +131,7 @@ export function FloorHome({ name }: { name: string }) {
         </p>
       ))}
       {outbox.note ? <p className="rounded-lg bg-calico-50 px-3 py-2 text-sm">{outbox.note}</p> : null}
+      <ReworkCard onOpen={(t) => handleScanned(t)} />
       <Card title="Find a bundle">
         {scanning ? (
           <QrScanner onBundle={handleScanned} onClose={() => setScanning(false)} />

@@ -7,6 +7,7 @@ import { ConfirmButton } from '@/components/ui/confirm-button';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { downloadFile } from '@/lib/api-client';
 import { formatEfficiency, formatMoney } from '@/lib/format';
+import { PayRulesCard } from './pay-rules-card';
 import { payQueries, useApprovePayPeriod, usePayPerson } from '../api/pay-queries';
 
 const statusTone = { paid: 'teal', pending: 'gold', failed: 'red', to_check: 'red' } as const;
@@ -102,7 +103,7 @@ export function PayPage() {
             <div role="region" aria-label="Pay lines" tabIndex={0} className="mt-3 overflow-x-auto">
               <table className="min-w-full text-sm" aria-label="Pay preview">
                 <thead className="bg-thread-700 text-left text-calico-50">
-                  <tr><th className="px-3 py-2">Person</th><th className="px-3 py-2">Pieces</th><th className="px-3 py-2" title={EFFICIENCY_DEFINITION}>Efficiency</th><th className="px-3 py-2">Amount</th></tr>
+                  <tr><th className="px-3 py-2">Person</th><th className="px-3 py-2">Pieces</th><th className="px-3 py-2" title={EFFICIENCY_DEFINITION}>Efficiency</th><th className="px-3 py-2">Piece pay</th><th className="px-3 py-2">Overtime premium</th><th className="px-3 py-2">Minimum-wage top-up</th><th className="px-3 py-2">Amount</th></tr>
                 </thead>
                 <tbody>
                   {preview.data.people.map((p) => (
@@ -110,15 +111,19 @@ export function PayPage() {
                       <td className="px-3 py-2">{p.name}</td>
                       <td className="px-3 py-2">{p.pieces}</td>
                       <td className="px-3 py-2">{formatEfficiency(p.efficiencyPercent)}</td>
+                      <td className="px-3 py-2">{formatMoney(p.pieceMinor, preview.data.currency)}</td>
+                      <td className="px-3 py-2">{p.overtimeMinor ? `${formatMoney(p.overtimeMinor, preview.data.currency)} (${Math.round(p.overtimeMinutes / 6) / 10} h)` : '—'}</td>
+                      <td className="px-3 py-2">{p.topUpMinor ? formatMoney(p.topUpMinor, preview.data.currency) : '—'}</td>
                       <td className="px-3 py-2">{formatMoney(p.amountMinor, preview.data.currency)}</td>
                     </tr>
                   ))}
-                  <tr className="border-t border-calico-200 font-semibold"><td className="px-3 py-2" colSpan={3}>Total</td><td className="px-3 py-2">{formatMoney(preview.data.totalMinor, preview.data.currency)}</td></tr>
+                  <tr className="border-t border-calico-200 font-semibold"><td className="px-3 py-2" colSpan={6}>Total</td><td className="px-3 py-2">{formatMoney(preview.data.totalMinor, preview.data.currency)}</td></tr>
                 </tbody>
               </table>
             </div>
           ) : <Spinner />}
         </Card>
+        <PayRulesCard />
         {periods.map((p) => <PeriodCard key={p.id} period={p} />)}
       </div>
     </>

@@ -22,6 +22,7 @@ export function TodayCard() {
           <dd className="text-lg font-bold text-thread-800" data-testid="today-earned">{data ? formatMoney(data.earningsMinor, data.currency) : '–'}</dd>
         </div>
       </dl>
+      <WeekAndPeriod />
       {data?.logs.length ? (
         <ul className="mt-3 divide-y divide-calico-200 text-sm" aria-label="Today's logs">
           {data.logs.map((l) => (
@@ -36,5 +37,29 @@ export function TodayCard() {
         </ul>
       ) : null}
     </Card>
+  );
+}
+
+/** This week's and this pay period's count and earnings, as the pay period will pay them. */
+function WeekAndPeriod() {
+  const { data } = useQuery(floorQueries.summary());
+  if (!data) return null;
+  const rows = [
+    { label: 'This week', sub: `since ${data.week.fromDay}`, f: data.week, id: 'week' },
+    { label: 'This pay period', sub: `not yet approved, since ${data.payPeriod.fromDay}`, f: data.payPeriod, id: 'period' },
+  ];
+  return (
+    <dl className="mt-3 space-y-1 text-sm" aria-label="Week and pay period">
+      {rows.map((r) => (
+        <div key={r.id} className="flex items-baseline justify-between gap-2 rounded-lg bg-calico-50 px-2 py-1.5">
+          <dt>
+            <span className="font-semibold text-thread-800">{r.label}</span> <span className="text-xs text-ink-600">{r.sub}</span>
+          </dt>
+          <dd className="whitespace-nowrap" data-testid={`${r.id}-figures`}>
+            {r.f.pieces} pcs · {r.f.bundleOps} ops · <strong>{formatMoney(r.f.earningsMinor, data.currency)}</strong>
+          </dd>
+        </div>
+      ))}
+    </dl>
   );
 }

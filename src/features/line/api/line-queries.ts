@@ -1,5 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { LinePlanDto, OperationDto } from '@shared/schemas/line';
+import type { LinePlanDto, OperationDto, TimeStudyInput, WorkingCalendarDto, WorkingCalendarInput } from '@shared/schemas/line';
 import { api, ApiError } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -79,4 +79,23 @@ export const useSaveOperations = (styleId: number) =>
   useMutation({
     mutationFn: async (operations: Omit<OperationDto, 'id' | 'seq'>[]) => (await api.put<{ operations: OperationDto[] }>(`/styles/${styleId}/operations`, { operations })).operations,
     onSuccess: refresh,
+  });
+
+/** Owner: set an operation's standard minutes from a time-study sheet. */
+export const useTimeStudy = (styleId: number, operationId: number) =>
+  useMutation({
+    mutationFn: async (sheet: TimeStudyInput) => (await api.put<{ operation: OperationDto }>(`/styles/${styleId}/operations/${operationId}/time-study`, sheet)).operation,
+    onSuccess: refresh,
+  });
+
+/** The studio's working calendar (owner). */
+export const calendarQueries = {
+  all: () => ({ queryKey: ['working-calendar'] as const }),
+  detail: () => queryOptions({ queryKey: ['working-calendar', 'detail'], queryFn: async () => (await api.get<{ calendar: WorkingCalendarDto }>('/line/calendar')).calendar }),
+};
+
+export const useSaveCalendar = () =>
+  useMutation({
+    mutationFn: async (v: WorkingCalendarInput) => (await api.put<{ calendar: WorkingCalendarDto }>('/line/calendar', v)).calendar,
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: calendarQueries.all().queryKey }), queryClient.invalidateQueries({ queryKey: linePlanQueries.all().queryKey })]),
   });

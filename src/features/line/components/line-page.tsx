@@ -9,6 +9,9 @@ import { batchQueries, styleQueries } from '@/lib/queries';
 import { operationQueries, useCopyOperations, useImportOperations } from '../api/line-queries';
 import { LinePlanPanel } from './line-plan-panel';
 import { OperationsEditor } from './operations-editor';
+import { rateToMajorText } from './rate-text';
+import { TimeStudyForm } from './time-study-form';
+import { WorkingCalendarCard } from './working-calendar-card';
 
 
 /** Line plan: pick a batch, see its style's operations and the balanced line with its schedule. */
@@ -32,6 +35,7 @@ export function LinePage() {
           <div className="space-y-5">
             <LinePlanPanel key={batch.id} batch={batch} />
             <OperationsCard styleId={batch.styleId} />
+            <WorkingCalendarCard />
           </div>
         </>
       ) : <Card><p className="text-sm text-ink-600">No open batches.</p></Card>}
@@ -47,6 +51,7 @@ function OperationsCard({ styleId }: { styleId: number }) {
   const copy = useCopyOperations(styleId);
   const [from, setFrom] = useState('');
   const [editing, setEditing] = useState(false);
+  const [studying, setStudying] = useState<number | null>(null);
   const fileRef = useRef<HTMLInputElement>(null);
   const rows = ops.data ?? [];
   const sections = ['cutting', 'sewing', 'finishing'] as const;
@@ -74,17 +79,25 @@ function OperationsCard({ styleId }: { styleId: number }) {
       <ErrorNote error={imp.error ?? copy.error ?? ops.error} />
       <div role="region" aria-label="Operations of the style" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="operations">
-          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Code</th><th>Operation</th><th>Machine</th><th className="text-right">SAM</th><th className="pl-4">After</th>{rows.some((r) => r.pieceRateMinor !== undefined) ? <th className="text-right">Piece rate</th> : null}</tr></thead>
+          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Code</th><th>Operation</th><th>Machine</th><th className="text-right">SAM</th><th className="pl-4">After</th>{rows.some((r) => r.pieceRateMinor !== undefined) ? <th className="text-right">Piece rate</th> : null}<th /></tr></thead>
           {sections.map((sec) => (
             <tbody key={sec}>
-              <tr><th colSpan={6} className="pt-3 text-left text-xs uppercase tracking-wide text-thread-700">{sec}</th></tr>
-              {rows.filter((r) => r.section === sec).map((r) => (
+              <tr><th colSpan={7} className="pt-3 text-left text-xs uppercase tracking-wide text-thread-700">{sec}</th></tr>
+              {rows.filter((r) => r.section === sec).flatMap((r) => [
                 <tr key={r.id} className="border-b border-calico-100">
                   <td className="py-1 font-mono">{r.code}</td><td>{r.name}</td><td>{r.machineType}</td>
-                  <td className="text-right tabular-nums">{r.sam.toFixed(1)}</td><td className="pl-4 font-mono text-xs">{r.predecessors.join(' ')}</td>
-                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : formatMoney(r.pieceRateMinor, currency)}</td> : null}
-                </tr>
-              ))}
+                  <td className="text-right tabular-nums">{r.sam.toFixed(r.timeStudy ? 3 : 1)}</td><td className="pl-4 font-mono text-xs">{r.predecessors.join(' ')}</td>
+                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : Number.isInteger(r.pieceRateMinor) ? formatMoney(r.pieceRateMinor, currency) : `${currency} ${rateToMajorText(r.pieceRateMinor, currency)}`}</td> : null}
+                  <td className="pl-3 text-right">
+                    <button type="button" className="text-sm underline" aria-label={`Time study, ${r.code}`} onClick={() => setStudying(studying === r.id ? null : r.id)}>
+                      {r.timeStudy ? 'Time study ✓' : 'Time study'}
+                    </button>
+                  </td>
+                </tr>,
+                studying === r.id ? (
+                  <tr key={`study-${r.id}`}><td colSpan={7} className="py-2"><TimeStudyForm styleId={styleId} operation={r} onDone={() => setStudying(null)} /></td></tr>
+                ) : null,
+              ])}
             </tbody>
           ))}
         </table>

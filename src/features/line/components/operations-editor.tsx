@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { LINE_SECTIONS, MACHINE_TYPES, putOperationsInput, type OperationDto } from '@shared/schemas/line';
-import { parseMajor, toMajorText } from '@shared/units/money';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useSaveOperations } from '../api/line-queries';
+import { parseRateMajor, rateToMajorText } from './rate-text';
 
 /** One row as typed: text fields, so a half-typed number is kept until it is checked. */
 interface DraftRow {
@@ -25,7 +25,7 @@ const toDraft = (o: OperationDto, key: number, currency: string): DraftRow => ({
   machineType: o.machineType,
   sam: String(o.sam),
   after: o.predecessors.join(' '),
-  rate: o.pieceRateMinor == null ? '' : toMajorText(o.pieceRateMinor, currency),
+  rate: o.pieceRateMinor == null ? '' : rateToMajorText(o.pieceRateMinor, currency),
 });
 
 /**
@@ -44,8 +44,8 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
     const found: Record<string, string> = {};
     const operations = draft.map((r, i) => {
       const sam = r.sam.trim() === '' ? Number.NaN : Number(r.sam);
-      const rate = r.rate.trim() === '' ? null : parseMajor(r.rate, currency);
-      if (r.rate.trim() !== '' && rate === null) found[`operations.${i}.pieceRateMinor`] = 'Give an amount, e.g. 12.50';
+      const rate = r.rate.trim() === '' ? null : parseRateMajor(r.rate, currency);
+      if (r.rate.trim() !== '' && rate === null) found[`operations.${i}.pieceRateMinor`] = 'Give an amount, e.g. 12.50 (up to 6 more decimals for a fraction of a cent)';
       return {
         code: r.code,
         name: r.name,

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
 import type { CreatePersonInput, PersonDto, UpdatePersonInput } from '@shared/schemas/people';
+import type { AttendanceDayDto, PutAttendanceInput } from '@shared/schemas/floor';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -17,4 +18,18 @@ export const useUpdatePerson = () =>
   useMutation({
     mutationFn: ({ id, ...patch }: UpdatePersonInput & { id: number }) => api.patch<{ user: PersonDto }>(`/users/${id}`, patch),
     onSuccess: invalidate,
+  });
+
+/** Attendance per day (who is in and for how long); the owner records it. */
+export const attendanceQueries = {
+  all: () => ({ queryKey: ['attendance'] as const }),
+  day: (day: string | null) =>
+    queryOptions({ queryKey: ['attendance', 'day', day], queryFn: () => api.get<AttendanceDayDto>(`/floor/attendance${day ? `?day=${day}` : ''}`) }),
+};
+
+export const useSaveAttendance = () =>
+  useMutation({
+    mutationFn: (v: PutAttendanceInput) => api.put<AttendanceDayDto>('/floor/attendance', v),
+    // The line plan's people present and pay previews read attendance too.
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: attendanceQueries.all().queryKey }), queryClient.invalidateQueries({ queryKey: ['line-plan'] }), queryClient.invalidateQueries({ queryKey: ['pay'] })]),
   });

@@ -10,6 +10,7 @@ import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
+import { AttendanceCard } from './attendance-card';
 import { FloorTabletCard } from './floor-tablet-card';
 import { SKILLS_PARAM, SkillsCell, SkillsEditor } from './skills-editor';
 
@@ -130,6 +131,7 @@ export function PeoplePage() {
     <>
       <PageHeader title="People" subtitle="Your cutter, machinists and finishers, and what each may do." />
       <Card title="Add a person" className="mb-5"><AddPersonForm /></Card>
+      <AttendanceCard />
       <FloorTabletCard />
       <DataTable data={data} columns={columns} filterPlaceholder="Filter people…" />
       {editing ? <SkillsEditor key={editing.id} person={editing} /> : null}
