@@ -7,3 +7,5 @@ export type { FabricRoll, LayToSpread, RollAllocationInput, RollSegment, RollUse
 export { countRatios } from './ratio-candidates';
 export { shrinkageFactor, compensateForShrinkage, shrinkageAreaFactor, NO_SHRINKAGE, type Shrinkage } from './shrinkage';
 export { prepareMarkerPieces, mirrorAcrossGrain, type MarkerSourcePiece, type MarkerFabric, type MarkerPieceLabel, type PreparedMarkerPieces } from './marker-pieces';
+export { checkRollWidth, usableTicketLength, ROLL_WIDTH_TOLERANCE_MM, DEFAULT_SHORT_LENGTH_PERCENT, DEFAULT_FLAW_PERCENT, type RollWidthRefusal, type PackingListAllowance } from './roll-rules';
+export { markerSpliceZones, type SpliceZone } from './splice-zones';
