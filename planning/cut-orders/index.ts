@@ -9,3 +9,4 @@ export { shrinkageFactor, compensateForShrinkage, shrinkageAreaFactor, NO_SHRINK
 export { prepareMarkerPieces, mirrorAcrossGrain, type MarkerSourcePiece, type MarkerFabric, type MarkerPieceLabel, type PreparedMarkerPieces } from './marker-pieces';
 export { checkRollWidth, usableTicketLength, ROLL_WIDTH_TOLERANCE_MM, DEFAULT_SHORT_LENGTH_PERCENT, DEFAULT_FLAW_PERCENT, type RollWidthRefusal, type PackingListAllowance } from './roll-rules';
 export { markerSpliceZones, type SpliceZone } from './splice-zones';
+export { rollsInCuttingOrder, type LayInCuttingOrder, type RollAtStart, type RollInCuttingOrder } from './rolls-in-cutting-order';
