@@ -10,3 +10,4 @@ export { prepareMarkerPieces, mirrorAcrossGrain, type MarkerSourcePiece, type Ma
 export { checkRollWidth, usableTicketLength, ROLL_WIDTH_TOLERANCE_MM, DEFAULT_SHORT_LENGTH_PERCENT, DEFAULT_FLAW_PERCENT, type RollWidthRefusal, type PackingListAllowance } from './roll-rules';
 export { markerSpliceZones, type SpliceZone } from './splice-zones';
 export { rollsInCuttingOrder, type LayInCuttingOrder, type RollAtStart, type RollInCuttingOrder } from './rolls-in-cutting-order';
+export { planConsumption, netFabricNeed, type LayForConsumption, type PlanConsumption, type FabricNeed } from './fabric-need';
