@@ -9,6 +9,8 @@ export interface LayRollLine {
   expectedRemnantMm: number;
   actualPlies?: number;
   actualRemnantMm?: number;
+  /** Length the lay took from the roll as recorded at the cut (roll on hand before − remnant measured after), mm. */
+  takenMm?: number;
   note?: string;
 }
 

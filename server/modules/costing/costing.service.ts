@@ -1,7 +1,7 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
-import { costGarment, priceFromMargin, roundMinor } from '../../../planning/index';
+import { costGarment, planConsumption, priceFromMargin, roundMinor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
@@ -11,6 +11,7 @@ import {
   consumptionBySize,
   estimateConsumption,
   ESTIMATE_GARMENT_SAM,
+  layForConsumption,
   layTotals,
   localeForCurrency,
   type LayLike,
@@ -65,7 +66,10 @@ export function createCostingService(repo: CostingRepository) {
       const planned = plannedLays(lays, plan.result);
       const fabric = await repo.fabric(studioId, plan.fabricId);
       if (fabric && planned.length) {
-        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize: consumptionBySize(planned), planned, cutLays: lays.filter((l) => l.status === 'cut') };
+        // Cut lays count what the cutter recorded (spread and remnants), planned lays their plan.
+        const used = lays.length ? planConsumption(lays.map(layForConsumption)) : null;
+        const perSize = used && Object.keys(used.perSize).length ? used.perSize : consumptionBySize(planned);
+        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize, planned, cutLays: lays.filter((l) => l.status === 'cut'), recorded: used?.basis ?? 'planned' };
       }
     }
     const markers = await repo.doneMarkers(studioId, batch.styleId, batch.id);
@@ -139,6 +143,7 @@ export function createCostingService(repo: CostingRepository) {
     if (!fab) notes.push('No fabric is recorded for this studio yet, so the sheet has no fabric line.');
     else if (fab.basis === 'estimate') notes.push('Fabric is an estimate until a marker or cut plan exists for this batch.');
     else if (fab.basis === 'marker') notes.push('Fabric comes from the latest finished marker; the cut plan will replace it.');
+    else if ('recorded' in fab && fab.recorded !== 'planned') notes.push(fab.recorded === 'recorded' ? 'Fabric is what the cutter recorded: the lengths spread and the remnants measured.' : 'Fabric of the cut lays is what the cutter recorded (spreads and remnants); the lays still to cut count their plan.');
 
     const samMinutes = operations.reduce((a, o) => a + o.sam, 0);
     const pieceRateMinor = operations.reduce((a, o) => a + (o.pieceRateMinor ?? 0), 0);
@@ -262,7 +267,8 @@ function actualFigures(
   garments: number,
 ): CostingSheetDto['actual'] {
   const plan = layTotals(planned);
-  const cut = layTotals(cutLays.map((l) => ({ ...l, plies: cutPlies(l) })));
+  // Recorded lengths where the cutter gave them (spread and remnants), else the planned spread per ply cut.
+  const cut = planConsumption(cutLays.map(layForConsumption));
   const firstTime = logs.filter((l) => l.attempt === 0);
   const earned = firstTime.reduce((a, l) => a + l.earnedMinutes, 0);
   return {
