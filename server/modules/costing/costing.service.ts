@@ -67,9 +67,11 @@ export function createCostingService(repo: CostingRepository) {
       const fabric = await repo.fabric(studioId, plan.fabricId);
       if (fabric && planned.length) {
         // Cut lays count what the cutter recorded (spread and remnants), planned lays their plan.
-        const used = lays.length ? planConsumption(lays.map(layForConsumption)) : null;
+        const consumed = await repo.consumedByLay(studioId, lays.filter((l) => l.status === 'cut').map((l) => l.id));
+        const rows = lays.map((l) => ({ ...l, rolls: l.rolls.map((r) => ({ ...r, takenMm: r.takenMm ?? consumed.get(l.id)?.get(r.rollId) })) }));
+        const used = rows.length ? planConsumption(rows.map(layForConsumption)) : null;
         const perSize = used && Object.keys(used.perSize).length ? used.perSize : consumptionBySize(planned);
-        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize, planned, cutLays: lays.filter((l) => l.status === 'cut'), recorded: used?.basis ?? 'planned' };
+        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize, planned, cutLays: rows.filter((l) => l.status === 'cut'), recorded: used?.basis ?? 'planned', stillToCutMm: used?.stillNeededMm };
       }
     }
     const markers = await repo.doneMarkers(studioId, batch.styleId, batch.id);
@@ -251,7 +253,10 @@ export function createCostingService(repo: CostingRepository) {
       retailMultiplier: settings.retailMultiplier,
     };
     dto.fabric = fab
-      ? { id: fab.fabric.id, name: fab.fabric.name, pricePerMetreMinor: fab.fabric.pricePerMetreMinor, basis: fab.basis, batchFabricMm: round1(sizes.reduce((a, s) => a + fabricMm[s.size] * s.quantity, 0)) }
+      ? {
+        id: fab.fabric.id, name: fab.fabric.name, pricePerMetreMinor: fab.fabric.pricePerMetreMinor, basis: fab.basis, batchFabricMm: round1(sizes.reduce((a, s) => a + fabricMm[s.size] * s.quantity, 0)),
+        ...('stillToCutMm' in fab && fab.stillToCutMm !== undefined ? { stillToCutMm: round1(fab.stillToCutMm) } : {}),
+      }
       : null;
     return { dto, input };
   }
