@@ -14,6 +14,15 @@ export interface LayRollLine {
   note?: string;
 }
 
+/** One correction of a cut lay's record. */
+export interface LayCorrection {
+  at: string;
+  byUserId: number;
+  by: string;
+  reason: string;
+  changes: string[];
+}
+
 @Entity('lays')
 @Index(['studioId', 'cutPlanId', 'seq'], { unique: true })
 export class LayEntity {
@@ -59,6 +68,10 @@ export class LayEntity {
 
   @Column({ type: 'text', default: '' })
   flaws: string;
+
+  /** Corrections of the record after the cut, oldest first; each is in the audit log too. */
+  @Column({ type: 'simple-json', nullable: true })
+  corrections: LayCorrection[] | null;
 
   @Column({ type: TIMESTAMP, nullable: true })
   cutAt: Date | null;

@@ -14,8 +14,12 @@ export const DEMO_FABRIC = {
   composition: '100% cotton',
   widthMm: 1450,
   shrinkagePercent: 2,
+  shrinkageLengthPercent: 2,
+  shrinkageWidthPercent: 2,
   isDirectional: false,
   pricePerMetreMinor: 48_000,
+  priceMinor: 48_000,
+  priceUnit: 'metre' as const,
   maxPlies: 40,
 };
 
