@@ -1,7 +1,33 @@
 import js from '@eslint/js';
 import importX from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
+import pluginQuery from '@tanstack/eslint-plugin-query';
+import jsxA11y from 'eslint-plugin-jsx-a11y';
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import tseslint from 'typescript-eslint';
+
+/** The layers: nothing imports upwards (DEVELOPERS.md, "Architecture"). */
+const layerZones = [
+  { target: './shared/geometry', from: ['./shared/schemas', './shared/auth', './shared/types', './grading', './planning', './server', './src', './exports'], message: 'The geometry kernel is the bottom layer.' },
+  { target: './shared', from: ['./grading', './planning', './server', './src', './exports'], message: 'shared/ is isomorphic and imports no app layer.' },
+  { target: './grading', from: ['./planning', './server', './src', './exports'], message: 'grading imports only shared.' },
+  { target: './planning', from: ['./server', './src', './exports'], message: 'planning imports shared and grading/index.ts only.' },
+  { target: './exports', from: ['./server', './src'], message: 'exports is plain data in, bytes out.' },
+  { target: './src', from: ['./server', './exports'], message: 'The client never imports server or exports.' },
+];
+
+/** Client areas: one may use another's query hooks (api/) and hooks (hooks/), never its screens or internals. */
+const FEATURES = readdirSync(join(import.meta.dirname, 'src', 'features'), { withFileTypes: true })
+  .filter((d) => d.isDirectory())
+  .map((d) => d.name);
+const crossFeatureZones = FEATURES.map((f) => ({
+  target: `./src/features/${f}`,
+  from: './src/features',
+  except: [`./${f}`, ...FEATURES.filter((o) => o !== f).flatMap((o) => [`./${o}/api`, `./${o}/hooks`])],
+  message: 'Another area is reached only through its api/ query hooks or its hooks/.',
+}));
 
 const pureCoreRules = {
   'no-restricted-imports': [
@@ -27,6 +53,8 @@ export default tseslint.config(
   ...tseslint.configs.recommended,
   {
     plugins: { 'import-x': importX },
+    // Without a TypeScript resolver the zones below never see an extensionless import (`'../server/app'`).
+    settings: { 'import-x/resolver-next': [createTypeScriptImportResolver({ project: './tsconfig.json' })] },
     rules: {
       '@typescript-eslint/no-explicit-any': 'off',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
@@ -34,14 +62,7 @@ export default tseslint.config(
       'import-x/no-restricted-paths': [
         'error',
         {
-          zones: [
-            { target: './shared/geometry', from: ['./shared/schemas', './shared/auth', './shared/types', './grading', './planning', './server', './src', './exports'], message: 'The geometry kernel is the bottom layer.' },
-            { target: './shared', from: ['./grading', './planning', './server', './src', './exports'], message: 'shared/ is isomorphic and imports no app layer.' },
-            { target: './grading', from: ['./planning', './server', './src', './exports'], message: 'grading imports only shared.' },
-            { target: './planning', from: ['./server', './src', './exports'], message: 'planning imports shared and grading/index.ts only.' },
-            { target: './exports', from: ['./server', './src'], message: 'exports is plain data in, bytes out.' },
-            { target: './src', from: ['./server', './exports'], message: 'The client never imports server or exports.' },
-          ],
+          zones: layerZones,
         },
       ],
     },
@@ -50,6 +71,20 @@ export default tseslint.config(
     files: ['src/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
     rules: { 'react-hooks/rules-of-hooks': 'error' },
+  },
+  { files: ['src/**/*.tsx'], ...jsxA11y.flatConfigs.recommended },
+  {
+    files: ['src/**/*.tsx'],
+    rules: {
+      // A scrolling table or drawing is a named region a keyboard user can reach and scroll (axe: scrollable-region-focusable).
+      'jsx-a11y/no-noninteractive-tabindex': ['error', { roles: ['tabpanel', 'region'] }],
+    },
+  },
+  ...pluginQuery.configs['flat/recommended'].map((c) => ({ ...c, files: ['src/**/*.{ts,tsx}'] })),
+  {
+    files: ['src/features/**/*.{ts,tsx}'],
+    plugins: { 'import-x': importX },
+    rules: { 'import-x/no-restricted-paths': ['error', { zones: [...layerZones, ...crossFeatureZones] }] },
   },
   {
     files: ['grading/**/*.ts', 'planning/**/*.ts', 'shared/**/*.ts'],

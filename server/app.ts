@@ -26,8 +26,9 @@ import { createStyleRepository } from './modules/styles/style.repository';
 import { styleRoutes } from './modules/styles/style.routes';
 import { createUserRepository } from './modules/users/user.repository';
 import { userRoutes } from './modules/users/user.routes';
-import { FEATURE_MODULES } from './modules';
-import type { ModuleContext } from './modules/module';
+import { createFeatureModules } from './modules';
+import type { MarkerQueueOptions } from './modules/markers/marker-queue';
+import type { ApiModule, ModuleContext } from './modules/module';
 import { createUserService } from './modules/users/user.service';
 import { lazyJobRunner, type JobRunner } from './jobs/job-runner';
 import { requestLogger } from './observability/logger';
@@ -42,16 +43,27 @@ export interface AppDeps {
   now?: () => Date;
   /** Folder of the built client; served with an SPA fallback when present. */
   clientDir?: string;
-  /** Filled by createApp so the caller can start and stop the modules' services. */
-  moduleContext?: { current?: ModuleContext };
+  /** Filled by createApp: the caller starts and stops the modules' background work, tests reach the services. */
+  control?: { current?: AppControl };
+  /** Marker queue settings (tests pass a worker entry, an overrun, a per-studio cap). */
+  markerQueue?: MarkerQueueOptions;
   /** Job runner override; by default in-process, or BullMQ on Redis with REDIS_URL. */
   jobs?: JobRunner;
   /** Request log destination (tests pass one to read the lines); the process logger by default. */
   logger?: Logger;
 }
 
-/** ctx.services key of the sign-in throttle counter (closed when the server stops). */
-export const SIGN_IN_THROTTLE_KEY = 'auth:sign-in-throttle';
+/** What createApp built, for the process that runs it (server/index.ts) and for tests. */
+export interface AppControl {
+  services: AppServices;
+  modules: Record<string, ApiModule>;
+  /** Starts every module's background work, in mount order. */
+  start(): Promise<void>;
+  /** Stops it in reverse order, then the job runner and the sign-in throttle counter. */
+  stop(): Promise<void>;
+}
+
+export type AppServices = ReturnType<typeof createFeatureModules>['services'];
 
 /** How often a signed-in session's 12-hour expiry is moved on (cookie re-issued, store written). */
 const RENEW_SESSION_EVERY_MS = 5 * 60 * 1000;
@@ -157,10 +169,24 @@ export function createApp(deps: AppDeps): Express {
   api.use('/styles', styleRoutes(styles, audit));
   api.use('/batches', batchRoutes(batches, styles, audit));
   api.use('/audit', auditRoutes(audit));
-  const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined), services: new Map() };
-  ctx.services.set(SIGN_IN_THROTTLE_KEY, throttle);
-  for (const m of FEATURE_MODULES) m.register(api, ctx);
-  if (deps.moduleContext) deps.moduleContext.current = ctx;
+  const ctx: ModuleContext = { ds, env, audit, now, jobs: deps.jobs ?? lazyJobRunner(env.REDIS_URL || undefined) };
+  const { modules, services } = createFeatureModules(ctx, { styles, batches, markerQueue: deps.markerQueue });
+  const list: ApiModule[] = Object.values(modules);
+  for (const m of list) m.mount(api);
+  if (deps.control) {
+    deps.control.current = {
+      services,
+      modules,
+      async start() {
+        for (const m of list) await m.start?.();
+      },
+      async stop() {
+        for (const m of [...list].reverse()) await m.stop?.();
+        await ctx.jobs.stop();
+        await throttle.close();
+      },
+    };
+  }
   api.use(notFoundHandler);
   api.use(errorHandler(env.NODE_ENV === 'development'));
   app.use('/api', api);

@@ -5,12 +5,9 @@ import { openDatabase } from './db/data-source';
 import { startWalCheckpointer } from './db/wal-checkpointer';
 import { startSessionPurge } from './auth/session-purge';
 import { createSessionRepository } from './modules/sessions/session.repository';
-import { createApp, SIGN_IN_THROTTLE_KEY } from './app';
-import type { ThrottleCounter } from './auth/throttle-store';
+import { createApp, type AppControl } from './app';
 import { loadEnv, shouldMigrateOnStart, type Env } from './env';
-import { FEATURE_MODULES } from './modules';
 import { logger } from './observability/logger';
-import type { ModuleContext } from './modules/module';
 import { DEMO_PEOPLE, demoPin, seedDemoStudio } from './seed/demo-studio';
 
 /** env → data source → migrations → expired sessions purged → seed → listen. */
@@ -27,9 +24,9 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
         nestingSeconds: Math.min(env.NESTING_SECONDS, 6),
       })
     : false;
-  const holder: { current?: ModuleContext } = {};
-  const app = createApp({ ds, env, moduleContext: holder });
-  for (const m of FEATURE_MODULES) await m.start?.(holder.current!);
+  const control: { current?: AppControl } = {};
+  const app = createApp({ ds, env, control });
+  await control.current!.start();
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));
   });
@@ -38,10 +35,8 @@ export async function startServer(overrides: Partial<NodeJS.ProcessEnv> = {}) {
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   const stop = async () => {
     backups.stop();
-    for (const m of [...FEATURE_MODULES].reverse()) await m.stop?.();
-    await holder.current?.jobs.stop();
+    await control.current!.stop();
     sessionPurge.stop();
-    await (holder.current?.services.get(SIGN_IN_THROTTLE_KEY) as ThrottleCounter | undefined)?.close();
     await new Promise((r) => server.close(r));
     await checkpointer?.stop();
     if (ds.isInitialized) await ds.destroy();

@@ -10,7 +10,7 @@ import { openDatabase } from './db/data-source';
 import { loadEnv, shouldMigrateOnStart } from './env';
 import { startJobWorker } from './jobs/job-runner';
 import { closeMailTransports } from './modules/mail/mail-job';
-import { linkMarkerToLays } from './modules/markers/link-lays';
+import { createCutPlanRepository } from './modules/cutting/cut-plan.repository';
 import { startMarkerWorker } from './modules/markers/marker-queue-redis';
 import { createMarkerRepository } from './modules/markers/marker.repository';
 
@@ -20,8 +20,10 @@ if (!env.REDIS_URL) {
   process.exit(1);
 }
 const ds = await openDatabase(env.DATABASE_URL || env.DATABASE_PATH, { migrate: shouldMigrateOnStart(env) });
+const plans = createCutPlanRepository(ds);
 const worker = startMarkerWorker(env.REDIS_URL, createMarkerRepository(ds), {
-  onDone: (studioId, id) => linkMarkerToLays(ds, studioId, id),
+  // The cutting area's completion hook, as the web process hands it to its queue.
+  onDone: (studioId, id) => plans.linkMarkerToLays(studioId, id),
   lockDurationMs: Number(process.env.WORKER_LOCK_MS ?? 30_000),
   stalledIntervalMs: Number(process.env.WORKER_STALLED_MS ?? 30_000),
   name: `worker-${process.pid}`,

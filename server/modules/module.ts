@@ -4,7 +4,7 @@ import type { Env } from '../env';
 import type { JobRunner } from '../jobs/job-runner';
 import type { AuditRepository } from './audit/audit.repository';
 
-/** What every feature module receives from createApp. */
+/** What every module's setup receives from createApp: the data source stops here, in the setup files. */
 export interface ModuleContext {
   ds: DataSource;
   env: Partial<Env> & Pick<Env, 'NODE_ENV'>;
@@ -12,17 +12,17 @@ export interface ModuleContext {
   now: () => Date;
   /** Runs the long jobs (cut-order solve, documents, mail) in-process or on `npm run worker` processes. */
   jobs: JobRunner;
-  /** Services other modules expose (e.g. 'mail', 'jobs'); set in register, read lazily. */
-  services: Map<string, unknown>;
 }
 
 /**
- * A feature area of the API: mounts its routes under /api and may run background services
- * (a job queue, a local SMTP server) that start with the server and stop with it.
+ * An area of the API as createApp holds it. Each area's `create<Area>Module(ctx, deps)` builds its
+ * repositories once, hands them to its services, and returns them as `services` beside this: its routes
+ * (mounted under /api) and the background work (a job queue, a local SMTP server) that starts with the
+ * server and stops with it. Whatever one area needs of another comes in through `deps`, typed.
  */
 export interface ApiModule {
   name: string;
-  register(api: Router, ctx: ModuleContext): void;
-  start?(ctx: ModuleContext): Promise<void>;
+  mount(api: Router): void;
+  start?(): Promise<void>;
   stop?(): Promise<void>;
 }

@@ -1,11 +1,17 @@
 import { createLocalJobRunner } from '../jobs/job-runner';
 import { addDays, format, subDays } from 'date-fns';
 import { FabricEntity, MarkerEntity, RollEntity } from '../entities';
+import { createBatchRepository } from '../modules/batches/batch.repository';
+import { createCostingRepository } from '../modules/costing/costing.repository';
 import { createCutPlanRepository } from '../modules/cutting/cut-plan.repository';
 import { planBatchCut } from '../modules/cutting/cut-plan.service';
+import { createFabricRepository } from '../modules/cutting/fabric.repository';
 import { markLayCut } from '../modules/cutting/lay.service';
+import { createCuttingPieceSource } from '../modules/grading/cutting-pieces.service';
+import { createGradingSetRepository } from '../modules/grading/grading-set.repository';
 import { buildMarkerInput, markerInputHash } from '../modules/markers/marker-input';
-import { loadStylePieces } from '../modules/markers/style-pieces';
+import { createMarkerRepository } from '../modules/markers/marker.repository';
+import { createStyleRepository } from '../modules/styles/style.repository';
 import type { SeedContext } from './seed-context';
 
 /** The demo fabric: our own invented quality name; price in KES minor units (cents) per metre. */
@@ -49,11 +55,19 @@ export async function seedCutting(ctx: SeedContext): Promise<void> {
     DEMO_ROLLS.map((r) => ({ studioId, fabricId: fabric.id, ...r, widthMm: DEMO_FABRIC.widthMm + 20, receivedDate: received, remainingMm: r.lengthMm, isRemnant: false })),
   );
   const plans = createCutPlanRepository(ds);
-  const plan = await planBatchCut(ds, createLocalJobRunner(), plans, studioId, ctx.batchId, { fabricId: fabric.id, ...DEMO_CUT_SETTINGS });
+  const cuttingPieces = createCuttingPieceSource({ styles: createStyleRepository(ds), sets: createGradingSetRepository(ds) });
+  const costing = createCostingRepository(ds, cuttingPieces);
+  const plan = await planBatchCut(
+    {
+      plans, cuttingPieces, fabrics: createFabricRepository(ds), batches: createBatchRepository(ds), jobs: createLocalJobRunner(), markers: createMarkerRepository(ds),
+      labourCostPerMinute: async (s, style) => (await costing.settings(s, style))?.labourCostPerMinuteMinor ?? 0,
+    },
+    studioId, ctx.batchId, { fabricId: fabric.id, ...DEMO_CUT_SETTINGS },
+  );
   const lays = await plans.laysOf(studioId, plan.id);
   if (lays[0]) await markLayCut(plans, studioId, lays[0].id, undefined, addDays(subDays(ctx.today, 1), 0), { asPlanned: true });
   if (process.env.NODE_ENV === 'test') return;
-  const pieces = await loadStylePieces(ds, studioId, ctx.styleId);
+  const pieces = await cuttingPieces(studioId, ctx.styleId);
   const ratios = [...new Map(lays.map((l) => [JSON.stringify(l.ratio), l.ratio])).values()].slice(1, 2);
   for (const ratio of ratios) {
     const job = buildMarkerInput(pieces, ratio, { widthMm: fabric.widthMm, isDirectional: fabric.isDirectional, seconds: ctx.nestingSeconds });

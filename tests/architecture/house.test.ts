@@ -26,21 +26,11 @@ const MAY_IMPORT_TYPEORM = [
 /** Files still being moved behind repositories (issue 15): this list only shrinks. */
 const NOT_YET_MOVED: string[] = [
   'server/modules/auth/auth.service.ts',
-  'server/modules/cutting/cut-plan.service.ts',
-  'server/modules/cutting/cutting.routes.ts',
-  'server/modules/grading/graded-pieces.ts',
-  'server/modules/markers/link-lays.ts',
-  'server/modules/markers/marker.routes.ts',
-  'server/modules/markers/marker.service.ts',
-  'server/modules/markers/style-pieces.ts',
   'server/modules/studios/studio.routes.ts',
 ];
 
 /** Circles still to be broken (issue 15), each written as its sorted members joined by ' | ': this list only shrinks. */
 const KNOWN_CIRCLES: string[] = [
-  'server/jobs/cpu-pool.ts | server/jobs/cpu-tasks.ts | server/modules/grading/graded-pieces.ts',
-  'server/modules/markers/marker-job.ts | server/modules/markers/marker-queue.ts',
-  'server/modules/costing | server/modules/cutting | server/modules/markers',
 ];
 
 function expectNoNewCircles(circles: string[][]) {

@@ -3,7 +3,9 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
 import { demoSizeChart } from '@grading';
 import { polygonArea, polygonBBox } from '@shared/geometry/polygon';
-import { loadCuttingPieces } from '../../server/modules/grading/graded-pieces';
+import { createCuttingPieceSource } from '../../server/modules/grading/cutting-pieces.service';
+import { createGradingSetRepository } from '../../server/modules/grading/grading-set.repository';
+import { createStyleRepository } from '../../server/modules/styles/style.repository';
 import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
 import { datasetPath, hasDatasets } from '../fixtures/reference-data';
 
@@ -209,7 +211,7 @@ describe('size mix', () => {
 
 describe('cutting pieces for the cutting area', () => {
   it('gives every size its cutting outlines, pairs mirrored and folds unfolded', async () => {
-    const bySize = await loadCuttingPieces(ds, 1, 1);
+    const bySize = await createCuttingPieceSource({ styles: createStyleRepository(ds), sets: createGradingSetRepository(ds) })(1, 1);
     expect(Object.keys(bySize)).toEqual(['XS', 'S', 'M', 'L', 'XL']);
     const m = bySize.M;
     expect(m.map((p) => p.pieceId)).toHaveLength(8);

@@ -1,12 +1,10 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp, type AppControl } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { loadEnv } from '../../server/env';
 import { createGradingSetRepository } from '../../server/modules/grading/grading-set.repository';
-import { MARKER_QUEUE_KEY, MARKER_QUEUE_OPTIONS_KEY } from '../../server/modules/markers/markers.module';
-import type { MarkerQueue, MarkerQueueOptions } from '../../server/modules/markers/marker-queue';
-import type { ModuleContext } from '../../server/modules/module';
+import type { MarkerQueueOptions } from '../../server/modules/markers/marker-queue';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
@@ -16,7 +14,7 @@ type Agent = Awaited<ReturnType<typeof signIn>>;
 // Two studios share the one marker queue. Studio A (the demo studio) fills its share of places; studio B
 // then starts one marker. The queue runs one marker at a time, so the order markers finish in is the
 // order they ran in (recorded through the queue's onDone hook).
-let ctx: ModuleContext;
+let ctx: AppControl;
 let ownerA: Agent, ownerB: Agent;
 let fabricB: number, styleB: number;
 const finished: number[] = [];
@@ -26,11 +24,10 @@ beforeAll(async () => {
   const ds = await openDatabase(await freshDatabaseTarget());
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
   const env = loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000', NESTING_SECONDS: '1' });
-  const holder: { current?: ModuleContext } = {};
-  const app = createApp({ ds, env, clientDir: '/nonexistent', moduleContext: holder });
-  ctx = holder.current!;
+  const control: { current?: AppControl } = {};
   const options: MarkerQueueOptions = { maxQueuedPerStudio: MAX_WAITING, onDone: async (_studio, id) => void finished.push(id) };
-  ctx.services.set(MARKER_QUEUE_OPTIONS_KEY, options);
+  const app = createApp({ ds, env, clientDir: '/nonexistent', control, markerQueue: options });
+  ctx = control.current!;
   ownerA = await signIn(app, DEMO.owner);
   ownerB = request.agent(app);
   const created = await ownerB.post('/api/auth/studios').send({
@@ -67,7 +64,7 @@ describe('marker queue shared between studios', () => {
 
     const b = await ownerB.post('/api/markers').send({ styleId: styleB, fabricId: fabricB, ratio: { XS: 1 }, seconds: 1 });
     expect(b.status).toBe(202);
-    await (ctx.services.get(MARKER_QUEUE_KEY) as MarkerQueue).idle();
+    await ctx.services.markers.queue().idle();
 
     // Round robin: A's running marker, then A's turn, then B's; first come, first served would put B last.
     expect(finished).toEqual([idsA[0], idsA[1], b.body.marker.id, idsA[2], idsA[3]]);
@@ -76,6 +73,6 @@ describe('marker queue shared between studios', () => {
   it('frees a place in the queue once a waiting marker has run', async () => {
     const again = await ownerA.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { XL: 1 }, seconds: 1 });
     expect(again.status).toBe(202);
-    await (ctx.services.get(MARKER_QUEUE_KEY) as MarkerQueue).idle();
+    await ctx.services.markers.queue().idle();
   }, 120_000);
 });

@@ -5,8 +5,6 @@ import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { loadEnv } from '../../server/env';
-import type { ModuleContext } from '../../server/modules/module';
-import { MARKER_QUEUE_OPTIONS_KEY } from '../../server/modules/markers/markers.module';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
 import { DEMO, DEMO_PASSWORD, TEST_TODAY } from '../fixtures/test-app';
 
@@ -38,9 +36,7 @@ beforeAll(async () => {
 
 /** A second app on the same database whose queue runs a test double of the worker. */
 async function appWithWorker(entry: string, overrunMs: number) {
-  const holder: { current?: ModuleContext } = {};
-  const a = createApp({ ds, env, clientDir: '/nonexistent', moduleContext: holder });
-  holder.current!.services.set(MARKER_QUEUE_OPTIONS_KEY, { workerEntry: new URL(entry, import.meta.url).href, overrunMs });
+  const a = createApp({ ds, env, clientDir: '/nonexistent', markerQueue: { workerEntry: new URL(entry, import.meta.url).href, overrunMs } });
   return login(a, DEMO.owner);
 }
 
@@ -66,6 +62,18 @@ describe('markers', () => {
     expect(dxf.headers['content-disposition']).toMatch(/marker-B-0001-.*\.dxf/);
     const parsed = new DxfParser().parseSync(dxf.body as string) as unknown as { entities: { layer: string; shape?: boolean }[] };
     expect(parsed.entities.filter((e) => e.layer === 'CUT' && e.shape).length).toBe(full.pieceCount);
+  }, 180_000);
+
+  it("becomes the drawn marker of its batch's planned lays of the same ratio when it finishes (the cutting area's completion hook)", async () => {
+    const plan = (await owner.get('/api/batches/1/cut-plan')).body.cutPlan as { lays: { id: number; status: string; ratio: Record<string, number>; markerId: number | null }[] };
+    const lay = plan.lays.find((l) => l.status === 'planned' && l.markerId === null)!;
+    expect(lay).toBeDefined();
+    const res = await owner.post('/api/markers').send({ styleId: 1, batchId: 1, fabricId: 1, ratio: lay.ratio, seconds: 1 });
+    expect(res.status).toBe(202);
+    const done = await poll(owner, res.body.marker.id, (m) => m.status !== 'queued' && m.status !== 'running');
+    expect(done.status).toBe('done');
+    const after = (await cutter.get(`/api/lays/${lay.id}`)).body.lay;
+    expect(after.markerId).toBe(done.id);
   }, 180_000);
 
   it('never recomputes an unchanged marker: the same inputs return the stored one', async () => {

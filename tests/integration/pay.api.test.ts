@@ -1,13 +1,11 @@
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp, type AppControl } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { AttendanceEntity, OperationEntity, PayPeriodEntity, UserEntity, WorkLogEntity } from '../../server/entities';
 import { loadEnv } from '../../server/env';
 import { logEarnedMinutes } from '../../server/modules/floor/floor-math';
-import type { ModuleContext } from '../../server/modules/module';
-import { PAYMENTS_FAKE_SERVICE } from '../../server/modules/pay/pay.module';
 import type { PaymentsFake } from '../../server/modules/pay/payments-fake';
 import { payeeAccount } from '../../server/modules/pay/pay.service';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
@@ -23,9 +21,9 @@ const PERIOD = { fromDay: '2026-11-23', toDay: '2026-11-30' };
 beforeAll(async () => {
   ds = await openDatabase(await freshDatabaseTarget());
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
-  const holder: { current?: ModuleContext } = {};
-  const app = createApp({ ds, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' }), clientDir: '/nonexistent', moduleContext: holder });
-  fake = await (holder.current!.services.get(PAYMENTS_FAKE_SERVICE) as () => Promise<PaymentsFake>)();
+  const control: { current?: AppControl } = {};
+  const app = createApp({ ds, env: loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000' }), clientDir: '/nonexistent', control });
+  fake = await control.current!.services.pay.fake!();
   owner = await signIn(app, DEMO.owner);
   machinist = await signIn(app, DEMO.machinist);
 });

@@ -2,12 +2,11 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp, type AppControl } from '../../server/app';
+import type { ApiModule } from '../../server/modules/module';
 import { openDatabase } from '../../server/db/data-source';
 import { PayoutEntity } from '../../server/entities';
 import { loadEnv } from '../../server/env';
-import type { ModuleContext } from '../../server/modules/module';
-import { PAYMENTS_FAKE_SERVICE, payModule } from '../../server/modules/pay/pay.module';
 import { createPaymentsFake, type PaymentsFake } from '../../server/modules/pay/payments-fake';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
@@ -26,11 +25,17 @@ let period: { id: number; lines: PeriodLine[] };
 
 /** An app on the shared database; a second call is the server after a restart (new module context, new stand-in on the same file). */
 async function boot() {
-  const holder: { current?: ModuleContext } = {};
-  const app = createApp({ ds, env, clientDir: '/nonexistent', moduleContext: holder });
-  const f = await (holder.current!.services.get(PAYMENTS_FAKE_SERVICE) as () => Promise<PaymentsFake>)();
-  return { app, ctx: holder.current!, fake: f };
+  const control: { current?: AppControl } = {};
+  const app = createApp({ ds, env, clientDir: '/nonexistent', control });
+  const f = await control.current!.services.pay.fake!();
+  const booted = { app, pay: control.current!.modules.pay, fake: f };
+  apps.push(booted);
+  return booted;
 }
+const apps: { pay: ApiModule }[] = [];
+const stopPay = async () => {
+  for (const a of apps) await a.pay.stop?.();
+};
 
 const payoutOf = (userId: number) => ds.getRepository(PayoutEntity).findOneByOrFail({ payPeriodId: period.id, userId });
 const transfersTo = (f: PaymentsFake, line: PeriodLine) => f.transfers.filter((t) => t.description.endsWith(`: ${line.name}`));
@@ -47,7 +52,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await payModule.stop?.();
+  await stopPay();
   await ds.destroy();
   rmSync(dir, { recursive: true, force: true });
 });
@@ -113,9 +118,9 @@ describe('payouts under lost and unclear answers', () => {
     const made = transfersTo(fake, taken);
     expect(made).toHaveLength(1);
 
-    await payModule.stop?.();
+    await stopPay();
     const restarted = await boot();
-    await payModule.start!(restarted.ctx);
+    await restarted.pay.start!();
     expect(await payoutOf(taken.userId)).toMatchObject({ status: 'paid', providerRef: made[0].id });
     const left = await payoutOf(neverSent.userId);
     expect(left.status).toBe('to_check');

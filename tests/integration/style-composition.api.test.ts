@@ -3,7 +3,9 @@ import { demoSizeChart } from '@grading';
 import { presetComposition } from '@shared/schemas/style-composition';
 import { polygonArea } from '@shared/geometry/polygon';
 import type { DataSource } from 'typeorm';
-import { loadCuttingPieces } from '../../server/modules/grading/graded-pieces';
+import { createCuttingPieceSource } from '../../server/modules/grading/cutting-pieces.service';
+import { createGradingSetRepository } from '../../server/modules/grading/grading-set.repository';
+import { createStyleRepository } from '../../server/modules/styles/style.repository';
 import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
@@ -182,7 +184,7 @@ describe('materials of a style', () => {
     expect(plan.status).toBe(201);
     // Each lay rests on the plan's stated estimate (area ÷ (width × assumed utilisation)); the areas are summed
     // here from the loader's pieces of each material, independently of the plan's own filter.
-    const all = await loadCuttingPieces(ds, 1, id);
+    const all = await createCuttingPieceSource({ styles: createStyleRepository(ds), sets: createGradingSetRepository(ds) })(1, id);
     const area = (size: string, keep: (m: string) => boolean) => all[size].filter((p) => keep(p.material)).reduce((a, p) => a + polygonArea(p.outline) * p.quantity, 0);
     const { lays, assumedUtilisation } = plan.body.cutPlan as { lays: { ratio: Record<string, number>; markerLengthMm: number }[]; assumedUtilisation: number };
     expect(lays.length).toBeGreaterThan(0);

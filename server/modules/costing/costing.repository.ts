@@ -18,7 +18,7 @@ import {
 } from '../../entities';
 
 import { polygonArea } from '@shared/geometry/polygon';
-import { loadCuttingPieces } from '../grading/graded-pieces';
+import type { CuttingPieceSource } from '../grading/graded-pieces';
 
 export type CostingRepository = ReturnType<typeof createCostingRepository>;
 
@@ -26,13 +26,13 @@ export type CostingRepository = ReturnType<typeof createCostingRepository>;
  * Costing queries, every one scoped to one studio. Cut plans, lays, markers, operations and work logs
  * belong to other areas: they are only read here.
  */
-export function createCostingRepository(ds: DataSource) {
+export function createCostingRepository(ds: DataSource, cuttingPieces: CuttingPieceSource) {
   const trims = ds.getRepository(TrimEntity);
   const settings = ds.getRepository(CostingSettingsEntity);
   return {
     /** Cut area per garment by size and material (mm², copies counted), from the style's graded cutting pieces. */
     async materialAreas(studioId: number, styleId: number): Promise<Record<string, Record<string, number>>> {
-      const pieces = await loadCuttingPieces(ds, studioId, styleId);
+      const pieces = await cuttingPieces(studioId, styleId);
       const out: Record<string, Record<string, number>> = {};
       for (const [size, list] of Object.entries(pieces)) {
         out[size] = {};

@@ -5,8 +5,8 @@ import { costGarment, planConsumption, priceFromMargin, roundMinor } from '../..
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
-import { batchCode } from '../batches/batch.routes';
-import { ASSUMED_UTILISATION } from '../cutting/cut-plan.service';
+import { batchCode } from '../batches/batch.presenter';
+import { ASSUMED_UTILISATION } from '../markers/marker-input';
 import {
   consumptionBySize,
   estimateConsumption,

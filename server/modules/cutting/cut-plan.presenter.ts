@@ -1,7 +1,7 @@
 import type { BundleDto, CutPlanDto, LayDto, LayShortageDto } from '../../../shared/schemas/cutting';
 import { bundleQrText } from '../../../shared/schemas/cutting';
-import type { BundleEntity, CutPlanEntity, LayEntity } from '../../entities';
-import { batchCode } from '../batches/batch.routes';
+import type { BundleEntity, CutPlanEntity, FabricEntity, LayEntity } from '../../entities';
+import { batchCode } from '../batches/batch.presenter';
 import type { StoredCutPlanResult } from './cut-plan.service';
 
 export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageDto | null = null): LayDto => ({
@@ -67,4 +67,9 @@ export const presentBundle = (b: BundleEntity): BundleDto => ({
   plyTo: b.plyTo,
   pieces: b.pieces,
   qrText: bundleQrText(b.batchId, b.number),
+});
+
+/** The fabric a cutter spreads a lay from, as the lay page shows it. */
+export const presentLayFabric = (f: FabricEntity) => ({
+  id: f.id, name: f.name, composition: f.composition, widthMm: f.widthMm, isDirectional: f.isDirectional, maxPlies: f.maxPlies,
 });

@@ -1,27 +1,32 @@
 import { DEFAULT_LAY_MINUTES, DEFAULT_PLY_MINUTES, type allocateRolls, type CutOrderPlan, type SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
-import type { DataSource } from 'typeorm';
 import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
-import { CutPlanEntity, LayEntity, type FabricEntity, type RollEntity, type RollReservationEntity } from '../../entities';
+import type { CutPlanEntity, FabricEntity, LayEntity, RollEntity, RollReservationEntity } from '../../entities';
 import type { LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
-import { createBatchRepository } from '../batches/batch.repository';
-import { garmentAreas } from '../markers/marker-input';
-import { createMarkerRepository } from '../markers/marker.repository';
-import { loadStylePieces, piecesOnFabric } from '../markers/style-pieces';
-import type { CutPlanRepository } from './cut-plan.repository';
-import { createFabricRepository } from './fabric.repository';
-import { ratioKey } from './cut-order-job';
-import { createCostingRepository } from '../costing/costing.repository';
 import type { JobRunner } from '../../jobs/job-runner';
+import type { BatchRepository } from '../batches/batch.repository';
+import type { CuttingPieceSource } from '../grading/graded-pieces';
+import { ASSUMED_UTILISATION, garmentAreas, piecesOnFabric } from '../markers/marker-input';
+import type { MarkerRepository } from '../markers/marker.repository';
+import type { CutPlanRepository } from './cut-plan.repository';
+import type { FabricRepository } from './fabric.repository';
+import { ratioKey } from './cut-order-job';
 import { withStockLock } from './stock-lock';
 
-/**
- * Utilisation assumed when a ratio has no stored marker: length ≈ piece area ÷ (width × 0.75). Common
- * practice for a first estimate of a mixed-size garment marker (no published figure is used); the owner
- * sees which lays rest on it and can build the real marker.
- */
-export const ASSUMED_UTILISATION = 0.75;
+/** What planning a cut needs: cutting's own repositories, and what other areas hand in. */
+export interface CutPlanDeps {
+  plans: CutPlanRepository;
+  fabrics: Pick<FabricRepository, 'get' | 'rolls' | 'rollsById'>;
+  batches: Pick<BatchRepository, 'get'>;
+  jobs: Pick<JobRunner, 'run'>;
+  /** The style's cutting pieces per size (the grading area's loader). */
+  cuttingPieces: CuttingPieceSource;
+  /** Finished markers of a style on a fabric width (the markers area's repository). */
+  markers: Pick<MarkerRepository, 'doneForStyle'>;
+  /** The style's labour cost per minute, minor units; 0 when the style has no costing settings (costing area). */
+  labourCostPerMinute: (studioId: number, styleId: number) => Promise<number>;
+}
 
 /** The rates a plan was priced with, minor units of the studio's currency. */
 export interface CutPlanRates {
@@ -89,14 +94,14 @@ const PLAN_ATTEMPTS = 3;
  * batch's old holds; a hold is taken only while the length is still free, so when two plans race the
  * later one solves again on what is left (up to three times) rather than double-booking a roll.
  */
-export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPlanRepository, studioId: number, batchId: number, input: CreateCutPlanInput, now: Date = new Date()) {
-  const batch = await createBatchRepository(ds).get(studioId, batchId);
+export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId: number, input: CreateCutPlanInput, now: Date = new Date()) {
+  const { plans, fabrics, jobs } = deps;
+  const batch = await deps.batches.get(studioId, batchId);
   if (!batch?.style) throw notFound('Batch');
   const sizes = batch.style.sizeRun;
-  const fabrics = createFabricRepository(ds);
   const fabric = await fabrics.get(studioId, input.fabricId);
   if (!fabric) throw badRequest('fabricId: no such fabric in this studio', { fabricId: 'No such fabric' });
-  const all = await loadStylePieces(ds, studioId, batch.styleId);
+  const all = await deps.cuttingPieces(studioId, batch.styleId);
   if (!Object.keys(all).length) throw conflict('This style has no graded pieces yet: grade it first');
   const pieces = piecesOnFabric(all, batch.style.materialFabrics, fabric);
   const live = await plans.livePlans(studioId, batchId);
@@ -106,12 +111,12 @@ export async function planBatchCut(ds: DataSource, jobs: JobRunner, plans: CutPl
 
   const areas = garmentAreas(pieces);
   const stored = new Map<string, { id: number; length: number; ratio: SizeRatio }>();
-  for (const m of await createMarkerRepository(ds).doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
+  for (const m of await deps.markers.doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
     const k = ratioKey(m.ratio, sizes);
     const prev = stored.get(k);
     if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio });
   }
-  const labour = (await createCostingRepository(ds).settings(studioId, batch.styleId))?.labourCostPerMinuteMinor ?? 0;
+  const labour = await deps.labourCostPerMinute(studioId, batch.styleId);
   const rates = cutPlanRates(fabric.pricePerMetreMinor, labour, (await plans.studio(studioId)).currency);
   for (let attempt = 1; ; attempt++) {
     const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
@@ -194,10 +199,10 @@ async function savePlan(
   const byId = new Map(c.rolls.map((r) => [String(r.id), r]));
   const firstSeq = cutLays.reduce((a, l) => Math.max(a, l.seq), 0) + 1;
   const waiting = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'planned');
-  return plans.transaction(async (m) => {
-    await plans.stock.release(m, studioId, c.replaced, c.now);
-    for (const p of live) await m.getRepository(CutPlanEntity).update({ studioId, id: p.id }, { status: 'superseded' });
-    const saved = await m.getRepository(CutPlanEntity).save({
+  return plans.transaction(async (tx) => {
+    await tx.stock.release(studioId, c.replaced, c.now);
+    for (const p of live) await tx.supersedePlan(studioId, p.id);
+    const saved = await tx.insertPlan({
       studioId, batchId, fabricId: fabric.id, input: { ...input, maxPlies: Math.min(input.maxPlies, fabric.maxPlies) }, result,
       fabricUsedMm: plan.fabricUsed, lowerBoundMm: plan.lowerBound, status: 'draft',
     });
@@ -210,10 +215,10 @@ async function savePlan(
           return { rollId: r.id, label: r.label, shadeLot: r.shadeLot, plies: s.plies, expectedRemnantMm: Math.round(s.remaining) };
         }),
       );
-      const lay = m.getRepository(LayEntity).create({
+      const lay = tx.newLay({
         studioId, cutPlanId: saved.id, batchId, seq: firstSeq + i, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
         endAllowanceMm: plan.endAllowance, markerId: lengthSources[i].markerId ?? null, spreadingMode: spreadingModeFor(fabric),
-        rolls: lines, status: 'planned', flaws: '', cutAt: null,
+        rolls: lines, status: 'planned', flaws: '', cutAt: null, corrections: null,
       });
       const same = waiting.find((w) => !kept.has(w.id) && sameLay(w, lay, sizes));
       if (same) {
@@ -222,16 +227,16 @@ async function savePlan(
       } else fresh.push(lay);
     });
     // A lay that did not change keeps its id (and anything recorded on it); the others are retired, visibly.
-    for (const w of waiting) if (!kept.has(w.id)) await m.getRepository(LayEntity).update({ studioId, id: w.id }, { status: 'retired' });
-    const savedLays = await m.getRepository(LayEntity).save(fresh);
+    for (const w of waiting) if (!kept.has(w.id)) await tx.updateLay(studioId, w.id, { status: 'retired' });
+    const savedLays = await tx.saveLays(fresh);
     // The batch's old holds were released above; every lay of the new plan (kept or new) holds its length again.
     for (const h of lengthsByLayAndRoll(allocation)) {
       if (!(h.lengthMm > 0)) continue;
-      const held = await plans.stock.reserve(m, { studioId, rollId: h.rollId, cutPlanId: saved.id, layId: savedLays[h.lay].id, batchId, lengthMm: h.lengthMm });
+      const held = await tx.stock.reserve({ studioId, rollId: h.rollId, cutPlanId: saved.id, layId: savedLays[h.lay].id, batchId, lengthMm: h.lengthMm });
       if (!held) throw new StockMoved();
     }
     // Lays already cut move to the new plan unchanged; the new lays cover only what is left to cut.
-    for (const l of cutLays) await m.getRepository(LayEntity).update({ studioId, id: l.id }, { cutPlanId: saved.id });
+    for (const l of cutLays) await tx.updateLay(studioId, l.id, { cutPlanId: saved.id });
     return saved;
   });
 }
@@ -243,7 +248,7 @@ function sameLay(a: LayEntity, b: LayEntity, sizes: string[]): boolean {
     && a.endAllowanceMm === b.endAllowanceMm && a.markerId === b.markerId && a.spreadingMode === b.spreadingMode && rolls(a) === rolls(b);
 }
 
-async function pickRolls(fabrics: ReturnType<typeof createFabricRepository>, studioId: number, fabric: FabricEntity, rollIds?: number[]): Promise<RollEntity[]> {
+async function pickRolls(fabrics: CutPlanDeps['fabrics'], studioId: number, fabric: FabricEntity, rollIds?: number[]): Promise<RollEntity[]> {
   if (rollIds?.length) {
     const found = await fabrics.rollsById(studioId, rollIds);
     const fields: Record<string, string> = {};

@@ -1,7 +1,7 @@
 import type { BundleRegisterInput, LayPlan, MarkerListInput, SpreadingMode } from '@exports/types';
 import { mm } from '@shared/units/units';
 import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, StudioEntity } from '../../entities';
-import { batchCode } from '../batches/batch.routes';
+import { batchCode } from '../batches/batch.presenter';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 
 const LOCALE = 'en-KE';

@@ -1,18 +1,34 @@
-import type { ApiModule } from '../module';
+import type { BatchRepository } from '../batches/batch.repository';
+import type { CuttingPieceSource } from '../grading/graded-pieces';
+import type { MarkerRepository } from '../markers/marker.repository';
+import type { ApiModule, ModuleContext } from '../module';
 import { createCutPlanRepository } from './cut-plan.repository';
 import { cuttingRoutes } from './cutting.routes';
+import { createCuttingService } from './cutting.service';
 import { createFabricRepository } from './fabric.repository';
 import { fabricRoutes } from './fabric.routes';
 
+export interface CuttingModuleDeps {
+  batches: BatchRepository;
+  cuttingPieces: CuttingPieceSource;
+  markers: Pick<MarkerRepository, 'doneForStyle'>;
+  labourCostPerMinute: (studioId: number, styleId: number) => Promise<number>;
+}
+
 /** The cutting area: fabrics and rolls, cut plans of batches, the cutter's lays and bundles. */
-export const cuttingModule: ApiModule = {
-  name: 'cutting',
-  register(api, ctx) {
-    const fabrics = createFabricRepository(ctx.ds);
-    const plans = createCutPlanRepository(ctx.ds);
-    api.use('/fabrics', fabricRoutes(fabrics, ctx.audit, { maxUploadBytes: ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024, now: ctx.now }));
-    const { batches, lays } = cuttingRoutes(ctx.ds, ctx.jobs, plans, fabrics, ctx.audit, ctx.now);
-    api.use('/batches', batches);
-    api.use('/lays', lays);
-  },
-};
+export function createCuttingModule(ctx: ModuleContext, deps: CuttingModuleDeps) {
+  const fabrics = createFabricRepository(ctx.ds);
+  const plans = createCutPlanRepository(ctx.ds);
+  const cutting = createCuttingService({ ...deps, plans, fabrics, jobs: ctx.jobs, audit: ctx.audit, now: ctx.now });
+  return {
+    name: 'cutting',
+    /** `fabrics` answers the markers area's fabric lookups; `cutting.onMarkerDone` is the marker queue's completion hook. */
+    services: { cutting, fabrics },
+    mount(api) {
+      api.use('/fabrics', fabricRoutes(fabrics, ctx.audit, { maxUploadBytes: ctx.env.UPLOAD_MAX_BYTES ?? 5 * 1024 * 1024, now: ctx.now }));
+      const routes = cuttingRoutes(cutting);
+      api.use('/batches', routes.batches);
+      api.use('/lays', routes.lays);
+    },
+  } satisfies ApiModule & { services: unknown };
+}

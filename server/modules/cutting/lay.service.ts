@@ -1,10 +1,10 @@
 import { makeBundles } from '@planning';
 import { DEFAULT_REMNANT_STOCK_THRESHOLD_MM } from '@planning';
 import type { RecordLayInput } from '../../../shared/schemas/cutting';
-import { BatchEntity, BundleEntity, LayEntity, RollEntity } from '../../entities';
+import type { RollEntity } from '../../entities';
 import type { LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
-import { batchCode } from '../batches/batch.routes';
+import { batchCode } from '../batches/batch.presenter';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';
 
@@ -63,9 +63,9 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const rolls = applyRecord(lay.rolls, input);
   checkRemnants(rolls, new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r])), input);
-  return plans.transaction(async (m) => {
-    await m.getRepository(LayEntity).update({ studioId, id }, { rolls, flaws: input.flaws ?? '' });
-    return m.getRepository(LayEntity).findOneByOrFail({ studioId, id });
+  return plans.transaction(async (tx) => {
+    await tx.updateLay(studioId, id, { rolls, flaws: input.flaws ?? '' });
+    return tx.lay(studioId, id);
   });
 }
 
@@ -95,23 +95,23 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     else if (plies > 0) byLot.push({ shadeLot: r.shadeLot, plies });
   }
   if (!byLot.length) throw badRequest('rolls: no plies were spread', { rolls: 'No plies were spread' });
-  return withStockLock(studioId, () => plans.transaction(async (m) => {
+  return withStockLock(studioId, () => plans.transaction(async (tx) => {
     const current = await plans.getLay(studioId, id);
     if (current?.status === 'cut') throw conflict('This lay is already cut');
-    const onHand = new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId), m)).map((r) => [r.id, r]));
+    const onHand = new Map((await tx.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r]));
     checkRemnants(rolls, onHand, input);
-    const offset = await plans.maxBundleNumber(m, studioId);
-    const batch = await m.getRepository(BatchEntity).findOneByOrFail({ studioId, id: lay.batchId });
-    const style = await m.getRepository(BatchEntity).findOne({ where: { studioId, id: lay.batchId }, relations: { style: true } });
+    const offset = await tx.maxBundleNumber(studioId);
+    const batch = await tx.batch(studioId, lay.batchId);
+    const style = await tx.batchWithStyle(studioId, lay.batchId);
     const sizes = style?.style?.sizeRun ?? Object.keys(lay.ratio);
     const made = makeBundles({ batch: batchCode(lay.batchId), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
-    await m.getRepository(BundleEntity).save(
-      made.map((b) => m.getRepository(BundleEntity).create({
+    await tx.insertBundles(
+      made.map((b) => ({
         studioId, batchId: lay.batchId, layId: lay.id, number: b.number, size: b.size, shadeLot: b.shadeLot,
         plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, reopened: {},
       })),
     );
-    const held = await plans.stock.heldOfLay(m, studioId, lay.id);
+    const held = await tx.stock.heldOfLay(studioId, lay.id);
     for (const [i, r] of rolls.entries()) {
       const roll = onHand.get(r.rollId);
       if (!roll) continue;
@@ -122,12 +122,12 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
       const wanted = usedLater.has(roll.id) || heldElsewhere;
       const keep = wanted || left >= DEFAULT_REMNANT_STOCK_THRESHOLD_MM;
       const isRemnant = !wanted && keep && left > 0 && left < roll.lengthMm;
-      if (!(await plans.stock.consume(m, studioId, lay.id, roll.id, keep ? left : 0, isRemnant, now))) {
+      if (!(await tx.stock.consume(studioId, lay.id, roll.id, keep ? left : 0, isRemnant, now))) {
         throw conflict(`Roll ${roll.label} changed while this lay was being cut; reload and try again`, { [remnantField(input, roll.id, i)]: 'The roll changed meanwhile' });
       }
     }
-    await m.getRepository(LayEntity).update({ studioId, id }, { rolls, flaws: input?.flaws ?? lay.flaws, status: 'cut', cutAt: now });
-    if (batch.status === 'planned') await m.getRepository(BatchEntity).update({ studioId, id: batch.id }, { status: 'cutting' });
-    return { lay: await m.getRepository(LayEntity).findOneByOrFail({ studioId, id }), bundles: made.length };
+    await tx.updateLay(studioId, id, { rolls, flaws: input?.flaws ?? lay.flaws, status: 'cut', cutAt: now });
+    if (batch.status === 'planned') await tx.setBatchStatus(studioId, batch.id, 'cutting');
+    return { lay: await tx.lay(studioId, id), bundles: made.length };
   }));
 }

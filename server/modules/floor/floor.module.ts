@@ -1,20 +1,19 @@
-import type { ApiModule } from '../module';
+import type { ApiModule, ModuleContext } from '../module';
 import { createFloorProgressService } from './floor-progress.service';
 import { createFloorRepository } from './floor.repository';
 import { floorRoutes } from './floor.routes';
 import { createFloorService } from './floor.service';
 
-/** ctx.services key of the floor's progress service ({ people, payLines, progress, daily }); the pay module reads it. */
-export const FLOOR_PROGRESS_SERVICE = 'floor.progress';
-
-/** The floor area: bundle logging from phones, progress, efficiency and piece-rate pay lines. */
-export const floorModule: ApiModule = {
-  name: 'floor',
-  register(api, ctx) {
-    const repo = createFloorRepository(ctx.ds);
-    const floor = createFloorService({ repo, audit: ctx.audit, now: ctx.now });
-    const progress = createFloorProgressService({ repo, floor, now: ctx.now });
-    ctx.services.set(FLOOR_PROGRESS_SERVICE, progress);
-    api.use('/floor', floorRoutes(floor, progress));
-  },
-};
+/** The floor area: bundle logging from phones, progress, efficiency and piece-rate pay lines (`progress`, read by pay). */
+export function createFloorModule(ctx: ModuleContext) {
+  const repo = createFloorRepository(ctx.ds);
+  const floor = createFloorService({ repo, audit: ctx.audit, now: ctx.now });
+  const progress = createFloorProgressService({ repo, floor, now: ctx.now });
+  return {
+    name: 'floor',
+    services: { floor, progress },
+    mount(api) {
+      api.use('/floor', floorRoutes(floor, progress));
+    },
+  } satisfies ApiModule & { services: unknown };
+}

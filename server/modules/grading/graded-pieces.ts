@@ -1,11 +1,8 @@
 import polygonClipping from 'polygon-clipping';
-import type { DataSource } from 'typeorm';
 import { cuttingOutline, gradePiece, type Piece } from '@grading';
 import { polygonSignedArea } from '@shared/geometry/polygon';
 import type { Point, Polygon } from '@shared/geometry/types';
-import { runCpuTask } from '../../jobs/cpu-pool';
-import { createStyleRepository } from '../styles/style.repository';
-import { createGradingSetRepository, type StoredGradingSet } from './grading-set.repository';
+import type { StoredGradingSet } from './grading-set.repository';
 
 /** One piece to cut for one size, as the cutting and marker area consumes it. */
 export interface CuttingPiece {
@@ -24,21 +21,16 @@ export interface CuttingPiece {
 }
 
 /**
- * Cutting pieces of a style for every size of its run, from the stored grading set: each base piece graded by
- * its stored rules, turned into its cutting outline, and cut-on-fold pieces unfolded into a full piece (the
- * half is mirrored across the fold line and united with itself). A style without a grading set gives `{}`;
- * an unknown style gives `{}` too (the caller decides what is missing).
+ * A style's cutting pieces per size (the grading area's `cuttingPieces` service, built in
+ * cutting-pieces.service.ts); markers, cut plans and costing receive it rather than reading grading's tables.
  */
-export async function loadCuttingPieces(ds: DataSource, studioId: number, styleId: number): Promise<Record<string, CuttingPiece[]>> {
-  const style = await createStyleRepository(ds).get(studioId, styleId);
-  if (!style) return {};
-  const set = await createGradingSetRepository(ds).byStyle(studioId, styleId);
-  if (!set || !set.sizeChart) return {};
-  // Grading and offsetting every piece of every size is CPU work: it runs on the CPU pool's threads.
-  return runCpuTask('cutting-pieces', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules }, baseSize: style.baseSize });
-}
+export type CuttingPieceSource = (studioId: number, styleId: number) => Promise<Record<string, CuttingPiece[]>>;
 
-/** The same as {@link loadCuttingPieces} for a set already loaded (sizes in the chart's run order). */
+/**
+ * Cutting pieces of a loaded grading set for every size of its run (sizes in the chart's run order): each
+ * base piece graded by its stored rules, turned into its cutting outline, and cut-on-fold pieces unfolded into
+ * a full piece (the half is mirrored across the fold line and united with itself).
+ */
 export function cuttingPiecesOf(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces' | 'gradeRules'>, baseSize: string): Record<string, CuttingPiece[]> {
   const key = JSON.stringify([baseSize, set.sizeChart.sizes, set.pieces, set.gradeRules]);
   const hit = memo.get(key);

@@ -1,24 +1,20 @@
-import type { ApiModule } from '../module';
-import { createStyleRepository } from '../styles/style.repository';
-import { loadCuttingPieces } from './graded-pieces';
+import type { ApiModule, ModuleContext } from '../module';
+import type { StyleRepository } from '../styles/style.repository';
+import { createCuttingPieceSource } from './cutting-pieces.service';
 import { createGradingSetRepository } from './grading-set.repository';
 import { gradingRoutes } from './grading.routes';
 import { createGradingService } from './grading.service';
 
-/** ctx.services key under which the grading area offers {@link loadCuttingPieces} (bound to ctx.ds). */
-export const GRADING_CUTTING_PIECES_SERVICE = 'grading.cuttingPieces';
-
 /** The grading area: size charts, grade rules, graded sets and piece downloads under /api/styles/:id/grading. */
-export const gradingModule: ApiModule = {
-  name: 'grading',
-  register(api, ctx) {
-    const service = createGradingService({
-      styles: createStyleRepository(ctx.ds),
-      sets: createGradingSetRepository(ctx.ds),
-      audit: ctx.audit,
-      now: ctx.now,
-    });
-    ctx.services.set(GRADING_CUTTING_PIECES_SERVICE, (studioId: number, styleId: number) => loadCuttingPieces(ctx.ds, studioId, styleId));
-    api.use('/styles', gradingRoutes(service));
-  },
-};
+export function createGradingModule(ctx: ModuleContext, deps: { styles: StyleRepository }) {
+  const sets = createGradingSetRepository(ctx.ds);
+  const grading = createGradingService({ styles: deps.styles, sets, audit: ctx.audit, now: ctx.now });
+  return {
+    name: 'grading',
+    /** `cuttingPieces` gives a style's cutting pieces per size to markers, cut plans and costing. */
+    services: { grading, cuttingPieces: createCuttingPieceSource({ styles: deps.styles, sets }) },
+    mount(api) {
+      api.use('/styles', gradingRoutes(grading));
+    },
+  } satisfies ApiModule & { services: unknown };
+}

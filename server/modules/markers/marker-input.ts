@@ -2,12 +2,20 @@ import { createHash } from 'node:crypto';
 import type { NestingInput, NestingPiece } from '@planning';
 import { polygonArea, polygonRotate } from '@shared/geometry/polygon';
 import { mm } from '@shared/units/units';
-import type { CuttingPiece } from './style-pieces';
+import { badRequest } from '../../errors';
+import type { CuttingPiece } from '../grading/graded-pieces';
 
 /** Clear distance kept between pieces (mm): room for the knife between neighbours (common practice). */
 export const MARKER_GAP_MM = 2;
 /** Seed of every product marker: same inputs, same marker. */
 export const MARKER_SEED = 1;
+
+/**
+ * Utilisation assumed when a ratio has no stored marker: length ≈ piece area ÷ (width × 0.75). Common
+ * practice for a first estimate of a mixed-size garment marker (no published figure is used); the owner
+ * sees which lays rest on it and can build the real marker.
+ */
+export const ASSUMED_UTILISATION = 0.75;
 
 /** What the engine gets and what the marker view needs to draw and label each piece. */
 export interface MarkerJobInput {
@@ -73,4 +81,26 @@ export function garmentAreas(pieces: Record<string, CuttingPiece[]>): Record<str
   return Object.fromEntries(
     Object.entries(pieces).map(([size, list]) => [size, list.reduce((a, p) => a + polygonArea(p.outline) * p.quantity, 0)]),
   );
+}
+
+/**
+ * The pieces cut from one fabric: those whose material the style links to it. A style that links no material
+ * cuts every piece from any fabric (styles made before materials existed). A fabric no material links to is a
+ * 400 on `fabricId` naming the fabrics the style does use.
+ */
+export function piecesOnFabric(
+  pieces: Record<string, CuttingPiece[]>,
+  materialFabrics: Record<string, number> | null,
+  fabric: { id: number; name?: string },
+): Record<string, CuttingPiece[]> {
+  const links = Object.entries(materialFabrics ?? {});
+  if (!links.length) return pieces;
+  const materials = new Set(links.filter(([, id]) => id === fabric.id).map(([m]) => m));
+  if (!materials.size) {
+    const used = links.map(([m]) => m).join(', ');
+    throw badRequest(`fabricId: no material of this style is cut from ${fabric.name ?? 'this fabric'} (link one on the style page; the style uses ${used})`, {
+      fabricId: 'No material of this style is cut from this fabric',
+    });
+  }
+  return Object.fromEntries(Object.entries(pieces).map(([size, list]) => [size, list.filter((p) => materials.has(p.material))]));
 }

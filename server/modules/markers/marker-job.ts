@@ -1,9 +1,26 @@
 import { randomUUID } from 'node:crypto';
-import { checkLayout } from '@planning';
+import { checkLayout, type NestingResult } from '@planning';
 import { runNestingWorker, type NestingRunHandle } from '../../workers/nesting-runner';
 import type { MarkerJobInput } from './marker-input';
 import type { MarkerRepository } from './marker.repository';
-import type { LiveProgress, StoredMarkerResult } from './marker-queue';
+
+/** What is known about a running job between its progress reports. */
+export interface LiveProgress {
+  bestLength: number;
+  elapsedMs: number;
+  iteration: number;
+}
+
+/** Stored result of a marker run: the engine's result plus the label of every piece. */
+export interface StoredMarkerResult extends NestingResult {
+  check: { valid: boolean; errors: string[] };
+}
+
+/**
+ * Called once a marker is stored as done. The markers area writes only its own table: whoever uses finished
+ * markers (the cutting area links them to its planned lays) hands this hook to the queue.
+ */
+export type MarkerDoneHook = (studioId: number, markerId: number) => Promise<void>;
 
 export interface MarkerJobHooks {
   /** Grace past the budget before a run counts as overrun. */
@@ -14,7 +31,7 @@ export interface MarkerJobHooks {
   /** Receives the run handle so the caller can cancel it. */
   onStart?: (handle: NestingRunHandle) => void;
   /** Called after a marker is stored as done. */
-  onDone?: (studioId: number, markerId: number) => Promise<void>;
+  onDone?: MarkerDoneHook;
   /** True when the caller shut down mid-run: the outcome is then not stored (the job resumes later). */
   isStopped?: () => boolean;
   /** How long a claim holds without renewal (renewed every third of it while the run lives). */

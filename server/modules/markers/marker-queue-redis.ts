@@ -2,8 +2,8 @@ import { Queue, QueueEvents, Worker, type Job } from 'bullmq';
 import { Redis } from 'ioredis';
 import type { NestingRunHandle } from '../../workers/nesting-runner';
 import type { MarkerJobInput } from './marker-input';
-import { executeMarkerJob } from './marker-job';
-import { MAX_QUEUED_PER_STUDIO, markerQueueFull, type LiveProgress, type MarkerQueue, type MarkerQueueOptions } from './marker-queue';
+import { executeMarkerJob, type LiveProgress } from './marker-job';
+import { MAX_QUEUED_PER_STUDIO, markerQueueFull, type MarkerQueue, type MarkerQueueOptions } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
 
 /** BullMQ queue name of marker (nesting) jobs. */

@@ -1,30 +1,17 @@
-import type { NestingResult } from '@planning';
 import { AppError } from '../../errors';
 import { FairQueue } from './fair-queue';
 import type { NestingRunHandle } from '../../workers/nesting-runner';
-import { executeMarkerJob } from './marker-job';
+import { executeMarkerJob, type LiveProgress, type MarkerDoneHook } from './marker-job';
 import type { MarkerJobInput } from './marker-input';
 import type { MarkerRepository } from './marker.repository';
-
-/** What is known about a running job between its progress reports. */
-export interface LiveProgress {
-  bestLength: number;
-  elapsedMs: number;
-  iteration: number;
-}
-
-/** Stored result of a marker run: the engine's result plus the label of every piece. */
-export interface StoredMarkerResult extends NestingResult {
-  check: { valid: boolean; errors: string[] };
-}
 
 export interface MarkerQueueOptions {
   /** Grace past the budget before a run counts as overrun (the engine's first layout is not interruptible). */
   overrunMs?: number;
   /** Worker entry override, for tests. */
   workerEntry?: string;
-  /** Called after a marker is stored as done (the cutting area links it to planned lays of that ratio). */
-  onDone?: (studioId: number, markerId: number) => Promise<void>;
+  /** Called after a marker is stored as done (the cutting area's hook links it to planned lays of that ratio). */
+  onDone?: MarkerDoneHook;
   /** Markers one studio may have waiting (not counting the one running); default {@link MAX_QUEUED_PER_STUDIO}. */
   maxQueuedPerStudio?: number;
 }

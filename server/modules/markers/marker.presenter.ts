@@ -1,7 +1,7 @@
 import type { MarkerDrawingDto, MarkerDto } from '../../../shared/schemas/markers';
 import type { MarkerEntity } from '../../entities';
 import type { MarkerJobInput } from './marker-input';
-import type { LiveProgress, StoredMarkerResult } from './marker-queue';
+import type { LiveProgress, StoredMarkerResult } from './marker-job';
 
 const garmentsOf = (ratio: Record<string, number>) => Object.values(ratio).reduce((a, b) => a + b, 0);
 

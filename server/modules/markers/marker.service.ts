@@ -1,21 +1,32 @@
-import type { DataSource } from 'typeorm';
-import type { CreateMarkerInput } from '../../../shared/schemas/markers';
+import { markerToDxf } from '@exports/dxf/marker-dxf';
+import { ratioText, type CreateMarkerInput } from '../../../shared/schemas/markers';
 import type { Actor } from '../../auth/require';
-import type { MarkerEntity } from '../../entities';
+import type { FabricEntity, MarkerEntity } from '../../entities';
 import { badRequest, conflict, notFound } from '../../errors';
+import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
-import { createBatchRepository } from '../batches/batch.repository';
-import { createFabricRepository } from '../cutting/fabric.repository';
-import { createStyleRepository } from '../styles/style.repository';
-import { buildMarkerInput, markerInputHash } from './marker-input';
+import type { BatchRepository } from '../batches/batch.repository';
+import { batchCode } from '../batches/batch.presenter';
+import type { CuttingPieceSource } from '../grading/graded-pieces';
+import type { StyleRepository } from '../styles/style.repository';
+import { buildMarkerInput, markerInputHash, piecesOnFabric } from './marker-input';
 import { presentMarker } from './marker.presenter';
 import type { MarkerQueue } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
-import { loadStylePieces, piecesOnFabric } from './style-pieces';
+import { markerSvg } from './marker-svg';
+
+/** The fabrics a marker is laid on; the cutting area owns them and hands this lookup in. */
+export interface FabricLookup {
+  get(studioId: number, id: number): Promise<FabricEntity | null>;
+}
 
 export interface MarkerServiceDeps {
-  ds: DataSource;
   markers: MarkerRepository;
+  styles: Pick<StyleRepository, 'get'>;
+  batches: Pick<BatchRepository, 'get'>;
+  fabrics: FabricLookup;
+  /** The style's cutting pieces per size (the grading area's loader). */
+  cuttingPieces: CuttingPieceSource;
   queue: () => MarkerQueue;
   audit: AuditRepository;
   /** Default budget (NESTING_SECONDS). */
@@ -26,10 +37,7 @@ export type MarkerService = ReturnType<typeof createMarkerService>;
 
 /** Starting, reading and cancelling markers; the hash of the inputs makes an unchanged marker free. */
 export function createMarkerService(deps: MarkerServiceDeps) {
-  const { ds, markers, audit } = deps;
-  const styles = createStyleRepository(ds);
-  const batches = createBatchRepository(ds);
-  const fabrics = createFabricRepository(ds);
+  const { markers, audit, styles, batches, fabrics } = deps;
 
   /** Build, hash and store a marker job; returns the stored marker when one with the same inputs exists. */
   async function start(studioId: number, input: CreateMarkerInput): Promise<{ marker: MarkerEntity; reused: boolean }> {
@@ -44,7 +52,7 @@ export function createMarkerService(deps: MarkerServiceDeps) {
     const fields: Record<string, string> = {};
     for (const size of Object.keys(input.ratio)) if (!style.sizeRun.includes(size)) fields[`ratio.${size}`] = `Size ${size} is not in the style's size run`;
     if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
-    const all = await loadStylePieces(ds, studioId, style.id);
+    const all = await deps.cuttingPieces(studioId, style.id);
     if (Object.keys(all).length === 0) throw conflict('This style has no graded pieces yet: grade it first');
     const pieces = piecesOnFabric(all, style.materialFabrics, fabric);
     const ratio = Object.fromEntries(style.sizeRun.filter((s) => (input.ratio[s] ?? 0) > 0).map((s) => [s, input.ratio[s]]));
@@ -70,6 +78,30 @@ export function createMarkerService(deps: MarkerServiceDeps) {
     }
   }
 
+  async function get(studioId: number, id: number, withDrawing = true) {
+    const m = await markers.get(studioId, id);
+    if (!m) throw notFound('Marker');
+    return { entity: m, dto: presentMarker(m, deps.queue().progress(id), withDrawing) };
+  }
+
+  /** The finished marker as a file: SVG to look at, or DXF at 1:1 for a plotter or cutting table (millimetres). */
+  async function file(studioId: number, id: number, kind: 'svg' | 'dxf'): Promise<Download> {
+    const { dto } = await get(studioId, id);
+    if (!dto.drawing || dto.lengthMm === null) throw conflict('This marker has no finished layout yet');
+    const style = await styles.get(studioId, dto.styleId);
+    const sizes = style?.sizeRun ?? Object.keys(dto.ratio);
+    const size = `${Math.round(dto.lengthMm)} mm × ${Math.round(dto.widthMm)} mm`;
+    if (kind === 'svg') {
+      const title = `${style?.code ?? 'Marker'} ${ratioText(dto.ratio, sizes)} · ${size}`;
+      return { body: markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }), type: 'image/svg+xml', filename: `marker-${dto.id}.svg` };
+    }
+    // The batch goes in the title and the name, so a plotter queue shows whose marker it is.
+    const batch = dto.batchId ? batchCode(dto.batchId) : null;
+    const title = [batch, style?.code ?? 'Marker', ratioText(dto.ratio, sizes), size].filter(Boolean).join(' · ');
+    const body = markerToDxf({ outlines: dto.drawing.outlines, placements: dto.drawing.placements, lengthMm: dto.lengthMm, widthMm: dto.widthMm, title });
+    return { body, type: 'application/dxf', filename: `marker-${[batch, style?.code, dto.id].filter(Boolean).join('-')}.dxf` };
+  }
+
   return {
     async create(actor: Actor, input: CreateMarkerInput) {
       const { marker, reused } = await start(actor.studioId, input);
@@ -77,11 +109,8 @@ export function createMarkerService(deps: MarkerServiceDeps) {
       return { marker: presentMarker(marker, deps.queue().progress(marker.id)), reused };
     },
     start,
-    async get(studioId: number, id: number, withDrawing = true) {
-      const m = await markers.get(studioId, id);
-      if (!m) throw notFound('Marker');
-      return { entity: m, dto: presentMarker(m, deps.queue().progress(id), withDrawing) };
-    },
+    get,
+    file,
     async list(studioId: number, where: { styleId?: number; batchId?: number }) {
       return (await markers.list(studioId, where)).map((m) => presentMarker(m, deps.queue().progress(m.id)));
     },

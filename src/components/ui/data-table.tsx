@@ -19,16 +19,24 @@ export function DataTable<T>({
   filterPlaceholder = 'Filter…',
   onRowClick,
   empty = 'Nothing here yet.',
+  urlKey,
+  label = 'Table',
 }: {
   data: T[];
   columns: ColumnDef<T, any>[];
   filterPlaceholder?: string;
   onRowClick?: (row: T) => void;
   empty?: string;
+  /** Prefix of this table's URL state (`<urlKey>.q`, `<urlKey>.sort`) where a page shows more than one table. */
+  urlKey?: string;
+  /** The accessible name of the table's scrolling region. */
+  label?: string;
 }) {
   const [params, setParams] = useSearchParams();
-  const q = params.get('q') ?? '';
-  const sortParam = params.get('sort');
+  const qKey = urlKey ? `${urlKey}.q` : 'q';
+  const sortKey = urlKey ? `${urlKey}.sort` : 'sort';
+  const q = params.get(qKey) ?? '';
+  const sortParam = params.get(sortKey);
   const sorting: SortingState = sortParam
     ? [{ id: sortParam.split('.')[0], desc: sortParam.endsWith('.desc') }]
     : [];
@@ -39,14 +47,14 @@ export function DataTable<T>({
     onSortingChange: (updater) => {
       const next = typeof updater === 'function' ? updater(sorting) : updater;
       const p = new URLSearchParams(params);
-      if (next[0]) p.set('sort', `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}`);
-      else p.delete('sort');
+      if (next[0]) p.set(sortKey, `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}`);
+      else p.delete(sortKey);
       setParams(p, { replace: true });
     },
     onGlobalFilterChange: (value: string) => {
       const p = new URLSearchParams(params);
-      if (value) p.set('q', value);
-      else p.delete('q');
+      if (value) p.set(qKey, value);
+      else p.delete(qKey);
       setParams(p, { replace: true });
     },
     // No pagination here; without this, each re-render (a new `sorting` array) resets the page index,
@@ -59,13 +67,13 @@ export function DataTable<T>({
   return (
     <div>
       <input
-        aria-label="Filter rows"
+        aria-label={`Filter ${label.toLowerCase()}`}
         className="field-input mb-3 max-w-xs"
         placeholder={filterPlaceholder}
         value={q}
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
-      <div tabIndex={0} className="overflow-x-auto rounded-card border border-calico-200 bg-white">
+      <div role="region" aria-label={label} tabIndex={0} className="overflow-x-auto rounded-card border border-calico-200 bg-white">
         <table className="min-w-full text-sm">
           <thead className="bg-thread-700 text-left text-calico-50">
             {table.getHeaderGroups().map((hg) => (

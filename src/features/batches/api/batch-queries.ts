@@ -1,14 +1,10 @@
-import { queryOptions, useMutation } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { BatchDto, CreateBatchInput } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
+import { batchQueries } from '@/lib/queries';
 
-export const batchQueries = {
-  all: () => ({ queryKey: ['batches'] as const }),
-  list: () => queryOptions({ queryKey: ['batches', 'list'], queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches }),
-  detail: (id: number) =>
-    queryOptions({ queryKey: ['batches', 'detail', id], queryFn: async () => (await api.get<{ batch: BatchDto }>(`/batches/${id}`)).batch }),
-};
+export { batchQueries };
 
 export const useCreateBatch = () =>
   useMutation({

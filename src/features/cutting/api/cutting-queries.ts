@@ -1,7 +1,8 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { BundleDto, CorrectLayInput, CreateCutPlanInput, CutPlanDto, FabricDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
+import type { BundleDto, CorrectLayInput, CreateCutPlanInput, CutPlanDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
+import { fabricQueries } from '@/lib/queries';
 
 export interface LayDetail {
   lay: LayDto;
@@ -9,12 +10,7 @@ export interface LayDetail {
   bundles: BundleDto[];
 }
 
-export const fabricQueries = {
-  all: () => ({ queryKey: ['fabrics'] as const }),
-  list: () => queryOptions({ queryKey: ['fabrics', 'list'], queryFn: async () => (await api.get<{ fabrics: FabricDto[] }>('/fabrics')).fabrics }),
-  detail: (id: number) =>
-    queryOptions({ queryKey: ['fabrics', 'detail', id], queryFn: async () => api.get<{ fabric: FabricDto; rolls: RollDto[] }>(`/fabrics/${id}`) }),
-};
+export { fabricQueries };
 
 export const cutPlanQueries = {
   all: () => ({ queryKey: ['cut-plans'] as const }),

@@ -73,7 +73,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
               ? 'Every marker length is a measured marker.'
               : <>Every marker length is an estimate: piece area ÷ (width × {Math.round(plan.assumedUtilisation * 100)} % assumed utilisation). {plan.markerLengthsNote ?? 'Build the markers to plan on measured lengths.'}</>}
           </p>
-          <div tabIndex={0} className="overflow-x-auto">
+          <div role="region" aria-label="Lays of the cut plan" tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Lay</th><th>Sizes per ply</th><th>Plies</th><th>Marker</th><th>Spreading</th><th>Rolls (plies, expected remnant)</th><th>Status</th></tr></thead>
               <tbody>

@@ -12,7 +12,7 @@ import { FabricForm } from './fabric-form';
 function RollTable({ rolls }: { rolls: RollDto[] }) {
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   return (
-    <div tabIndex={0} className="overflow-x-auto">
+    <div role="region" aria-label="Rolls" tabIndex={0} className="overflow-x-auto">
       <table className="w-full text-sm">
         <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Held by plans</th><th>Width</th><th>Received</th></tr></thead>
         <tbody>

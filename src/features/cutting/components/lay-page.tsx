@@ -101,7 +101,7 @@ export function LayPage() {
           {lay.markerId ? <img src={`/api/markers/${lay.markerId}/svg`} alt={`Marker of lay ${lay.seq}`} className="w-full rounded-lg border border-calico-200 bg-calico-50" /> : <p className="text-sm text-ink-600">No drawn marker stored for this ratio yet; the length is the plan's estimate.</p>}
         </Card>
         <Card title="Marker list per roll">
-          <div tabIndex={0} className="overflow-x-auto">
+          <div role="region" aria-label="Rolls of this lay" tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Plies to spread</th><th>Expected remnant</th><th>Plies spread</th><th>Remnant left (m)</th><th>Note</th></tr></thead>
               <tbody>

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { BatchDto } from '@shared/schemas/batches';
 import type { BundleChoiceDto, BundleDto, DailyOutput, ProgressDto, TodayDto } from '@shared/schemas/floor';
 import { api } from '@/lib/api-client';
+import { batchQueries } from '@/lib/queries';
 
 export const floorQueries = {
   all: () => ({ queryKey: ['floor'] as const }),
@@ -18,7 +18,7 @@ export const floorQueries = {
       queryKey: ['floor', 'bundle-matches', number],
       queryFn: async () => (await api.get<{ bundles: BundleChoiceDto[] }>(`/floor/bundles?number=${number}`)).bundles,
     }),
-  batches: () => queryOptions({ queryKey: ['floor', 'batches'], queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches }),
+  batches: batchQueries.list,
   progress: (batchId: number) =>
     queryOptions({ queryKey: ['floor', 'progress', batchId], queryFn: async () => (await api.get<{ progress: ProgressDto }>(`/floor/progress/${batchId}`)).progress, refetchInterval: 30_000 }),
   daily: (batchId: number) =>

@@ -99,7 +99,7 @@ export function PayPage() {
             </p>
           ) : null}
           {preview.data ? (
-            <div tabIndex={0} className="mt-3 overflow-x-auto">
+            <div role="region" aria-label="Pay lines" tabIndex={0} className="mt-3 overflow-x-auto">
               <table className="min-w-full text-sm" aria-label="Pay preview">
                 <thead className="bg-thread-700 text-left text-calico-50">
                   <tr><th className="px-3 py-2">Person</th><th className="px-3 py-2">Pieces</th><th className="px-3 py-2" title={EFFICIENCY_DEFINITION}>Efficiency</th><th className="px-3 py-2">Amount</th></tr>

@@ -27,7 +27,7 @@ function DailyChart({ daily }: { daily: ProgressDto['daily'] }) {
   const max = Math.max(1, ...daily.map((d) => Math.max(d.pieces, d.planned)));
   return (
     <div>
-      <div tabIndex={0} className="flex h-40 items-end gap-1 overflow-x-auto" aria-label="Output per day against the plan">
+      <div role="region" tabIndex={0} className="flex h-40 items-end gap-1 overflow-x-auto" aria-label="Output per day against the plan">
         {daily.map((d) => (
           <div key={d.day} className="flex min-w-8 flex-1 flex-col items-center justify-end gap-1" title={`${d.day}: ${d.pieces} packed, plan ${d.planned}`}>
             <div className="relative flex h-32 w-full items-end justify-center">
@@ -60,9 +60,9 @@ export function ProgressView({ progress }: { progress: ProgressDto }) {
         </Card>
       </div>
       <Card title="Output per day"><DailyChart daily={progress.daily} /></Card>
-      <Card title="Work in progress per operation"><DataTable data={progress.operations} columns={operationProgressColumns} filterPlaceholder="Filter operations…" /></Card>
+      <Card title="Work in progress per operation"><DataTable data={progress.operations} columns={operationProgressColumns} filterPlaceholder="Filter operations…" urlKey="ops" label="Work in progress per operation" /></Card>
       <Card title={`Efficiency per person (${EFFICIENCY_DEFINITION.toLowerCase()})`}>
-        <DataTable data={progress.people} columns={efficiencyColumns} filterPlaceholder="Filter people…" empty="No one has logged work on this batch yet." />
+        <DataTable data={progress.people} columns={efficiencyColumns} urlKey="people" label="Efficiency per person" filterPlaceholder="Filter people…" empty="No one has logged work on this batch yet." />
       </Card>
     </div>
   );

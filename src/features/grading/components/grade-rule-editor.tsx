@@ -38,7 +38,7 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
         {rules.filter((r) => r.target.kind === 'vertex').map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
       </select>
       <p className="text-xs text-ink-600">Movement per size step in mm: across (+ to the right) and up (+ upwards). Tap a dot on the drawing to pick a point.</p>
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Grade rules" tabIndex={0} className="overflow-x-auto">
         <table className="w-full text-sm">
           <thead><tr className="text-left text-ink-600"><th className="py-1 pr-2">Step</th><th className="px-1">Across (mm)</th><th className="px-1">Up (mm)</th></tr></thead>
           <tbody>

@@ -12,7 +12,7 @@ export function PieceMeasurements({ piece, sizes, baseSize }: { piece: GradedPie
     </tr>
   );
   return (
-    <div tabIndex={0} className="overflow-x-auto">
+    <div role="region" aria-label="Piece measurements" tabIndex={0} className="overflow-x-auto">
       <table className="w-full min-w-[480px] text-sm" data-testid="piece-measurements">
         <thead><tr className="border-b border-calico-200"><th className="py-1 text-left text-ink-600">{piece.name}</th>{sizes.map((s) => <th key={s} className="px-2 text-right">{s}</th>)}</tr></thead>
         <tbody>

@@ -17,7 +17,7 @@ export function SeamReport({ grading }: { grading: GradingDto }) {
       ) : (
         <p className="text-sm text-thread-800"><Badge tone="teal">All clear</Badge> Every seam matches in every size, and no graded piece crosses itself or flips.</p>
       )}
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Seam lengths" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[560px] text-sm" data-testid="seam-report">
           <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1.5 pr-2">Seam</th>{grading.sizes.map((s) => <th key={s} className="px-2">{s}</th>)}</tr></thead>
           <tbody>

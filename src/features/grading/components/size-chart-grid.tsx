@@ -68,7 +68,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
       </div>
       <ErrorNote error={put.error} />
       {importProblems}
-      <div className="overflow-x-auto" tabIndex={0} aria-label="Size chart">
+      <div role="region" className="overflow-x-auto" tabIndex={0} aria-label="Size chart">
         <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
           <thead>
             <tr className="border-b border-calico-200 text-left">

@@ -35,7 +35,7 @@ export function SizeMixTool({ styleId }: { styleId: number }) {
       {r ? (
         <div className="space-y-3">
           <p className="text-sm">{r.measured} customers ({r.column}, {r.unit}); {r.outsideRun} outside the run, counted in the nearest end size.</p>
-          <div tabIndex={0} className="overflow-x-auto">
+          <div role="region" aria-label="Size mix" tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm" data-testid="size-mix">
               <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Size</th><th>Bust from</th><th>to</th><th className="text-right">Customers</th><th className="text-right">Garments</th></tr></thead>
               <tbody>{r.sizes.map((s) => (

@@ -1,23 +1,20 @@
 import { useQuery } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { useSearchParams } from 'react-router';
-import type { BatchDto } from '@shared/schemas/batches';
-import type { StyleDto } from '@shared/schemas/styles';
 import { Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
-import { api, downloadFile } from '@/lib/api-client';
+import { downloadFile } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { formatMoney } from '@/lib/format';
+import { batchQueries, styleQueries } from '@/lib/queries';
 import { operationQueries, useCopyOperations, useImportOperations } from '../api/line-queries';
 import { LinePlanPanel } from './line-plan-panel';
 import { OperationsEditor } from './operations-editor';
 
-const batchList = { queryKey: ['batches', 'list'] as const, queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches };
-const styleList = { queryKey: ['styles', 'list'] as const, queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles };
 
 /** Line plan: pick a batch, see its style's operations and the balanced line with its schedule. */
 export function LinePage() {
   const [params, setParams] = useSearchParams();
-  const batches = useQuery(batchList);
+  const batches = useQuery(batchQueries.list());
   if (!batches.data) return <Spinner />;
   const open = batches.data.filter((b) => b.status !== 'shipped' && b.status !== 'cancelled');
   const batch = open.find((b) => b.id === Number(params.get('batch'))) ?? open[0];
@@ -44,7 +41,7 @@ export function LinePage() {
 
 function OperationsCard({ styleId }: { styleId: number }) {
   const ops = useQuery(operationQueries.list(styleId));
-  const styles = useQuery(styleList);
+  const styles = useQuery(styleQueries.list());
   const currency = useMe().data?.currency ?? 'KES';
   const imp = useImportOperations(styleId);
   const copy = useCopyOperations(styleId);
@@ -75,7 +72,7 @@ function OperationsCard({ styleId }: { styleId: number }) {
         <button type="button" className="btn-quiet" disabled={!from || copy.isPending} onClick={() => copy.mutate(Number(from))}>Copy</button>
       </div>
       <ErrorNote error={imp.error ?? copy.error ?? ops.error} />
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Operations of the style" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="operations">
           <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Code</th><th>Operation</th><th>Machine</th><th className="text-right">SAM</th><th className="pl-4">After</th>{rows.some((r) => r.pieceRateMinor !== undefined) ? <th className="text-right">Piece rate</th> : null}</tr></thead>
           {sections.map((sec) => (

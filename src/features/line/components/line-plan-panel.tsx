@@ -60,7 +60,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
             <CapacityChart plan={p} />
             <p className="text-xs text-ink-600"><span className="font-semibold text-madder-600">Madder bar</span>: the bottleneck station. Dashed line: one operator's capacity ({p.minutesPerDay} min × {Math.round(p.efficiency * 100)} %).</p>
           </div>
-          <div tabIndex={0} className="overflow-x-auto">
+          <div role="region" aria-label="Line plan" tabIndex={0} className="overflow-x-auto">
             <table className="w-full min-w-[520px] text-sm" data-testid="stations">
               <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Station</th><th>Machine</th><th>Operations</th><th className="text-right">Minutes</th><th className="text-right">Idle</th></tr></thead>
               <tbody>{p.stations.map((s) => (

@@ -82,7 +82,7 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
   return (
     <div>
       <datalist id="machine-types">{MACHINE_TYPES.map((m) => <option key={m} value={m} />)}</datalist>
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Operations" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[860px] text-sm" aria-label="Edit operations">
           <thead>
             <tr className="border-b border-calico-200 text-left text-ink-600">

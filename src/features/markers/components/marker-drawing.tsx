@@ -16,7 +16,7 @@ const place = (ring: P[], mirrored: boolean, rotation: number, dx: number, dy: n
 /** The marker drawn to scale: the fabric strip and every piece, coloured by size and labelled. */
 export function MarkerDrawing({ drawing, lengthMm, widthMm, sizes }: { drawing: MarkerDrawingDto; lengthMm: number; widthMm: number; sizes: string[] }) {
   return (
-    <div tabIndex={0} className="overflow-x-auto rounded-lg border border-calico-200 bg-calico-50 p-2">
+    <div role="region" aria-label="Marker drawing" tabIndex={0} className="overflow-x-auto rounded-lg border border-calico-200 bg-calico-50 p-2">
       <svg role="img" aria-label={`Marker ${Math.round(lengthMm)} mm long`} viewBox={`0 0 ${lengthMm} ${widthMm}`} className="h-auto min-w-[640px] w-full">
         <rect x={0} y={0} width={lengthMm} height={widthMm} fill="#FBF8F2" stroke="#1A1A1A" strokeWidth={2} />
         <g transform={`matrix(1 0 0 -1 0 ${widthMm})`}>

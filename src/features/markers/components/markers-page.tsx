@@ -7,6 +7,7 @@ import { ratioText, type MarkerDto } from '@shared/schemas/markers';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { api, ApiError, downloadFile } from '@/lib/api-client';
 import { useCan } from '@/lib/auth';
+import { batchQueries, fabricQueries } from '@/lib/queries';
 import { markerQueries, useCancelMarker, useStartMarker } from '../api/marker-queries';
 import { MarkerDrawing } from './marker-drawing';
 
@@ -102,8 +103,8 @@ function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto
 }
 
 export function MarkersPage() {
-  const { data: batches } = useQuery({ queryKey: ['batches', 'list'], queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches });
-  const { data: fabrics } = useQuery({ queryKey: ['fabrics', 'list'], queryFn: async () => (await api.get<{ fabrics: FabricDto[] }>('/fabrics')).fabrics });
+  const { data: batches } = useQuery(batchQueries.list());
+  const { data: fabrics } = useQuery(fabricQueries.list());
   const [batchId, setBatchId] = useState<number | undefined>();
   const batch = batches?.find((b) => b.id === batchId) ?? batches?.[0];
   const { data: plan = null } = useQuery({ queryKey: ['cut-plans', 'batch', batch?.id ?? 0], enabled: Boolean(batch), queryFn: async () => (await api.get<{ cutPlan: CutPlanDto | null }>(`/batches/${batch!.id}/cut-plan`)).cutPlan });

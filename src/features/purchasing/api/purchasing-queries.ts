@@ -1,18 +1,17 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
 import type { MailMessageDto } from '@shared/schemas/mail';
-import type { BatchDto } from '@shared/schemas/batches';
 import type { CreateOrderInput, CreateSupplierInput, OrderableItemDto, NeedDto, PurchaseOrderDto, ReceiveOrderInput, SupplierDto } from '@shared/schemas/purchasing';
-import type { StudioDto } from '@shared/schemas/studio';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
+import { batchQueries, studioQueries } from '@/lib/queries';
 
 export const purchasingQueries = {
   all: () => ({ queryKey: ['purchasing'] as const }),
   suppliers: () => queryOptions({ queryKey: ['purchasing', 'suppliers'], queryFn: async () => (await api.get<{ suppliers: SupplierDto[] }>('/purchasing/suppliers')).suppliers }),
   orders: () => queryOptions({ queryKey: ['purchasing', 'orders'], queryFn: async () => (await api.get<{ orders: PurchaseOrderDto[] }>('/purchasing/orders')).orders }),
-  studio: () => queryOptions({ queryKey: ['purchasing', 'studio'], queryFn: async () => (await api.get<{ studio: StudioDto }>('/studio')).studio }),
+  studio: studioQueries.detail,
   items: () => queryOptions({ queryKey: ['purchasing', 'items'], queryFn: async () => (await api.get<{ items: OrderableItemDto[] }>('/purchasing/items')).items }),
-  batches: () => queryOptions({ queryKey: ['purchasing', 'batches'], queryFn: async () => (await api.get<{ batches: BatchDto[] }>('/batches')).batches }),
+  batches: batchQueries.list,
   needs: (batchId: number) =>
     queryOptions({ queryKey: ['purchasing', 'needs', batchId], queryFn: async () => (await api.get<{ needs: NeedDto[] }>(`/purchasing/batches/${batchId}/needs`)).needs }),
 };

@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useSuspenseQuery } from '@tanstack/react-query';
+import { useMutation, useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { updateStudioInput, type StudioDto } from '@shared/schemas/studio';
 import { Field } from '@/components/ui/form';
@@ -6,11 +6,9 @@ import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { api, ApiError } from '@/lib/api-client';
 import { meQueries } from '@/lib/auth';
 import { queryClient } from '@/lib/query-client';
+import { studioQueries } from '@/lib/queries';
 import { MachinesCard } from './machines-card';
 
-export const studioQueries = {
-  detail: () => queryOptions({ queryKey: ['studio'], queryFn: async () => (await api.get<{ studio: StudioDto }>('/studio')).studio }),
-};
 
 export function SettingsPage() {
   const { data: studio } = useSuspenseQuery(studioQueries.detail());

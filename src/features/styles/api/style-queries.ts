@@ -1,15 +1,11 @@
-import { queryOptions, useMutation } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { PutCompositionInput } from '@shared/schemas/style-composition';
 import type { CreateStyleInput, StyleDto } from '@shared/schemas/styles';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
+import { styleQueries } from '@/lib/queries';
 
-export const styleQueries = {
-  all: () => ({ queryKey: ['styles'] as const }),
-  list: () => queryOptions({ queryKey: ['styles', 'list'], queryFn: async () => (await api.get<{ styles: StyleDto[] }>('/styles')).styles }),
-  detail: (id: number) =>
-    queryOptions({ queryKey: ['styles', 'detail', id], queryFn: async () => (await api.get<{ style: StyleDto }>(`/styles/${id}`)).style }),
-};
+export { styleQueries };
 
 export const useSaveStyle = (id?: number) =>
   useMutation({

@@ -1,0 +1,147 @@
+import { can, type Role } from '../../../shared/auth/permissions';
+import type { CreateCutPlanInput, RecordLayInput, ShortageDto } from '../../../shared/schemas/cutting';
+import type { Actor } from '../../auth/require';
+import type { LayEntity } from '../../entities';
+import { conflict, notFound } from '../../errors';
+import type { Download } from '../../middleware/download';
+import type { AuditRepository } from '../audit/audit.repository';
+import { batchCode } from '../batches/batch.presenter';
+import { presentBundle, presentCutPlan, presentLay, presentLayFabric } from './cut-plan.presenter';
+import { planBatchCut, type CutPlanDeps } from './cut-plan.service';
+import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
+import { markLayCut, recordLay } from './lay.service';
+import { layShortages } from './shortage';
+
+const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+const PDF = 'application/pdf';
+
+export interface CuttingServiceDeps extends CutPlanDeps {
+  batches: CutPlanDeps['batches'] & { list(studioId: number): Promise<{ id: number; status: string }[]> };
+  audit: AuditRepository;
+  now: () => Date;
+}
+
+export type CuttingService = ReturnType<typeof createCuttingService>;
+
+/** Batch documents the cutting area builds (each through the job runner). */
+export type BatchDocument = 'marker-list.xlsx' | 'marker-list.pdf' | 'bundle-register.xlsx' | 'bundle-tickets.pdf';
+/** Documents of one lay. */
+export type LayDocument = 'cut-ticket.pdf' | 'marker-list.xlsx' | 'marker-list.pdf' | 'bundle-tickets.pdf';
+
+/** Cut plans of batches, the cutter's lays, their bundles and documents. */
+export function createCuttingService(deps: CuttingServiceDeps) {
+  const { plans, fabrics, jobs, audit, now } = deps;
+
+  const loadBatch = async (studioId: number, id: number) => {
+    const b = await deps.batches.get(studioId, id);
+    if (!b) throw notFound('Batch');
+    return b;
+  };
+  const shortagesOf = async (studioId: number, list: LayEntity[]) =>
+    layShortages(list, await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]));
+  const planDto = async (studioId: number, batchId: number, role: Role) => {
+    const p = await plans.currentPlan(studioId, batchId);
+    if (!p) return null;
+    const list = await plans.laysOf(studioId, p.id);
+    const fabric = await fabrics.get(studioId, p.fabricId);
+    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
+  };
+  const markerListFor = async (studioId: number, batchId: number, only?: number) => {
+    const batch = await loadBatch(studioId, batchId);
+    const p = await plans.currentPlan(studioId, batchId);
+    if (!p) throw notFound('Cut plan');
+    const fabric = await fabrics.get(studioId, p.fabricId);
+    if (!fabric) throw notFound('Fabric');
+    const list = (await plans.laysOf(studioId, p.id)).filter((l) => only === undefined || l.id === only);
+    return markerListInput(await plans.studio(studioId), batch, fabric, list, now());
+  };
+  const registerFor = async (studioId: number, batchId: number, layId?: number) => {
+    const batch = await loadBatch(studioId, batchId);
+    const all = await plans.bundlesOfBatch(studioId, batchId);
+    const p = await plans.currentPlan(studioId, batchId);
+    const list = p ? await plans.laysOf(studioId, p.id) : [];
+    const chosen = layId === undefined ? all : all.filter((b) => b.layId === layId);
+    return bundleRegisterInput(await plans.studio(studioId), batch, chosen, list, await plans.operations(studioId, batch.styleId), now());
+  };
+  const loadLay = async (studioId: number, id: number) => {
+    const lay = await plans.getLay(studioId, id);
+    if (!lay) throw notFound('Lay');
+    return lay;
+  };
+
+  return {
+    async cutPlan(actor: Actor, batchId: number) {
+      await loadBatch(actor.studioId, batchId);
+      return planDto(actor.studioId, batchId, actor.role);
+    },
+    async planCut(actor: Actor, batchId: number, input: CreateCutPlanInput) {
+      const saved = await planBatchCut(deps, actor.studioId, batchId, input, now());
+      const dto = (await planDto(actor.studioId, batchId, actor.role))!;
+      await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
+      return dto;
+    },
+    async bundlesOfBatch(studioId: number, batchId: number) {
+      await loadBatch(studioId, batchId);
+      return (await plans.bundlesOfBatch(studioId, batchId)).map(presentBundle);
+    },
+    async batchDocument(studioId: number, batchId: number, doc: BatchDocument): Promise<Download> {
+      if (doc === 'marker-list.xlsx' || doc === 'marker-list.pdf') {
+        const input = await markerListFor(studioId, batchId);
+        return { body: await jobs.run(doc, input), type: doc.endsWith('.pdf') ? PDF : XLSX, filename: `marker-list-${input.batch.code}.${doc.split('.')[1]}` };
+      }
+      const input = await registerFor(studioId, batchId);
+      if (doc === 'bundle-register.xlsx') return { body: await jobs.run(doc, input), type: XLSX, filename: `bundle-register-${input.batch.code}.xlsx` };
+      return { body: await jobs.run(doc, withQr(input, batchId)), type: PDF, filename: `bundle-tickets-${input.batch.code}.pdf` };
+    },
+    async liveLays(studioId: number) {
+      const list = await plans.liveLays(studioId);
+      const counts = await plans.bundleCounts(studioId, list.map((l) => l.id));
+      const short = await shortagesOf(studioId, list);
+      return list.map((l) => presentLay(l, counts.get(l.id) ?? 0, short.get(l.id) ?? null));
+    },
+    /** Planned lays of open batches that stock cannot cover: the owner's Today and the cutter see them before spreading. */
+    async shortages(studioId: number): Promise<ShortageDto[]> {
+      const open = new Set((await deps.batches.list(studioId)).filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
+      const list = (await plans.liveLays(studioId)).filter((l) => open.has(l.batchId));
+      const short = await shortagesOf(studioId, list);
+      return list.filter((l) => short.has(l.id)).map((l) => ({ layId: l.id, batchId: l.batchId, batchCode: batchCode(l.batchId), seq: l.seq, ...short.get(l.id)! }));
+    },
+    async lay(studioId: number, id: number) {
+      const lay = await loadLay(studioId, id);
+      const plan = await plans.getPlan(studioId, lay.cutPlanId);
+      const fabric = plan ? await fabrics.get(studioId, plan.fabricId) : null;
+      const bundles = await plans.bundlesOfLay(studioId, lay.id);
+      return {
+        lay: presentLay(lay, bundles.length, (await shortagesOf(studioId, [lay])).get(lay.id) ?? null),
+        fabric: fabric ? presentLayFabric(fabric) : null,
+        bundles: bundles.map(presentBundle),
+      };
+    },
+    async recordLay(actor: Actor, id: number, input: RecordLayInput) {
+      const before = await plans.getLay(actor.studioId, id);
+      const after = await recordLay(plans, actor.studioId, id, input);
+      await audit.record(actor, 'record', 'lay', after.id, before ? presentLay(before) : undefined, presentLay(after));
+      return presentLay(after);
+    },
+    async cutLay(actor: Actor, id: number, body: Partial<RecordLayInput> | undefined) {
+      const recorded = body && Array.isArray(body.rolls) ? { rolls: body.rolls, flaws: body.flaws ?? '' } : undefined;
+      const { lay, bundles } = await markLayCut(plans, actor.studioId, id, recorded, now());
+      await audit.record(actor, 'cut', 'lay', lay.id, { status: 'planned' }, { status: 'cut', bundles });
+      return { lay: presentLay(lay, bundles), bundles: (await plans.bundlesOfLay(actor.studioId, lay.id)).map(presentBundle) };
+    },
+    async layDocument(studioId: number, id: number, doc: LayDocument): Promise<Download> {
+      const lay = await loadLay(studioId, id);
+      if (doc === 'bundle-tickets.pdf') {
+        const input = await registerFor(studioId, lay.batchId, lay.id);
+        return { body: await jobs.run(doc, withQr(input, lay.batchId)), type: PDF, filename: `bundle-tickets-${input.batch.code}-lay-${lay.seq}.pdf` };
+      }
+      // A retired lay is in no current plan: no ticket or marker list that a cutter could spread from.
+      if (lay.status === 'retired') throw conflict('This lay was retired when the batch was planned again: use the current plan’s documents');
+      const input = await markerListFor(studioId, lay.batchId, lay.id);
+      const [name, ext] = doc.split('.');
+      return { body: await jobs.run(doc, input), type: ext === 'pdf' ? PDF : XLSX, filename: `${name}-${input.batch.code}-lay-${lay.seq}.${ext}` };
+    },
+    /** The completion hook the marker queue calls: a finished marker becomes the drawn marker of matching planned lays. */
+    onMarkerDone: (studioId: number, markerId: number) => plans.linkMarkerToLays(studioId, markerId),
+  };
+}

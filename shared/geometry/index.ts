@@ -1,4 +1,0 @@
-export * from './types';
-export * from './polygon';
-export * from './bezier';
-export * from './polyline';
