@@ -68,6 +68,8 @@ export interface RollDto {
   /** Held by planned lays not yet cut; free for other plans = remaining − reserved. */
   reservedMm: number;
   isRemnant: boolean;
+  /** The supplier's ticket length when the roll came from a packing list, else null. */
+  ticketLengthMm?: number | null;
 }
 
 /** One bad cell of an imported packing list: 1-based row as the spreadsheet shows it (header = row 1). */

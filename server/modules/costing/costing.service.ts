@@ -1,9 +1,9 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
-import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
+import { minor, mm, priceIn, pricePerMetreMinor, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
 import { costGarment, planConsumption, priceFromMargin, roundMinor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
-import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
+import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
 import { batchCode } from '../batches/batch.presenter';
 import { ASSUMED_UTILISATION } from '../markers/marker-input';
@@ -40,6 +40,9 @@ export const presentSettings = (styleId: number, s: CostingSettingsEntity | null
 });
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
+
+/** The fabric's rate per metre from its price as quoted (a yard price ÷ 0.9144, unrounded). */
+const exactPerMetre = (f: Pick<FabricEntity, 'priceMinor' | 'priceUnit'>) => pricePerMetreMinor({ amountMinor: f.priceMinor, per: f.priceUnit });
 
 /** Planned lays of a cut plan: saved lay rows, else the plan result's lays. */
 function plannedLays(lays: LayEntity[], result: unknown): LayLike[] {
@@ -169,8 +172,8 @@ export function createCostingService(repo: CostingRepository) {
       sizes: sizeLabels,
       quantities: batch.quantities,
       fabrics: [
-        ...(fab ? [{ name: fab.fabric.name, pricePerMetre: fab.fabric.pricePerMetreMinor, lengthPerGarment: fabricMm }] : []),
-        ...others.map((o) => ({ name: o.fabric.name, pricePerMetre: o.fabric.pricePerMetreMinor, lengthPerGarment: o.perSize })),
+        ...(fab ? [{ name: fab.fabric.name, pricePerMetre: exactPerMetre(fab.fabric), lengthPerGarment: fabricMm }] : []),
+        ...others.map((o) => ({ name: o.fabric.name, pricePerMetre: exactPerMetre(o.fabric), lengthPerGarment: o.perSize })),
       ],
       trims: trimLines,
       labour: [labourLine],
@@ -232,7 +235,11 @@ export function createCostingService(repo: CostingRepository) {
         : [{ operation: labourLine.name, samMinutes: 0, rate: { perGarmentMinor: minor(pieceRateMinor) } }];
     const overheads: CostingOverheadLine[] = [];
     if (settings.overheadPercent > 0) overheads.push({ kind: 'percent', description: lines[lines.length - 1].description, percent: settings.overheadPercent });
-    const perLength = (perMetre: number) => (studio.unitSystem === 'imperial' ? Math.round((perMetre * MM_PER_YARD) / 1000) : perMetre);
+    // The workbook prices per yard for an imperial studio: a price quoted per yard goes in as quoted.
+    const perLength = (f: FabricEntity) => {
+      const want = studio.unitSystem === 'imperial' ? 'yard' : 'metre';
+      return f.priceUnit === want ? f.priceMinor : Math.round(priceIn({ amountMinor: f.priceMinor, per: f.priceUnit }, want));
+    };
     const input: CostingSheetInput = {
       studioName: studio.name,
       dateIso: now.toISOString(),
@@ -243,8 +250,8 @@ export function createCostingService(repo: CostingRepository) {
       batch: { code: batchCode(batch.id) },
       sizes,
       fabrics: [
-        ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric.pricePerMetreMinor)), consumptionMmBySize: fabricMm }] : []),
-        ...others.map((o) => ({ description: o.fabric.name, pricePerLengthMinor: minor(perLength(o.fabric.pricePerMetreMinor)), consumptionMmBySize: o.perSize })),
+        ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric)), consumptionMmBySize: fabricMm }] : []),
+        ...others.map((o) => ({ description: o.fabric.name, pricePerLengthMinor: minor(perLength(o.fabric)), consumptionMmBySize: o.perSize })),
       ],
       trims: trims.map((t) => ({ description: t.name, quantityPerGarment: t.quantityPerGarment, unit: t.unit, unitPriceMinor: minor(t.unitPriceMinor) })),
       labour,

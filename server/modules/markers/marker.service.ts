@@ -9,7 +9,7 @@ import type { BatchRepository } from '../batches/batch.repository';
 import { batchCode } from '../batches/batch.presenter';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
 import type { StyleRepository } from '../styles/style.repository';
-import { buildMarkerInput, markerInputHash, piecesOnFabric } from './marker-input';
+import { buildMarkerInput, fabricShrinkage, markerInputHash, piecesOnFabric } from './marker-input';
 import { presentMarker } from './marker.presenter';
 import type { MarkerQueue } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
@@ -60,6 +60,7 @@ export function createMarkerService(deps: MarkerServiceDeps) {
       widthMm: fabric.widthMm,
       isDirectional: fabric.isDirectional,
       seconds: input.seconds ?? deps.defaultSeconds,
+      shrinkage: fabricShrinkage(fabric),
     });
     const inputHash = markerInputHash(job);
     const existing = await markers.byHash(studioId, inputHash);
