@@ -23,7 +23,15 @@ export const createFabricInput = z.object({
   maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(MAX_PLIES, `At most ${MAX_PLIES} plies`).default(40),
 });
 export type CreateFabricInput = z.input<typeof createFabricInput>;
-export const updateFabricInput = createFabricInput.partial();
+/**
+ * An edit sends only what changes: the create defaults must not fill the fields it leaves out (a rename
+ * would otherwise reset the price, shrinkage and one-way flag).
+ */
+export const updateFabricInput = z.object(
+  Object.fromEntries(Object.entries(createFabricInput.shape).map(([k, v]) => [k, (v instanceof z.ZodDefault ? v.unwrap() : v).optional()])) as {
+    [K in keyof typeof createFabricInput.shape]: z.ZodOptional<typeof createFabricInput.shape[K] extends z.ZodDefault<infer T> ? T : typeof createFabricInput.shape[K]>;
+  },
+);
 
 export interface FabricDto {
   id: number;

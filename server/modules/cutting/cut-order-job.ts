@@ -20,7 +20,7 @@ export interface CutOrderJobInput {
   garmentAreasMm2: Record<string, number>;
   widthMm: number;
   assumedUtilisation: number;
-  rolls: { id: string; lengthMm: number; shadeLot: string; widthMm: number }[];
+  rolls: { id: string; label?: string; lengthMm: number; shadeLot: string; widthMm: number }[];
   /** The studio's rates (minor units); absent = least fabric, then fewest lays. */
   costs?: CutCosts;
 }
@@ -62,8 +62,9 @@ export async function solveCutOrderJob(input: CutOrderJobInput): Promise<CutOrde
     throw err;
   }
   const allocation = allocateRolls({
-    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength })),
-    rolls: input.rolls.map((r) => ({ id: r.id, length: mm(r.lengthMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
+    // Every marker of the plan is made on the fabric's cuttable width: a narrower roll is refused for it.
+    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength, markerWidth: mm(input.widthMm) })),
+    rolls: input.rolls.map((r) => ({ id: r.id, label: r.label, length: mm(r.lengthMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
     endAllowance: plan.endAllowance,
   });
   return { plan, allocation, markerLengths: plan.markerLengths ?? 'estimated', ...(measuredRefused ? { measuredRefused } : {}) };

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
+import { correctLayInput, createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
 import { sendDownload } from '../../middleware/download';
 import { validate } from '../../middleware/validate';
@@ -43,6 +43,10 @@ export function cuttingRoutes(service: CuttingService) {
   });
   lays.post('/:id/cut', requirePermission('cutting:work'), validate({ params: idParam, body: cutLayInput }), async (req, res) => {
     res.json(await service.cutLay(actorOf(req), Number(req.params.id), req.body));
+  });
+  /** After the cut the record is closed; a correction carries its reason and is audited. */
+  lays.post('/:id/correction', requirePermission('cutting:work'), validate({ params: idParam, body: correctLayInput }), async (req, res) => {
+    res.json({ lay: await service.correctLay(actorOf(req), Number(req.params.id), req.body) });
   });
   for (const doc of LAY_DOCUMENTS) {
     lays.get(`/:id/${doc}`, requirePermission('cutting:work'), validate({ params: idParam }), async (req, res) => {
