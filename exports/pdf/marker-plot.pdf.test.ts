@@ -66,3 +66,13 @@ describe('buildMarkerPlotPdf', () => {
     await expect(buildMarkerPlotPdf(input({ panelLengthMm: 6000 }))).rejects.toThrow(RangeError);
   });
 });
+
+describe('notches on the plot', () => {
+  // Worked by hand: the notch (50, 10) lies 10 mm inside the bottom edge y = 0 of the first copy (placed at x + 20);
+  // it is drawn from the cutting line (70, 0) → page (0, 40 + 70 mm) 6 mm into the piece → page (6 mm, 110 mm).
+  it('draws a notch as a 6 mm tick from the cutting line into the piece, square to its edge', async () => {
+    const content = (await buildMarkerPlotPdf(input({ notches: { 'M:front': [{ x: 50, y: 10 }] }, placements: [input().placements[0]] }), { compress: false })).toString('latin1');
+    const f = (mmValue: number) => String(Number((mmValue * PT_PER_MM).toFixed(6)));
+    expect(content).toContain(`0 ${f(110)} m\n${f(6)} ${f(110)} l`);
+  });
+});

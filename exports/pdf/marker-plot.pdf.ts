@@ -108,20 +108,25 @@ function drawPiece(doc: PDFKit.PDFDocument, ring: Pt[], notches: Pt[], label: st
   doc.fillColor(INK).font(BODY_FONT).fontSize(height * PT_PER_MM * 0.7).text(label, lx, ly, { lineBreak: false });
 }
 
-/** A short tick from the notch into the piece, square to the nearest edge of the cutting line. */
-function drawNotch(doc: PDFKit.PDFDocument, ring: Pt[], n: Pt, toPage: (q: Pt) => readonly [number, number]) {
-  let best = { d: Infinity, nx: 0, ny: 0 };
+/**
+ * A short tick into the piece from the point of the cutting line nearest the notch (a notch may be given
+ * on the sewing line, a seam allowance inside), square to that edge.
+ */
+function drawNotch(doc: PDFKit.PDFDocument, ring: Pt[], notch: Pt, toPage: (q: Pt) => readonly [number, number]) {
+  let best = { d: Infinity, nx: 0, ny: 0, at: notch };
+  const n = notch;
   for (let i = 0; i < ring.length; i++) {
     const p = ring[i], q = ring[(i + 1) % ring.length];
     const dx = q.x - p.x, dy = q.y - p.y, len = Math.hypot(dx, dy);
     if (len === 0) continue;
     const t = Math.max(0, Math.min(1, ((n.x - p.x) * dx + (n.y - p.y) * dy) / (len * len)));
     const d = Math.hypot(p.x + t * dx - n.x, p.y + t * dy - n.y);
-    if (d < best.d) best = { d, nx: -dy / len, ny: dx / len };
+    if (d < best.d) best = { d, nx: -dy / len, ny: dx / len, at: { x: p.x + t * dx, y: p.y + t * dy } };
   }
-  const inside = pointInRing(ring, { x: n.x + best.nx, y: n.y + best.ny });
+  const at = best.at;
+  const inside = pointInRing(ring, { x: at.x + best.nx * 0.5, y: at.y + best.ny * 0.5 });
   const s = inside ? NOTCH_MM : -NOTCH_MM;
-  doc.save().lineWidth(1).strokeColor('#B4413C').moveTo(...toPage(n)).lineTo(...toPage({ x: n.x + best.nx * s, y: n.y + best.ny * s })).stroke().restore();
+  doc.save().lineWidth(1).strokeColor('#B4413C').moveTo(...toPage(at)).lineTo(...toPage({ x: at.x + best.nx * s, y: at.y + best.ny * s })).stroke().restore();
 }
 
 function pointInRing(ring: Pt[], q: Pt): boolean {

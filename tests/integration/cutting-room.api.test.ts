@@ -76,3 +76,12 @@ describe('a cut lay\'s record', () => {
     expect(JSON.stringify(audit)).toContain('Remnant measured again on the table');
   });
 });
+
+describe('the marker list per roll', () => {
+  it('is organised by roll in cutting order, the batch in its file name', async () => {
+    const res = await cutter.get('/api/batches/1/marker-list.pdf').buffer(true);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-disposition']).toMatch(/marker-list-B-0001\.pdf/);
+    expect(String(res.body.subarray(0, 5))).toBe('%PDF-');
+  });
+});

@@ -53,7 +53,8 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     const fabric = await fabrics.get(studioId, p.fabricId);
     if (!fabric) throw notFound('Fabric');
     const list = (await plans.laysOf(studioId, p.id)).filter((l) => only === undefined || l.id === only);
-    return markerListInput(await plans.studio(studioId), batch, fabric, list, now());
+    const rolls = await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]);
+    return markerListInput(await plans.studio(studioId), batch, fabric, list, now(), rolls);
   };
   const registerFor = async (studioId: number, batchId: number, layId?: number) => {
     const batch = await loadBatch(studioId, batchId);
