@@ -176,10 +176,11 @@ export function LayPage() {
         ) : null}
         {retired ? null : <Card title="Documents">
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-lay-${lay.seq}.pdf`)}>Marker list per roll (PDF)</button>
-            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-${lay.batchCode}-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Marker list per roll (PDF)</button>
+            {lay.markerId ? <button type="button" className="btn-quiet" onClick={file(`/markers/${lay.markerId}/plot.pdf`, `marker-${lay.batchCode}-${lay.markerId}.pdf`)}>Marker to plot (PDF, 1:1)</button> : null}
+            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>Bundle register (XLSX)</button> : null}
           </div>
         </Card>}
