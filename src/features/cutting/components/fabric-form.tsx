@@ -124,9 +124,9 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
       {text('name', 'Name', 'name', 'text', 'Self, lining, contrast or interfacing, e.g. "Navy crepe" or "Ivory lining"')}
       {text('composition', 'Composition', 'composition', 'text', 'e.g. 100 % polyester')}
       {text('width', imperial ? 'Cuttable width (in)' : 'Cuttable width (cm)', 'widthMm', 'number', 'Between the selvedges, not the full width')}
-      {text('price', `Price as the supplier quotes it (${currency})`, 'priceMinor', 'text')}
+      {text('price', `Price per ${d.priceUnit} (${currency})`, 'priceMinor', 'text', 'As the supplier quotes it')}
       <div>
-        <label className="field-label" htmlFor={`${prefix}-priceUnit`}>Price is per</label>
+        <label className="field-label" htmlFor={`${prefix}-priceUnit`}>Supplier prices it by the</label>
         <select id={`${prefix}-priceUnit`} className="field-input" value={d.priceUnit} onChange={(e) => setD({ ...d, priceUnit: e.target.value === 'yard' ? 'yard' : 'metre' })}>
           <option value="metre">metre</option>
           <option value="yard">yard</option>
