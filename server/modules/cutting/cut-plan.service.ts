@@ -7,7 +7,8 @@ import { badRequest, conflict, notFound } from '../../errors';
 import type { JobRunner } from '../../jobs/job-runner';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
-import { ASSUMED_UTILISATION, fabricShrinkage, garmentAreas, piecesOnFabric } from '../markers/marker-input';
+import { ASSUMED_UTILISATION, fabricShrinkage, garmentAreas, piecesOnFabric, type MarkerJobInput } from '../markers/marker-input';
+import { storedMarkerSpliceZones } from '../markers/marker-plot';
 import type { MarkerRepository } from '../markers/marker.repository';
 import type { CutPlanRepository } from './cut-plan.repository';
 import type { FabricRepository } from './fabric.repository';
@@ -112,11 +113,15 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   // Estimates grow with shrinkage as the nested pieces do: area × 1 ÷ ((1 − s_length)(1 − s_width)).
   const shrink = shrinkageAreaFactor(fabricShrinkage(fabric));
   const areas = Object.fromEntries(Object.entries(garmentAreas(pieces)).map(([size, a]) => [size, a * shrink]));
-  const stored = new Map<string, { id: number; length: number; ratio: SizeRatio }>();
+  const stored = new Map<string, { id: number; length: number; ratio: SizeRatio; zones: { near: number; far: number }[] }>();
   for (const m of await deps.markers.doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
     const k = ratioKey(m.ratio, sizes);
     const prev = stored.get(k);
-    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio });
+    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) {
+      // Where the marker's pieces let a ply be joined: the only places a plan may splice rolls.
+      const zones = storedMarkerSpliceZones(m.input as MarkerJobInput | null, m.result as { placements: { pieceId: string; rotation: number; mirrored: boolean; x: number; y: number }[] } | null, m.lengthMm);
+      stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio, zones });
+    }
   }
   const labour = await deps.labourCostPerMinute(studioId, batch.styleId);
   const rates = cutPlanRates(fabric.pricePerMetreMinor, labour, (await plans.studio(studioId)).currency);
@@ -131,7 +136,7 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
         maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
         overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
       },
-      measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length })),
+      measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length, spliceZones: v.zones })),
       garmentAreasMm2: areas,
       widthMm: fabric.widthMm,
       assumedUtilisation: ASSUMED_UTILISATION,

@@ -29,3 +29,18 @@ export function markerPlotInput(
     spliceZones: markerSpliceZones(placed, mm(m.lengthMm), DEFAULT_SPLICE_OVERLAP_MM).map((z) => ({ near: z.near, far: z.far })),
   };
 }
+
+/**
+ * Splice zones of a stored marker from its job input and result (every placed copy's cutting line),
+ * with the cutter's overlap; none when the marker has no stored layout.
+ */
+export function storedMarkerSpliceZones(
+  input: { engine: { pieces: { id: string; polygon: { x: number; y: number }[] }[] } } | null,
+  result: { placements: { pieceId: string; rotation: number; mirrored: boolean; x: number; y: number }[] } | null,
+  lengthMm: number,
+): { near: number; far: number }[] {
+  if (!input || !result) return [];
+  const polygons = new Map(input.engine.pieces.map((p) => [p.id, p.polygon]));
+  const placed = result.placements.map((p) => placedOutline(polygons.get(p.pieceId) ?? [], p));
+  return markerSpliceZones(placed, mm(lengthMm), DEFAULT_SPLICE_OVERLAP_MM).map((z) => ({ near: z.near, far: z.far }));
+}
