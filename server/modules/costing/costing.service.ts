@@ -1,7 +1,7 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { minor, mm, priceIn, pricePerMetreMinor, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
-import { costGarment, planConsumption, priceFromMargin, roundMinor } from '../../../planning/index';
+import { costGarment, planConsumption, priceFromMargin, roundMinor, shrinkageAreaFactor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
@@ -114,7 +114,9 @@ export function createCostingService(repo: CostingRepository) {
       const materials = links.filter(([, f]) => f === id).map(([m]) => m);
       const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
         const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
-        return [s, mm(round1((area / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
+        // The pieces are cut larger by the fabric's shrinkage, so their area is too.
+        const grown = area * shrinkageAreaFactor({ lengthwisePercent: fabric.shrinkageLengthPercent, widthwisePercent: fabric.shrinkageWidthPercent });
+        return [s, mm(round1((grown / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
       }));
       out.push({ fabric, materials, perSize });
     }
