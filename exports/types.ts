@@ -154,8 +154,53 @@ export interface MarkerListInput extends DocumentHeading {
   batch: { code: string };
   fabric: { description: string; widthMm: Millimetres };
   lays: LayPlan[];
+  /**
+   * The same plan organised by roll, lays in cutting order (planning's `rollsInCuttingOrder`); when given,
+   * the marker list prints one section per roll instead of one rolls table per lay.
+   */
+  byRoll?: RollCuttingPlan[];
   /** Cutting-room cautions; `CUTTING_ROOM_CAUTIONS` when omitted. */
   cautions?: string[];
+}
+
+/** One roll's lays in cutting order and what is left after each. */
+export interface RollCuttingPlan {
+  rollLabel: string;
+  shadeLot: string;
+  startLengthMm: Millimetres;
+  uses: { layNo: number; plies: number; lengthMm: Millimetres; remainingAfterMm: Millimetres }[];
+  expectedRemnantMm: Millimetres;
+  /** Kept as stock (a remnant) rather than end-of-roll waste. */
+  isStock: boolean;
+}
+
+/** One placed copy in a finished marker, as the engine placed it (x along the fabric length, y across). */
+export interface MarkerPlacementPlan {
+  pieceKey: string;
+  size: string;
+  pieceName: string;
+  rotation: number;
+  mirrored: boolean;
+  x: number;
+  y: number;
+}
+
+/** A finished marker to plot at 1:1. Lengths in mm; outlines turned so the grain runs along x. */
+export interface MarkerPlotInput extends DocumentHeading {
+  style: { code: string; name: string };
+  batch: { code: string };
+  ratio: SizeRatio[];
+  lengthMm: number;
+  widthMm: number;
+  /** Cutting outline per piece key, piece-local, grain along x. */
+  outlines: Record<string, { x: number; y: number }[]>;
+  /** Notch positions per piece key, same frame as the outline. */
+  notches?: Record<string, { x: number; y: number }[]>;
+  placements: MarkerPlacementPlan[];
+  /** Where plies may be joined: the new roll starts at `near`, the old roll runs to `far` (mm along the marker). */
+  spliceZones?: { near: number; far: number }[];
+  /** Longest marker length one page carries (mm); longer markers are plotted in panels. Default 5 000. */
+  panelLengthMm?: number;
 }
 
 /** A cut ticket: one page per lay; the same data as the marker list. */

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { mm } from '@shared/units';
 import { buildMarkerListInput } from '../xlsx/fixtures.testing';
 import { CUTTING_ROOM_CAUTIONS_TITLE } from './cutting-cautions';
 import { buildMarkerListPdf } from './marker-list.pdf';
@@ -40,6 +41,23 @@ describe('buildMarkerListPdf', () => {
     expect(text).toContain('Custom caution from the studio.');
     expect(text).not.toContain('mesh (chain-mail) glove');
     expect(text).toContain('7.108 yd');
+  });
+
+  // Jana (2008) R1, via Scribd 561483911 [quoted]: 6.5 m lay; roll A 15 m → 2 plies, 2 m left; roll B 16 m → 2 plies, 3 m left.
+  it('organises the list by roll when the plan is given by roll: lays in cutting order, what is left, the remnant', async () => {
+    const input = buildMarkerListInput({
+      byRoll: [
+        { rollLabel: 'A', shadeLot: 'Lot 3', startLengthMm: mm(15000), uses: [{ layNo: 1, plies: 2, lengthMm: mm(13000), remainingAfterMm: mm(2000) }], expectedRemnantMm: mm(2000), isStock: true },
+        { rollLabel: 'C', shadeLot: 'Lot 4', startLengthMm: mm(7000), uses: [{ layNo: 2, plies: 1, lengthMm: mm(6200), remainingAfterMm: mm(800) }], expectedRemnantMm: mm(800), isStock: false },
+      ],
+    });
+    const text = pdfText(await buildMarkerListPdf(input, { compress: false }));
+    expect(text).toContain('Rolls in cutting order');
+    expect(text).toContain('Roll A · shade lot Lot 3 · 15.000 m at the start');
+    expect(text).toContain('Expected remnant: 2.000 m (kept as a remnant)');
+    expect(text).toContain('Expected remnant: 0.800 m (end-of-roll waste)');
+    expect(text).not.toContain('Lay 1: rolls');
+    expect(text.indexOf('Roll A ·')).toBeLessThan(text.indexOf('Roll C ·'));
   });
 
   it('is compressed by default and still a PDF', async () => {

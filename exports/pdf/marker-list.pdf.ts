@@ -13,14 +13,16 @@ import {
 } from './document-format';
 import { drawCautions, drawHeading, drawTable, startPdf, type PdfOptions } from './pdf-layout';
 import { drawRollTable } from './roll-table';
+import { drawRollSections } from './roll-sections';
 
 /** Document title of the marker list. */
 export const MARKER_LIST_TITLE = 'Marker list per roll';
 
 /**
  * Builds the marker list PDF (A4): heading with studio, date, style, batch and fabric; a lays table (lay no.,
- * size ratio, marker length, plies, spreading mode, end allowance each end); one rolls table per lay (roll,
- * shade lot, length, plies to spread, expected remnant); the cautions (input's or `CUTTING_ROOM_CAUTIONS`).
+ * size ratio, marker length, plies, spreading mode, end allowance each end); with `byRoll`, one section per
+ * roll in cutting order (its lays, plies, length left after each, expected remnant), else one rolls table per
+ * lay (roll, shade lot, length, plies to spread, expected remnant); the cautions (input's or `CUTTING_ROOM_CAUTIONS`).
  * Lengths in m/cm or yd/in per the unit system. Pages follow the content; an input with no lays still
  * gives one page with the heading and cautions.
  */
@@ -54,10 +56,13 @@ export async function buildMarkerListPdf(
       formatShortLength(lay.endAllowanceMm, u),
     ]),
   );
-  for (const lay of input.lays) {
-    doc.font(BOLD_FONT).fontSize(10).text(`Lay ${lay.layNo}: rolls`);
-    doc.moveDown(0.3);
-    drawRollTable(doc, lay.rolls, u);
+  if (input.byRoll) drawRollSections(doc, input.byRoll, u);
+  else {
+    for (const lay of input.lays) {
+      doc.font(BOLD_FONT).fontSize(10).text(`Lay ${lay.layNo}: rolls`);
+      doc.moveDown(0.3);
+      drawRollTable(doc, lay.rolls, u);
+    }
   }
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
   doc.end();

@@ -45,14 +45,52 @@ describe('allocateRolls', () => {
     const res = allocateRolls({ lays: [{ plies: 5, markerLength: mm(980) }], rolls: [{ id: 'a', length: mm(2500), shadeLot: 'A' }] });
     expect(res.shortfall).toEqual([3]);
   });
-  it('splices across rolls of one lot only when allowed, using the overlap', () => {
-    const lays = [{ plies: 3, markerLength: mm(980) }];
+  // Splice zones: two splice lines per splice area, overlap 10–20 cm (Vilumsone-Nemes, Industrial Cutting of
+  // Textile Materials, p. 41). Worked by hand: spread 1000 mm (980 + 20), lead 10 mm; roll a 1500 → 1 ply, 500 left;
+  // roll b 1700 → 1 ply, 700 left; zone 300–450: a gives 10 + 450 = 460 (40 cut off), b gives 1000 − 10 − 300 = 690.
+  it('splices across rolls of one lot only at a splice zone the marker marks, with its overlap', () => {
     const rolls = [{ id: 'a', length: mm(1500), shadeLot: 'A' }, { id: 'b', length: mm(1700), shadeLot: 'A' }];
-    expect(allocateRolls({ lays, rolls }).shortfall).toEqual([1]);
-    const spliced = allocateRolls({ lays, rolls, spliceOverlap: mm(150) });
+    const zone = { near: mm(300), far: mm(450) };
+    expect(allocateRolls({ lays: [{ plies: 3, markerLength: mm(980) }], rolls }).shortfall).toEqual([1]);
+    // Changed on purpose: splicing wherever a roll ends is gone; a marker with no splice zones gets no splices.
+    expect(allocateRolls({ lays: [{ plies: 3, markerLength: mm(980) }], rolls, spliceOverlap: mm(150) }).shortfall).toEqual([1]);
+    const spliced = allocateRolls({ lays: [{ plies: 3, markerLength: mm(980), spliceZones: [zone] }], rolls, spliceOverlap: mm(150) });
     expect(spliced.shortfall).toEqual([0]);
-    spliced.rolls.forEach((r) => expect(r.remnant).toBeGreaterThanOrEqual(0));
+    expect(Object.fromEntries(spliced.rolls.map((r) => [r.id, r.remnant]))).toEqual({ a: 40, b: 10 });
+    expect(spliced.rolls.find((r) => r.id === 'b')!.segments).toEqual([{ lay: 0, plies: 2, spliced: 1, remaining: 10 }]);
   });
+
+  it('does not splice when the roll end cannot reach any splice zone of the marker', () => {
+    const rolls = [{ id: 'a', length: mm(1500), shadeLot: 'A' }, { id: 'b', length: mm(1700), shadeLot: 'A' }];
+    // Zone 400–550 needs 10 + 550 = 560 mm of roll a; only 500 mm are left.
+    const res = allocateRolls({ lays: [{ plies: 3, markerLength: mm(980), spliceZones: [{ near: mm(400), far: mm(550) }] }], rolls, spliceOverlap: mm(150) });
+    expect(res.shortfall).toEqual([1]);
+    expect(res.rolls[0].remnant).toBe(500);
+  });
+
+  it('sends a roll end below the minimum tail to remnants instead of splicing it', () => {
+    const rolls = [{ id: 'a', length: mm(1500), shadeLot: 'A' }, { id: 'b', length: mm(1700), shadeLot: 'A' }];
+    const lays = [{ plies: 3, markerLength: mm(980), spliceZones: [{ near: mm(300), far: mm(450) }] }];
+    const res = allocateRolls({ lays, rolls, spliceOverlap: mm(150), minSpliceTail: mm(600) });
+    expect(res.shortfall).toEqual([1]);
+    expect(res.rolls.map((r) => r.remnant)).toEqual([500, 700]);
+  });
+
+  it('refuses a roll narrower than the marker for that lay, naming the roll and both widths', () => {
+    const rolls = [
+      { id: '1', label: 'R-07', length: mm(30000), shadeLot: 'A', width: mm(1400) },
+      { id: '2', label: 'R-08', length: mm(30000), shadeLot: 'A', width: mm(1500) },
+    ];
+    const res = allocateRolls({ lays: [{ plies: 5, markerLength: mm(2980), markerWidth: mm(1450) }], rolls });
+    expect(res.rolls.map((r) => r.segments.map((s) => s.plies))).toEqual([[], [5]]);
+    expect(res.refusals).toHaveLength(1);
+    expect(res.refusals[0].lay).toBe(0);
+    expect(res.refusals[0].refusal.message).toBe('Roll R-07 is 1400 mm wide, narrower than the 1450 mm marker: it cannot be spread for this lay');
+    // Only narrow rolls: every ply is short.
+    const only = allocateRolls({ lays: [{ plies: 2, markerLength: mm(980), markerWidth: mm(1450) }], rolls: [rolls[0]] });
+    expect(only.shortfall).toEqual([2]);
+  });
+
   it('never uses a roll beyond its length (fast-check)', () => {
     fc.assert(
       fc.property(

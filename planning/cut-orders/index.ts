@@ -5,3 +5,9 @@ export { solveCutOrder, DEFAULT_CUT_TIME_LIMIT_SECONDS, type MipSolver } from '.
 export { allocateRolls } from './allocate-rolls';
 export type { FabricRoll, LayToSpread, RollAllocationInput, RollSegment, RollUse, RollAllocation } from './allocate-rolls';
 export { countRatios } from './ratio-candidates';
+export { shrinkageFactor, compensateForShrinkage, shrinkageAreaFactor, NO_SHRINKAGE, type Shrinkage } from './shrinkage';
+export { prepareMarkerPieces, mirrorAcrossGrain, type MarkerSourcePiece, type MarkerFabric, type MarkerPieceLabel, type PreparedMarkerPieces } from './marker-pieces';
+export { checkRollWidth, usableTicketLength, ROLL_WIDTH_TOLERANCE_MM, DEFAULT_SHORT_LENGTH_PERCENT, DEFAULT_FLAW_PERCENT, type RollWidthRefusal, type PackingListAllowance } from './roll-rules';
+export { markerSpliceZones, type SpliceZone } from './splice-zones';
+export { rollsInCuttingOrder, type LayInCuttingOrder, type RollAtStart, type RollInCuttingOrder } from './rolls-in-cutting-order';
+export { planConsumption, netFabricNeed, type LayForConsumption, type PlanConsumption, type FabricNeed } from './fabric-need';

@@ -20,6 +20,12 @@ export const DEFAULT_END_ALLOWANCE_PER_PLY_MM: Millimetres = mm(2 * END_ALLOWANC
 export const DEFAULT_SPLICE_OVERLAP_MM: Millimetres = mm(150);
 
 /**
+ * Roll ends shorter than this are not spliced into a ply: too short to handle at the table, they go to
+ * remnants. 0.5 m is common practice (no published figure).
+ */
+export const DEFAULT_MIN_SPLICE_TAIL_MM: Millimetres = mm(500);
+
+/**
  * Roll ends at or above this length are kept as stock (remnants), shorter ones are waste.
  * 1 m is common practice (no published figure).
  */

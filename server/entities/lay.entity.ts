@@ -9,7 +9,18 @@ export interface LayRollLine {
   expectedRemnantMm: number;
   actualPlies?: number;
   actualRemnantMm?: number;
+  /** Length the lay took from the roll as recorded at the cut (roll on hand before − remnant measured after), mm. */
+  takenMm?: number;
   note?: string;
+}
+
+/** One correction of a cut lay's record. */
+export interface LayCorrection {
+  at: string;
+  byUserId: number;
+  by: string;
+  reason: string;
+  changes: string[];
 }
 
 @Entity('lays')
@@ -57,6 +68,10 @@ export class LayEntity {
 
   @Column({ type: 'text', default: '' })
   flaws: string;
+
+  /** Corrections of the record after the cut, oldest first; each is in the audit log too. */
+  @Column({ type: 'simple-json', nullable: true })
+  corrections: LayCorrection[] | null;
 
   @Column({ type: TIMESTAMP, nullable: true })
   cutAt: Date | null;

@@ -24,6 +24,10 @@ export class RollEntity {
   @Column({ type: 'real' })
   lengthMm: number;
 
+  /** The supplier's ticket length when the roll came from a packing list; plans take allowances off it until the roll is measured. */
+  @Column({ type: 'real', nullable: true })
+  ticketLengthMm: number | null;
+
   @Column({ type: 'real' })
   widthMm: number;
 

@@ -1,6 +1,7 @@
 import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
 import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
 import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
+import { buildMarkerPlotPdf } from '@exports/pdf/marker-plot.pdf';
 import { readPatternFile, type PatternUnit } from '@exports/import/index';
 import { tiledPiecePdf } from '@exports/pdf/tiled-piece';
 import { buildBundleRegisterXlsx } from '@exports/xlsx/bundle-register.xlsx';
@@ -23,6 +24,7 @@ export const CPU_TASKS = {
   'cut-order': async (input: CutOrderJobInput) => solveCutOrderJob(input),
   'marker-list.xlsx': async (input: Parameters<typeof buildMarkerListXlsx>[0]) => Buffer.from(await buildMarkerListXlsx(input)),
   'marker-list.pdf': async (input: Parameters<typeof buildMarkerListPdf>[0]) => Buffer.from(await buildMarkerListPdf(input)),
+  'marker-plot.pdf': async (input: Parameters<typeof buildMarkerPlotPdf>[0]) => Buffer.from(await buildMarkerPlotPdf(input)),
   'cut-ticket.pdf': async (input: Parameters<typeof buildCutTicketPdf>[0]) => Buffer.from(await buildCutTicketPdf(input)),
   'bundle-register.xlsx': async (input: Parameters<typeof buildBundleRegisterXlsx>[0]) => Buffer.from(await buildBundleRegisterXlsx(input)),
   'bundle-tickets.pdf': async (input: Parameters<typeof buildBundleTicketsPdf>[0]) => Buffer.from(await buildBundleTicketsPdf(input)),

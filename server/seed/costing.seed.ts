@@ -45,13 +45,13 @@ export async function seedCosting(ctx: SeedContext): Promise<void> {
   const existing = await fabrics.find({ where: { studioId } });
   if (existing.length === 0) {
     // The cutting seed normally records the shell fabric; a studio without one still gets something to cost.
-    await fabrics.save(fabrics.create({ studioId, name: 'Cotton poplin, indigo', composition: '100 % cotton', widthMm: 1500, shrinkagePercent: 2, pricePerMetreMinor: 65000, supplierId: saved.mill, maxPlies: 40 }));
+    await fabrics.save(fabrics.create({ studioId, name: 'Cotton poplin, indigo', composition: '100 % cotton', widthMm: 1500, shrinkagePercent: 2, shrinkageLengthPercent: 2, shrinkageWidthPercent: 2, pricePerMetreMinor: 65000, priceMinor: 65000, priceUnit: 'metre', supplierId: saved.mill, maxPlies: 40 }));
   } else {
     // Fabrics without a supplier or price are bought from the mill at its list price.
     for (const f of existing) {
       const patch: Partial<FabricEntity> = {};
       if (f.supplierId === null) patch.supplierId = saved.mill;
-      if (!f.pricePerMetreMinor) patch.pricePerMetreMinor = 65000;
+      if (!f.pricePerMetreMinor) Object.assign(patch, { pricePerMetreMinor: 65000, priceMinor: 65000, priceUnit: 'metre' });
       if (Object.keys(patch).length) await fabrics.update({ id: f.id }, patch);
     }
   }

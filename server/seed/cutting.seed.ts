@@ -9,7 +9,7 @@ import { createFabricRepository } from '../modules/cutting/fabric.repository';
 import { markLayCut } from '../modules/cutting/lay.service';
 import { createCuttingPieceSource } from '../modules/grading/cutting-pieces.service';
 import { createGradingSetRepository } from '../modules/grading/grading-set.repository';
-import { buildMarkerInput, markerInputHash } from '../modules/markers/marker-input';
+import { buildMarkerInput, fabricShrinkage, markerInputHash } from '../modules/markers/marker-input';
 import { createMarkerRepository } from '../modules/markers/marker.repository';
 import { createStyleRepository } from '../modules/styles/style.repository';
 import type { SeedContext } from './seed-context';
@@ -20,8 +20,12 @@ export const DEMO_FABRIC = {
   composition: '100% cotton',
   widthMm: 1450,
   shrinkagePercent: 2,
+  shrinkageLengthPercent: 2,
+  shrinkageWidthPercent: 2,
   isDirectional: false,
   pricePerMetreMinor: 48_000,
+  priceMinor: 48_000,
+  priceUnit: 'metre' as const,
   maxPlies: 40,
 };
 
@@ -66,7 +70,7 @@ export async function seedCutting(ctx: SeedContext): Promise<void> {
   const pieces = await cuttingPieces(studioId, ctx.styleId);
   const ratios = [...new Map(lays.map((l) => [JSON.stringify(l.ratio), l.ratio])).values()].slice(1, 2);
   for (const ratio of ratios) {
-    const job = buildMarkerInput(pieces, ratio, { widthMm: fabric.widthMm, isDirectional: fabric.isDirectional, seconds: ctx.nestingSeconds });
+    const job = buildMarkerInput(pieces, ratio, { widthMm: fabric.widthMm, isDirectional: fabric.isDirectional, seconds: ctx.nestingSeconds, shrinkage: fabricShrinkage(fabric) });
     await ds.getRepository(MarkerEntity).save({
       studioId, styleId: ctx.styleId, batchId: ctx.batchId, fabricId: fabric.id, ratio, widthMm: fabric.widthMm,
       inputHash: markerInputHash(job), status: 'queued', input: job, result: null, error: '', elapsedMs: 0,

@@ -20,9 +20,9 @@ export const LINED_DRESS_STYLE = {
 
 /** Its contrast, lining and interfacing qualities: our own invented names, sorted after the demo shell fabric. */
 export const LINED_DRESS_FABRICS = {
-  contrast: { name: 'Tausi silk organza', composition: '100% silk', widthMm: 1400, shrinkagePercent: 1, isDirectional: false, pricePerMetreMinor: 120_000, maxPlies: 20 },
-  lining: { name: 'Usiku viscose lining', composition: '100% viscose', widthMm: 1400, shrinkagePercent: 2, isDirectional: false, pricePerMetreMinor: 32_000, maxPlies: 40 },
-  interfacing: { name: 'Vazi fusible interfacing', composition: 'polyester, fusible', widthMm: 900, shrinkagePercent: 0, isDirectional: false, pricePerMetreMinor: 18_000, maxPlies: 40 },
+  contrast: { name: 'Tausi silk organza', composition: '100% silk', widthMm: 1400, shrinkagePercent: 1, shrinkageLengthPercent: 1, shrinkageWidthPercent: 1, isDirectional: false, pricePerMetreMinor: 120_000, priceMinor: 120_000, priceUnit: 'metre' as const, maxPlies: 20 },
+  lining: { name: 'Usiku viscose lining', composition: '100% viscose', widthMm: 1400, shrinkagePercent: 2, shrinkageLengthPercent: 2, shrinkageWidthPercent: 2, isDirectional: false, pricePerMetreMinor: 32_000, priceMinor: 32_000, priceUnit: 'metre' as const, maxPlies: 40 },
+  interfacing: { name: 'Vazi fusible interfacing', composition: 'polyester, fusible', widthMm: 900, shrinkagePercent: 0, shrinkageLengthPercent: 0, shrinkageWidthPercent: 0, isDirectional: false, pricePerMetreMinor: 18_000, priceMinor: 18_000, priceUnit: 'metre' as const, maxPlies: 40 },
 } as const;
 
 /** Trims per garment (KES minor units); quantities our own, from the style description. */

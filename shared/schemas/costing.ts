@@ -117,6 +117,8 @@ export interface CostingSheetDto {
     basis: ConsumptionBasis;
     /** Planned fabric for the whole batch, wastage included. */
     batchFabricMm: number;
+    /** With a cut plan: the spread its lays still to cut take (marker length + end allowance × plies), mm. */
+    stillToCutMm?: number;
   } | null;
   labour: { basis: LabourBasis; samMinutes: number; pieceRateMinor: number; operations: number; isEstimate: boolean };
   lines: CostingLineDto[];

@@ -10,13 +10,28 @@ export const createFabricInput = z.object({
   composition: safeText(200).default(''),
   widthMm: positiveMm('Cuttable width').max(5000, 'At most 5000 mm'),
   shrinkagePercent: z.number().min(0, 'Cannot be negative').max(30, 'At most 30 %').default(0),
+  /** Along the grain (warp); absent: `shrinkagePercent`. */
+  shrinkageLengthPercent: z.number().min(0, 'Cannot be negative').max(30, 'At most 30 %').optional(),
+  /** Across the grain (weft); absent: `shrinkagePercent`. */
+  shrinkageWidthPercent: z.number().min(0, 'Cannot be negative').max(30, 'At most 30 %').optional(),
   isDirectional: z.boolean().default(false),
   pricePerMetreMinor: z.number().int('Whole minor units').min(0, 'Cannot be negative').max(MAX_PRICE_MINOR, `At most ${limitText(MAX_PRICE_MINOR)} minor units`).default(0),
+  /** The price exactly as the supplier quotes it, with `priceUnit`; absent: `pricePerMetreMinor` per metre. */
+  priceMinor: z.number().int('Whole minor units').min(0, 'Cannot be negative').max(MAX_PRICE_MINOR, `At most ${limitText(MAX_PRICE_MINOR)} minor units`).optional(),
+  priceUnit: z.enum(['metre', 'yard'], { error: 'Per metre or per yard' }).optional(),
   supplierId: z.number().int().positive().nullable().default(null),
   maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(MAX_PLIES, `At most ${MAX_PLIES} plies`).default(40),
 });
 export type CreateFabricInput = z.input<typeof createFabricInput>;
-export const updateFabricInput = createFabricInput.partial();
+/**
+ * An edit sends only what changes: the create defaults must not fill the fields it leaves out (a rename
+ * would otherwise reset the price, shrinkage and one-way flag).
+ */
+export const updateFabricInput = z.object(
+  Object.fromEntries(Object.entries(createFabricInput.shape).map(([k, v]) => [k, (v instanceof z.ZodDefault ? v.unwrap() : v).optional()])) as {
+    [K in keyof typeof createFabricInput.shape]: z.ZodOptional<typeof createFabricInput.shape[K] extends z.ZodDefault<infer T> ? T : typeof createFabricInput.shape[K]>;
+  },
+);
 
 export interface FabricDto {
   id: number;
@@ -24,11 +39,16 @@ export interface FabricDto {
   composition: string;
   widthMm: number;
   shrinkagePercent: number;
+  /** Shrinkage along the grain and across it, percent of the unwashed length; pieces are cut larger by 1 ÷ (1 − s). */
+  shrinkageLengthPercent?: number;
+  shrinkageWidthPercent?: number;
   isDirectional: boolean;
   maxPlies: number;
   supplierId: number | null;
   /** Present only for roles that may read costs. */
   pricePerMetreMinor?: number;
+  /** The price as the supplier quotes it (per metre or per yard); only for roles that may read costs. */
+  price?: { amountMinor: number; per: 'metre' | 'yard' };
   rollCount: number;
   totalRemainingMm: number;
 }
@@ -56,6 +76,8 @@ export interface RollDto {
   /** Held by planned lays not yet cut; free for other plans = remaining − reserved. */
   reservedMm: number;
   isRemnant: boolean;
+  /** The supplier's ticket length when the roll came from a packing list, else null. */
+  ticketLengthMm?: number | null;
 }
 
 /** One bad cell of an imported packing list: 1-based row as the spreadsheet shows it (header = row 1). */
@@ -110,6 +132,17 @@ export interface LayDto {
   bundleCount: number;
   /** Set while a planned lay cannot be spread in full from the stock it holds. */
   shortage?: LayShortageDto | null;
+  /** Corrections made to the record after the cut, oldest first (each is in the audit log too). */
+  corrections?: LayCorrectionDto[];
+}
+
+/** One correction of a cut lay's record: who, when, why and what changed. */
+export interface LayCorrectionDto {
+  at: string;
+  by: string;
+  reason: string;
+  /** Plain lines such as "R-07: plies 12 → 11". */
+  changes: string[];
 }
 
 /** Why a planned lay cannot be spread in full: plies with no roll, or rolls holding less than lays need. */
@@ -160,6 +193,8 @@ export interface CutPlanDto {
   stockKeptMm: number;
   shortfall: number[];
   splitLays: number[];
+  /** Rolls left out of a lay because they are narrower than its marker, one sentence each. */
+  rollRefusals?: string[];
   lays: LayDto[];
   createdAt: string;
 }
@@ -196,3 +231,9 @@ export const bundleQrText = (batchId: number, bundleNumber: number) => `SR-B:${b
 
 /** Mark a lay cut; without rolls the planned plies count as spread. */
 export const cutLayInput = recordLayInput.partial({ rolls: true });
+
+/** Correct the record of a cut lay: what was really spread and left, and why the record changes. */
+export const correctLayInput = recordLayInput.extend({
+  reason: z.string({ error: 'Say why the record is corrected' }).trim().min(3, 'Say why the record is corrected').max(500, 'At most 500 characters'),
+});
+export type CorrectLayInput = z.input<typeof correctLayInput>;

@@ -1,2 +1,3 @@
 export * from './units';
 export * from './length-format';
+export * from './fabric-price';

@@ -6,7 +6,7 @@ import { openDatabase } from '../../server/db/data-source';
 import { freshDatabaseTarget } from '../fixtures/fresh-database';
 import { loadEnv } from '../../server/env';
 import { seedDemoStudio } from '../../server/seed/demo-studio';
-import { DEMO, DEMO_PASSWORD, TEST_TODAY } from '../fixtures/test-app';
+import { binary, DEMO, DEMO_PASSWORD, TEST_TODAY } from '../fixtures/test-app';
 
 type Agent = ReturnType<typeof request.agent>;
 const login = async (app: Parameters<typeof request.agent>[0], email: string) => {
@@ -62,6 +62,26 @@ describe('markers', () => {
     expect(dxf.headers['content-disposition']).toMatch(/marker-B-0001-.*\.dxf/);
     const parsed = new DxfParser().parseSync(dxf.body as string) as unknown as { entities: { layer: string; shape?: boolean }[] };
     expect(parsed.entities.filter((e) => e.layer === 'CUT' && e.shape).length).toBe(full.pieceCount);
+    expect(svg.headers['content-disposition']).toMatch(/marker-B-0001-.*\.svg/);
+    // The plotter PDF at 1:1: PDF user space is 1/72 in (ISO 32000-1 §8.3.2.3) and 1 in = 25.4 mm, so the page is
+    // the marker's width × 72 ÷ 25.4 points wide.
+    const pdf = await cutter.get(`/api/markers/${done.id}/plot.pdf`).buffer(true).parse(binary);
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers['content-disposition']).toMatch(/marker-B-0001-.*\.pdf/);
+    const box = (pdf.body as Buffer).toString('latin1').match(/\/MediaBox \[([^\]]+)\]/)![1].trim().split(/\s+/).map(Number);
+    expect(box[2]).toBeCloseTo((full.widthMm / 25.4) * 72, 3);
+  }, 180_000);
+
+  // One-way fabric: "all pieces one direction" (Vilumsone-Nemes, Industrial Cutting of Textile Materials, pp. 20, 228).
+  it('lays every piece of a one-way fabric the same way along the length, pairs mirrored across the grain', async () => {
+    const fabric = (await owner.post('/api/fabrics').send({ name: 'Napped needlecord', widthMm: 1450, isDirectional: true })).body.fabric;
+    const res = await owner.post('/api/markers').send({ styleId: 1, fabricId: fabric.id, ratio: { XS: 1 }, seconds: 1 });
+    expect([200, 202]).toContain(res.status);
+    const done = await poll(owner, res.body.marker.id, (m) => m.status !== 'queued' && m.status !== 'running');
+    expect(done.status).toBe('done');
+    const full = (await cutter.get(`/api/markers/${done.id}`)).body.marker as { drawing: { placements: { pieceKey: string; rotation: number; mirrored: boolean }[] } };
+    expect(full.drawing.placements.every((p) => p.rotation === 0 && !p.mirrored)).toBe(true);
+    expect(full.drawing.placements.some((p) => p.pieceKey.endsWith(':pair'))).toBe(true);
   }, 180_000);
 
   it("becomes the drawn marker of its batch's planned lays of the same ratio when it finishes (the cutting area's completion hook)", async () => {

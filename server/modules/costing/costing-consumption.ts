@@ -1,3 +1,5 @@
+import type { LayForConsumption } from '../../../planning/index';
+
 /**
  * Fabric per garment from lays: each ply of a lay uses marker length + end allowance and holds the garments
  * of its ratio; a garment's share is that length divided by the garments in the marker (the reference's
@@ -38,6 +40,29 @@ export function layTotals(lays: LayLike[]): { fabricMm: number; garments: number
     garments += inMarker * lay.plies;
   }
   return { fabricMm, garments };
+}
+
+/** What a lay row holds, as the consumption core reads it. */
+export interface LayRow extends LayLike {
+  status: 'planned' | 'cut' | 'retired';
+  rolls?: { plies: number; expectedRemnantMm: number; actualPlies?: number; actualRemnantMm?: number; takenMm?: number }[];
+}
+
+/**
+ * A lay row for `planConsumption`: the length each roll gave as recorded at the cut; for cuts recorded
+ * before that was kept, the roll's length before the lay (its expected remnant + the planned plies ×
+ * spread) less the remnant measured after.
+ */
+export function layForConsumption(l: LayRow): LayForConsumption {
+  const spread = l.markerLengthMm + l.endAllowanceMm;
+  return {
+    ratio: l.ratio, plies: l.plies, markerLengthMm: l.markerLengthMm, endAllowanceMm: l.endAllowanceMm, status: l.status,
+    rolls: (l.rolls ?? []).map((r) => ({
+      plies: r.plies,
+      actualPlies: r.actualPlies,
+      takenMm: r.takenMm ?? (l.status === 'cut' && r.actualRemnantMm !== undefined ? Math.max(0, r.expectedRemnantMm + r.plies * spread - r.actualRemnantMm) : undefined),
+    })),
+  };
 }
 
 /**

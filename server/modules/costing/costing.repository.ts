@@ -9,6 +9,7 @@ import {
   LayEntity,
   MarkerEntity,
   OperationEntity,
+  RollReservationEntity,
   StudioEntity,
   SupplierEntity,
   TrimEntity,
@@ -74,6 +75,19 @@ export function createCostingRepository(ds: DataSource, cuttingPieces: CuttingPi
     },
     lays: (studioId: number, cutPlanId: number) =>
       ds.getRepository(LayEntity).find({ where: { studioId, cutPlanId }, order: { seq: 'ASC' } }),
+    /** What each cut lay took from each roll, as settled at the cut (on hand before less the measured remnant), mm. */
+    async consumedByLay(studioId: number, layIds: number[]): Promise<Map<number, Map<number, number>>> {
+      const out = new Map<number, Map<number, number>>();
+      if (!layIds.length) return out;
+      const rows = await ds.getRepository(RollReservationEntity).find({ where: { studioId, layId: In(layIds), status: 'consumed' } });
+      for (const r of rows) {
+        if (r.consumedMm === null) continue;
+        const m = out.get(r.layId) ?? new Map<number, number>();
+        m.set(r.rollId, (m.get(r.rollId) ?? 0) + r.consumedMm);
+        out.set(r.layId, m);
+      }
+      return out;
+    },
     /** Finished markers made for this batch (or the style when none is tied to the batch). */
     async doneMarkers(studioId: number, styleId: number, batchId: number) {
       const repo = ds.getRepository(MarkerEntity);

@@ -1,9 +1,9 @@
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
-import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
+import { minor, mm, priceIn, pricePerMetreMinor, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
-import { costGarment, priceFromMargin, roundMinor } from '../../../planning/index';
+import { costGarment, planConsumption, priceFromMargin, roundMinor, shrinkageAreaFactor } from '../../../planning/index';
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
-import type { BatchEntity, CostingSettingsEntity, LayEntity } from '../../entities';
+import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
 import { batchCode } from '../batches/batch.presenter';
 import { ASSUMED_UTILISATION } from '../markers/marker-input';
@@ -11,6 +11,7 @@ import {
   consumptionBySize,
   estimateConsumption,
   ESTIMATE_GARMENT_SAM,
+  layForConsumption,
   layTotals,
   localeForCurrency,
   type LayLike,
@@ -40,6 +41,9 @@ export const presentSettings = (styleId: number, s: CostingSettingsEntity | null
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
+/** The fabric's rate per metre from its price as quoted (a yard price ÷ 0.9144, unrounded). */
+const exactPerMetre = (f: Pick<FabricEntity, 'priceMinor' | 'priceUnit'>) => pricePerMetreMinor({ amountMinor: f.priceMinor, per: f.priceUnit });
+
 /** Planned lays of a cut plan: saved lay rows, else the plan result's lays. */
 function plannedLays(lays: LayEntity[], result: unknown): LayLike[] {
   if (lays.length) return lays;
@@ -65,7 +69,12 @@ export function createCostingService(repo: CostingRepository) {
       const planned = plannedLays(lays, plan.result);
       const fabric = await repo.fabric(studioId, plan.fabricId);
       if (fabric && planned.length) {
-        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize: consumptionBySize(planned), planned, cutLays: lays.filter((l) => l.status === 'cut') };
+        // Cut lays count what the cutter recorded (spread and remnants), planned lays their plan.
+        const consumed = await repo.consumedByLay(studioId, lays.filter((l) => l.status === 'cut').map((l) => l.id));
+        const rows = lays.map((l) => ({ ...l, rolls: l.rolls.map((r) => ({ ...r, takenMm: r.takenMm ?? consumed.get(l.id)?.get(r.rollId) })) }));
+        const used = rows.length ? planConsumption(rows.map(layForConsumption)) : null;
+        const perSize = used && Object.keys(used.perSize).length ? used.perSize : consumptionBySize(planned);
+        return { fabric, basis: 'cut-plan' as ConsumptionBasis, perSize, planned, cutLays: rows.filter((l) => l.status === 'cut'), recorded: used?.basis ?? 'planned', stillToCutMm: used?.stillNeededMm };
       }
     }
     const markers = await repo.doneMarkers(studioId, batch.styleId, batch.id);
@@ -105,7 +114,9 @@ export function createCostingService(repo: CostingRepository) {
       const materials = links.filter(([, f]) => f === id).map(([m]) => m);
       const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
         const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
-        return [s, mm(round1((area / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
+        // The pieces are cut larger by the fabric's shrinkage, so their area is too.
+        const grown = area * shrinkageAreaFactor({ lengthwisePercent: fabric.shrinkageLengthPercent, widthwisePercent: fabric.shrinkageWidthPercent });
+        return [s, mm(round1((grown / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
       }));
       out.push({ fabric, materials, perSize });
     }
@@ -139,6 +150,7 @@ export function createCostingService(repo: CostingRepository) {
     if (!fab) notes.push('No fabric is recorded for this studio yet, so the sheet has no fabric line.');
     else if (fab.basis === 'estimate') notes.push('Fabric is an estimate until a marker or cut plan exists for this batch.');
     else if (fab.basis === 'marker') notes.push('Fabric comes from the latest finished marker; the cut plan will replace it.');
+    else if ('recorded' in fab && fab.recorded !== 'planned') notes.push(fab.recorded === 'recorded' ? 'Fabric is what the cutter recorded: the lengths spread and the remnants measured.' : 'Fabric of the cut lays is what the cutter recorded (spreads and remnants); the lays still to cut count their plan.');
 
     const samMinutes = operations.reduce((a, o) => a + o.sam, 0);
     const pieceRateMinor = operations.reduce((a, o) => a + (o.pieceRateMinor ?? 0), 0);
@@ -162,8 +174,8 @@ export function createCostingService(repo: CostingRepository) {
       sizes: sizeLabels,
       quantities: batch.quantities,
       fabrics: [
-        ...(fab ? [{ name: fab.fabric.name, pricePerMetre: fab.fabric.pricePerMetreMinor, lengthPerGarment: fabricMm }] : []),
-        ...others.map((o) => ({ name: o.fabric.name, pricePerMetre: o.fabric.pricePerMetreMinor, lengthPerGarment: o.perSize })),
+        ...(fab ? [{ name: fab.fabric.name, pricePerMetre: exactPerMetre(fab.fabric), lengthPerGarment: fabricMm }] : []),
+        ...others.map((o) => ({ name: o.fabric.name, pricePerMetre: exactPerMetre(o.fabric), lengthPerGarment: o.perSize })),
       ],
       trims: trimLines,
       labour: [labourLine],
@@ -225,7 +237,11 @@ export function createCostingService(repo: CostingRepository) {
         : [{ operation: labourLine.name, samMinutes: 0, rate: { perGarmentMinor: minor(pieceRateMinor) } }];
     const overheads: CostingOverheadLine[] = [];
     if (settings.overheadPercent > 0) overheads.push({ kind: 'percent', description: lines[lines.length - 1].description, percent: settings.overheadPercent });
-    const perLength = (perMetre: number) => (studio.unitSystem === 'imperial' ? Math.round((perMetre * MM_PER_YARD) / 1000) : perMetre);
+    // The workbook prices per yard for an imperial studio: a price quoted per yard goes in as quoted.
+    const perLength = (f: FabricEntity) => {
+      const want = studio.unitSystem === 'imperial' ? 'yard' : 'metre';
+      return f.priceUnit === want ? f.priceMinor : Math.round(priceIn({ amountMinor: f.priceMinor, per: f.priceUnit }, want));
+    };
     const input: CostingSheetInput = {
       studioName: studio.name,
       dateIso: now.toISOString(),
@@ -236,8 +252,8 @@ export function createCostingService(repo: CostingRepository) {
       batch: { code: batchCode(batch.id) },
       sizes,
       fabrics: [
-        ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric.pricePerMetreMinor)), consumptionMmBySize: fabricMm }] : []),
-        ...others.map((o) => ({ description: o.fabric.name, pricePerLengthMinor: minor(perLength(o.fabric.pricePerMetreMinor)), consumptionMmBySize: o.perSize })),
+        ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric)), consumptionMmBySize: fabricMm }] : []),
+        ...others.map((o) => ({ description: o.fabric.name, pricePerLengthMinor: minor(perLength(o.fabric)), consumptionMmBySize: o.perSize })),
       ],
       trims: trims.map((t) => ({ description: t.name, quantityPerGarment: t.quantityPerGarment, unit: t.unit, unitPriceMinor: minor(t.unitPriceMinor) })),
       labour,
@@ -246,7 +262,10 @@ export function createCostingService(repo: CostingRepository) {
       retailMultiplier: settings.retailMultiplier,
     };
     dto.fabric = fab
-      ? { id: fab.fabric.id, name: fab.fabric.name, pricePerMetreMinor: fab.fabric.pricePerMetreMinor, basis: fab.basis, batchFabricMm: round1(sizes.reduce((a, s) => a + fabricMm[s.size] * s.quantity, 0)) }
+      ? {
+        id: fab.fabric.id, name: fab.fabric.name, pricePerMetreMinor: fab.fabric.pricePerMetreMinor, basis: fab.basis, batchFabricMm: round1(sizes.reduce((a, s) => a + fabricMm[s.size] * s.quantity, 0)),
+        ...('stillToCutMm' in fab && fab.stillToCutMm !== undefined ? { stillToCutMm: round1(fab.stillToCutMm) } : {}),
+      }
       : null;
     return { dto, input };
   }
@@ -262,7 +281,8 @@ function actualFigures(
   garments: number,
 ): CostingSheetDto['actual'] {
   const plan = layTotals(planned);
-  const cut = layTotals(cutLays.map((l) => ({ ...l, plies: cutPlies(l) })));
+  // Recorded lengths where the cutter gave them (spread and remnants), else the planned spread per ply cut.
+  const cut = planConsumption(cutLays.map(layForConsumption));
   const firstTime = logs.filter((l) => l.attempt === 0);
   const earned = firstTime.reduce((a, l) => a + l.earnedMinutes, 0);
   return {

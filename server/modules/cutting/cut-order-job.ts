@@ -1,5 +1,5 @@
 import highsLoader from 'highs';
-import { allocateRolls, solveCutOrder, type CutCosts, type CutOrderInput, type CutOrderPlan, type MipSolver, type SizeRatio } from '@planning';
+import { allocateRolls, DEFAULT_SPLICE_OVERLAP_MM, solveCutOrder, type CutCosts, type CutOrderInput, type CutOrderPlan, type MipSolver, type SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
 
 /** Key of a size ratio over the style's size run, e.g. `XS1|S2|M0`. */
@@ -16,11 +16,11 @@ type OrderOptions = Omit<CutOrderInput, 'markerLength' | 'markers' | 'garmentLen
 export interface CutOrderJobInput {
   order: OrderOptions;
   /** Measured markers of the style on this width: ratio and plotted length. */
-  measured: { ratio: SizeRatio; lengthMm: number }[];
+  measured: { ratio: SizeRatio; lengthMm: number; spliceZones?: { near: number; far: number }[] }[];
   garmentAreasMm2: Record<string, number>;
   widthMm: number;
   assumedUtilisation: number;
-  rolls: { id: string; lengthMm: number; shadeLot: string; widthMm: number }[];
+  rolls: { id: string; label?: string; lengthMm: number; shadeLot: string; widthMm: number }[];
   /** The studio's rates (minor units); absent = least fabric, then fewest lays. */
   costs?: CutCosts;
 }
@@ -61,9 +61,15 @@ export async function solveCutOrderJob(input: CutOrderJobInput): Promise<CutOrde
     if (err instanceof RangeError) return { rangeError: err.message };
     throw err;
   }
+  const measuredZones = new Map(input.measured.map((m) => [ratioKey(m.ratio, sizes), m.spliceZones ?? []]));
+  const zonesOf = (ratio: SizeRatio) =>
+    plan!.markerLengths === 'measured' ? (measuredZones.get(ratioKey(ratio, sizes)) ?? []).map((z) => ({ near: mm(z.near), far: mm(z.far) })) : [];
   const allocation = allocateRolls({
-    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength })),
-    rolls: input.rolls.map((r) => ({ id: r.id, length: mm(r.lengthMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
+    // Every marker of the plan is made on the fabric's cuttable width: a narrower roll is refused for it.
+    // Splices only at the splice zones a measured marker marks; an estimated length has no pieces to look at.
+    lays: plan.lays.map((l) => ({ plies: l.plies, markerLength: l.markerLength, markerWidth: mm(input.widthMm), spliceZones: zonesOf(l.ratio) })),
+    spliceOverlap: DEFAULT_SPLICE_OVERLAP_MM,
+    rolls: input.rolls.map((r) => ({ id: r.id, label: r.label, length: mm(r.lengthMm), shadeLot: r.shadeLot, width: mm(r.widthMm) })),
     endAllowance: plan.endAllowance,
   });
   return { plan, allocation, markerLengths: plan.markerLengths ?? 'estimated', ...(measuredRefused ? { measuredRefused } : {}) };

@@ -23,6 +23,7 @@ export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageD
   cutAt: l.cutAt ? new Date(l.cutAt).toISOString() : null,
   bundleCount,
   shortage,
+  corrections: (l.corrections ?? []).map((c) => ({ at: c.at, by: c.by, reason: c.reason, changes: c.changes })),
 });
 
 /** Cut plan → DTO. Rates and cost go only to roles that may read costs (`showCosts`), never to the cutter. */
@@ -52,6 +53,7 @@ export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEn
     stockKeptMm: r.allocation.stockKept,
     shortfall: r.allocation.shortfall,
     splitLays: r.allocation.splitLays,
+    rollRefusals: [...new Set((r.allocation.refusals ?? []).map((x) => x.refusal.message))],
     lays: lays.map((l) => presentLay(l, counts.get(l.id) ?? 0, shortages.get(l.id) ?? null)),
     createdAt: new Date(p.createdAt).toISOString(),
   };

@@ -74,6 +74,7 @@ function writesIn(m: EntityManager, stock: RollStockRepository) {
       reserve: (row: Parameters<RollStockRepository['reserve']>[1]) => stock.reserve(m, row),
       consume: (studioId: number, layId: number, rollId: number, leftMm: number, isRemnant: boolean, now: Date) =>
         stock.consume(m, studioId, layId, rollId, leftMm, isRemnant, now),
+      correctRemnant: (studioId: number, layId: number, rollId: number, deltaMm: number) => stock.correctRemnant(m, studioId, layId, rollId, deltaMm),
     },
     supersedePlan: async (studioId: number, id: number) => {
       await plans.update({ studioId, id }, { status: 'superseded' });
@@ -82,7 +83,7 @@ function writesIn(m: EntityManager, stock: RollStockRepository) {
     /** A lay row not yet saved (saveLays stores it). */
     newLay: (row: Omit<LayEntity, 'id' | 'createdAt'>) => lays.create(row),
     saveLays: (list: LayEntity[]) => lays.save(list),
-    updateLay: async (studioId: number, id: number, patch: Partial<Pick<LayEntity, 'rolls' | 'flaws' | 'status' | 'cutAt' | 'cutPlanId'>>) => {
+    updateLay: async (studioId: number, id: number, patch: Partial<Pick<LayEntity, 'rolls' | 'flaws' | 'status' | 'cutAt' | 'cutPlanId' | 'corrections'>>) => {
       await lays.update({ studioId, id }, patch);
     },
     lay: (studioId: number, id: number) => lays.findOneByOrFail({ studioId, id }),

@@ -1,4 +1,4 @@
-import { DEFAULT_LAY_MINUTES, DEFAULT_PLY_MINUTES, type allocateRolls, type CutOrderPlan, type SizeRatio } from '@planning';
+import { DEFAULT_LAY_MINUTES, DEFAULT_PLY_MINUTES, shrinkageAreaFactor, usableTicketLength, type allocateRolls, type CutOrderPlan, type SizeRatio } from '@planning';
 import { mm } from '@shared/units/units';
 import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
 import type { CutPlanEntity, FabricEntity, LayEntity, RollEntity, RollReservationEntity } from '../../entities';
@@ -7,7 +7,8 @@ import { badRequest, conflict, notFound } from '../../errors';
 import type { JobRunner } from '../../jobs/job-runner';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
-import { ASSUMED_UTILISATION, garmentAreas, piecesOnFabric } from '../markers/marker-input';
+import { ASSUMED_UTILISATION, fabricShrinkage, garmentAreas, piecesOnFabric, type MarkerJobInput } from '../markers/marker-input';
+import { storedMarkerSpliceZones } from '../markers/marker-plot';
 import type { MarkerRepository } from '../markers/marker.repository';
 import type { CutPlanRepository } from './cut-plan.repository';
 import type { FabricRepository } from './fabric.repository';
@@ -109,12 +110,18 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   const remaining = remainingQuantities(batch.quantities, cutLays);
   if (Object.values(remaining).every((q) => q === 0)) throw conflict('Every garment of this batch is already cut');
 
-  const areas = garmentAreas(pieces);
-  const stored = new Map<string, { id: number; length: number; ratio: SizeRatio }>();
+  // Estimates grow with shrinkage as the nested pieces do: area × 1 ÷ ((1 − s_length)(1 − s_width)).
+  const shrink = shrinkageAreaFactor(fabricShrinkage(fabric));
+  const areas = Object.fromEntries(Object.entries(garmentAreas(pieces)).map(([size, a]) => [size, a * shrink]));
+  const stored = new Map<string, { id: number; length: number; ratio: SizeRatio; zones: { near: number; far: number }[] }>();
   for (const m of await deps.markers.doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
     const k = ratioKey(m.ratio, sizes);
     const prev = stored.get(k);
-    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio });
+    if (m.lengthMm && (!prev || m.lengthMm < prev.length)) {
+      // Where the marker's pieces let a ply be joined: the only places a plan may splice rolls.
+      const zones = storedMarkerSpliceZones(m.input as MarkerJobInput | null, m.result as { placements: { pieceId: string; rotation: number; mirrored: boolean; x: number; y: number }[] } | null, m.lengthMm);
+      stored.set(k, { id: m.id, length: m.lengthMm, ratio: m.ratio, zones });
+    }
   }
   const labour = await deps.labourCostPerMinute(studioId, batch.styleId);
   const rates = cutPlanRates(fabric.pricePerMetreMinor, labour, (await plans.studio(studioId)).currency);
@@ -129,11 +136,11 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
         maxMarkerLength: input.maxMarkerLengthMm === undefined ? undefined : mm(input.maxMarkerLengthMm),
         overcutPercent: input.overcutPercent, endAllowance: input.endAllowanceMm === undefined ? undefined : mm(input.endAllowanceMm),
       },
-      measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length })),
+      measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length, spliceZones: v.zones })),
       garmentAreasMm2: areas,
       widthMm: fabric.widthMm,
       assumedUtilisation: ASSUMED_UTILISATION,
-      rolls: rolls.filter((r) => (free.get(r.id) ?? 0) > 0).map((r) => ({ id: String(r.id), lengthMm: free.get(r.id)!, shadeLot: r.shadeLot, widthMm: r.widthMm })),
+      rolls: rolls.filter((r) => (free.get(r.id) ?? 0) > 0).map((r) => ({ id: String(r.id), label: r.label, lengthMm: free.get(r.id)!, shadeLot: r.shadeLot, widthMm: r.widthMm })),
       ...(rates ? { costs: { layCost: rates.layCostMinor, plyCost: rates.plyCostMinor, fabricCostPerMetre: rates.fabricCostPerMetreMinor } } : {}),
     });
     if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
@@ -146,11 +153,20 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   }
 }
 
+/**
+ * What a plan may count on from a roll: a roll still at its packing-list ticket length (never measured,
+ * never cut from) less the short-length and flaw allowances; a measured roll as measured.
+ */
+export function onHandForPlanning(r: Pick<RollEntity, 'remainingMm' | 'lengthMm' | 'ticketLengthMm'>): number {
+  const untouched = r.ticketLengthMm !== null && r.ticketLengthMm !== undefined && r.remainingMm === r.lengthMm;
+  return untouched ? usableTicketLength(r.remainingMm) : r.remainingMm;
+}
+
 /** Free length per roll: on hand less what is held, plus what the plan being made will release. */
 function freeLengths(rolls: RollEntity[], replaced: { rollId: number; lengthMm: number }[]) {
   const back = new Map<number, number>();
   for (const r of replaced) back.set(r.rollId, (back.get(r.rollId) ?? 0) + r.lengthMm);
-  return new Map(rolls.map((r) => [r.id, Math.max(0, r.remainingMm - r.reservedMm + (back.get(r.id) ?? 0))]));
+  return new Map(rolls.map((r) => [r.id, Math.max(0, onHandForPlanning(r) - r.reservedMm + (back.get(r.id) ?? 0))]));
 }
 
 interface PlanContext {
@@ -218,7 +234,7 @@ async function savePlan(
       const lay = tx.newLay({
         studioId, cutPlanId: saved.id, batchId, seq: firstSeq + i, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
         endAllowanceMm: plan.endAllowance, markerId: lengthSources[i].markerId ?? null, spreadingMode: spreadingModeFor(fabric),
-        rolls: lines, status: 'planned', flaws: '', cutAt: null,
+        rolls: lines, status: 'planned', flaws: '', cutAt: null, corrections: null,
       });
       const same = waiting.find((w) => !kept.has(w.id) && sameLay(w, lay, sizes));
       if (same) {

@@ -1,13 +1,14 @@
 import type { BundleRegisterInput, LayPlan, MarkerListInput, SpreadingMode } from '@exports/types';
 import { mm } from '@shared/units/units';
-import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, StudioEntity } from '../../entities';
+import { rollsInCuttingOrder } from '@planning';
+import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, RollEntity, StudioEntity } from '../../entities';
 import { batchCode } from '../batches/batch.presenter';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 
 const LOCALE = 'en-KE';
 
 /** Lays → the marker list / cut ticket input of exports/. End allowance is printed per end (half the per-ply value). */
-export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric: FabricEntity, lays: LayEntity[], today: Date): MarkerListInput {
+export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric: FabricEntity, lays: LayEntity[], today: Date, rolls?: RollEntity[]): MarkerListInput {
   const sizes = batch.style?.sizeRun ?? [];
   const plans: LayPlan[] = lays.map((l) => ({
     layNo: l.seq,
@@ -26,7 +27,29 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
     fabric: { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: mm(fabric.widthMm) },
     lays: plans,
+    ...(rolls ? { byRoll: byRoll(lays, rolls) } : {}),
   };
+}
+
+/**
+ * The plan organised by roll, lays in cutting order (their sequence): each lay takes plies × (marker length
+ * + end allowance), the plies actually spread on a cut lay. A roll's start is what it holds now plus what
+ * the cut lays of this list took from it, so the remnants printed are those this order leaves.
+ */
+export function byRoll(lays: LayEntity[], rolls: RollEntity[]): NonNullable<MarkerListInput['byRoll']> {
+  const ordered = [...lays].filter((l) => l.status !== 'retired').sort((a, b) => a.seq - b.seq);
+  const taken = (l: LayEntity, r: LayEntity['rolls'][number]) => (l.status === 'cut' ? (r.actualPlies ?? r.plies) : r.plies) * (l.markerLengthMm + l.endAllowanceMm);
+  const start = new Map(rolls.map((r) => [r.id, r.remainingMm]));
+  for (const l of ordered) if (l.status === 'cut') for (const r of l.rolls) start.set(r.rollId, (start.get(r.rollId) ?? 0) + taken(l, r));
+  const sheets = rollsInCuttingOrder(
+    ordered.map((l) => ({ layNo: l.seq, rolls: l.rolls.filter((r) => start.has(r.rollId)).map((r) => ({ rollId: String(r.rollId), plies: l.status === 'cut' ? (r.actualPlies ?? r.plies) : r.plies, lengthMm: taken(l, r) })) })),
+    rolls.map((r) => ({ rollId: String(r.id), label: r.label, shadeLot: r.shadeLot, lengthMm: start.get(r.id) ?? r.remainingMm })),
+  );
+  return sheets.map((s) => ({
+    rollLabel: s.label, shadeLot: s.shadeLot, startLengthMm: mm(Math.round(s.startLengthMm)),
+    uses: s.uses.map((u) => ({ layNo: u.layNo, plies: u.plies, lengthMm: mm(Math.round(u.lengthMm)), remainingAfterMm: mm(Math.round(u.remainingAfterMm)) })),
+    expectedRemnantMm: mm(Math.round(s.expectedRemnantMm)), isStock: s.isStock,
+  }));
 }
 
 /** Bundles → bundle register input; operations from the style's operation list (sewing and finishing). */

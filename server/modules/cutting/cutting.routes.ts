@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
+import { correctLayInput, createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
 import { sendDownload } from '../../middleware/download';
 import { validated } from '../../middleware/validate';
@@ -46,6 +46,10 @@ export function cuttingRoutes(service: CuttingService) {
   }));
   lays.post('/:id/cut', cutter, ...validated({ params: idParam, body: cutLayInput }, async ({ params, body }, req, res) => {
     res.json(await service.cutLay(actorOf(req), params.id, body));
+  }));
+  /** After the cut the record is closed; a correction carries its reason and is audited. */
+  lays.post('/:id/correction', cutter, ...validated({ params: idParam, body: correctLayInput }, async ({ params, body }, req, res) => {
+    res.json({ lay: await service.correctLay(actorOf(req), params.id, body) });
   }));
   for (const doc of LAY_DOCUMENTS) {
     lays.get(`/:id/${doc}`, cutter, ...validated({ params: idParam }, async ({ params }, req, res) => {

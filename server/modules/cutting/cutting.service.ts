@@ -1,5 +1,5 @@
 import { can, type Role } from '../../../shared/auth/permissions';
-import type { CreateCutPlanInput, RecordLayInput, ShortageDto } from '../../../shared/schemas/cutting';
+import type { CorrectLayInput, CreateCutPlanInput, RecordLayInput, ShortageDto } from '../../../shared/schemas/cutting';
 import type { Actor } from '../../auth/require';
 import type { LayEntity } from '../../entities';
 import { conflict, notFound } from '../../errors';
@@ -9,7 +9,7 @@ import { batchCode } from '../batches/batch.presenter';
 import { presentBundle, presentCutPlan, presentLay, presentLayFabric } from './cut-plan.presenter';
 import { planBatchCut, type CutPlanDeps } from './cut-plan.service';
 import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
-import { markLayCut, recordLay } from './lay.service';
+import { correctLay, markLayCut, recordLay } from './lay.service';
 import { layShortages } from './shortage';
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
@@ -53,7 +53,8 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     const fabric = await fabrics.get(studioId, p.fabricId);
     if (!fabric) throw notFound('Fabric');
     const list = (await plans.laysOf(studioId, p.id)).filter((l) => only === undefined || l.id === only);
-    return markerListInput(await plans.studio(studioId), batch, fabric, list, now());
+    const rolls = await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]);
+    return markerListInput(await plans.studio(studioId), batch, fabric, list, now(), rolls);
   };
   const registerFor = async (studioId: number, batchId: number, layId?: number) => {
     const batch = await loadBatch(studioId, batchId);
@@ -62,6 +63,11 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     const list = p ? await plans.laysOf(studioId, p.id) : [];
     const chosen = layId === undefined ? all : all.filter((b) => b.layId === layId);
     return bundleRegisterInput(await plans.studio(studioId), batch, chosen, list, await plans.operations(studioId, batch.styleId), now());
+  };
+  /** The width a lay's marker was made on: its plan's fabric's cuttable width. */
+  const markerWidthOf = async (studioId: number, lay: LayEntity | null) => {
+    const plan = lay ? await plans.getPlan(studioId, lay.cutPlanId) : null;
+    return plan ? (await fabrics.get(studioId, plan.fabricId))?.widthMm : undefined;
   };
   const loadLay = async (studioId: number, id: number) => {
     const lay = await plans.getLay(studioId, id);
@@ -119,15 +125,23 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     },
     async recordLay(actor: Actor, id: number, input: RecordLayInput) {
       const before = await plans.getLay(actor.studioId, id);
-      const after = await recordLay(plans, actor.studioId, id, input);
+      const after = await recordLay(plans, actor.studioId, id, input, await markerWidthOf(actor.studioId, before));
       await audit.record(actor, 'record', 'lay', after.id, before ? presentLay(before) : undefined, presentLay(after));
       return presentLay(after);
     },
     async cutLay(actor: Actor, id: number, body: Partial<RecordLayInput> | undefined) {
       const recorded = body && Array.isArray(body.rolls) ? { rolls: body.rolls, flaws: body.flaws ?? '' } : undefined;
-      const { lay, bundles } = await markLayCut(plans, actor.studioId, id, recorded, now());
+      const markerWidthMm = await markerWidthOf(actor.studioId, await plans.getLay(actor.studioId, id));
+      const { lay, bundles } = await markLayCut(plans, actor.studioId, id, recorded, now(), { markerWidthMm });
       await audit.record(actor, 'cut', 'lay', lay.id, { status: 'planned' }, { status: 'cut', bundles });
       return { lay: presentLay(lay, bundles), bundles: (await plans.bundlesOfLay(actor.studioId, lay.id)).map(presentBundle) };
+    },
+    /** The audited correction of a cut lay's record: the audit log keeps the figures before and after, and why. */
+    async correctLay(actor: Actor, id: number, input: CorrectLayInput) {
+      const before = await loadLay(actor.studioId, id);
+      const after = await correctLay(plans, actor.studioId, id, input, actor, now());
+      await audit.record(actor, 'correct', 'lay', after.id, presentLay(before), { ...presentLay(after), reason: input.reason });
+      return presentLay(after, (await plans.bundlesOfLay(actor.studioId, id)).length);
     },
     async layDocument(studioId: number, id: number, doc: LayDocument): Promise<Download> {
       const lay = await loadLay(studioId, id);

@@ -11,10 +11,12 @@ export function presentFabric(f: FabricEntity, role: Role, rolls: RollEntity[] =
     composition: f.composition,
     widthMm: f.widthMm,
     shrinkagePercent: f.shrinkagePercent,
+    shrinkageLengthPercent: f.shrinkageLengthPercent,
+    shrinkageWidthPercent: f.shrinkageWidthPercent,
     isDirectional: f.isDirectional,
     maxPlies: f.maxPlies,
     supplierId: f.supplierId,
-    ...(can(role, 'costs:read') ? { pricePerMetreMinor: f.pricePerMetreMinor } : {}),
+    ...(can(role, 'costs:read') ? { pricePerMetreMinor: f.pricePerMetreMinor, price: { amountMinor: f.priceMinor, per: f.priceUnit } } : {}),
     rollCount: own.length,
     totalRemainingMm: own.reduce((a, r) => a + r.remainingMm, 0),
   };
@@ -31,4 +33,5 @@ export const presentRoll = (r: RollEntity): RollDto => ({
   remainingMm: r.remainingMm,
   reservedMm: r.reservedMm,
   isRemnant: r.isRemnant,
+  ticketLengthMm: r.ticketLengthMm,
 });

@@ -1,6 +1,7 @@
 import { format } from 'date-fns';
 import { Router, type Response } from 'express';
 import { can } from '../../../shared/auth/permissions';
+import { fabricColumns, setsPrice } from './fabric-fields';
 import { createFabricInput, createRollsInput, updateFabricInput, type RollInput } from '../../../shared/schemas/cutting';
 import { idParam } from '../../../shared/schemas/common';
 import { actorOf, requirePermission, type Actor } from '../../auth/require';
@@ -36,8 +37,8 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     if (!f) throw notFound('Fabric');
     return f;
   };
-  const noPriceForCutter = (actor: Actor, body: { pricePerMetreMinor?: number }) => {
-    if (body.pricePerMetreMinor !== undefined && !can(actor.role, 'costs:write')) throw forbidden('Your role cannot set prices');
+  const noPriceForCutter = (actor: Actor, body: Parameters<typeof setsPrice>[0]) => {
+    if (setsPrice(body) && !can(actor.role, 'costs:write')) throw forbidden('Your role cannot set prices');
   };
   /** A fabric's supplier must be one of the studio's own (the same answer whether it is another studio's or none). */
   const checkSupplier = async (actor: Actor, supplierId: number | null | undefined) => {
@@ -59,7 +60,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     const actor = actorOf(req);
     noPriceForCutter(actor, req.body);
     await checkSupplier(actor, req.body.supplierId);
-    const f = await fabrics.insert({ ...req.body, studioId: actor.studioId });
+    const f = await fabrics.insert({ ...fabricColumns(req.body), studioId: actor.studioId });
     await audit.record(actor, 'create', 'fabric', f.id, undefined, presentFabric(f, 'owner'));
     res.status(201).json({ fabric: presentFabric(f, actor.role) });
   });
@@ -68,7 +69,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     noPriceForCutter(actor, req.body);
     const before = await load(actor, Number(req.params.id));
     await checkSupplier(actor, req.body.supplierId);
-    const after = await fabrics.update(actor.studioId, before.id, req.body);
+    const after = await fabrics.update(actor.studioId, before.id, fabricColumns(req.body, before));
     await audit.record(actor, 'update', 'fabric', before.id, presentFabric(before, 'owner'), presentFabric(after, 'owner'));
     res.json({ fabric: presentFabric(after, actor.role, await fabrics.rolls(actor.studioId, after.id)) });
   });
@@ -88,7 +89,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
   });
 
   /** Save rolls after checking labels are new; all or none. */
-  const saveRolls = async (actor: Actor, fabricId: number, list: RollInput[], fieldOf: (i: number) => string) => {
+  const saveRolls = async (actor: Actor, fabricId: number, list: RollInput[], fieldOf: (i: number) => string, fromPackingList = false) => {
     const fields: Record<string, string> = {};
     const seen = new Map<string, number>();
     list.forEach((roll, i) => {
@@ -102,7 +103,8 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     });
     if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
     const saved = await fabrics.insertRolls(
-      list.map((roll) => ({ ...roll, studioId: actor.studioId, fabricId, remainingMm: roll.lengthMm, isRemnant: false })),
+      // A packing list gives the supplier's ticket length: plans take the short-length and flaw allowances off it until the roll is measured.
+      list.map((roll) => ({ ...roll, studioId: actor.studioId, fabricId, remainingMm: roll.lengthMm, isRemnant: false, ticketLengthMm: fromPackingList ? roll.lengthMm : null })),
     );
     await audit.record(actor, 'create', 'rolls', fabricId, undefined, { labels: saved.map((s) => s.label) });
     return saved;
@@ -125,7 +127,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
       return;
     }
     try {
-      const saved = await saveRolls(actor, f.id, rolls, (i) => `row ${i + 2}`);
+      const saved = await saveRolls(actor, f.id, rolls, (i) => `row ${i + 2}`, true);
       res.status(201).json({ rolls: saved.map(presentRoll) });
     } catch (err) {
       const fields = (err as { fields?: Record<string, string> }).fields;

@@ -1,8 +1,8 @@
-import { makeBundles } from '@planning';
+import { checkRollWidth, makeBundles } from '@planning';
 import { DEFAULT_REMNANT_STOCK_THRESHOLD_MM } from '@planning';
-import type { RecordLayInput } from '../../../shared/schemas/cutting';
+import type { CorrectLayInput, RecordLayInput } from '../../../shared/schemas/cutting';
 import type { RollEntity } from '../../entities';
-import type { LayRollLine } from '../../entities/lay.entity';
+import type { LayCorrection, LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import { batchCode } from '../batches/batch.presenter';
 import type { CutPlanRepository } from './cut-plan.repository';
@@ -43,6 +43,23 @@ function checkRemnants(lines: LayRollLine[], onHand: Map<number, RollEntity>, in
 }
 const REMNANT_EPSILON_MM = 1e-6;
 
+/**
+ * A roll narrower than the lay's marker cannot carry its plies: a 400 naming the roll and both widths,
+ * on the plies field of the row that spreads it. Rows with no plies spread are not checked.
+ */
+export function checkRollWidths(lines: LayRollLine[], onHand: Map<number, RollEntity>, markerWidthMm: number | undefined, input: RecordLayInput | undefined) {
+  if (markerWidthMm === undefined) return;
+  const fields: Record<string, string> = {};
+  lines.forEach((l, i) => {
+    const roll = onHand.get(l.rollId);
+    if (!roll || !((l.actualPlies ?? l.plies) > 0)) return;
+    const refusal = checkRollWidth({ id: String(roll.id), label: roll.label, width: roll.widthMm }, markerWidthMm);
+    const at = input?.rolls.findIndex((r) => r.rollId === l.rollId) ?? -1;
+    if (refusal) fields[`rolls.${at >= 0 ? at : i}.actualPlies`] = refusal.message;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+}
+
 /** Every roll line needs the plies spread and the measured remnant, typed now or saved before: the plan is never taken as fact. */
 function checkMeasured(lines: LayRollLine[], input: RecordLayInput | undefined) {
   const fields: Record<string, string> = {};
@@ -56,13 +73,15 @@ function checkMeasured(lines: LayRollLine[], input: RecordLayInput | undefined) 
 }
 
 /** Save the plies spread, remnants and flaws without cutting yet. */
-export async function recordLay(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput) {
+export async function recordLay(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput, markerWidthMm?: number) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
   if (lay.status === 'retired') throw conflict(RETIRED);
   if (lay.status === 'cut') throw conflict('This lay is already cut');
   const rolls = applyRecord(lay.rolls, input);
-  checkRemnants(rolls, new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r])), input);
+  const onHand = new Map((await plans.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r]));
+  checkRollWidths(rolls, onHand, markerWidthMm, input);
+  checkRemnants(rolls, onHand, input);
   return plans.transaction(async (tx) => {
     await tx.updateLay(studioId, id, { rolls, flaws: input.flaws ?? '' });
     return tx.lay(studioId, id);
@@ -78,7 +97,7 @@ export async function recordLay(plans: CutPlanRepository, studioId: number, id: 
  * practice), else written off as end-of-roll waste. The plies spread and the remnant of every roll must be
  * entered (400 naming the row otherwise); only the demo seed's history is cut `asPlanned`.
  */
-export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date, opts: { asPlanned?: boolean } = {}) {
+export async function markLayCut(plans: CutPlanRepository, studioId: number, id: number, input: RecordLayInput | undefined, now: Date, opts: { asPlanned?: boolean; markerWidthMm?: number } = {}) {
   const lay = await plans.getLay(studioId, id);
   if (!lay) throw notFound('Lay');
   if (lay.status === 'retired') throw conflict(RETIRED);
@@ -99,6 +118,7 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     const current = await plans.getLay(studioId, id);
     if (current?.status === 'cut') throw conflict('This lay is already cut');
     const onHand = new Map((await tx.stock.rolls(studioId, rolls.map((r) => r.rollId))).map((r) => [r.id, r]));
+    checkRollWidths(rolls, onHand, opts.markerWidthMm, input);
     checkRemnants(rolls, onHand, input);
     const offset = await tx.maxBundleNumber(studioId);
     const batch = await tx.batch(studioId, lay.batchId);
@@ -131,3 +151,44 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     return { lay: await tx.lay(studioId, id), bundles: made.length };
   }));
 }
+
+/**
+ * Correct the record of a cut lay: the remnants measured, the notes and the flaws, with a reason. The
+ * record stays closed otherwise: the plies spread made the bundles, so a change of plies is refused
+ * (400 on that row). Each roll's stock follows the corrected remnant in the same transaction (409 when
+ * a roll cannot move so, e.g. it has been cut from since). The correction is appended to the lay.
+ */
+export async function correctLay(plans: CutPlanRepository, studioId: number, id: number, input: CorrectLayInput, who: { id: number; name: string }, now: Date) {
+  const lay = await plans.getLay(studioId, id);
+  if (!lay) throw notFound('Lay');
+  if (lay.status !== 'cut') throw conflict('Only a cut lay’s record is corrected; before the cut, save what was spread');
+  const rolls = applyRecord(lay.rolls, input);
+  const fields: Record<string, string> = {};
+  input.rolls.forEach((r, i) => {
+    const old = lay.rolls.find((l) => l.rollId === r.rollId)!;
+    if (r.actualPlies !== (old.actualPlies ?? old.plies)) fields[`rolls.${i}.actualPlies`] = `The plies spread made the bundles; they stay ${old.actualPlies ?? old.plies}`;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
+  const changes: string[] = [];
+  rolls.forEach((l) => {
+    const old = lay.rolls.find((x) => x.rollId === l.rollId)!;
+    if ((old.actualRemnantMm ?? null) !== (l.actualRemnantMm ?? null)) changes.push(`${l.label}: remnant ${fmtM(old.actualRemnantMm)} → ${fmtM(l.actualRemnantMm)}`);
+    if ((old.note ?? '') !== (l.note ?? '')) changes.push(`${l.label}: note changed`);
+  });
+  if ((input.flaws ?? '') !== lay.flaws) changes.push('flaws changed');
+  if (!changes.length) throw badRequest('rolls: nothing differs from the record', { rolls: 'Nothing differs from the record' });
+  return withStockLock(studioId, () => plans.transaction(async (tx) => {
+    for (const [i, l] of rolls.entries()) {
+      const old = lay.rolls.find((x) => x.rollId === l.rollId)!;
+      if (old.actualRemnantMm === undefined || l.actualRemnantMm === undefined || old.actualRemnantMm === l.actualRemnantMm) continue;
+      if (!(await tx.stock.correctRemnant(studioId, lay.id, l.rollId, l.actualRemnantMm - old.actualRemnantMm))) {
+        throw conflict(`Roll ${l.label} has changed since this lay was cut; its stock cannot take this remnant`, { [remnantField(input, l.rollId, i)]: 'The roll has changed since the cut' });
+      }
+    }
+    const corrections: LayCorrection[] = [...(lay.corrections ?? []), { at: now.toISOString(), byUserId: who.id, by: who.name, reason: input.reason.trim(), changes }];
+    await tx.updateLay(studioId, id, { rolls, flaws: input.flaws ?? lay.flaws, corrections });
+    return tx.lay(studioId, id);
+  }));
+}
+
+const fmtM = (v: number | undefined) => (v === undefined ? 'none' : `${(v / 1000).toFixed(2)} m`);

@@ -83,5 +83,21 @@ export function createRollStockRepository(ds: DataSource) {
       }
       return true;
     },
+
+    /**
+     * A cut lay's measured remnant was corrected by `deltaMm` (new − old): the roll's on-hand length moves by
+     * it in one conditional UPDATE that only matches while the result stays within 0 and the roll's length,
+     * and the lay's consumed hold on the roll takes the opposite change. False when the roll cannot move so.
+     */
+    async correctRemnant(m: EntityManager, studioId: number, layId: number, rollId: number, deltaMm: number) {
+      const res = await m.createQueryBuilder().update(RollEntity)
+        .set({ remainingMm: () => '"remainingMm" + :delta' })
+        .where('"studioId" = :studioId AND "id" = :id AND "remainingMm" + :delta >= 0 AND "remainingMm" + :delta <= "lengthMm"', { studioId, id: rollId, delta: deltaMm })
+        .execute();
+      if (!res.affected) return false;
+      const consumed = await m.getRepository(RollReservationEntity).find({ where: { studioId, layId, rollId, status: 'consumed' }, order: { id: 'DESC' }, take: 1 });
+      if (consumed[0]) await m.getRepository(RollReservationEntity).update({ studioId, id: consumed[0].id }, { consumedMm: Math.max(0, (consumed[0].consumedMm ?? 0) - deltaMm) });
+      return true;
+    },
   };
 }

@@ -18,6 +18,8 @@ export interface CuttingPiece {
   mirrored: boolean;
   /** Grain line direction in degrees from the piece's x axis, counter-clockwise. */
   grainAngle?: number;
+  /** Notches, as their points on the sewing line (the marker plot carries them out to the cutting line). */
+  notches?: { x: number; y: number }[];
 }
 
 /**
@@ -66,6 +68,7 @@ export function cuttingPieceOf(piece: Piece): CuttingPiece {
     quantity: mirrored ? 2 * piece.quantity : piece.quantity,
     mirrored,
     grainAngle: Number.isFinite(grainAngle) ? round(grainAngle) : undefined,
+    notches: piece.notches.map((i) => piece.outline[i]).filter(Boolean).map((p) => ({ x: round(p.x), y: round(p.y) })),
   };
 }
 

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
-import type { NestingInput, NestingPiece } from '@planning';
-import { polygonArea, polygonRotate } from '@shared/geometry/polygon';
+import { prepareMarkerPieces, type NestingInput, type Shrinkage } from '@planning';
+import { polygonArea } from '@shared/geometry/polygon';
 import { mm } from '@shared/units/units';
 import { badRequest } from '../../errors';
 import type { CuttingPiece } from '../grading/graded-pieces';
@@ -22,47 +22,39 @@ export interface MarkerJobInput {
   engine: NestingInput;
   seed: number;
   seconds: number;
-  /** Piece key ("M:front") → size and piece name. */
+  /** Piece key ("M:front", "M:sleeve:pair") → size and piece name. */
   labels: Record<string, { size: string; name: string }>;
+  /** Notches per piece key, in the engine's frame (jobs stored before notches were kept have none). */
+  notches?: Record<string, { x: number; y: number }[]>;
 }
 
 /**
- * Engine input for a size ratio: one nesting piece per size and piece, outlines turned so the grain runs
- * along the fabric length (x), quantities multiplied by the ratio (mirrored pieces count pairs), rotations
- * 0° and 180° (0° only on one-way or napped fabric), the fabric's cuttable width and a 2 mm gap.
+ * Engine input for a size ratio through planning's `prepareMarkerPieces`: outlines turned so the grain
+ * runs along the fabric length (x), grown for the fabric's shrinkage along and across the grain,
+ * quantities multiplied by the ratio (mirrored pieces count pairs), rotations 0° and 180° (0° only on
+ * one-way or napped fabric, where a pair's other half is mirrored across the grain so it keeps the
+ * fabric's direction), the fabric's cuttable width and a 2 mm gap.
  */
 export function buildMarkerInput(
   pieces: Record<string, CuttingPiece[]>,
   ratio: Record<string, number>,
-  opts: { widthMm: number; isDirectional: boolean; seconds: number; gapMm?: number },
+  opts: { widthMm: number; isDirectional: boolean; seconds: number; gapMm?: number; shrinkage?: Shrinkage },
 ): MarkerJobInput {
-  const out: NestingPiece[] = [];
-  const labels: MarkerJobInput['labels'] = {};
-  for (const [size, n] of Object.entries(ratio).sort(([a], [b]) => a.localeCompare(b))) {
-    if (!(n > 0)) continue;
-    for (const p of pieces[size] ?? []) {
-      const id = `${size}:${p.pieceId}`;
-      const perGarment = p.mirrored ? Math.max(1, Math.round(p.quantity / 2)) : p.quantity;
-      const outline = p.grainAngle ? polygonRotate(p.outline, -p.grainAngle) : p.outline;
-      out.push({
-        id,
-        polygon: outline.map((q) => ({ x: round(q.x), y: round(q.y) })),
-        quantity: perGarment * n,
-        mirrored: p.mirrored,
-        orientations: opts.isDirectional ? [0] : [0, 180],
-      });
-      labels[id] = { size, name: p.name };
-    }
-  }
+  const prepared = prepareMarkerPieces(pieces, ratio, { isDirectional: opts.isDirectional, shrinkage: opts.shrinkage });
   return {
-    engine: { pieces: out, stripWidth: mm(opts.widthMm), gap: mm(opts.gapMm ?? MARKER_GAP_MM) },
+    engine: { pieces: prepared.pieces, stripWidth: mm(opts.widthMm), gap: mm(opts.gapMm ?? MARKER_GAP_MM) },
     seed: MARKER_SEED,
     seconds: opts.seconds,
-    labels,
+    labels: Object.fromEntries(Object.entries(prepared.labels).map(([k, l]) => [k, { size: l.size, name: l.name }])),
+    ...(Object.keys(prepared.notches).length ? { notches: prepared.notches } : {}),
   };
 }
 
-const round = (n: number) => Math.round(n * 1000) / 1000;
+/** A fabric's shrinkage per direction, as the marker core takes it. */
+export const fabricShrinkage = (f: { shrinkageLengthPercent: number; shrinkageWidthPercent: number }): Shrinkage => ({
+  lengthwisePercent: f.shrinkageLengthPercent,
+  widthwisePercent: f.shrinkageWidthPercent,
+});
 
 /** SHA-256 of everything that decides the marker: pieces, quantities, width, orientations, gap, budget, seed. */
 export function markerInputHash(job: MarkerJobInput): string {

@@ -1,6 +1,6 @@
 import { In, type DataSource } from 'typeorm';
 import { createStatements } from '../../db/statements';
-import { MarkerEntity } from '../../entities';
+import { MarkerEntity, StudioEntity } from '../../entities';
 import type { MarkerStatus } from '../../entities/marker.entity';
 import type { QueryDeepPartialEntity } from 'typeorm';
 
@@ -11,6 +11,8 @@ export function createMarkerRepository(ds: DataSource) {
   const repo = ds.getRepository(MarkerEntity);
   const sql = createStatements(ds);
   return {
+    /** The studio's name, printed on a marker plot. */
+    studioName: async (studioId: number) => (await ds.getRepository(StudioEntity).findOneBy({ id: studioId }))?.name ?? '',
     get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
     list: (studioId: number, where: { styleId?: number; batchId?: number } = {}) =>
       repo.find({ where: { studioId, ...where }, order: { id: 'DESC' }, take: 100 }),

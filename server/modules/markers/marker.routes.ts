@@ -30,5 +30,9 @@ export function markerRoutes(service: MarkerService) {
   r.get('/:id/dxf', read, ...validated({ params: idParam }, async ({ params }, req, res) => {
     sendDownload(res, await service.file(actorOf(req).studioId, params.id, 'dxf'));
   }));
+  /** The whole marker at 1:1 as a PDF for a plotter: page width = marker width, panels along the length. */
+  r.get('/:id/plot.pdf', read, ...validated({ params: idParam }, async ({ params }, req, res) => {
+    sendDownload(res, await service.file(actorOf(req).studioId, params.id, 'pdf'));
+  }));
   return r;
 }

@@ -9,11 +9,13 @@ import type { BatchRepository } from '../batches/batch.repository';
 import { batchCode } from '../batches/batch.presenter';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
 import type { StyleRepository } from '../styles/style.repository';
-import { buildMarkerInput, markerInputHash, piecesOnFabric } from './marker-input';
+import { buildMarkerInput, fabricShrinkage, markerInputHash, piecesOnFabric, type MarkerJobInput } from './marker-input';
 import { presentMarker } from './marker.presenter';
 import type { MarkerQueue } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
 import { markerSvg } from './marker-svg';
+import { markerPlotInput } from './marker-plot';
+import { runCpuTask } from '../../jobs/cpu-pool';
 
 /** The fabrics a marker is laid on; the cutting area owns them and hands this lookup in. */
 export interface FabricLookup {
@@ -31,6 +33,8 @@ export interface MarkerServiceDeps {
   audit: AuditRepository;
   /** Default budget (NESTING_SECONDS). */
   defaultSeconds: number;
+  /** The date printed on a marker plot. */
+  now?: () => Date;
 }
 
 export type MarkerService = ReturnType<typeof createMarkerService>;
@@ -60,6 +64,7 @@ export function createMarkerService(deps: MarkerServiceDeps) {
       widthMm: fabric.widthMm,
       isDirectional: fabric.isDirectional,
       seconds: input.seconds ?? deps.defaultSeconds,
+      shrinkage: fabricShrinkage(fabric),
     });
     const inputHash = markerInputHash(job);
     const existing = await markers.byHash(studioId, inputHash);
@@ -85,21 +90,29 @@ export function createMarkerService(deps: MarkerServiceDeps) {
   }
 
   /** The finished marker as a file: SVG to look at, or DXF at 1:1 for a plotter or cutting table (millimetres). */
-  async function file(studioId: number, id: number, kind: 'svg' | 'dxf'): Promise<Download> {
-    const { dto } = await get(studioId, id);
+  async function file(studioId: number, id: number, kind: 'svg' | 'dxf' | 'pdf'): Promise<Download> {
+    const { entity, dto } = await get(studioId, id);
     if (!dto.drawing || dto.lengthMm === null) throw conflict('This marker has no finished layout yet');
     const style = await styles.get(studioId, dto.styleId);
     const sizes = style?.sizeRun ?? Object.keys(dto.ratio);
     const size = `${Math.round(dto.lengthMm)} mm × ${Math.round(dto.widthMm)} mm`;
-    if (kind === 'svg') {
-      const title = `${style?.code ?? 'Marker'} ${ratioText(dto.ratio, sizes)} · ${size}`;
-      return { body: markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }), type: 'image/svg+xml', filename: `marker-${dto.id}.svg` };
-    }
-    // The batch goes in the title and the name, so a plotter queue shows whose marker it is.
+    // The batch goes in the title and every file name, so a plotter queue shows whose marker it is.
     const batch = dto.batchId ? batchCode(dto.batchId) : null;
+    const name = `marker-${[batch, style?.code, dto.id].filter(Boolean).join('-')}`;
+    if (kind === 'svg') {
+      const title = `${[batch, style?.code ?? 'Marker'].filter(Boolean).join(' · ')} ${ratioText(dto.ratio, sizes)} · ${size}`;
+      return { body: markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }), type: 'image/svg+xml', filename: `${name}.svg` };
+    }
+    if (kind === 'pdf') {
+      const input = markerPlotInput(
+        { lengthMm: dto.lengthMm, widthMm: dto.widthMm, ratio: dto.ratio, drawing: dto.drawing, notches: (entity.input as MarkerJobInput | null)?.notches },
+        { studioName: await markers.studioName(studioId), dateIso: (deps.now?.() ?? new Date()).toISOString(), styleCode: style?.code ?? '', styleName: style?.name ?? '', batchCode: batch ?? 'no batch', sizes },
+      );
+      return { body: await runCpuTask('marker-plot.pdf', input), type: 'application/pdf', filename: `${name}.pdf` };
+    }
     const title = [batch, style?.code ?? 'Marker', ratioText(dto.ratio, sizes), size].filter(Boolean).join(' · ');
     const body = markerToDxf({ outlines: dto.drawing.outlines, placements: dto.drawing.placements, lengthMm: dto.lengthMm, widthMm: dto.widthMm, title });
-    return { body, type: 'application/dxf', filename: `marker-${[batch, style?.code, dto.id].filter(Boolean).join('-')}.dxf` };
+    return { body, type: 'application/dxf', filename: `${name}.dxf` };
   }
 
   return {

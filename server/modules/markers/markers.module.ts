@@ -43,6 +43,7 @@ export function createMarkersModule(ctx: ModuleContext, deps: MarkersModuleDeps)
     queue: getQueue,
     audit: ctx.audit,
     defaultSeconds: ctx.env.NESTING_SECONDS ?? 20,
+    now: ctx.now,
   });
   return {
     name: 'markers',

@@ -1,6 +1,6 @@
 import { updateIfChanged } from '../../db/update-if-changed';
-import { Not, type DataSource } from 'typeorm';
-import { FabricEntity, PurchaseOrderEntity, RollEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
+import { In, Not, type DataSource } from 'typeorm';
+import { FabricEntity, PurchaseOrderEntity, RollEntity, RollReservationEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
 
 export type PurchasingRepository = ReturnType<typeof createPurchasingRepository>;
 
@@ -28,6 +28,13 @@ export function createPurchasingRepository(ds: DataSource) {
     async fabricStockMm(studioId: number, fabricId: number) {
       const rolls = await ds.getRepository(RollEntity).find({ where: { studioId, fabricId }, select: { remainingMm: true } });
       return rolls.reduce((a, r) => a + r.remainingMm, 0);
+    },
+    /** Length of the fabric's rolls held by other batches' planned lays, mm (not free for this batch). */
+    async heldByOtherBatchesMm(studioId: number, fabricId: number, batchId: number) {
+      const rolls = await ds.getRepository(RollEntity).find({ where: { studioId, fabricId }, select: { id: true } });
+      if (!rolls.length) return 0;
+      const held = await ds.getRepository(RollReservationEntity).find({ where: { studioId, rollId: In(rolls.map((r) => r.id)), status: 'held', batchId: Not(batchId) } });
+      return held.reduce((a, h) => a + h.lengthMm, 0);
     },
     openOrders: (studioId: number) => orders.find({ where: { studioId, status: Not('received') } }),
     orders: (studioId: number, batchId?: number) =>

@@ -8,6 +8,7 @@ import { badRequest, conflict, notFound } from '../../errors';
 import type { CostingService } from '../costing/costing.service';
 import { localeForCurrency } from '../costing/costing-consumption';
 import type { MailService } from '../mail/mail.service';
+import { netFabricNeed } from '../../../planning/index';
 import { documentLine, poNumber } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 
@@ -43,12 +44,15 @@ export function createPurchasingService(deps: {
     const out: NeedDto[] = [];
     if (dto.fabric) {
       const fabric = await repo.fabric(studioId, dto.fabric.id);
-      const required = Math.ceil(dto.fabric.batchFabricMm);
-      const inStock = await repo.fabricStockMm(studioId, dto.fabric.id);
-      const ordered = onOrder(open, 'fabric', dto.fabric.id);
+      // With a cut plan the need is what its lays still to cut spread, exactly as the plan says; without one,
+      // the costing estimate. Free stock leaves out what other batches' plans hold; this batch's holds are its own.
+      const required = Math.ceil(dto.fabric.stillToCutMm ?? dto.fabric.batchFabricMm);
+      const onHand = await repo.fabricStockMm(studioId, dto.fabric.id);
+      const heldByOthers = await repo.heldByOtherBatchesMm(studioId, dto.fabric.id, batchId);
+      const need = netFabricNeed({ requiredMm: required, onHandMm: onHand, heldByOthersMm: heldByOthers, onOrderMm: onOrder(open, 'fabric', dto.fabric.id), stepMm: FABRIC_STEP_MM });
       out.push({
-        kind: 'fabric', refId: dto.fabric.id, item: dto.fabric.name, unit: 'mm', required, inStock, onOrder: ordered,
-        toOrder: roundUp(Math.max(0, required - inStock - ordered), FABRIC_STEP_MM),
+        kind: 'fabric', refId: dto.fabric.id, item: dto.fabric.name, unit: 'mm', required, inStock: need.freeStock, onOrder: need.onOrder,
+        toOrder: need.toOrder,
         unitPriceMinor: dto.fabric.pricePerMetreMinor, supplierId: fabric?.supplierId ?? null, supplierName: nameOf(fabric?.supplierId ?? null),
       });
     }

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { BundleDto, CreateCutPlanInput, CutPlanDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
+import type { BundleDto, CorrectLayInput, CreateCutPlanInput, CutPlanDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 import { fabricQueries } from '@/lib/queries';
@@ -67,5 +67,12 @@ export const useRecordLay = (id: number) =>
 export const useCutLay = (id: number) =>
   useMutation({
     mutationFn: async (v: RecordLayInput) => api.post<{ lay: LayDto; bundles: BundleDto[] }>(`/lays/${id}/cut`, v),
+    onSuccess: invalidateCutting,
+  });
+
+/** Correct the record of a cut lay; the server keeps the old figures in the audit log. */
+export const useCorrectLay = (id: number) =>
+  useMutation({
+    mutationFn: async (v: CorrectLayInput) => (await api.post<{ lay: LayDto }>(`/lays/${id}/correction`, v)).lay,
     onSuccess: invalidateCutting,
   });

@@ -90,6 +90,12 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
             </table>
           </div>
           {plan.shortfall.some((s) => s > 0) ? <p role="alert" className="text-sm text-madder-700">Not enough fabric in the chosen rolls: {plan.shortfall.reduce((a, b) => a + b, 0)} plies short.</p> : null}
+          {plan.rollRefusals?.length ? (
+            <div role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">
+              <p className="font-semibold">Rolls left out because they are narrower than the marker:</p>
+              <ul className="list-disc pl-5">{plan.rollRefusals.map((m) => <li key={m}>{m}</li>)}</ul>
+            </div>
+          ) : null}
           <div className="flex flex-wrap gap-2">
             <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.xlsx`, `marker-list-${batch.code}.xlsx`)}>Marker list per roll (XLSX)</button>
             <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.pdf`, `marker-list-${batch.code}.pdf`)}>Marker list per roll (PDF)</button>

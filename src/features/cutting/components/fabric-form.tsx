@@ -14,23 +14,28 @@ interface Draft {
   name: string;
   composition: string;
   width: string;
-  shrinkagePercent: string;
+  shrinkageLength: string;
+  shrinkageWidth: string;
   isDirectional: boolean;
   price: string;
+  priceUnit: 'metre' | 'yard';
   supplierId: string;
   maxPlies: string;
 }
 
 function draftOf(f: FabricDto | null, imperial: boolean, currency: string): Draft {
-  if (!f) return { name: '', composition: '', width: '', shrinkagePercent: '0', isDirectional: false, price: '', supplierId: '', maxPlies: '40' };
-  const perUnit = f.pricePerMetreMinor === undefined ? '' : toMajorText(Math.round(imperial ? (f.pricePerMetreMinor * MM_PER_YARD) / 1000 : f.pricePerMetreMinor), currency);
+  if (!f) return { name: '', composition: '', width: '', shrinkageLength: '0', shrinkageWidth: '0', isDirectional: false, price: '', priceUnit: imperial ? 'yard' : 'metre', supplierId: '', maxPlies: '40' };
+  // The price as the supplier quoted it; older fabrics only have a rate per metre.
+  const quoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
   return {
     name: f.name,
     composition: f.composition,
     width: imperial ? String(Math.round((f.widthMm / MM_PER_INCH) * 8) / 8) : String(f.widthMm / 10),
-    shrinkagePercent: String(f.shrinkagePercent),
+    shrinkageLength: String(f.shrinkageLengthPercent ?? f.shrinkagePercent),
+    shrinkageWidth: String(f.shrinkageWidthPercent ?? f.shrinkagePercent),
     isDirectional: f.isDirectional,
-    price: perUnit,
+    price: quoted ? toMajorText(quoted.amountMinor, currency) : '',
+    priceUnit: quoted?.per ?? (imperial ? 'yard' : 'metre'),
     supplierId: f.supplierId === null ? '' : String(f.supplierId),
     maxPlies: String(f.maxPlies),
   };
@@ -38,7 +43,7 @@ function draftOf(f: FabricDto | null, imperial: boolean, currency: string): Draf
 
 /**
  * Add or edit a fabric, lining or interfacing of the studio: cuttable width in the studio's units
- * (cm, or inches), price per metre or per yard, shrinkage, one-way, and the supplier it is bought from.
+ * (cm, or inches), the price per metre or per yard as quoted, shrinkage along and across the grain, one-way, and the supplier it is bought from.
  */
 export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDone: (f: FabricDto) => void }) {
   const me = useMe().data;
@@ -65,19 +70,30 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
     const width = Number(d.width);
     if (!d.width.trim() || !Number.isFinite(width) || width <= 0) problems.widthMm = 'Enter the cuttable width, above 0';
     const price = d.price.trim() === '' ? 0 : parseMajor(d.price, currency);
-    if (price === null || price < 0) problems.pricePerMetreMinor = 'Enter a price such as 450.00, or leave it empty';
+    if (price === null || price < 0) problems.priceMinor = 'Enter a price such as 450.00, or leave it empty';
+    for (const [key, field] of [['shrinkageLength', 'shrinkageLengthPercent'], ['shrinkageWidth', 'shrinkageWidthPercent']] as const) {
+      const v = Number(d[key] || 0);
+      if (!Number.isFinite(v) || v < 0 || v > 30) problems[field] = 'Between 0 and 30 %';
+    }
     const plies = Number(d.maxPlies);
     if (!Number.isInteger(plies)) problems.maxPlies = 'Whole plies';
     setLocalErrors(problems);
     if (Object.keys(problems).length) return;
-    const perMetre = imperial ? Math.round(((price ?? 0) * 1000) / MM_PER_YARD) : (price ?? 0);
+    // Kept exactly as quoted; the rate per metre is only for older readers of the fabric.
+    const perMetre = d.priceUnit === 'yard' ? Math.round(((price ?? 0) * 1000) / MM_PER_YARD) : (price ?? 0);
+    const shrinkLength = Number(d.shrinkageLength || 0);
+    const shrinkWidth = Number(d.shrinkageWidth || 0);
     save.mutate({
       name: d.name,
       composition: d.composition,
       widthMm: Math.round(imperial ? width * MM_PER_INCH : width * 10),
-      shrinkagePercent: Number(d.shrinkagePercent || 0),
+      shrinkagePercent: Math.max(shrinkLength, shrinkWidth),
+      shrinkageLengthPercent: shrinkLength,
+      shrinkageWidthPercent: shrinkWidth,
       isDirectional: d.isDirectional,
       pricePerMetreMinor: perMetre,
+      priceMinor: price ?? 0,
+      priceUnit: d.priceUnit,
       supplierId: d.supplierId ? Number(d.supplierId) : null,
       maxPlies: plies,
     });
@@ -108,8 +124,16 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
       {text('name', 'Name', 'name', 'text', 'Self, lining, contrast or interfacing, e.g. "Navy crepe" or "Ivory lining"')}
       {text('composition', 'Composition', 'composition', 'text', 'e.g. 100 % polyester')}
       {text('width', imperial ? 'Cuttable width (in)' : 'Cuttable width (cm)', 'widthMm', 'number', 'Between the selvedges, not the full width')}
-      {text('price', imperial ? `Price per yard (${currency})` : `Price per metre (${currency})`, 'pricePerMetreMinor', 'text')}
-      {text('shrinkagePercent', 'Shrinkage (%)', 'shrinkagePercent', 'number')}
+      {text('price', `Price per ${d.priceUnit} (${currency})`, 'priceMinor', 'text', 'As the supplier quotes it')}
+      <div>
+        <label className="field-label" htmlFor={`${prefix}-priceUnit`}>Supplier prices it by the</label>
+        <select id={`${prefix}-priceUnit`} className="field-input" value={d.priceUnit} onChange={(e) => setD({ ...d, priceUnit: e.target.value === 'yard' ? 'yard' : 'metre' })}>
+          <option value="metre">metre</option>
+          <option value="yard">yard</option>
+        </select>
+      </div>
+      {text('shrinkageLength', 'Shrinkage along the grain (%)', 'shrinkageLengthPercent', 'number', 'Lengthwise (warp); pieces are cut longer to make up for it')}
+      {text('shrinkageWidth', 'Shrinkage across the grain (%)', 'shrinkageWidthPercent', 'number', 'Widthwise (weft)')}
       {text('maxPlies', 'Most plies in a lay', 'maxPlies', 'number')}
       <div>
         <label className="field-label" htmlFor={`${prefix}-supplier`}>Supplier</label>

@@ -96,7 +96,9 @@ export function FabricsPage() {
             <p className="font-semibold text-thread-800">{f.name}</p>
             <p className="text-sm text-ink-600">{[f.composition, `${u.width(f.widthMm)} cuttable`, f.isDirectional ? 'one way' : ''].filter(Boolean).join(' · ')}</p>
             <p className="mt-1 text-sm">{f.rollCount} rolls · {u.length(f.totalRemainingMm)} in stock</p>
-            {f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency)} per {u.pricePer}</p> : null}
+            {f.price ? <p className="text-sm text-ink-600">{formatMoney(f.price.amountMinor, currency)} per {f.price.per}</p>
+              : f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency)} per {u.pricePer}</p> : null}
+            {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">Shrinks {f.shrinkageLengthPercent ?? f.shrinkagePercent} % along, {f.shrinkageWidthPercent ?? f.shrinkagePercent} % across the grain</p> : null}
           </button>
         ))}
       </div>

@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { useParams } from 'react-router';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
-import { layQueries, useCutLay, useRecordLay } from '../api/cutting-queries';
+import { layQueries, useCorrectLay, useCutLay, useRecordLay } from '../api/cutting-queries';
 import { CuttingCautions } from './cutting-cautions';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { ConfirmButton } from '@/components/ui/confirm-button';
@@ -15,6 +15,9 @@ export function LayPage() {
   const { data, isLoading } = useQuery(layQueries.detail(id));
   const record = useRecordLay(id);
   const cut = useCutLay(id);
+  const correct = useCorrectLay(id);
+  const [correcting, setCorrecting] = useState(false);
+  const [reason, setReason] = useState('');
   const [actual, setActual] = useState<Record<number, Actual>>({});
   const [flaws, setFlaws] = useState('');
   const [local, setLocal] = useState<Record<string, string>>({});
@@ -49,11 +52,22 @@ export function LayPage() {
       flaws,
     };
   };
-  const server = (record.error ?? cut.error) instanceof ApiError ? ((record.error ?? cut.error) as ApiError).fields ?? {} : {};
+  const failure = record.error ?? cut.error ?? correct.error;
+  const server = failure instanceof ApiError ? failure.fields ?? {} : {};
   const fields: Record<string, string> = { ...server, ...local };
   const isCut = lay.status === 'cut';
   const retired = lay.status === 'retired';
-  const readOnly = isCut || retired;
+  // After the cut the record is read-only; a correction reopens it with a reason, and the server audits it.
+  const readOnly = retired || (isCut && !correcting);
+  const handleCorrect = () => {
+    const b = body(true);
+    if (!b) return;
+    if (reason.trim().length < 3) {
+      setLocal({ reason: 'Say why the record is corrected' });
+      return;
+    }
+    correct.mutate({ ...b, reason }, { onSuccess: () => { setCorrecting(false); setReason(''); } });
+  };
   const spreadPlies = lay.rolls.reduce((a, r) => a + (Number(actual[r.rollId]?.actualPlies) || 0), 0);
   const file = (url: string, name: string) => () => downloadFile(url, name);
   return (
@@ -120,9 +134,38 @@ export function LayPage() {
                 onConfirm={() => { const b = body(true); if (b) cut.mutate(b); }}
               />
             </div>
-          ) : retired ? null : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
+          ) : retired ? null : correcting ? (
+            <div className="mt-3 space-y-2">
+              <label className="field-label" htmlFor="lay-correction-reason">Why is the record corrected?</label>
+              <textarea id="lay-correction-reason" className="field-input" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} aria-invalid={Boolean(fields.reason)} />
+              {fields.reason ? <p className="field-error">{fields.reason}</p> : null}
+              <div className="flex flex-wrap gap-2">
+                <button type="button" className="btn-primary" disabled={correct.isPending} onClick={handleCorrect}>Save the correction</button>
+                <button type="button" className="btn-quiet" onClick={() => { setCorrecting(false); setLocal({}); }}>Cancel</button>
+              </div>
+              <p className="text-xs text-ink-600">The roll stock follows the corrected remnants. The old figures, who changed them and why stay in the record.</p>
+            </div>
+          ) : (
+            <div className="mt-3 flex flex-wrap items-center gap-3">
+              <p className="text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles. This record is closed.</p>
+              <button type="button" className="btn-quiet" onClick={() => setCorrecting(true)}>Correct the record</button>
+            </div>
+          )}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
-          {(record.error || cut.error) && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={record.error ?? cut.error} /></div> : null}
+          {correct.isSuccess && !correcting ? <p className="mt-2 text-sm text-thread-800" role="status">Correction saved.</p> : null}
+          {failure && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={failure} /></div> : null}
+          {lay.corrections?.length ? (
+            <div className="mt-3">
+              <h3 className="text-sm font-semibold">Corrections</h3>
+              <ul className="mt-1 space-y-1 text-sm">
+                {lay.corrections.map((c) => (
+                  <li key={c.at} className="rounded-lg border border-calico-200 px-2 py-1">
+                    {new Date(c.at).toLocaleString()} · {c.by}: {c.reason}{c.changes.length ? ` (${c.changes.join('; ')})` : ''}
+                  </li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
         </Card>
         {bundles.length ? (
           <Card title="Bundles">
@@ -133,10 +176,11 @@ export function LayPage() {
         ) : null}
         {retired ? null : <Card title="Documents">
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-lay-${lay.seq}.pdf`)}>Marker list per roll (PDF)</button>
-            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-${lay.batchCode}-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Marker list per roll (PDF)</button>
+            {lay.markerId ? <button type="button" className="btn-quiet" onClick={file(`/markers/${lay.markerId}/plot.pdf`, `marker-${lay.batchCode}-${lay.markerId}.pdf`)}>Marker to plot (PDF, 1:1)</button> : null}
+            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>Bundle register (XLSX)</button> : null}
           </div>
         </Card>}

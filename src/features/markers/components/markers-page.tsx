@@ -45,8 +45,9 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
         <div className="mt-3 space-y-2">
           <MarkerDrawing drawing={marker.drawing} lengthMm={marker.lengthMm} widthMm={marker.widthMm} sizes={sizes} />
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `marker-${marker.id}.svg`)}>Download SVG</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `marker-${marker.id}.dxf`)}>Plotter file (DXF, 1:1)</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `${markerFileName(marker)}.svg`)}>Download SVG</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `${markerFileName(marker)}.dxf`)}>Plotter file (DXF, 1:1)</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/plot.pdf`, `${markerFileName(marker)}.pdf`)}>Plotter PDF (1:1, marker width)</button>
           </div>
         </div>
       ) : null}
@@ -145,3 +146,6 @@ export function MarkersPage() {
     </>
   );
 }
+
+/** The batch goes in every marker file name, as the server names them. */
+const markerFileName = (m: { id: number; batchId: number | null }) => `marker-${m.batchId ? `B-${String(m.batchId).padStart(4, '0')}-` : ''}${m.id}`;
