@@ -1,6 +1,9 @@
 import type { Point } from '@shared/geometry/types';
 import type { InternalLine, Piece } from '../pieces/piece';
+import { cubicBezierFlatten } from '@shared/geometry/bezier';
 import { OutlineBuilder } from '../pieces/piece';
+import { polylineSplitAt } from './drafted-piece';
+import { ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM, DRILL_INSIDE_DART_MM } from './fitted-bodice-block';
 import { squaredHemPath } from './hem-shape';
 import { DEFAULT_HEM_MM, DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
@@ -20,6 +23,18 @@ export interface BodiceOptions {
   hemMm?: number;
   /** Side-seam share of the waist suppression, at most this much per quarter (the rest goes to the dart). */
   maxSideShapingMm?: number;
+  /** Dress front only: a patch pocket's placement, its top edge `belowWaistMm` under the waist and its centre
+   * `fromCentreMm` from centre front. Marked with a placement line and a drill hole inside each top corner. */
+  pocketPlacement?: PocketPlacement;
+}
+
+/** Where a patch pocket sits on a piece (mm): its size, its centre's distance from the centre line and its top's
+ * distance below the waist. */
+export interface PocketPlacement {
+  widthMm: number;
+  heightMm: number;
+  fromCentreMm: number;
+  belowWaistMm: number;
 }
 
 /** Key drafting points shared by front and back (mm, y up, waist at y = 0, centre line at x = 0). */
@@ -67,13 +82,21 @@ function dartLeg(f: Frame): Point {
   return { x: f.sideWaistX + (f.quarterBust - f.sideWaistX) * t, y: f.underarmY - 60 };
 }
 
-/** Armhole from underarm up through the across point to the shoulder point (two cubics). */
-function armhole(b: OutlineBuilder, ua: Point, across: Point, sp: Point, hps: Point): void {
-  b.cubic({ x: ua.x - 0.5 * (ua.x - across.x), y: ua.y }, { x: across.x, y: across.y - 0.5 * (across.y - ua.y) }, across, 'across');
+/**
+ * Armhole from underarm up through the across point to the shoulder point (two cubics), split at the armhole notch
+ * distances from the underarm (single front, double back; the sleeve cap carries the same, so they match).
+ */
+function armhole(b: OutlineBuilder, ua: Point, across: Point, sp: Point, hps: Point, notchesMm: readonly number[]): void {
+  const lower = cubicBezierFlatten(ua, { x: ua.x - 0.5 * (ua.x - across.x), y: ua.y }, { x: across.x, y: across.y - 0.5 * (across.y - ua.y) }, across, b.toleranceMm);
   const len = Math.hypot(sp.x - hps.x, sp.y - hps.y);
   const u = { x: (sp.x - hps.x) / len, y: (sp.y - hps.y) / len };
   const k = 0.3 * (sp.y - across.y);
-  b.cubic({ x: across.x, y: across.y + 0.4 * (sp.y - across.y) }, { x: sp.x + u.y * k, y: sp.y - u.x * k }, sp, 'shoulder');
+  const upper = cubicBezierFlatten(across, { x: across.x, y: across.y + 0.4 * (sp.y - across.y) }, { x: sp.x + u.y * k, y: sp.y - u.x * k }, sp, b.toleranceMm);
+  const split = polylineSplitAt([...lower, ...upper.slice(1)], notchesMm);
+  const acrossAt = split.points.findIndex((p) => p.x === across.x && p.y === across.y);
+  const base = b.points.length - 1;
+  split.points.slice(1).forEach((p, i) => b.line(p, i + 1 === acrossAt ? 'across' : i + 2 === split.points.length ? 'shoulder' : undefined));
+  for (const i of split.indices) b.notches.push(base + i);
 }
 
 /** Dress hem from the current point (centre front or back at hem level) to the side, squared to the flared side seam. */
@@ -102,6 +125,16 @@ function dartLines(f: Frame, apexY: number, o: BodiceOptions, m: BodyMeasurement
   return {
     lines: [{ kind: 'dart', name: 'waist-dart', points: [top, l, bottom, r, top] }],
     drills: [{ x: f.dartX, y: apexY - 10 }, { x: f.dartX, y: bottom.y + 10 }],
+  };
+}
+
+/** A pocket's placement line (top edge, then down the sides) and a drill hole 10 mm inside each top corner, where
+ * the sewn pocket hides it (common practice, as at dart points). */
+function pocketMarks(p: PocketPlacement): { lines: InternalLine[]; drills: Point[] } {
+  const l = p.fromCentreMm - p.widthMm / 2, r = p.fromCentreMm + p.widthMm / 2, top = -p.belowWaistMm, bottom = top - p.heightMm;
+  return {
+    lines: [{ kind: 'placement', name: 'pocket', points: [{ x: l, y: bottom }, { x: l, y: top }, { x: r, y: top }, { x: r, y: bottom }] }],
+    drills: [{ x: l + DRILL_INSIDE_DART_MM, y: top - DRILL_INSIDE_DART_MM }, { x: r - DRILL_INSIDE_DART_MM, y: top - DRILL_INSIDE_DART_MM }],
   };
 }
 
@@ -138,7 +171,7 @@ export function draftBodiceFront(m: BodyMeasurements, o: BodiceOptions = {}): Pi
   } else sideSeam(b, f, m, o, seam);
   b.line(ua, 'underarm');
   b.edge('armhole', { allowanceMm: seam });
-  armhole(b, ua, across, sp, hps);
+  armhole(b, ua, across, sp, hps, [ARMHOLE_NOTCH_FRONT_MM]);
   b.edge('shoulder', { allowanceMm: seam }).line(hps, 'hps');
   b.edge('neckline', { allowanceMm: seam }).cubic({ x: hps.x, y: hps.y - 0.55 * (hps.y - cfNeckY) }, { x: 0.55 * hps.x, y: cfNeckY }, { x: 0, y: cfNeckY }, 'cf-neck');
   if (ext > 0) b.edge('neck-extension', { allowanceMm: seam }).line({ x: -ext, y: cfNeckY }, 'cf-neck-ext');
@@ -152,10 +185,11 @@ export function draftBodiceFront(m: BodyMeasurements, o: BodiceOptions = {}): Pi
     const leg = dartLeg(f);
     lines.push({ kind: 'dart', name: 'bust-dart', points: [leg, { x: bustPoint.x + DART_SHORT_OF_BUST_POINT_MM, y: bustPoint.y }, { x: leg.x, y: leg.y + bustDart }] });
   }
+  const pocket = o.dress && o.pocketPlacement ? pocketMarks(o.pocketPlacement) : { lines: [], drills: [] };
   return {
     id: 'front', name: o.dress ? 'Front' : 'Bodice front', role: 'front', ...b.close(),
     grainLine: { from: { x: f.dartX / 2, y: bottomY + 60 }, to: { x: f.dartX / 2, y: chestY } },
-    drillHoles: darts.drills, internalLines: lines, cut: ext > 0 ? 'pair' : 'fold', quantity: 1,
+    drillHoles: [...darts.drills, ...pocket.drills], internalLines: [...lines, ...pocket.lines], cut: ext > 0 ? 'pair' : 'fold', quantity: 1,
   };
 }
 
@@ -181,7 +215,7 @@ export function draftBodiceBack(m: BodyMeasurements, o: BodiceOptions = {}): Pie
   sideSeam(b, f, m, { ...o, bustDartMm: 0 }, seam);
   b.line(ua, 'underarm');
   b.edge('armhole', { allowanceMm: seam });
-  armhole(b, ua, across, sp, hps);
+  armhole(b, ua, across, sp, hps, ARMHOLE_NOTCH_BACK_MM);
   b.edge('shoulder', { allowanceMm: seam }).line(hps, 'hps');
   b.edge('neckline', { allowanceMm: seam }).cubic({ x: hps.x, y: hps.y - 0.6 * BACK_NECK_DEPTH_MM }, { x: 0.5 * hps.x, y: cbNeckY }, { x: 0, y: cbNeckY }, 'cb-neck');
   b.edge('cb-fold', { allowanceMm: 0, isFold: true }).line({ x: 0, y: bottomY });

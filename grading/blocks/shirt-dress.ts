@@ -19,7 +19,7 @@ export const SHIRT_DRESS_STYLE = {
   capHeightRatio: 0.7,
   collarBandHeightMm: 30,
   facingWidthMm: 60,
-  pocket: { widthMm: 140, heightMm: 160, hemMm: 30 },
+  pocket: { widthMm: 140, heightMm: 160, hemMm: 30, fromCentreMm: 115, belowWaistMm: 90 },
   beltWidthMm: 35,
   beltExtraMm: 300,
 } as const;
@@ -33,7 +33,7 @@ export function draftShirtDress(m: BodyMeasurements): Piece[] {
   const s = SHIRT_DRESS_STYLE;
   const dress = { lengthMm: need(m, 'waist-to-knee'), hemFlareMm: s.hemFlareMm };
   const common = { bustEaseMm: s.bustEaseMm, waistEaseMm: s.waistEaseMm, hipEaseMm: s.hipEaseMm, dress };
-  const front = draftBodiceFront(m, { ...common, extensionMm: s.extensionMm });
+  const front = draftBodiceFront(m, { ...common, extensionMm: s.extensionMm, pocketPlacement: s.pocket });
   const back = draftBodiceBack(m, common);
   const sleeve = draftSleeve(m, {
     armholeLengthMm: edgeLength(front, ['armhole']) + edgeLength(back, ['armhole']),
