@@ -58,6 +58,8 @@ export type { StyleDraftSpec } from './blocks/draft-style';
 export { cumulativeMove, displacementFor } from './grade-rules/grade-rule';
 export type { GradeMove, GradeRule, GradeTarget } from './grade-rules/grade-rule';
 export { proposeGradeRules } from './grade-rules/propose-grade-rules';
+export { proposeRulesFromRedraft } from './grade-rules/propose-from-redraft';
+export type { RedraftStyle } from './grade-rules/propose-from-redraft';
 export { gradePiece, ungradePiece } from './grade-rules/grade-piece';
 export type { GradeIssue, GradedPiece } from './grade-rules/grade-piece';
 export { checkSeams } from './grade-rules/seam-check';

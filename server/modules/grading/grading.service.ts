@@ -176,7 +176,10 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       if (!pieces.length) {
         throw badRequest('composition: choose the blocks this style is drafted from (or a preset) on the style page first', { composition: 'Choose blocks or a preset for this style' });
       }
-      const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize);
+      // Drafted pieces grade by their blocks redrafted in every size (darts grade their intake); others by role.
+      const composition = style.composition;
+      const redraft = composition ? (m: BodyMeasurements) => draftStyle(m, { preset: composition.preset, blocks: composition.blocks as BlockSpec[] }) : undefined;
+      const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize, redraft);
       const saved = await sets.save(actor.studioId, styleId, { pieces, gradeRules: rules });
       await audit.record(actor, 'propose_grade_rules', 'grading_set', saved.id, { pieces: set.pieces.length }, { pieces: pieces.length, rules: Object.values(rules).flat().length });
       return get(actor, styleId);
