@@ -63,6 +63,7 @@ export type { RedraftStyle } from './grade-rules/propose-from-redraft';
 export { gradePiece, ungradePiece } from './grade-rules/grade-piece';
 export type { GradeIssue, GradedPiece } from './grade-rules/grade-piece';
 export { checkSeams } from './grade-rules/seam-check';
+export { SEAM_TOLERANCE_MM, proposeSeams, seamProblem } from './grade-rules/propose-seams';
 export type { SeamCheck, SeamSide, SeamSpec } from './grade-rules/seam-check';
 export { SHIRT_DRESS_SEAMS, gradeStyle } from './grade-rules/grade-style';
 export type { GradedStyle } from './grade-rules/grade-style';

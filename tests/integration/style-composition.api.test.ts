@@ -119,6 +119,42 @@ describe('a style drafted from its blocks', () => {
     expect(res.body.grading.pieces.map((p: PieceDto) => p.id)).toEqual(['front', 'back', 'sleeve', 'collar-band', 'pocket', 'belt', 'front-facing', 'back-neck-facing']);
   });
 
+  it('checks the seams proposed from a drafted composition (not the demo\'s piece names), all matching in every size', async () => {
+    const id = await newStyle('SE-1');
+    expect((await owner.put(`/api/styles/${id}/composition`).send({ composition: presetComposition('lined-fitted-dress') })).status).toBe(200);
+    const g = (await owner.post(`/api/styles/${id}/grading/propose`)).body.grading;
+    const names = [...new Set(g.seams.map((s: { seam: string }) => s.seam))];
+    expect(names).toEqual(expect.arrayContaining(['Side seam', 'Shoulder seam', 'Sleeve cap to armhole', 'Sleeve underarm', 'Side seam (lining)']));
+    expect(g.seams.every((s: { ok: boolean }) => s.ok)).toBe(true);
+    expect(g.errors).toEqual([]);
+  });
+
+  it('stores a seam the owner fixed with the style and checks that one: a wrong pairing shows as a mismatch, a missing edge as an error', async () => {
+    const id = await newStyle('SE-2');
+    const seams = [
+      { name: 'Side seam', a: [{ pieceId: 'skirt-front', edges: ['side'] }], b: [{ pieceId: 'skirt-back', edges: ['side'] }], toleranceMm: 1 },
+      { name: 'Side to waist', a: [{ pieceId: 'skirt-front', edges: ['side'] }], b: [{ pieceId: 'skirt-back', edges: ['waist'] }], toleranceMm: 1 },
+      { name: 'Yoke seam', a: [{ pieceId: 'skirt-front', edges: ['yoke'] }], b: [{ pieceId: 'skirt-back', edges: ['side'] }], toleranceMm: 1 },
+    ];
+    const put = await owner.put(`/api/styles/${id}/composition`).send({ composition: { blocks: [{ block: 'skirt', shape: 'straight' }], seams } });
+    expect(put.status).toBe(200);
+    expect(put.body.style.composition.seams).toHaveLength(3);
+    const g = (await owner.post(`/api/styles/${id}/grading/propose`)).body.grading;
+    const checks = (name: string) => g.seams.filter((s: { seam: string }) => s.seam === name);
+    expect(checks('Side seam').every((s: { ok: boolean }) => s.ok)).toBe(true);
+    expect(checks('Side to waist').some((s: { ok: boolean }) => !s.ok)).toBe(true);
+    expect(checks('Yoke seam')).toEqual([]);
+    expect(g.errors.map((e: { message: string }) => e.message)).toContain('Seam Yoke seam: Straight skirt front has no edge "yoke"');
+  });
+
+  it('answers 400 naming the seams when two seams share a name, keeping the saved composition', async () => {
+    const seam = { name: 'Side seam', a: [{ pieceId: 'front', edges: ['side'] }], b: [{ pieceId: 'back', edges: ['side'] }], toleranceMm: 1 };
+    const res = await owner.put('/api/styles/1/composition').send({ composition: { preset: 'shirt-dress', seams: [seam, seam] } });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).join()).toContain('seams');
+    expect((await owner.get('/api/styles/1')).body.style.composition.seams ?? null).toBeNull();
+  });
+
   it('answers 400 naming the block list when a composition has no blocks and no preset', async () => {
     const res = await owner.put('/api/styles/1/composition').send({ composition: { blocks: [] } });
     expect(res.status).toBe(400);
