@@ -3,7 +3,7 @@ import type { InternalLine, Piece } from '../pieces/piece';
 import { cubicBezierFlatten } from '@shared/geometry/bezier';
 import { OutlineBuilder } from '../pieces/piece';
 import { polylineSplitAt } from './drafted-piece';
-import { ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM, DRILL_INSIDE_DART_MM } from './fitted-bodice-block';
+import { ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM } from './fitted-bodice-block';
 import { squaredHemPath } from './hem-shape';
 import { DEFAULT_HEM_MM, DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
@@ -23,18 +23,6 @@ export interface BodiceOptions {
   hemMm?: number;
   /** Side-seam share of the waist suppression, at most this much per quarter (the rest goes to the dart). */
   maxSideShapingMm?: number;
-  /** Dress front only: a patch pocket's placement, its top edge `belowWaistMm` under the waist and its centre
-   * `fromCentreMm` from centre front. Marked with a placement line and a drill hole inside each top corner. */
-  pocketPlacement?: PocketPlacement;
-}
-
-/** Where a patch pocket sits on a piece (mm): its size, its centre's distance from the centre line and its top's
- * distance below the waist. */
-export interface PocketPlacement {
-  widthMm: number;
-  heightMm: number;
-  fromCentreMm: number;
-  belowWaistMm: number;
 }
 
 /** Key drafting points shared by front and back (mm, y up, waist at y = 0, centre line at x = 0). */
@@ -128,16 +116,6 @@ function dartLines(f: Frame, apexY: number, o: BodiceOptions, m: BodyMeasurement
   };
 }
 
-/** A pocket's placement line (top edge, then down the sides) and a drill hole 10 mm inside each top corner, where
- * the sewn pocket hides it (common practice, as at dart points). */
-function pocketMarks(p: PocketPlacement): { lines: InternalLine[]; drills: Point[] } {
-  const l = p.fromCentreMm - p.widthMm / 2, r = p.fromCentreMm + p.widthMm / 2, top = -p.belowWaistMm, bottom = top - p.heightMm;
-  return {
-    lines: [{ kind: 'placement', name: 'pocket', points: [{ x: l, y: bottom }, { x: l, y: top }, { x: r, y: top }, { x: r, y: bottom }] }],
-    drills: [{ x: l + DRILL_INSIDE_DART_MM, y: top - DRILL_INSIDE_DART_MM }, { x: r - DRILL_INSIDE_DART_MM, y: top - DRILL_INSIDE_DART_MM }],
-  };
-}
-
 /**
  * Front bodice (or dress front) for one size: a quarter-body half front, centre front at x = 0 (on the fold, or
  * with a button extension to x = −extensionMm), waist at y = 0, side seam at x > 0.
@@ -185,11 +163,10 @@ export function draftBodiceFront(m: BodyMeasurements, o: BodiceOptions = {}): Pi
     const leg = dartLeg(f);
     lines.push({ kind: 'dart', name: 'bust-dart', points: [leg, { x: bustPoint.x + DART_SHORT_OF_BUST_POINT_MM, y: bustPoint.y }, { x: leg.x, y: leg.y + bustDart }] });
   }
-  const pocket = o.dress && o.pocketPlacement ? pocketMarks(o.pocketPlacement) : { lines: [], drills: [] };
   return {
     id: 'front', name: o.dress ? 'Front' : 'Bodice front', role: 'front', ...b.close(),
     grainLine: { from: { x: f.dartX / 2, y: bottomY + 60 }, to: { x: f.dartX / 2, y: chestY } },
-    drillHoles: [...darts.drills, ...pocket.drills], internalLines: [...lines, ...pocket.lines], cut: ext > 0 ? 'pair' : 'fold', quantity: 1,
+    drillHoles: darts.drills, internalLines: lines, cut: ext > 0 ? 'pair' : 'fold', quantity: 1,
   };
 }
 

@@ -30,8 +30,8 @@ export type SeamInput = z.infer<typeof seamInput>;
 
 /**
  * A style's composition: the blocks its pieces are drafted from, in order (the `blocks` of `npm run pattern:draft`).
- * The shirt-dress preset keeps the demo's own drafting (collar band, patch pocket and belt are not blocks yet), so
- * its block list is empty; every other composition needs at least one block. `seams` are the seams the seam check
+ * A shirt-dress preset stored with no blocks (as styles saved before it became blocks) drafts the demo's blocks;
+ * every other composition needs at least one block. `seams` are the seams the seam check
  * measures; absent or null, they are proposed from the drafted pieces.
  */
 export const styleComposition = z
@@ -60,7 +60,18 @@ export const STYLE_PRESETS: { id: StylePresetId; name: string; description: stri
     id: 'shirt-dress',
     name: 'Shirt dress',
     description: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
-    composition: { preset: 'shirt-dress', blocks: [] },
+    composition: {
+      preset: 'shirt-dress',
+      // The demo's blocks (grading/blocks/shirt-dress.ts SHIRT_DRESS_BLOCKS; a test keeps the two equal).
+      blocks: [
+        { block: 'dress', bustEaseMm: 100, waistEaseMm: 120, hipEaseMm: 90, hemFlareMm: 60, buttonExtensionMm: 15 },
+        { block: 'shirt-sleeve', capEaseMm: 15, capHeightRatio: 0.7 },
+        { block: 'collar-band', heightMm: 30, extensionMm: 15 },
+        { block: 'pocket', kind: 'patch', widthMm: 140, heightMm: 160, hemMm: 30, fromCentreMm: 115, belowWaistMm: 90 },
+        { block: 'belt', widthMm: 35, extraMm: 300, waistEaseMm: 120 },
+        { block: 'facing', of: 'front-edge', widthMm: 60, interfaced: false },
+      ],
+    },
   },
   {
     id: 'lined-fitted-dress',
