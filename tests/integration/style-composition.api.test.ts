@@ -230,6 +230,23 @@ describe('materials of a style', () => {
     }
   });
 
+  it('prints a cut ticket for each material of the batch, and answers 400 naming the materials for one the style does not cut', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string }[];
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    const batch = (await owner.post('/api/batches').send({ styleId: lined.id, quantities: { S: 4, M: 6 }, dueDate: '2027-03-01' })).body.batch;
+    for (const material of ['self', 'lining', 'contrast', 'interfacing']) {
+      const pdf = await cutter.get(`/api/batches/${batch.id}/material-cut-ticket.pdf?material=${material}`).buffer(true);
+      expect(pdf.status, material).toBe(200);
+      expect(pdf.headers['content-type']).toMatch(/pdf/);
+      expect(pdf.headers['content-disposition']).toContain(`cut-ticket-${batch.code}-${material}.pdf`);
+      expect(String(pdf.body.subarray(0, 5))).toBe('%PDF-');
+    }
+    const bad = await owner.get(`/api/batches/${batch.id}/material-cut-ticket.pdf?material=mesh`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toMatch(/cuts no pieces from "mesh" \(it uses self, .*lining/);
+    expect((await owner.get(`/api/batches/${batch.id}/material-cut-ticket.pdf`)).status).toBe(400);
+  });
+
   it('answers 400 on fabricId when the cut is planned on a fabric no material of the style uses', async () => {
     const id = await newStyle('LF-4');
     const self = await fabric('Ponte', 1500);

@@ -19,6 +19,8 @@ import { markLayCut, recordLay } from './lay.service';
 import { layShortages } from './shortage';
 import type { LayEntity } from '../../entities';
 import { sendDownload } from '../../middleware/download';
+import { materialCutTicketInput, materialTicketQuery } from './material-cut-ticket';
+import { createGradingSetRepository } from '../grading/grading-set.repository';
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 const send = (res: Response, bytes: Buffer, type: string, name: string) => sendDownload(res, { body: bytes, type, filename: name });
@@ -94,6 +96,14 @@ export function cuttingRoutes(ds: DataSource, jobs: JobRunner, plans: CutPlanRep
     const batchId = Number(req.params.id);
     const input = await registerFor(actorOf(req).studioId, batchId);
     send(res, await jobs.run('bundle-tickets.pdf', withQr(input, batchId)), 'application/pdf', `bundle-tickets-${input.batch.code}.pdf`);
+  });
+
+  /** One material's cut ticket (self, lining, contrast…): its pieces, sizes and copies to cut. */
+  batches.get('/:id/material-cut-ticket.pdf', requirePermission('cutplans:write', 'cutting:work'), validate({ params: idParam, query: materialTicketQuery }), async (req, res) => {
+    const studioId = actorOf(req).studioId;
+    const batch = await loadBatch(studioId, Number(req.params.id));
+    const input = await materialCutTicketInput(createGradingSetRepository(ds), fabrics, await plans.studio(studioId), batch, (req.query as { material: string }).material, now());
+    send(res, await jobs.run('material-cut-ticket.pdf', input), 'application/pdf', `cut-ticket-${input.batch.code}-${input.material.replace(/[^A-Za-z0-9-]+/g, '-')}.pdf`);
   });
 
   lays.get('/', requirePermission('cutting:work'), async (req, res) => {

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
 import type { BundleDto, CreateCutPlanInput, CutPlanDto, FabricDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
+import type { StyleDto } from '@shared/schemas/styles';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 
@@ -14,6 +15,12 @@ export const fabricQueries = {
   list: () => queryOptions({ queryKey: ['fabrics', 'list'], queryFn: async () => (await api.get<{ fabrics: FabricDto[] }>('/fabrics')).fabrics }),
   detail: (id: number) =>
     queryOptions({ queryKey: ['fabrics', 'detail', id], queryFn: async () => api.get<{ fabric: FabricDto; rolls: RollDto[] }>(`/fabrics/${id}`) }),
+};
+
+/** A batch's style as the cutting screens need it (its materials); the same cache entry as the style page's. */
+export const batchStyleQueries = {
+  ofStyle: (styleId: number) =>
+    queryOptions({ queryKey: ['styles', 'detail', styleId], queryFn: async () => (await api.get<{ style: StyleDto }>(`/styles/${styleId}`)).style }),
 };
 
 export const cutPlanQueries = {
