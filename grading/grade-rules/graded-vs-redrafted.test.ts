@@ -9,6 +9,9 @@ import type { Piece } from '../pieces/piece';
 import { demoSizeChart } from '../size-charts/demo-size-chart';
 import { measurementsForSize, type PointOfMeasure, type SizeChart } from '../size-charts/size-chart';
 import { gradeStyle } from './grade-style';
+import { draftRectangle } from '../blocks/rectangle-block';
+import { gradePiece } from './grade-piece';
+import { proposeGradeRules } from './propose-grade-rules';
 import { proposeRulesFromRedraft } from './propose-from-redraft';
 
 const IN = MM_PER_INCH;
@@ -108,5 +111,28 @@ describe('graded against redrafted, on ASTM D5585-11e1 Table 1 girths', () => {
     const rules = proposeRulesFromRedraft([...pieces, { ...pieces[0], id: 'imported' }], chart, BASE, redraft);
     expect(rules.imported).toBeUndefined();
     expect(Object.keys(rules)).toEqual(pieces.map((p) => p.id));
+  });
+});
+
+describe('pieces no block drafted (an imported file)', () => {
+  it('grades in proportion to the chart: across by the ASTM bust ratio, up by the back waist length ratio, every point ruled', () => {
+    const piece = { ...draftRectangle({ id: 'yoke', name: 'Yoke', role: 'imported', widthMm: 200, heightMm: 300, cut: 'pair' }), drillHoles: [{ x: 100, y: 150 }] };
+    const rules = proposeGradeRules(piece, chart, BASE);
+    expect(rules.filter((r) => r.target.kind === 'vertex')).toHaveLength(piece.outline.length);
+    const graded = gradePiece(piece, rules, chart.sizes, BASE);
+    const bwl = chart.values['back-waist-length']!;
+    ASTM_SIZES.forEach((size, i) => {
+      const p = graded.bySize[size];
+      const at = (name: string) => p.outline[p.landmarks[name]];
+      // ASTM D5585-11e1 Table 1 bust girth [quoted]: width scales by bust(size) / bust(10).
+      expect(at('bottom-right').x - at('bottom-left').x, size).toBeCloseTo((200 * ASTM_IN.bust![i]) / ASTM_IN.bust![2], 9);
+      expect(at('top-left').y - at('bottom-left').y, size).toBeCloseTo((300 * bwl[i]) / bwl[2], 9);
+      expect(p.drillHoles[0].x).toBeCloseTo((100 * ASTM_IN.bust![i]) / ASTM_IN.bust![2], 9);
+    });
+  });
+
+  it('keeps a pocket the same in every size', () => {
+    const pocket = draftRectangle({ id: 'pocket', name: 'Pocket', role: 'pocket', widthMm: 140, heightMm: 160, cut: 'pair' });
+    expect(proposeGradeRules(pocket, chart, BASE)).toEqual([]);
   });
 });
