@@ -101,8 +101,8 @@ describe('journey: the owner grades the demo style', () => {
     const lined = styles.find((s) => s.code === 'SR-202')!;
     await page.goto(`${baseUrl()}/styles/${lined.id}`);
     const seams = page.locator('[data-testid="style-seams"]');
-    await expect.poll(() => seams.getByRole('cell', { name: 'Sleeve cap to armhole' }).count(), { timeout: 15_000 }).toBe(1);
-    expect(await seams.getByRole('cell', { name: 'Side seam (lining)' }).count()).toBe(1);
+    await expect.poll(() => seams.getByRole('cell', { name: 'Sleeve cap to armhole', exact: true }).count(), { timeout: 15_000 }).toBe(1);
+    expect(await seams.getByRole('cell', { name: 'Side seam (lining)', exact: true }).count()).toBe(1);
     // Fix the side seam: pair the front's side with the back's shoulder by mistake, save, and see the check object.
     await seams.getByRole('row', { name: /^Side seam Bodice front: side/ }).getByRole('button', { name: 'Fix' }).click();
     await seams.getByLabel('Sewn to: edge').selectOption('shoulder');
