@@ -1,6 +1,9 @@
 import type { Point } from '@shared/geometry/types';
 import type { InternalLine, Piece } from '../pieces/piece';
+import { cubicBezierFlatten } from '@shared/geometry/bezier';
 import { OutlineBuilder } from '../pieces/piece';
+import { polylineSplitAt } from './drafted-piece';
+import { ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM } from './fitted-bodice-block';
 import { squaredHemPath } from './hem-shape';
 import { DEFAULT_HEM_MM, DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
@@ -67,13 +70,21 @@ function dartLeg(f: Frame): Point {
   return { x: f.sideWaistX + (f.quarterBust - f.sideWaistX) * t, y: f.underarmY - 60 };
 }
 
-/** Armhole from underarm up through the across point to the shoulder point (two cubics). */
-function armhole(b: OutlineBuilder, ua: Point, across: Point, sp: Point, hps: Point): void {
-  b.cubic({ x: ua.x - 0.5 * (ua.x - across.x), y: ua.y }, { x: across.x, y: across.y - 0.5 * (across.y - ua.y) }, across, 'across');
+/**
+ * Armhole from underarm up through the across point to the shoulder point (two cubics), split at the armhole notch
+ * distances from the underarm (single front, double back; the sleeve cap carries the same, so they match).
+ */
+function armhole(b: OutlineBuilder, ua: Point, across: Point, sp: Point, hps: Point, notchesMm: readonly number[]): void {
+  const lower = cubicBezierFlatten(ua, { x: ua.x - 0.5 * (ua.x - across.x), y: ua.y }, { x: across.x, y: across.y - 0.5 * (across.y - ua.y) }, across, b.toleranceMm);
   const len = Math.hypot(sp.x - hps.x, sp.y - hps.y);
   const u = { x: (sp.x - hps.x) / len, y: (sp.y - hps.y) / len };
   const k = 0.3 * (sp.y - across.y);
-  b.cubic({ x: across.x, y: across.y + 0.4 * (sp.y - across.y) }, { x: sp.x + u.y * k, y: sp.y - u.x * k }, sp, 'shoulder');
+  const upper = cubicBezierFlatten(across, { x: across.x, y: across.y + 0.4 * (sp.y - across.y) }, { x: sp.x + u.y * k, y: sp.y - u.x * k }, sp, b.toleranceMm);
+  const split = polylineSplitAt([...lower, ...upper.slice(1)], notchesMm);
+  const acrossAt = split.points.findIndex((p) => p.x === across.x && p.y === across.y);
+  const base = b.points.length - 1;
+  split.points.slice(1).forEach((p, i) => b.line(p, i + 1 === acrossAt ? 'across' : i + 2 === split.points.length ? 'shoulder' : undefined));
+  for (const i of split.indices) b.notches.push(base + i);
 }
 
 /** Dress hem from the current point (centre front or back at hem level) to the side, squared to the flared side seam. */
@@ -138,7 +149,7 @@ export function draftBodiceFront(m: BodyMeasurements, o: BodiceOptions = {}): Pi
   } else sideSeam(b, f, m, o, seam);
   b.line(ua, 'underarm');
   b.edge('armhole', { allowanceMm: seam });
-  armhole(b, ua, across, sp, hps);
+  armhole(b, ua, across, sp, hps, [ARMHOLE_NOTCH_FRONT_MM]);
   b.edge('shoulder', { allowanceMm: seam }).line(hps, 'hps');
   b.edge('neckline', { allowanceMm: seam }).cubic({ x: hps.x, y: hps.y - 0.55 * (hps.y - cfNeckY) }, { x: 0.55 * hps.x, y: cfNeckY }, { x: 0, y: cfNeckY }, 'cf-neck');
   if (ext > 0) b.edge('neck-extension', { allowanceMm: seam }).line({ x: -ext, y: cfNeckY }, 'cf-neck-ext');
@@ -181,7 +192,7 @@ export function draftBodiceBack(m: BodyMeasurements, o: BodiceOptions = {}): Pie
   sideSeam(b, f, m, { ...o, bustDartMm: 0 }, seam);
   b.line(ua, 'underarm');
   b.edge('armhole', { allowanceMm: seam });
-  armhole(b, ua, across, sp, hps);
+  armhole(b, ua, across, sp, hps, ARMHOLE_NOTCH_BACK_MM);
   b.edge('shoulder', { allowanceMm: seam }).line(hps, 'hps');
   b.edge('neckline', { allowanceMm: seam }).cubic({ x: hps.x, y: hps.y - 0.6 * BACK_NECK_DEPTH_MM }, { x: 0.5 * hps.x, y: cbNeckY }, { x: 0, y: cbNeckY }, 'cb-neck');
   b.edge('cb-fold', { allowanceMm: 0, isFold: true }).line({ x: 0, y: bottomY });

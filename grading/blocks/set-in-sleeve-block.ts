@@ -65,7 +65,7 @@ export function solveHalfBicep(lengthMm: number, h: number, side: 'front' | 'bac
  * solved to its armhole half plus its own ease, so the cap measures armhole + ease within 0.01 mm and front and
  * back differ. Notches: single front at 3 in and double back at 3½ and 3¾ in along the cap from the underarm (as
  * on the bodice armhole: no ease below the notches), and one at the crown for the shoulder seam.
- * Edges: hem, underarm (back), cap, underarm (front). Cut as a pair. Throws RangeError when the bicep leaves less
+ * Edges: hem, underarm-back, cap, underarm-front (sewn to each other). Cut as a pair. Throws RangeError when the bicep leaves less
  * than 25 mm ease over the upper arm (lower the cap height) or a measurement is missing.
  */
 export function draftSetInSleeve(m: BodyMeasurements, o: SetInSleeveOptions): Piece & { bicepMm: number } {
@@ -88,7 +88,7 @@ export function draftSetInSleeve(m: BodyMeasurements, o: SetInSleeveOptions): Pi
   const hemL = { x: shift - hemWidth / 2, y: -under }, hemR = { x: shift + hemWidth / 2, y: -under };
   const b = new OutlineBuilder(hemL, 'hem-front');
   b.edge('hem', { allowanceMm: o.hemMm ?? (kind === 'long' ? 2 * IN : IN) }).line(hemR, 'hem-back');
-  b.edge('underarm', { allowanceMm: seam }).line({ x: wb, y: 0 }, 'underarm-back');
+  b.edge('underarm-back', { allowanceMm: seam }).line({ x: wb, y: 0 }, 'underarm-back');
   b.edge('cap', { allowanceMm: seam });
   const back = polylineSplitAt(capPoints(halfCap(wb, h, 'back')), ARMHOLE_NOTCH_BACK_MM);
   addRun(b, back.points, back.indices);
@@ -98,7 +98,7 @@ export function draftSetInSleeve(m: BodyMeasurements, o: SetInSleeveOptions): Pi
   const front = polylineSplitAt(frontPts, [polylineLength(frontPts) - ARMHOLE_NOTCH_FRONT_MM]);
   addRun(b, front.points, front.indices);
   b.landmarks['underarm-front'] = b.points.length - 1;
-  b.edge('underarm', { allowanceMm: seam }).line(hemL);
+  b.edge('underarm-front', { allowanceMm: seam }).line(hemL);
   return {
     id: 'sleeve', name: 'Sleeve', role: 'sleeve', ...b.close(),
     grainLine: { from: { x: 0, y: -under + 40 }, to: { x: 0, y: h - 40 } },

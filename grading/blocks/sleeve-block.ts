@@ -3,6 +3,8 @@ import { polylineLength } from '@shared/geometry/polyline';
 import { cubicBezierFlatten, CURVE_TOLERANCE_MM } from '@shared/geometry/bezier';
 import type { Piece } from '../pieces/piece';
 import { OutlineBuilder } from '../pieces/piece';
+import { polylineSplitAt } from './drafted-piece';
+import { ARMHOLE_NOTCH_BACK_MM, ARMHOLE_NOTCH_FRONT_MM } from './fitted-bodice-block';
 import { DEFAULT_SEAM_MM, need, type BodyMeasurements } from './measure-input';
 
 /** Options for {@link draftSleeve} (mm). */
@@ -46,7 +48,9 @@ export function solveBicepForCap(capLengthMm: number, capHeightMm: number): numb
  * Set-in sleeve whose cap equals armhole + capEase (default 15 mm) within 0.1 mm: the cap height is given and the
  * bicep width is solved. Crown at (0, h), underarm line y = 0, back half at x > 0. Throws RangeError if the
  * solved bicep leaves less than 25 mm ease over the upper arm (common practice minimum wearing ease).
- * Landmarks: hem-front, hem-back, underarm-back, cap-top, underarm-front.
+ * Notches: a double back notch and a single front notch at the bodice armhole's notch distances from the underarm
+ * (so they meet the armhole's), and one at the crown. Landmarks: hem-front, hem-back, underarm-back, cap-top,
+ * underarm-front.
  */
 export function draftSleeve(m: BodyMeasurements, o: SleeveOptions): Piece & { bicepMm: number } {
   const capEase = o.capEaseMm ?? 15;
@@ -59,13 +63,26 @@ export function draftSleeve(m: BodyMeasurements, o: SleeveOptions): Piece & { bi
   b.edge('hem', { allowanceMm: o.hemMm ?? 25 }).line({ x: hemHalf, y: -len }, 'hem-back');
   b.edge('underarm-back', { allowanceMm: seam }).line({ x: bicep / 2, y: 0 }, 'underarm-back');
   const back = halfCap(bicep / 2, o.capHeightMm, 1);
-  b.edge('cap-back', { allowanceMm: seam }).cubic(back[1], back[2], back[3], 'cap-top').notch();
+  b.edge('cap-back', { allowanceMm: seam });
+  addNotchedRun(b, polylineSplitAt(cubicBezierFlatten(back[0], back[1], back[2], back[3]), ARMHOLE_NOTCH_BACK_MM));
+  b.landmarks['cap-top'] = b.points.length - 1;
+  b.notch();
   const front = halfCap(bicep / 2, o.capHeightMm, -1);
-  b.edge('cap-front', { allowanceMm: seam }).cubic(front[2], front[1], front[0], 'underarm-front');
+  const frontPts = cubicBezierFlatten(front[3], front[2], front[1], front[0]);
+  b.edge('cap-front', { allowanceMm: seam });
+  addNotchedRun(b, polylineSplitAt(frontPts, [polylineLength(frontPts) - ARMHOLE_NOTCH_FRONT_MM]));
+  b.landmarks['underarm-front'] = b.points.length - 1;
   b.edge('underarm-front', { allowanceMm: seam }).line({ x: -hemHalf, y: -len });
   return {
     id: 'sleeve', name: 'Sleeve', role: 'sleeve', ...b.close(),
     grainLine: { from: { x: 0, y: -len + 20 }, to: { x: 0, y: o.capHeightMm - 30 } },
     drillHoles: [], internalLines: [], cut: 'pair', quantity: 1, bicepMm: bicep,
   };
+}
+
+/** Append a split polyline (its first point is the current point), notching the split vertices. */
+function addNotchedRun(b: OutlineBuilder, run: { points: Point[]; indices: number[] }): void {
+  const base = b.points.length - 1;
+  run.points.slice(1).forEach((p) => b.line(p));
+  for (const k of run.indices) b.notches.push(base + k);
 }

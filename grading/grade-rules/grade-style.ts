@@ -4,6 +4,7 @@ import { sizeIndex, type SizeChart } from '../size-charts/size-chart';
 import { gradePiece, type GradedPiece, type GradeIssue } from './grade-piece';
 import type { GradeMove, GradeRule } from './grade-rule';
 import { proposeGradeRules } from './propose-grade-rules';
+import { proposeRulesFromRedraft, type RedraftStyle } from './propose-from-redraft';
 import type { SeamSpec } from './seam-check';
 import { SHIRT_DRESS_STYLE } from '../blocks/shirt-dress';
 
@@ -32,19 +33,23 @@ export interface GradedStyle {
 }
 
 /**
- * Grade a style's pieces over a chart's run: rules proposed per piece, then trued against their mates, as a
- * cutter trues a graded set: the collar band's neckline is set to the graded half neckline (front + back), and
- * the sleeve bicep steps are solved (bisection) so that cap − armhole keeps the base size's ease in every size.
+ * Grade a style's pieces over a chart's run. With `redraft` (the style's blocks drafted from one size's
+ * measurements), every piece the blocks draft takes its rules from the blocks redrafted in each size (see
+ * proposeRulesFromRedraft: darts grade their intake, sleeves their cap); other pieces (an imported file) take the
+ * rules proposed by role from the chart's grades, trued against their mates as a cutter trues a graded set: the
+ * collar band's neckline is set to the graded half neckline (front + back), and the sleeve bicep steps are solved
+ * (bisection) so that cap − armhole keeps the base size's ease in every size.
  */
-export function gradeStyle(pieces: readonly Piece[], chart: SizeChart, baseSize: string): GradedStyle {
+export function gradeStyle(pieces: readonly Piece[], chart: SizeChart, baseSize: string, redraft?: RedraftStyle): GradedStyle {
   sizeIndex(chart, baseSize);
   const sizes = chart.sizes;
+  const fromBlocks = redraft ? proposeRulesFromRedraft(pieces, chart, baseSize, redraft) : {};
   const rules: Record<string, GradeRule[]> = {};
   const graded: Record<string, GradedPiece> = {};
-  for (const p of pieces) rules[p.id] = proposeGradeRules(p, chart, baseSize);
+  for (const p of pieces) rules[p.id] = fromBlocks[p.id] ?? proposeGradeRules(p, chart, baseSize);
   for (const p of pieces) graded[p.id] = gradePiece(p, rules[p.id], sizes, baseSize);
   const front = graded.front, back = graded.back;
-  const byId = Object.fromEntries(pieces.map((p) => [p.id, p]));
+  const byId = Object.fromEntries(pieces.filter((p) => !fromBlocks[p.id]).map((p) => [p.id, p]));
   if (front && back) {
     const halfNeck = sizes.map((s) => edgeLength(front.bySize[s], ['neckline']) + edgeLength(back.bySize[s], ['neckline']));
     const armhole = sizes.map((s) => edgeLength(front.bySize[s], ['armhole']) + edgeLength(back.bySize[s], ['armhole']));

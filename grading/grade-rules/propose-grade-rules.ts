@@ -90,14 +90,51 @@ function featureRules(piece: Piece, g: G): Record<string, GradeMove> {
   return out;
 }
 
+/** Roles that keep their size in every size (a pocket is cut the same for the whole run). */
+const UNGRADED_ROLES = new Set(['pocket']);
+
+/**
+ * Proportional rules for a piece of a role the tables do not know (an imported file's pieces): every outline point,
+ * drill hole, internal line point and the grain line moves away from the piece's lower-left corner in proportion to
+ * the chart: across by the bust girth's ratio to the base size, up by the back waist length's (the bust's when the
+ * chart lacks it). Edge starts are labelled `<edge> start`, landmarks by name. Empty when the chart has no bust row.
+ */
+function proportionalRules(piece: Piece, chart: SizeChart, baseSize: string): GradeRule[] {
+  const across = chart.values.bust ?? chart.values.waist ?? chart.values.hip;
+  if (!across) return [];
+  const up = chart.values['back-waist-length'] ?? across;
+  const b = sizeIndex(chart, baseSize);
+  const minX = Math.min(...piece.outline.map((p) => p.x)), minY = Math.min(...piece.outline.map((p) => p.y));
+  const steps = (p: { x: number; y: number }): GradeMove[] =>
+    chart.sizes.slice(1).map((_, i) => ({ dx: ((p.x - minX) * (across[i + 1] - across[i])) / across[b], dy: ((p.y - minY) * (up[i + 1] - up[i])) / up[b] }));
+  const label = new Map<number, string>();
+  piece.edges.forEach((e) => label.set(e.from, `${e.name} start`));
+  for (const [name, i] of Object.entries(piece.landmarks)) label.set(i, name);
+  const rules: GradeRule[] = piece.outline.map((p, index) => ({ target: { kind: 'vertex' as const, index }, ...(label.has(index) ? { landmark: label.get(index) } : {}), steps: steps(p) }));
+  piece.drillHoles.forEach((p, i) => rules.push({ target: { kind: 'feature', key: `drill:${i}` }, steps: steps(p) }));
+  const seen = new Set<string>();
+  for (const line of piece.internalLines) {
+    line.points.forEach((p, j) => {
+      const key = `line:${line.name}:${j}`;
+      if (seen.has(key)) return;
+      seen.add(key);
+      rules.push({ target: { kind: 'feature', key }, steps: steps(p) });
+    });
+  }
+  rules.push({ target: { kind: 'feature', key: 'grain:from' }, steps: steps(piece.grainLine.from) }, { target: { kind: 'feature', key: 'grain:to' }, steps: steps(piece.grainLine.to) });
+  return rules;
+}
+
 /**
  * Propose grade rules for a piece from a size chart's per-step grades (break points come for free: each step
  * uses that step's grade). Rules sit on the piece's named landmarks, chosen by `piece.role`
- * (front, back, their facings, sleeve, collar-band, belt, skirt-front/back); unknown roles and pockets get no
- * rules (they do not grade). Missing chart rows grade by 0. Throws RangeError if baseSize is not in the chart.
+ * (front, back, their facings, sleeve, collar-band, belt, skirt-front/back); pockets get no rules (they do not
+ * grade); any other role grades in proportion to the chart (see proportionalRules). Missing chart rows grade by 0.
+ * Throws RangeError if baseSize is not in the chart.
  */
 export function proposeGradeRules(piece: Piece, chart: SizeChart, baseSize: string): GradeRule[] {
   sizeIndex(chart, baseSize);
+  if (!TABLES[piece.role] && !UNGRADED_ROLES.has(piece.role)) return proportionalRules(piece, chart, baseSize);
   const grades = computeGrades(chart);
   const table = TABLES[piece.role] ?? {};
   const steps = chart.sizes.length - 1;

@@ -29,9 +29,9 @@ export class StyleEntity {
   @Column({ type: 'varchar', length: 16, default: 'draft' })
   status: 'draft' | 'sampling' | 'approved' | 'archived';
 
-  /** Blocks the pieces are drafted from ({ preset, blocks }, shared/schemas/style-composition); null = not chosen yet. */
+  /** Blocks the pieces are drafted from and the seams checked ({ preset, blocks, seams? }, shared/schemas/style-composition); null = not chosen yet. */
   @Column({ type: 'simple-json', nullable: true })
-  composition: { preset: string | null; blocks: unknown[] } | null;
+  composition: { preset: string | null; blocks: unknown[]; seams?: unknown[] | null } | null;
 
   /** Fabric id per material of the style ({ self: 3, lining: 5 }); null = none linked (every piece on any fabric). */
   @Column({ type: 'simple-json', nullable: true })

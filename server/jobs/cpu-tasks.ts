@@ -1,5 +1,6 @@
 import { buildBundleTicketsPdf } from '@exports/pdf/bundle-tickets.pdf';
 import { buildCutTicketPdf } from '@exports/pdf/cut-ticket.pdf';
+import { buildMaterialCutTicketPdf } from '@exports/pdf/material-cut-ticket.pdf';
 import { buildMarkerListPdf } from '@exports/pdf/marker-list.pdf';
 import { buildMarkerPlotPdf } from '@exports/pdf/marker-plot.pdf';
 import { readPatternFile, type PatternUnit } from '@exports/import/index';
@@ -26,6 +27,7 @@ export const CPU_TASKS = {
   'marker-list.pdf': async (input: Parameters<typeof buildMarkerListPdf>[0]) => Buffer.from(await buildMarkerListPdf(input)),
   'marker-plot.pdf': async (input: Parameters<typeof buildMarkerPlotPdf>[0]) => Buffer.from(await buildMarkerPlotPdf(input)),
   'cut-ticket.pdf': async (input: Parameters<typeof buildCutTicketPdf>[0]) => Buffer.from(await buildCutTicketPdf(input)),
+  'material-cut-ticket.pdf': async (input: Parameters<typeof buildMaterialCutTicketPdf>[0]) => Buffer.from(await buildMaterialCutTicketPdf(input)),
   'bundle-register.xlsx': async (input: Parameters<typeof buildBundleRegisterXlsx>[0]) => Buffer.from(await buildBundleRegisterXlsx(input)),
   'bundle-tickets.pdf': async (input: Parameters<typeof buildBundleTicketsPdf>[0]) => Buffer.from(await buildBundleTicketsPdf(input)),
   'costing-sheet.xlsx': async (input: Parameters<typeof buildCostingSheetXlsx>[0]) => Buffer.from(await buildCostingSheetXlsx(input)),

@@ -23,7 +23,7 @@ export function demoGrading(baseSize = 'M'): { pieces: Piece[]; rules: Record<st
   if (cached) return cached;
   const chart = demoSizeChart();
   const pieces = draftShirtDress(measurementsForSize(chart, baseSize) as BodyMeasurements);
-  cached = { pieces, rules: gradeStyle(pieces, chart, baseSize).rules };
+  cached = { pieces, rules: gradeStyle(pieces, chart, baseSize, (m) => draftShirtDress(m)).rules };
   return cached;
 }
 

@@ -49,7 +49,7 @@ export function linedDressGrading(): { pieces: DraftedPiece[]; rules: Record<str
   const chart = demoSizeChart();
   const c = presetComposition('lined-fitted-dress');
   const pieces = draftStyle(measurementsForSize(chart, LINED_DRESS_STYLE.baseSize) as BodyMeasurements, { preset: c.preset, blocks: c.blocks as BlockSpec[] });
-  cached = { pieces, rules: gradeStyle(pieces, chart, LINED_DRESS_STYLE.baseSize).rules };
+  cached = { pieces, rules: gradeStyle(pieces, chart, LINED_DRESS_STYLE.baseSize, (m) => draftStyle(m, { preset: c.preset, blocks: c.blocks as BlockSpec[] })).rules };
   return cached;
 }
 

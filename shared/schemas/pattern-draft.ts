@@ -44,8 +44,35 @@ const peplum = z.object({
   lengthMm: mm.optional(), waistEaseMm: ease.optional(), fraction, cut: ringCut, openingAllowanceMm: mmOrZero.optional(), cornerRadiusMm: mmOrZero.optional(), ...seams,
 }).strict();
 
+const dress = z.object({
+  block: z.literal('dress'), bustEaseMm: ease.optional(), waistEaseMm: ease.optional(), hipEaseMm: ease.optional(), lengthMm: mm.optional(),
+  hemFlareMm: mmOrZero.optional(), buttonExtensionMm: mmOrZero.optional(), ...seams,
+}).strict();
+
+const shirtSleeve = z.object({
+  block: z.literal('shirt-sleeve'), capEaseMm: ease.optional(), capHeightRatio: z.number().finite().gt(0, 'Must be more than 0').max(1.5).optional(),
+  underarmLengthMm: mm.optional(), hemTaperMm: mmOrZero.optional(), ...seams,
+}).strict();
+
+const band = { heightMm: mm.optional(), extensionMm: mmOrZero.optional(), seamMm: mmOrZero.optional(), material };
+const collarBand = z.object({ block: z.literal('collar-band'), ...band }).strict();
+const collar = z.object({
+  block: z.literal('collar'), ...band,
+  collar: z.object({ widthMm: mm.optional(), pointMm: mmOrZero.optional(), seamMm: mmOrZero.optional() }).strict().optional(),
+}).strict();
+
+const pocket = z.object({
+  block: z.literal('pocket'), kind: z.enum(['patch', 'in-seam']).optional(), widthMm: mm.optional(), heightMm: mm.optional(), hemMm: mmOrZero.optional(),
+  fromCentreMm: mmOrZero.optional(), belowWaistMm: mmOrZero.optional(), openingMm: mm.optional(), depthBelowMm: mmOrZero.optional(),
+  seamMm: mmOrZero.optional(), material,
+}).strict();
+
+const belt = z.object({
+  block: z.literal('belt'), widthMm: mm.optional(), extraMm: mmOrZero.optional(), waistEaseMm: ease.optional(), seamMm: mmOrZero.optional(), material,
+}).strict();
+
 const facing = z.object({
-  block: z.literal('facing'), of: z.enum(['neckline', 'armhole']).optional(), widthMm: mm.optional(), interfaced: z.boolean().optional(), material,
+  block: z.literal('facing'), of: z.enum(['neckline', 'armhole', 'front-edge']).optional(), widthMm: mm.optional(), interfaced: z.boolean().optional(), material,
 }).strict();
 
 const waistband = z.object({
@@ -53,8 +80,8 @@ const waistband = z.object({
 }).strict();
 
 /** One block and its options (every option has a default in the grading core). */
-export const blockSpecInput = z.discriminatedUnion('block', [bodice, skirt, sleeve, peplum, facing, waistband], {
-  error: 'Choose a block: bodice, skirt, sleeve, peplum, facing or waistband',
+export const blockSpecInput = z.discriminatedUnion('block', [bodice, dress, skirt, sleeve, shirtSleeve, peplum, facing, waistband, collarBand, collar, pocket, belt], {
+  error: 'Choose a block: bodice, dress, skirt, sleeve, shirt-sleeve, peplum, facing, waistband, collar-band, collar, pocket or belt',
 });
 
 /**

@@ -12,18 +12,37 @@ export type StylePresetId = (typeof STYLE_PRESET_IDS)[number];
 export const STANDARD_MATERIALS = ['self', 'lining', 'contrast', 'interfacing'] as const;
 const materialName = z.string().trim().min(1, 'Name the material').max(40, 'At most 40 characters').regex(/^[A-Za-z0-9 -]+$/, 'Letters, digits, spaces and - only');
 
+const seamSide = z.object({
+  pieceId: z.string().trim().min(1, 'Choose a piece').max(80),
+  edges: z.array(z.string().trim().min(1, 'Choose an edge').max(40)).min(1, 'Choose at least one edge').max(10),
+}).strict();
+
+/** One seam of a style: the edges sewn together (each side may join edges of several pieces), the intended length
+ * difference (second side minus first, e.g. a sleeve cap's ease) and the tolerance, in mm. */
+export const seamInput = z.object({
+  name: z.string().trim().min(1, 'Name the seam').max(80, 'At most 80 characters'),
+  a: z.array(seamSide).min(1, 'Choose the first side').max(4),
+  b: z.array(seamSide).min(1, 'Choose the second side').max(4),
+  easeMm: z.number({ error: 'Give a length in mm' }).finite().min(-200, 'At least -200 mm').max(200, 'At most 200 mm').optional(),
+  toleranceMm: z.number({ error: 'Give a length in mm' }).finite().min(0, 'Cannot be negative').max(50, 'At most 50 mm'),
+}).strict();
+export type SeamInput = z.infer<typeof seamInput>;
+
 /**
  * A style's composition: the blocks its pieces are drafted from, in order (the `blocks` of `npm run pattern:draft`).
- * The shirt-dress preset keeps the demo's own drafting (collar band, patch pocket and belt are not blocks yet), so
- * its block list is empty; every other composition needs at least one block.
+ * A shirt-dress preset stored with no blocks (as styles saved before it became blocks) drafts the demo's blocks;
+ * every other composition needs at least one block. `seams` are the seams the seam check
+ * measures; absent or null, they are proposed from the drafted pieces.
  */
 export const styleComposition = z
   .object({
     preset: z.enum(STYLE_PRESET_IDS).nullable().default(null),
     blocks: z.array(blockSpecInput).max(40, 'At most 40 blocks').default([]),
+    seams: z.array(seamInput).max(80, 'At most 80 seams').nullable().optional(),
   })
   .strict()
-  .refine((c) => c.preset === 'shirt-dress' || c.blocks.length > 0, { message: 'Choose at least one block or a preset', path: ['blocks'] });
+  .refine((c) => c.preset === 'shirt-dress' || c.blocks.length > 0, { message: 'Choose at least one block or a preset', path: ['blocks'] })
+  .refine((c) => !c.seams || new Set(c.seams.map((s) => s.name)).size === c.seams.length, { message: 'Give every seam its own name', path: ['seams'] });
 export type StyleComposition = z.infer<typeof styleComposition>;
 export type BlockSpecInput = z.infer<typeof blockSpecInput>;
 
@@ -41,7 +60,18 @@ export const STYLE_PRESETS: { id: StylePresetId; name: string; description: stri
     id: 'shirt-dress',
     name: 'Shirt dress',
     description: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
-    composition: { preset: 'shirt-dress', blocks: [] },
+    composition: {
+      preset: 'shirt-dress',
+      // The demo's blocks (grading/blocks/shirt-dress.ts SHIRT_DRESS_BLOCKS; a test keeps the two equal).
+      blocks: [
+        { block: 'dress', bustEaseMm: 100, waistEaseMm: 120, hipEaseMm: 90, hemFlareMm: 60, buttonExtensionMm: 15 },
+        { block: 'shirt-sleeve', capEaseMm: 15, capHeightRatio: 0.7 },
+        { block: 'collar-band', heightMm: 30, extensionMm: 15 },
+        { block: 'pocket', kind: 'patch', widthMm: 140, heightMm: 160, hemMm: 30, fromCentreMm: 115, belowWaistMm: 90 },
+        { block: 'belt', widthMm: 35, extraMm: 300, waistEaseMm: 120 },
+        { block: 'facing', of: 'front-edge', widthMm: 60, interfaced: false },
+      ],
+    },
   },
   {
     id: 'lined-fitted-dress',

@@ -93,4 +93,28 @@ describe('journey: the owner grades the demo style', () => {
     await shot(page, 'style-blocks-lined-dress');
     await page.close();
   });
+
+  it('lists the lined dress\'s seams on its style page and lets the owner fix one, which Pattern & grading then checks', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, 'owner@tamarind.example');
+    const styles = await page.evaluate(async () => (await (await fetch('/api/styles')).json()).styles as { id: number; code: string }[]);
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    await page.goto(`${baseUrl()}/styles/${lined.id}`);
+    const seams = page.locator('[data-testid="style-seams"]');
+    await expect.poll(() => seams.getByRole('cell', { name: 'Sleeve cap to armhole', exact: true }).count(), { timeout: 15_000 }).toBe(1);
+    expect(await seams.getByRole('cell', { name: 'Side seam (lining)', exact: true }).count()).toBe(1);
+    // Fix the side seam: pair the front's side with the back's shoulder by mistake, save, and see the check object.
+    await seams.getByRole('row', { name: /^Side seam Bodice front: side/ }).getByRole('button', { name: 'Fix' }).click();
+    await seams.getByLabel('Sewn to: edge').selectOption('shoulder');
+    await seams.getByRole('button', { name: 'Save seams' }).click();
+    await expect.poll(() => seams.getByText('Seams saved.').count(), { timeout: 10_000 }).toBe(1);
+    await shot(page, 'style-seams-fixed');
+    await page.goto(`${baseUrl()}/styles/${lined.id}/grading`);
+    await expect.poll(() => page.locator('[data-testid="seam-report"] tr', { hasText: 'Side seam' }).first().getByText('error').count(), { timeout: 15_000 }).toBeGreaterThan(0);
+    // Put the proposed seams back (the e2e server is shared by every file).
+    await page.goto(`${baseUrl()}/styles/${lined.id}`);
+    await page.locator('[data-testid="style-seams"]').getByRole('button', { name: 'Use the proposed seams again' }).click();
+    await expect.poll(async () => (await page.evaluate(async (id) => (await (await fetch(`/api/styles/${id}`)).json()).style.composition.seams ?? null, lined.id)), { timeout: 10_000 }).toBeNull();
+    await page.close();
+  });
 });

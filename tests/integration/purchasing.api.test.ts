@@ -69,6 +69,24 @@ describe('suppliers and purchase orders', () => {
     expect(messages[0].text).toContain('Shirt buttons 11 mm, 4-hole: 250 pcs');
   });
 
+  it('orders every fabric of a lined style, lining, contrast and interfacing too, each from its costing line', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string; materialFabrics: Record<string, number> }[];
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    const batch = (await owner.post('/api/batches').send({ styleId: lined.id, quantities: { S: 10, M: 20, L: 10 }, dueDate: '2027-04-01' })).body.batch;
+    const { needs } = (await owner.get(`/api/purchasing/batches/${batch.id}/needs`)).body as { needs: { kind: string; refId: number; required: number; toOrder: number; inStock: number; onOrder: number; supplierId: number | null }[] };
+    const fabrics = needs.filter((n) => n.kind === 'fabric');
+    expect(fabrics.map((n) => n.refId).sort()).toEqual([...new Set(Object.values(lined.materialFabrics))].sort());
+    const sheet = (await owner.get(`/api/batches/${batch.id}/costing`)).body.costing as { lines: { kind: string; refId: number; quantities: Record<string, number> }[] };
+    const lining = sheet.lines.find((l) => l.kind === 'fabric' && l.refId === lined.materialFabrics.lining)!;
+    const liningMm = 1000 * (10 * lining.quantities.S + 20 * lining.quantities.M + 10 * lining.quantities.L);
+    expect(fabrics.find((n) => n.refId === lined.materialFabrics.lining)!.required).toBe(Math.ceil(liningMm - 1e-6));
+    for (const n of fabrics) expect(n.toOrder).toBe(Math.max(0, Math.ceil((n.required - n.inStock - n.onOrder) / 100) * 100));
+    const made = await owner.post(`/api/purchasing/batches/${batch.id}/orders`).send({});
+    expect(made.status).toBe(201);
+    const ordered = (made.body.orders as { lines: { kind: string; refId: number; quantity: number }[] }[]).flatMap((o) => o.lines).filter((l) => l.kind === 'fabric');
+    for (const n of fabrics.filter((x) => x.supplierId && x.toOrder > 0)) expect(ordered.find((l) => l.refId === n.refId)?.quantity).toBe(n.toOrder);
+  });
+
   it('receives a fabric order into stock as rolls, and trims into the trim stock', async () => {
     const { items } = (await owner.get('/api/purchasing/items')).body;
     const fabric = items.find((i: { kind: string }) => i.kind === 'fabric');

@@ -121,6 +121,42 @@ describe('a style drafted from its blocks', () => {
     expect(res.body.grading.pieces.map((p: PieceDto) => p.id)).toEqual(['front', 'back', 'sleeve', 'collar-band', 'pocket', 'belt', 'front-facing', 'back-neck-facing']);
   });
 
+  it('checks the seams proposed from a drafted composition (not the demo\'s piece names), all matching in every size', async () => {
+    const id = await newStyle('SE-1');
+    expect((await owner.put(`/api/styles/${id}/composition`).send({ composition: presetComposition('lined-fitted-dress') })).status).toBe(200);
+    const g = (await owner.post(`/api/styles/${id}/grading/propose`)).body.grading;
+    const names = [...new Set(g.seams.map((s: { seam: string }) => s.seam))];
+    expect(names).toEqual(expect.arrayContaining(['Side seam', 'Shoulder seam', 'Sleeve cap to armhole', 'Sleeve underarm', 'Side seam (lining)']));
+    expect(g.seams.every((s: { ok: boolean }) => s.ok)).toBe(true);
+    expect(g.errors).toEqual([]);
+  });
+
+  it('stores a seam the owner fixed with the style and checks that one: a wrong pairing shows as a mismatch, a missing edge as an error', async () => {
+    const id = await newStyle('SE-2');
+    const seams = [
+      { name: 'Side seam', a: [{ pieceId: 'skirt-front', edges: ['side'] }], b: [{ pieceId: 'skirt-back', edges: ['side'] }], toleranceMm: 1 },
+      { name: 'Side to waist', a: [{ pieceId: 'skirt-front', edges: ['side'] }], b: [{ pieceId: 'skirt-back', edges: ['waist'] }], toleranceMm: 1 },
+      { name: 'Yoke seam', a: [{ pieceId: 'skirt-front', edges: ['yoke'] }], b: [{ pieceId: 'skirt-back', edges: ['side'] }], toleranceMm: 1 },
+    ];
+    const put = await owner.put(`/api/styles/${id}/composition`).send({ composition: { blocks: [{ block: 'skirt', shape: 'straight' }], seams } });
+    expect(put.status).toBe(200);
+    expect(put.body.style.composition.seams).toHaveLength(3);
+    const g = (await owner.post(`/api/styles/${id}/grading/propose`)).body.grading;
+    const checks = (name: string) => g.seams.filter((s: { seam: string }) => s.seam === name);
+    expect(checks('Side seam').every((s: { ok: boolean }) => s.ok)).toBe(true);
+    expect(checks('Side to waist').some((s: { ok: boolean }) => !s.ok)).toBe(true);
+    expect(checks('Yoke seam')).toEqual([]);
+    expect(g.errors.map((e: { message: string }) => e.message)).toContain('Seam Yoke seam: Straight skirt front has no edge "yoke"');
+  });
+
+  it('answers 400 naming the seams when two seams share a name, keeping the saved composition', async () => {
+    const seam = { name: 'Side seam', a: [{ pieceId: 'front', edges: ['side'] }], b: [{ pieceId: 'back', edges: ['side'] }], toleranceMm: 1 };
+    const res = await owner.put('/api/styles/1/composition').send({ composition: { preset: 'shirt-dress', seams: [seam, seam] } });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).join()).toContain('seams');
+    expect((await owner.get('/api/styles/1')).body.style.composition.seams ?? null).toBeNull();
+  });
+
   it('answers 400 naming the block list when a composition has no blocks and no preset', async () => {
     const res = await owner.put('/api/styles/1/composition').send({ composition: { blocks: [] } });
     expect(res.status).toBe(400);
@@ -194,6 +230,23 @@ describe('materials of a style', () => {
       expect(l.markerLengthMm).toBeLessThan(1.03 * estimate((m) => m === 'lining') + 50);
       expect(l.markerLengthMm).toBeLessThan(0.8 * estimate(() => true));
     }
+  });
+
+  it('prints a cut ticket for each material of the batch, and answers 400 naming the materials for one the style does not cut', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string }[];
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    const batch = (await owner.post('/api/batches').send({ styleId: lined.id, quantities: { S: 4, M: 6 }, dueDate: '2027-03-01' })).body.batch;
+    for (const material of ['self', 'lining', 'contrast', 'interfacing']) {
+      const pdf = await cutter.get(`/api/batches/${batch.id}/material-cut-ticket.pdf?material=${material}`).buffer(true);
+      expect(pdf.status, material).toBe(200);
+      expect(pdf.headers['content-type']).toMatch(/pdf/);
+      expect(pdf.headers['content-disposition']).toContain(`cut-ticket-${batch.code}-${material}.pdf`);
+      expect(String(pdf.body.subarray(0, 5))).toBe('%PDF-');
+    }
+    const bad = await owner.get(`/api/batches/${batch.id}/material-cut-ticket.pdf?material=mesh`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toMatch(/cuts no pieces from "mesh" \(it uses self, .*lining/);
+    expect((await owner.get(`/api/batches/${batch.id}/material-cut-ticket.pdf`)).status).toBe(400);
   });
 
   it('answers 400 on fabricId when the cut is planned on a fabric no material of the style uses', async () => {

@@ -6,6 +6,7 @@ import { createCutPlanRepository } from './cut-plan.repository';
 import { cuttingRoutes } from './cutting.routes';
 import { createCuttingService } from './cutting.service';
 import { createFabricRepository } from './fabric.repository';
+import { createGradingSetRepository } from '../grading/grading-set.repository';
 import { fabricRoutes } from './fabric.routes';
 
 export interface CuttingModuleDeps {
@@ -19,7 +20,7 @@ export interface CuttingModuleDeps {
 export function createCuttingModule(ctx: ModuleContext, deps: CuttingModuleDeps) {
   const fabrics = createFabricRepository(ctx.ds);
   const plans = createCutPlanRepository(ctx.ds);
-  const cutting = createCuttingService({ ...deps, plans, fabrics, jobs: ctx.jobs, audit: ctx.audit, now: ctx.now });
+  const cutting = createCuttingService({ ...deps, plans, fabrics, gradingSets: createGradingSetRepository(ctx.ds), jobs: ctx.jobs, audit: ctx.audit, now: ctx.now });
   return {
     name: 'cutting',
     /** `fabrics` answers the markers area's fabric lookups; `onMarkerDone` is the marker queue's completion hook. */

@@ -5,6 +5,7 @@ import { actorOf, requirePermission } from '../../auth/require';
 import { sendDownload } from '../../middleware/download';
 import { validated } from '../../middleware/validate';
 import type { BatchDocument, CuttingService, LayDocument } from './cutting.service';
+import { materialTicketQuery } from './material-cut-ticket';
 
 const BATCH_DOCUMENTS: BatchDocument[] = ['marker-list.xlsx', 'marker-list.pdf', 'bundle-register.xlsx', 'bundle-tickets.pdf'];
 const LAY_DOCUMENTS: LayDocument[] = ['cut-ticket.pdf', 'marker-list.xlsx', 'marker-list.pdf', 'bundle-tickets.pdf'];
@@ -30,6 +31,11 @@ export function cuttingRoutes(service: CuttingService) {
   }
   batches.get('/:id/bundles', requirePermission('bundles:read'), ...validated({ params: idParam }, async ({ params }, req, res) => {
     res.json({ bundles: await service.bundlesOfBatch(actorOf(req).studioId, params.id) });
+  }));
+
+  /** One material's cut ticket (self, lining, contrast…): its pieces, sizes and copies to cut. */
+  batches.get('/:id/material-cut-ticket.pdf', plannerOrCutter, ...validated({ params: idParam, query: materialTicketQuery }, async ({ params, query }, req, res) => {
+    sendDownload(res, await service.materialCutTicket(actorOf(req).studioId, params.id, query.material));
   }));
 
   lays.get('/', cutter, async (req, res) => {

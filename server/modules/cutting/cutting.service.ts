@@ -1,3 +1,5 @@
+import type { GradingSetRepository } from '../grading/grading-set.repository';
+import { materialCutTicketInput } from './material-cut-ticket';
 import { can, type Role } from '../../../shared/auth/permissions';
 import type { CorrectLayInput, CreateCutPlanInput, RecordLayInput, ShortageDto } from '../../../shared/schemas/cutting';
 import type { Actor } from '../../auth/require';
@@ -19,6 +21,8 @@ export interface CuttingServiceDeps extends CutPlanDeps {
   batches: CutPlanDeps['batches'] & { list(studioId: number): Promise<{ id: number; status: string }[]> };
   audit: AuditRepository;
   now: () => Date;
+  /** The styles' stored pieces, for a material's cut ticket. */
+  gradingSets: Pick<GradingSetRepository, 'byStyle'>;
 }
 
 export type CuttingService = ReturnType<typeof createCuttingService>;
@@ -98,6 +102,12 @@ export function createCuttingService(deps: CuttingServiceDeps) {
       const input = await registerFor(studioId, batchId);
       if (doc === 'bundle-register.xlsx') return { body: await jobs.run(doc, input), type: XLSX, filename: `bundle-register-${input.batch.code}.xlsx` };
       return { body: await jobs.run(doc, withQr(input, batchId)), type: PDF, filename: `bundle-tickets-${input.batch.code}.pdf` };
+    },
+    /** One material's cut ticket (self, lining, contrast…) of a batch. */
+    async materialCutTicket(studioId: number, batchId: number, material: string): Promise<Download> {
+      const batch = await loadBatch(studioId, batchId);
+      const input = await materialCutTicketInput(deps.gradingSets, fabrics, await plans.studio(studioId), batch, material, now());
+      return { body: await jobs.run('material-cut-ticket.pdf', input), type: PDF, filename: `cut-ticket-${input.batch.code}-${input.material.replace(/[^A-Za-z0-9-]+/g, '-')}.pdf` };
     },
     async liveLays(studioId: number) {
       const list = await plans.liveLays(studioId);

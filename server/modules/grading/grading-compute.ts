@@ -1,5 +1,5 @@
 import {
-  SHIRT_DRESS_SEAMS, checkSeams, cuttingOutline, gradePiece, validateCuttingOutline,
+  checkSeams, cuttingOutline, gradePiece, proposeSeams, seamProblem, validateCuttingOutline,
   type GradedPiece, type GradeIssue, type SeamCheck, type SeamSpec,
 } from '@grading';
 import type { Polygon } from '@shared/geometry/types';
@@ -21,10 +21,11 @@ const CACHE_LIMIT = 20;
 /**
  * Grade every stored piece by its stored rules. Pure apart from a small memo keyed by the set's content (the
  * same chart, pieces and rules always grade the same). A rule with the wrong step count or an unknown size is
- * reported as an error for that piece, which is then left out.
+ * reported as an error for that piece, which is then left out. Seams are the style's own (`seams`) or, when it has
+ * none, proposed from the pieces; a seam naming a piece or edge the set lacks is reported, not checked.
  */
-export function computeGrading(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces' | 'gradeRules'>, styleBase: string): ComputedGrading {
-  const key = JSON.stringify([styleBase, set.sizeChart?.sizes, set.pieces, set.gradeRules]);
+export function computeGrading(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces' | 'gradeRules'> & { seams?: SeamSpec[] | null }, styleBase: string): ComputedGrading {
+  const key = JSON.stringify([styleBase, set.sizeChart?.sizes, set.pieces, set.gradeRules, set.seams]);
   const hit = cache.get(key);
   if (hit) return hit;
   const sizes = set.sizeChart?.sizes ?? [];
@@ -46,7 +47,12 @@ export function computeGrading(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces
     }
   }
   errors.push(...Object.values(graded).flatMap((g) => g.issues.map((i: GradeIssue) => ({ pieceId: i.pieceId, size: i.size, code: i.code, message: i.message }))));
-  const seams = sizes.length ? seamChecks(graded, SHIRT_DRESS_SEAMS) : [];
+  const specs = set.seams ?? proposeSeams(set.pieces);
+  for (const s of specs) {
+    const problem = seamProblem(s, set.pieces.filter((p) => graded[p.id]));
+    if (problem) errors.push({ code: 'seam_unknown', message: `Seam ${problem}` });
+  }
+  const seams = sizes.length ? seamChecks(graded, specs.filter((s) => !seamProblem(s, set.pieces.filter((p) => graded[p.id])))) : [];
   for (const s of seams.filter((c) => !c.ok)) {
     errors.push({ size: s.size, code: 'seam_mismatch', message: `${s.seam}, size ${s.size}: off by ${(s.differenceMm - s.expectedMm).toFixed(1)} mm (allowed ±${s.toleranceMm} mm)` });
   }
@@ -56,13 +62,7 @@ export function computeGrading(set: Pick<StoredGradingSet, 'sizeChart' | 'pieces
   return out;
 }
 
-/** Seam checks for the seams whose pieces and edges all exist in this set (others do not apply). */
+/** Seam checks, each with its tolerance. */
 function seamChecks(graded: Record<string, GradedPiece>, specs: readonly SeamSpec[]): ComputedGrading['seams'] {
-  const applies = (s: SeamSpec) =>
-    [...s.a, ...s.b].every((side) => {
-      const g = graded[side.pieceId];
-      const base = g?.bySize[g.baseSize];
-      return base && side.edges.every((name) => base.edges.some((e) => e.name === name));
-    });
-  return specs.filter(applies).flatMap((s) => checkSeams(graded, [s]).map((c) => ({ ...c, toleranceMm: s.toleranceMm })));
+  return specs.flatMap((s) => checkSeams(graded, [s]).map((c) => ({ ...c, toleranceMm: s.toleranceMm })));
 }

@@ -1,6 +1,6 @@
 import {
   cuttingOutline, demoSizeChart, draftStyle, en13402BustIntervals, gradeStyle, isPointOfMeasure, measurementsForSize,
-  parseSizeChartTable, sizeChartToRows, sizeMix, type BlockSpec, type BodyMeasurements, type GradeRule, type SizeChart, type TableError,
+  parseSizeChartTable, sizeChartToRows, sizeMix, type BlockSpec, type BodyMeasurements, type GradeRule, type SeamSpec, type SizeChart, type TableError,
 } from '@grading';
 import { pieceToDxf } from '@exports/dxf/piece-dxf';
 import { pieceToSvg } from '@exports/svg/piece-svg';
@@ -34,9 +34,10 @@ const tableErrorFields = (errors: TableError[]) =>
   Object.fromEntries(errors.slice(0, LISTED_ERRORS).map((e) => [`row ${e.row}, column ${e.column}`, e.message]));
 const problemCount = (n: number) => `${n} problem${n > 1 ? 's' : ''}${n > LISTED_ERRORS ? `, the first ${LISTED_ERRORS} listed` : ''}`;
 
-/** The set graded over its run on the CPU pool's threads (grading and cutting outlines are CPU work). */
-const gradeOnPool = (set: StoredGradingSet, styleBase: string) =>
-  runCpuTask('grading', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules }, styleBase });
+/** The set graded over its run on the CPU pool's threads (grading and cutting outlines are CPU work), checked
+ * against the style's own seams (none stored: proposed from the pieces). */
+const gradeOnPool = (set: StoredGradingSet, style: { baseSize: string; composition: { seams?: unknown } | null }) =>
+  runCpuTask('grading', { set: { sizeChart: set.sizeChart, pieces: set.pieces, gradeRules: set.gradeRules, seams: (style.composition?.seams as SeamSpec[] | null | undefined) ?? null }, styleBase: style.baseSize });
 
 /** The style's base pieces drafted from its composition at the base size's chart measurements; a bad option or a
  * measurement the chart lacks is a 400 naming it. */
@@ -80,7 +81,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
   async function get(actor: Actor, styleId: number): Promise<GradingDto> {
     const style = await styleOf(actor, styleId);
     const set = await sets.byStyle(actor.studioId, styleId);
-    const computed = set?.sizeChart ? await gradeOnPool(set, style.baseSize) : null;
+    const computed = set?.sizeChart ? await gradeOnPool(set, style) : null;
     return presentGrading(style.id, style.sizeRun, style.baseSize, set, computed);
   }
 
@@ -171,7 +172,10 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       if (!pieces.length) {
         throw badRequest('composition: choose the blocks this style is drafted from (or a preset) on the style page first', { composition: 'Choose blocks or a preset for this style' });
       }
-      const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize);
+      // Drafted pieces grade by their blocks redrafted in every size (darts grade their intake); others by role.
+      const composition = style.composition;
+      const redraft = composition ? (m: BodyMeasurements) => draftStyle(m, { preset: composition.preset, blocks: composition.blocks as BlockSpec[] }) : undefined;
+      const { rules } = gradeStyle(pieces, set.sizeChart, style.baseSize, redraft);
       const saved = await sets.save(actor.studioId, styleId, { pieces, gradeRules: rules });
       await audit.record(actor, 'propose_grade_rules', 'grading_set', saved.id, { pieces: set.pieces.length }, { pieces: pieces.length, rules: Object.values(rules).flat().length });
       return get(actor, styleId);
@@ -181,7 +185,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
     async pieceFile(actor: Actor, styleId: number, pieceId: string, kind: 'svg' | 'dxf' | 'pdf', q: { size?: string; paper: 'A4' | 'Letter' }): Promise<Download> {
       const style = await styleOf(actor, styleId);
       const set = await setOf(actor, styleId);
-      const computed = await gradeOnPool(set, style.baseSize);
+      const computed = await gradeOnPool(set, style);
       const graded = computed.graded[pieceId];
       if (!graded) throw notFound('Piece');
       const size = q.size && q.size !== 'all' ? q.size : kind === 'pdf' ? computed.baseSize : undefined;

@@ -36,24 +36,37 @@ export function createPurchasingService(deps: {
     return Math.max(0, sum);
   }
 
-  /** Fabric and trims the batch needs, net of stock and of open orders. */
+  /**
+   * Every fabric and trim of the style's bill of materials the batch needs, net of stock and of open orders: the
+   * main fabric as the cut plan (or estimate) has it, each other material's fabric (lining, contrast, interfacing…)
+   * from its costing line's length per garment and size, and the style's trims.
+   */
   async function needs(studioId: number, batchId: number): Promise<NeedDto[]> {
     const { dto } = await deps.costing().build(studioId, batchId, 'sam', deps.now());
     const [suppliers, open, trims] = await Promise.all([repo.suppliers(studioId), repo.openOrders(studioId), repo.trims(studioId, dto.style.id)]);
     const nameOf = (id: number | null) => suppliers.find((s) => s.id === id)?.name ?? '';
     const out: NeedDto[] = [];
-    if (dto.fabric) {
-      const fabric = await repo.fabric(studioId, dto.fabric.id);
-      // With a cut plan the need is what its lays still to cut spread, exactly as the plan says; without one,
-      // the costing estimate. Free stock leaves out what other batches' plans hold; this batch's holds are its own.
-      const required = Math.ceil(dto.fabric.stillToCutMm ?? dto.fabric.batchFabricMm);
-      const onHand = await repo.fabricStockMm(studioId, dto.fabric.id);
-      const heldByOthers = await repo.heldByOtherBatchesMm(studioId, dto.fabric.id, batchId);
-      const need = netFabricNeed({ requiredMm: required, onHandMm: onHand, heldByOthersMm: heldByOthers, onOrderMm: onOrder(open, 'fabric', dto.fabric.id), stepMm: FABRIC_STEP_MM });
+    const garmentsOf = Object.fromEntries(dto.sizes.map((s) => [s.size, s.quantity]));
+    const fabricNeeds = new Map<number, { name: string; priceMinor: number; requiredMm: number }>();
+    // The main fabric: with a cut plan the need is what its lays still to cut spread, exactly as the plan says;
+    // without one, the costing estimate. Other materials' fabrics from their costing lines.
+    if (dto.fabric) fabricNeeds.set(dto.fabric.id, { name: dto.fabric.name, priceMinor: dto.fabric.pricePerMetreMinor, requiredMm: dto.fabric.stillToCutMm ?? dto.fabric.batchFabricMm });
+    for (const l of dto.lines) {
+      if (l.kind !== 'fabric' || l.refId === null || fabricNeeds.has(l.refId)) continue;
+      const metres = Object.entries(l.quantities).reduce((a, [size, m]) => a + m * (garmentsOf[size] ?? 0), 0);
+      fabricNeeds.set(l.refId, { name: l.description, priceMinor: l.priceMinor ?? 0, requiredMm: metres * 1000 });
+    }
+    for (const [id, f] of fabricNeeds) {
+      const fabric = await repo.fabric(studioId, id);
+      const required = Math.ceil(f.requiredMm - 1e-6);
+      // Free stock leaves out what other batches' plans hold; this batch's holds are its own.
+      const onHand = await repo.fabricStockMm(studioId, id);
+      const heldByOthers = await repo.heldByOtherBatchesMm(studioId, id, batchId);
+      const need = netFabricNeed({ requiredMm: required, onHandMm: onHand, heldByOthersMm: heldByOthers, onOrderMm: onOrder(open, 'fabric', id), stepMm: FABRIC_STEP_MM });
       out.push({
-        kind: 'fabric', refId: dto.fabric.id, item: dto.fabric.name, unit: 'mm', required, inStock: need.freeStock, onOrder: need.onOrder,
+        kind: 'fabric', refId: id, item: f.name, unit: 'mm', required, inStock: need.freeStock, onOrder: need.onOrder,
         toOrder: need.toOrder,
-        unitPriceMinor: dto.fabric.pricePerMetreMinor, supplierId: fabric?.supplierId ?? null, supplierName: nameOf(fabric?.supplierId ?? null),
+        unitPriceMinor: f.priceMinor, supplierId: fabric?.supplierId ?? null, supplierName: nameOf(fabric?.supplierId ?? null),
       });
     }
     for (const t of trims) {

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
 import type { BundleDto, CorrectLayInput, CreateCutPlanInput, CutPlanDto, LayDto, RecordLayInput, RollDto, RollInput, ShortageDto } from '@shared/schemas/cutting';
+import type { StyleDto } from '@shared/schemas/styles';
 import { api } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 import { fabricQueries } from '@/lib/queries';
@@ -11,6 +12,12 @@ export interface LayDetail {
 }
 
 export { fabricQueries };
+
+/** A batch's style as the cutting screens need it (its materials); the same cache entry as the style page's. */
+export const batchStyleQueries = {
+  ofStyle: (styleId: number) =>
+    queryOptions({ queryKey: ['styles', 'detail', styleId], queryFn: async () => (await api.get<{ style: StyleDto }>(`/styles/${styleId}`)).style }),
+};
 
 export const cutPlanQueries = {
   all: () => ({ queryKey: ['cut-plans'] as const }),

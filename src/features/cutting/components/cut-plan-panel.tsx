@@ -5,7 +5,7 @@ import type { BatchDto } from '@shared/schemas/batches';
 import { Badge, Card, ErrorNote } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
 import { formatMoney } from '@/lib/format';
-import { cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
+import { batchStyleQueries, cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { paths } from '@/config/paths';
 
@@ -13,6 +13,8 @@ import { paths } from '@/config/paths';
 export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const { data: plan } = useQuery(cutPlanQueries.ofBatch(batch.id));
   const { data: fabrics = [] } = useQuery(fabricQueries.list());
+  const { data: style } = useQuery({ ...batchStyleQueries.ofStyle(batch.styleId), retry: false });
+  const materials = [...new Set(['self', ...Object.keys(style?.materialFabrics ?? {})])];
   const planCut = usePlanCut(batch.id);
   const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: '6', overcutPercent: '0' });
   const fields = planCut.error instanceof ApiError ? planCut.error.fields : {};
@@ -103,6 +105,12 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
           </div>
         </div>
       ) : <p className="mt-3 text-sm text-ink-600">No cut plan yet.</p>}
+      <div className="mt-3 flex flex-wrap items-center gap-2" data-testid="material-cut-tickets">
+        <span className="text-sm text-ink-600">Cut ticket for each material (pieces, sizes and copies to cut):</span>
+        {materials.map((m) => (
+          <button key={m} type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/material-cut-ticket.pdf?material=${encodeURIComponent(m)}`, `cut-ticket-${batch.code}-${m}.pdf`)}>{m} (PDF)</button>
+        ))}
+      </div>
     </Card>
   );
 }

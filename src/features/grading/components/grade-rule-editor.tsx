@@ -35,9 +35,9 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
         const r = rules.find((x) => ruleKey(x) === e.target.value);
         if (r?.target.kind === 'vertex') onSelectPoint(r.target.index);
       }}>
-        {rules.filter((r) => r.target.kind === 'vertex').map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
+        {rules.filter((r) => r.target.kind === 'vertex' && (r.landmark || r === rule)).map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
       </select>
-      <p className="text-xs text-ink-600">Movement per size step in mm: across (+ to the right) and up (+ upwards). Tap a dot on the drawing to pick a point.</p>
+      <p className="text-xs text-ink-600">Movement per size step in mm: across (+ to the right) and up (+ upwards). The list names the grade points; curve points between them follow the block in every size. Tap a dot on the drawing to pick any point.</p>
       <div role="region" aria-label="Grade rules" tabIndex={0} className="overflow-x-auto">
         <table className="w-full text-sm">
           <thead><tr className="text-left text-ink-600"><th className="py-1 pr-2">Step</th><th className="px-1">Across (mm)</th><th className="px-1">Up (mm)</th></tr></thead>

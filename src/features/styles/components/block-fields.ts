@@ -22,6 +22,12 @@ export const BLOCK_LABELS: Record<BlockName, string> = {
   peplum: 'Peplum / flounce',
   facing: 'Facings',
   waistband: 'Waistband',
+  dress: 'Loose dress (bodice to hem)',
+  'shirt-sleeve': 'Shirt sleeve (short)',
+  'collar-band': 'Collar band',
+  collar: 'Collar on a band',
+  pocket: 'Pocket (patch or in-seam)',
+  belt: 'Belt',
 };
 
 /** The options shown for each block, with the grading core's defaults (grading/blocks). */
@@ -59,13 +65,50 @@ export const BLOCK_FIELDS: Record<BlockName, BlockField[]> = {
     { path: 'cornerRadiusMm', label: 'Curved corner radius', kind: 'length', default: 0 },
   ],
   facing: [
-    { path: 'of', label: 'Facing of', kind: 'choice', choices: ['neckline', 'armhole'], default: 'neckline' },
+    { path: 'of', label: 'Facing of', kind: 'choice', choices: ['neckline', 'armhole', 'front-edge'], default: 'neckline' },
     { path: 'widthMm', label: 'Width', kind: 'length', default: FACING_WIDTH_MM.neckline },
     { path: 'interfaced', label: 'Interfaced', kind: 'switch', default: true, on: true },
   ],
   waistband: [
     { path: 'widthMm', label: 'Finished width', kind: 'length', default: 1.25 * IN },
     { path: 'extensionMm', label: 'Extension', kind: 'length', default: 1.25 * IN },
+  ],
+  dress: [
+    { path: 'bustEaseMm', label: 'Bust ease', kind: 'length', default: 2 * IN },
+    { path: 'waistEaseMm', label: 'Waist ease', kind: 'length', default: IN },
+    { path: 'hipEaseMm', label: 'Hip ease', kind: 'length', default: 2 * IN },
+    { path: 'lengthMm', label: 'Waist to hem', kind: 'length', default: 'waist to knee' },
+    { path: 'hemFlareMm', label: 'Flare at the hem (each side)', kind: 'length', default: 60 },
+    { path: 'buttonExtensionMm', label: 'Button extension (0 = front on the fold)', kind: 'length', default: 0 },
+    { path: 'hemMm', label: 'Hem allowance', kind: 'length', default: 30 },
+  ],
+  'shirt-sleeve': [
+    { path: 'capEaseMm', label: 'Cap ease', kind: 'length', default: 15 },
+    { path: 'capHeightRatio', label: 'Cap height × armhole depth', kind: 'number', default: 0.7, step: 0.05 },
+    { path: 'underarmLengthMm', label: 'Underarm length', kind: 'length', default: 100 },
+    { path: 'hemMm', label: 'Hem allowance', kind: 'length', default: 25 },
+  ],
+  'collar-band': [
+    { path: 'heightMm', label: 'Band height', kind: 'length', default: 30 },
+    { path: 'extensionMm', label: 'Extension past centre front', kind: 'length', default: 15 },
+  ],
+  collar: [
+    { path: 'heightMm', label: 'Band height', kind: 'length', default: 30 },
+    { path: 'collar.widthMm', label: 'Collar width', kind: 'length', default: 2.25 * IN },
+    { path: 'collar.pointMm', label: 'Collar point reach', kind: 'length', default: 0.5 * IN },
+  ],
+  pocket: [
+    { path: 'kind', label: 'Kind', kind: 'choice', choices: ['patch', 'in-seam'], default: 'patch' },
+    { path: 'widthMm', label: 'Patch width', kind: 'length', default: 140 },
+    { path: 'heightMm', label: 'Patch height', kind: 'length', default: 160 },
+    { path: 'fromCentreMm', label: 'Patch centre from centre front', kind: 'length', default: 115 },
+    { path: 'belowWaistMm', label: 'Top below the waist', kind: 'length', default: 'patch 90 mm, in-seam 1 in' },
+    { path: 'openingMm', label: 'In-seam opening', kind: 'length', default: 6 * IN },
+  ],
+  belt: [
+    { path: 'widthMm', label: 'Finished width', kind: 'length', default: 35 },
+    { path: 'extraMm', label: 'Length past the waist', kind: 'length', default: 300 },
+    { path: 'waistEaseMm', label: 'Waist ease', kind: 'length', default: IN },
   ],
 };
 
@@ -89,7 +132,7 @@ export function setAt<T extends object>(spec: T, path: string, value: unknown): 
 
 /** The materials a composition cuts: each block's (self by default), interfacing for interfaced facings. */
 export function materialsOf(blocks: readonly BlockSpecInput[], preset: string | null): string[] {
-  if (preset === 'shirt-dress') return ['self'];
+  if (preset === 'shirt-dress' && blocks.length === 0) return ['self'];
   const out = new Set<string>();
   for (const b of blocks) {
     out.add(b.material ?? 'self');

@@ -27,7 +27,7 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
   const save = useSaveComposition(style.id);
   const fabrics = useQuery({ ...fabricQueries.list(), enabled: canEdit });
   const materials = materialsOf(comp.blocks, comp.preset);
-  const setBlock = (i: number, b: BlockSpecInput) => setComp({ ...comp, preset: comp.preset === 'shirt-dress' ? null : comp.preset, blocks: comp.blocks.map((x, k) => (k === i ? b : x)) });
+  const setBlock = (i: number, b: BlockSpecInput) => setComp({ ...comp, blocks: comp.blocks.map((x, k) => (k === i ? b : x)) });
   const submit = () => {
     const keep = Object.fromEntries(Object.entries(links).filter(([m]) => materials.includes(m)));
     save.mutate({ composition: comp, materialFabrics: keep });
@@ -42,8 +42,8 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
           </button>
         ))}
       </div>
-      {comp.preset === 'shirt-dress' ? (
-        <p className="text-sm text-ink-600">{STYLE_PRESETS[0].description} Drafted as the demo shirt dress: its collar band, pockets and belt are not blocks yet.</p>
+      {comp.preset === 'shirt-dress' && comp.blocks.length === 0 ? (
+        <p className="text-sm text-ink-600">{STYLE_PRESETS[0].description} Drafted from the shirt dress blocks: choose the preset again to see and edit them.</p>
       ) : (
         <ol className="grid gap-3">
           {comp.blocks.map((b, i) => (
@@ -59,7 +59,7 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
               {Object.entries(BLOCK_LABELS).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
             </select>
           </label>
-          <button type="button" className="btn-quiet" onClick={() => setComp({ preset: null, blocks: [...(comp.preset === 'shirt-dress' ? [] : comp.blocks), { block: adding } as BlockSpecInput] })}>Add block</button>
+          <button type="button" className="btn-quiet" onClick={() => setComp({ ...comp, blocks: [...comp.blocks, { block: adding } as BlockSpecInput] })}>Add block</button>
         </div>
       ) : null}
       <fieldset className="grid gap-2 sm:grid-cols-2">

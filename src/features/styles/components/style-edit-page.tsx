@@ -6,6 +6,7 @@ import { styleQueries } from '../api/style-queries';
 import { StyleBlocksCard } from './style-blocks-card';
 import { StyleFilesCard } from './style-files-card';
 import { StyleForm } from './style-form';
+import { StyleSeamsCard } from './style-seams-card';
 
 export function NewStylePage() {
   const navigate = useNavigate();
@@ -26,6 +27,7 @@ export function StyleDetailPage() {
       <PageHeader title={`${style.code} · ${style.name}`} subtitle={`Size run ${style.sizeRun.join(', ')} · base ${style.baseSize}`} />
       <Card title="Style details"><StyleForm style={style} onSaved={() => undefined} /></Card>
       <div className="mt-4"><Card title="Blocks and materials"><StyleBlocksCard key={style.updatedAt} style={style} /></Card></div>
+      <div className="mt-4"><Card title="Seams"><StyleSeamsCard style={style} /></Card></div>
       <div className="mt-4"><StyleFilesCard styleId={style.id} /></div>
     </>
   );

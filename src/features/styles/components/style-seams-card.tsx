@@ -1,0 +1,162 @@
+import { useQuery } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { draftStyle, proposeSeams, SEAM_TOLERANCE_MM, type BlockSpec, type BodyMeasurements, type DraftedPiece } from '@grading';
+import type { SeamInput } from '@shared/schemas/style-composition';
+import type { StyleDto } from '@shared/schemas/styles';
+import { ErrorNote } from '@/components/ui/page';
+import { gradingQueries } from '@/features/grading/api/grading-queries';
+import { useLength } from '@/features/grading/hooks/use-length';
+import { useCan } from '@/lib/auth';
+import { useSaveComposition } from '../api/style-queries';
+
+type Side = SeamInput['a'][number];
+
+/**
+ * The seams the seam check measures: proposed from the base size's drafted pieces until the owner fixes one, then
+ * the style's own list. Each seam names the edges sewn together, the intended difference and the tolerance.
+ */
+export function StyleSeamsCard({ style }: { style: StyleDto }) {
+  const canEdit = useCan('styles:write');
+  const grading = useQuery(gradingQueries.detail(style.id));
+  const chart = grading.data?.chart;
+  const composition = style.composition;
+  const pieces = useMemo((): DraftedPiece[] | null => {
+    if (!chart || !composition) return null;
+    const k = chart.sizes.indexOf(style.baseSize);
+    if (k < 0) return null;
+    const m = Object.fromEntries(chart.rows.map((r) => [r.pointOfMeasure, r.values[k]])) as BodyMeasurements;
+    try {
+      return draftStyle(m, { preset: composition.preset, blocks: composition.blocks as BlockSpec[] });
+    } catch {
+      return null;
+    }
+  }, [chart, composition, style.baseSize]);
+  const stored = composition?.seams ?? null;
+  const initial = useMemo(() => (stored ?? (pieces ? proposeSeams(pieces) : [])) as SeamInput[], [stored, pieces]);
+  const [edited, setEdited] = useState<SeamInput[] | null>(null);
+  const [open, setOpen] = useState<number | null>(null);
+  const save = useSaveComposition(style.id);
+  const seams = edited ?? initial;
+  if (!composition) return <p className="text-sm text-ink-600">Choose the blocks first: the seams are proposed from the drafted pieces.</p>;
+  if (!pieces) return <p className="text-sm text-ink-600">Import the size chart on Pattern &amp; grading to see the seams proposed for these blocks.</p>;
+  const change = (i: number, s: SeamInput) => setEdited(seams.map((x, k) => (k === i ? s : x)));
+  const submit = (next: SeamInput[] | null) => save.mutate({ composition: { ...composition, seams: next }, materialFabrics: style.materialFabrics }, { onSuccess: () => { setEdited(null); setOpen(null); } });
+  return (
+    <div className="grid gap-3" data-testid="style-seams">
+      <p className="text-sm text-ink-600">
+        {stored ? 'The seams this style checks, as you set them.' : 'Proposed from the drafted pieces. Fix one and save to keep your own list.'} Each seam must
+        sew to the same length in every size, give or take the tolerance; a sleeve cap keeps its ease.
+      </p>
+      <div tabIndex={0} className="overflow-x-auto">
+        <table className="w-full min-w-[640px] text-sm">
+          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1.5 pr-2">Seam</th><th className="px-2">First side</th><th className="px-2">Sewn to</th><th className="px-2">Second longer by</th><th className="px-2">Give or take</th><th /></tr></thead>
+          <tbody>
+            {seams.map((s, i) => (
+              <SeamRow key={i} seam={s} pieces={pieces} canEdit={canEdit} isOpen={open === i} onOpen={() => setOpen(open === i ? null : i)} onChange={(x) => change(i, x)} onRemove={() => { setEdited(seams.filter((_, k) => k !== i)); setOpen(null); }} />
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {canEdit ? (
+        <div className="flex flex-wrap items-center gap-2">
+          <button type="button" className="btn-quiet" onClick={() => { setEdited([...seams, blankSeam(pieces, seams.length)]); setOpen(seams.length); }}>Add a seam</button>
+          <button type="button" className="btn-primary" disabled={!edited || save.isPending} onClick={() => submit(seams)}>{save.isPending ? 'Saving…' : 'Save seams'}</button>
+          {stored ? <button type="button" className="btn-quiet" disabled={save.isPending} onClick={() => submit(null)}>Use the proposed seams again</button> : null}
+          {save.isSuccess ? <span className="text-sm text-ink-600" role="status">Seams saved. Pattern &amp; grading checks them in every size.</span> : null}
+        </div>
+      ) : null}
+      <ErrorNote error={save.error} />
+    </div>
+  );
+}
+
+function blankSeam(pieces: DraftedPiece[], n: number): SeamInput {
+  const p = pieces[0];
+  const edge = p.edges[0]?.name ?? '';
+  return { name: `Seam ${n + 1}`, a: [{ pieceId: p.id, edges: [edge] }], b: [{ pieceId: p.id, edges: [edge] }], toleranceMm: SEAM_TOLERANCE_MM.side };
+}
+
+function sideText(sides: Side[], pieces: DraftedPiece[]): string {
+  return sides.map((s) => `${pieces.find((p) => p.id === s.pieceId)?.name ?? `missing piece ${s.pieceId}`}: ${s.edges.join(' + ')}`).join('; ');
+}
+
+function SeamRow({ seam, pieces, canEdit, isOpen, onOpen, onChange, onRemove }: {
+  seam: SeamInput; pieces: DraftedPiece[]; canEdit: boolean; isOpen: boolean; onOpen: () => void; onChange: (s: SeamInput) => void; onRemove: () => void;
+}) {
+  const { small } = useLength();
+  return (
+    <>
+      <tr className="border-b border-calico-100 align-top">
+        <td className="py-1.5 pr-2 font-medium">{seam.name}</td>
+        <td className="px-2 py-1.5">{sideText(seam.a, pieces)}</td>
+        <td className="px-2 py-1.5">{sideText(seam.b, pieces)}</td>
+        <td className="px-2 py-1.5">{small(seam.easeMm ?? 0)}</td>
+        <td className="px-2 py-1.5">{small(seam.toleranceMm)}</td>
+        <td className="px-2 py-1.5">{canEdit ? <button type="button" className="btn-quiet" aria-expanded={isOpen} onClick={onOpen}>{isOpen ? 'Close' : 'Fix'}</button> : null}</td>
+      </tr>
+      {isOpen ? (
+        <tr><td colSpan={6} className="bg-calico-50 p-3"><SeamEditor seam={seam} pieces={pieces} onChange={onChange} onRemove={onRemove} /></td></tr>
+      ) : null}
+    </>
+  );
+}
+
+function SeamEditor({ seam, pieces, onChange, onRemove }: { seam: SeamInput; pieces: DraftedPiece[]; onChange: (s: SeamInput) => void; onRemove: () => void }) {
+  const { cell, parseCell, cellUnit } = useLength();
+  const [error, setError] = useState<string | null>(null);
+  const setSide = (which: 'a' | 'b', k: number, side: Side) => onChange({ ...seam, [which]: seam[which].map((x, j) => (j === k ? side : x)) });
+  const lengthField = (label: string, value: number, apply: (mm: number) => void) => (
+    <label className="text-sm">
+      <span className="field-label">{label} ({cellUnit})</span>
+      <input className="field-input" defaultValue={cell(value)} onBlur={(e) => {
+        const v = parseCell(e.target.value.trim() || '0');
+        if (v === null) setError(`${label}: write a length such as ${cellUnit === 'mm' ? '3 or 2.5' : '1/8 or 1 1/4'}`);
+        else { setError(null); apply(v); }
+      }} />
+    </label>
+  );
+  return (
+    <div className="grid gap-3">
+      <label className="text-sm">
+        <span className="field-label">Seam name</span>
+        <input className="field-input" value={seam.name} onChange={(e) => onChange({ ...seam, name: e.target.value })} />
+      </label>
+      {(['a', 'b'] as const).map((which) => seam[which].map((side, k) => (
+        <SideFields key={`${which}${k}`} label={`${which === 'a' ? 'First side' : 'Sewn to'}${seam[which].length > 1 ? `, part ${k + 1}` : ''}`} side={side} pieces={pieces} onChange={(s) => setSide(which, k, s)} />
+      )))}
+      <div className="grid gap-2 sm:grid-cols-2">
+        {lengthField('Second side longer by', seam.easeMm ?? 0, (v) => onChange({ ...seam, easeMm: v }))}
+        {lengthField('Give or take', seam.toleranceMm, (v) => onChange({ ...seam, toleranceMm: v }))}
+      </div>
+      {error ? <p className="field-error" role="alert">{error}</p> : null}
+      <div><button type="button" className="btn-quiet" onClick={onRemove}>Remove this seam</button></div>
+    </div>
+  );
+}
+
+function SideFields({ label, side, pieces, onChange }: { label: string; side: Side; pieces: DraftedPiece[]; onChange: (s: Side) => void }) {
+  const piece = pieces.find((p) => p.id === side.pieceId);
+  const names = [...new Set((piece?.edges ?? []).map((e) => e.name))];
+  const current = side.edges.join(' + ');
+  const choices = names.includes(current) ? names : [current, ...names];
+  return (
+    <div className="grid gap-2 sm:grid-cols-2">
+      <label className="text-sm">
+        <span className="field-label">{label}: piece</span>
+        <select className="field-input" value={side.pieceId} onChange={(e) => {
+          const p = pieces.find((x) => x.id === e.target.value);
+          onChange({ pieceId: e.target.value, edges: [p?.edges[0]?.name ?? ''] });
+        }}>
+          {piece ? null : <option value={side.pieceId}>Missing piece {side.pieceId}</option>}
+          {pieces.filter((p) => p.material !== 'interfacing').map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
+        </select>
+      </label>
+      <label className="text-sm">
+        <span className="field-label">{label}: edge</span>
+        <select className="field-input" value={current} onChange={(e) => onChange({ ...side, edges: e.target.value.split(' + ') })}>
+          {choices.map((c) => <option key={c} value={c}>{c}</option>)}
+        </select>
+      </label>
+    </div>
+  );
+}
