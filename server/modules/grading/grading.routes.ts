@@ -10,6 +10,7 @@ import type { Download, GradingService } from './grading.service';
 import { sendDownload } from '../../middleware/download';
 import { memoryUpload } from '../uploads/memory-upload';
 import { PATTERN_UPLOAD_LIMIT_BYTES } from './pattern-import';
+import { addCalibrationSheetRoute } from './calibration-sheet.routes';
 
 /** Largest upload accepted for charts and customer measurements. */
 export const GRADING_UPLOAD_LIMIT_BYTES = 2 * 1024 * 1024;
@@ -72,6 +73,7 @@ export function gradingRoutes(service: GradingService) {
       send(res, await service.pieceFile(actorOf(req), id(req.params), String(req.params.pieceId), kind, q));
     });
   }
+  addCalibrationSheetRoute(r, read);
   r.post('/:id/pattern/import', write, patternFile, validate({ params: gradingParams, body: patternImportInput }), async (req, res) => {
     res.json({ preview: await service.previewPattern(actorOf(req), id(req.params), req.file, req.body) });
   });
