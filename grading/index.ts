@@ -64,3 +64,6 @@ export { checkSeams } from './grade-rules/seam-check';
 export type { SeamCheck, SeamSide, SeamSpec } from './grade-rules/seam-check';
 export { SHIRT_DRESS_SEAMS, gradeStyle } from './grade-rules/grade-style';
 export type { GradedStyle } from './grade-rules/grade-style';
+
+// Tracing a piece from a photo of a calibration sheet.
+export * from './trace/index';
