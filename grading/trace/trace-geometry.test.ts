@@ -7,7 +7,8 @@ import { homographyApply, homographyFromPoints, homographyInvert, type Homograph
 import { outlineError } from './outline-error';
 import { quadRefineCorners } from './quad-fit';
 import { ringSimplify } from './ring-simplify';
-import { ringRefineToLevel } from './piece-mask';
+import { TraceError, pieceLikelihood, ringRefineToLevel } from './piece-mask';
+import { FIELD_RGB, calibrationLayout } from '@shared/calibration/calibration-sheet';
 
 /** OpenCV (an independent library) is the outside check. */
 const loadCv = loadOpenCvNode;
@@ -128,5 +129,37 @@ describe('ringRefineToLevel', () => {
     const got = ringRefineToLevel(ring, { width: w, height: h, data });
     for (const p of got.slice(2, 4)) expect(p.x).toBeCloseTo(22, 6);
     expect(polygonArea(got)).toBeGreaterThanOrEqual(0);
+  });
+});
+
+describe('pieceLikelihood', () => {
+  const layout = calibrationLayout('sheet', 'A4');
+  const s = 2; // px per mm
+  const sheetImage = (piece?: { x: number; y: number; w: number; h: number }) => {
+    const w = Math.round(layout.width * s), h = Math.round(layout.height * s), data = new Uint8ClampedArray(w * h * 4);
+    const f = layout.field;
+    for (let y = 0; y < h; y++) for (let x = 0; x < w; x++) {
+      const mx = x / s, my = y / s, i = (y * w + x) * 4;
+      // Light falls off from left to right to 70 %: the white paper shows it, the tracer evens it out.
+      const k = 1 - 0.3 * (x / w);
+      const inField = mx >= f.x && mx < f.x + f.w && my >= f.y && my < f.y + f.h;
+      const inPiece = piece && mx >= piece.x && mx < piece.x + piece.w && my >= piece.y && my < piece.y + piece.h;
+      const c = inPiece ? [235, 230, 215] : inField ? FIELD_RGB : [245, 245, 240];
+      data[i] = c[0] * k; data[i + 1] = c[1] * k; data[i + 2] = c[2] * k; data[i + 3] = 255;
+    }
+    return { width: w, height: h, data };
+  };
+
+  it('puts the piece near 1 and the field near 0 when the light falls off across the sheet', () => {
+    const like = pieceLikelihood(sheetImage({ x: 50, y: 60, w: 100, h: 150 }), s, layout);
+    const at = (mx: number, my: number) => like.t.data[Math.round((my - layout.field.y) * s) * like.t.width + Math.round((mx - layout.field.x) * s)];
+    expect(at(100, 130)).toBeGreaterThan(0.9);
+    expect(at(145, 200)).toBeGreaterThan(0.9);
+    expect(Math.abs(at(30, 250))).toBeLessThan(0.1);
+    expect(Math.abs(at(190, 100))).toBeLessThan(0.1);
+  });
+
+  it('says there is no piece when the field is empty', () => {
+    expect(() => pieceLikelihood(sheetImage(), s, layout)).toThrow(TraceError);
   });
 });
