@@ -37,7 +37,7 @@ describe('journey: the owner traces a paper piece from a phone photo', () => {
     await page.getByLabel('Photographed on').selectOption('sheet-A4');
     await page.getByLabel('Photo of the piece').setInputFiles({ name: 'yoke.png', mimeType: 'image/png', buffer: png });
     await page.locator('[data-testid="photo-trace"]').waitFor({ timeout: 60_000 });
-    expect(await page.getByRole('img', { name: 'Traced outline over the photo' }).isVisible()).toBe(true);
+    expect(await page.getByRole('group', { name: 'Traced outline over the photo' }).isVisible()).toBe(true);
     expect(await page.getByRole('button', { name: /^Corner 1/ }).count()).toBe(1);
 
     await page.getByLabel('Mark the grain line (two taps)').check();

@@ -36,6 +36,11 @@ describe('GET /api/styles/:id/pattern/calibration-sheet', () => {
     expect(res.body.error.fields.paper).toMatch(/A4 or Letter/);
   });
 
+  it('answers 404 for a style that is not the studio\'s', async () => {
+    const res = await owner.get('/api/styles/999999/pattern/calibration-sheet');
+    expect(res.status).toBe(404);
+  });
+
   it('refuses a machinist, who has no pattern work', async () => {
     const res = await machinist.get(`/api/styles/${styleId}/pattern/calibration-sheet`);
     expect(res.status).toBe(403);

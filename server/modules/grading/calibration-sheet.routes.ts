@@ -4,6 +4,8 @@ import { calibrationSheetQuery, type CalibrationSheetQuery } from '../../../shar
 import { gradingParams } from '../../../shared/schemas/grading';
 import { sendDownload } from '../../middleware/download';
 import { validate } from '../../middleware/validate';
+import { actorOf } from '../../auth/require';
+import type { GradingService } from './grading.service';
 
 /**
  * The calibration sheets hold no studio data and never change, so each (kind, paper) is built once per
@@ -22,8 +24,10 @@ const sheetBytes = (q: CalibrationSheetQuery) => {
 };
 
 /** GET /api/styles/:id/pattern/calibration-sheet?kind=sheet|border&paper=A4|Letter|whole: the PDF to print. */
-export function addCalibrationSheetRoute(r: Router, read: RequestHandler): void {
+export function addCalibrationSheetRoute(r: Router, read: RequestHandler, service: GradingService): void {
   r.get('/:id/pattern/calibration-sheet', read, validate({ params: gradingParams, query: calibrationSheetQuery }), async (req, res) => {
+    // The sheet holds no style data, but another studio's style id is still a 404, as on every style route.
+    await service.checkStyle(actorOf(req), Number((req.params as { id: string }).id));
     const q = req.query as unknown as CalibrationSheetQuery;
     const name = q.kind === 'sheet' ? `seamrun-calibration-sheet-${q.paper}.pdf` : `seamrun-border-frame-${q.paper}.pdf`;
     sendDownload(res, { body: await sheetBytes(q), type: 'application/pdf', filename: name });

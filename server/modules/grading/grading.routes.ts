@@ -73,7 +73,7 @@ export function gradingRoutes(service: GradingService) {
       send(res, await service.pieceFile(actorOf(req), id(req.params), String(req.params.pieceId), kind, q));
     });
   }
-  addCalibrationSheetRoute(r, read);
+  addCalibrationSheetRoute(r, read, service);
   r.post('/:id/pattern/import', write, patternFile, validate({ params: gradingParams, body: patternImportInput }), async (req, res) => {
     res.json({ preview: await service.previewPattern(actorOf(req), id(req.params), req.file, req.body) });
   });

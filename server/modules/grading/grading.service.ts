@@ -115,6 +115,11 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       return { ...preview, baseSize: style.baseSize, sizesInFile: sizes, sizesNotInRun: sizes.filter((s) => !style.sizeRun.includes(s)) };
     },
 
+    /** Nothing, or a 404 when the style is not the actor's studio's (for routes that read no style data). */
+    async checkStyle(actor: Actor, styleId: number): Promise<void> {
+      await styleOf(actor, styleId);
+    },
+
     /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules, or beside them with `keepExisting`. */
     async acceptPattern(actor: Actor, styleId: number, input: PatternAcceptInput) {
       await styleOf(actor, styleId);

@@ -145,7 +145,7 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
           </div>
           <svg
             ref={svg} viewBox={`${v.viewOrigin.x} ${v.viewOrigin.y} ${vw} ${vh}`} className="h-[70vh] w-full max-w-3xl touch-none border border-calico-200"
-            role="img" aria-label="Traced outline over the photo" data-testid="photo-trace-canvas"
+            role="group" aria-label="Traced outline over the photo" data-testid="photo-trace-canvas"
             onPointerMove={handleMove} onPointerUp={() => setDragging(null)} onPointerLeave={() => setDragging(null)} onClick={handleClick}
           >
             <image href={done.viewUrl} x={v.viewOrigin.x} y={v.viewOrigin.y} width={vw} height={vh} preserveAspectRatio="none" />
