@@ -38,6 +38,8 @@ export default defineConfig({
       },
       workbox: {
         globPatterns: ['**/*.{js,css,html,svg,webmanifest}', 'assets/roboto-latin-*.woff2'],
+        // The photo tracer's worker carries opencv.js (about 10 MB): fetched when a photo is traced, not kept.
+        globIgnores: ['**/photo-trace.worker-*.js'],
         navigateFallback: 'index.html',
         navigateFallbackDenylist: [/^\/api\//],
         cleanupOutdatedCaches: true,

@@ -67,3 +67,6 @@ export { SEAM_TOLERANCE_MM, proposeSeams, seamProblem } from './grade-rules/prop
 export type { SeamCheck, SeamSide, SeamSpec } from './grade-rules/seam-check';
 export { SHIRT_DRESS_SEAMS, gradeStyle } from './grade-rules/grade-style';
 export type { GradedStyle } from './grade-rules/grade-style';
+
+// Tracing a piece from a photo of a calibration sheet.
+export * from './trace/index';

@@ -169,9 +169,13 @@ export type PatternImportInput = z.infer<typeof patternImportInput>;
 
 const xy = z.tuple([z.number().finite().min(-1e6).max(1e6), z.number().finite().min(-1e6).max(1e6)]);
 
-/** POST /styles/:id/pattern/accept: the previewed pieces with the owner's settings; they replace the style's pieces. */
+/**
+ * POST /styles/:id/pattern/accept: the previewed pieces with the owner's settings; they replace the style's
+ * pieces, or with `keepExisting` (a piece traced from a photo) join them, the existing pieces and rules kept.
+ */
 export const patternAcceptInput = z.object({
   outlineIs: z.enum(['sewing', 'cutting'], { error: 'Say whether the outline is the sewing line or the cutting line' }),
+  keepExisting: z.boolean().optional(),
   pieces: z
     .array(
       z.object({

@@ -111,12 +111,24 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       return { ...preview, baseSize: style.baseSize, sizesInFile: sizes, sizesNotInRun: sizes.filter((s) => !style.sizeRun.includes(s)) };
     },
 
-    /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules. */
+    /** Nothing, or a 404 when the style is not the actor's studio's (for routes that read no style data). */
+    async checkStyle(actor: Actor, styleId: number): Promise<void> {
+      await styleOf(actor, styleId);
+    },
+
+    /** Store the accepted pieces as the style's pieces (all or none), replacing the old pieces and their rules, or beside them with `keepExisting`. */
     async acceptPattern(actor: Actor, styleId: number, input: PatternAcceptInput) {
       await styleOf(actor, styleId);
-      const pieces = acceptedPieces(input);
       const set = await sets.byStyle(actor.studioId, styleId);
+      const kept = input.keepExisting ? set?.pieces ?? [] : [];
+      const pieces = acceptedPieces(input, kept.map((p) => p.id));
       if (!set?.sizeChart) throw badRequest("sizeChart: put in the style's size chart before accepting pieces", { sizeChart: "Put in the style's size chart first (Pattern & grading)" });
+      if (input.keepExisting) {
+        // A traced piece joins the style's pieces; their grade rules stay.
+        await sets.save(actor.studioId, styleId, { pieces: [...kept, ...pieces] });
+        await audit.record(actor, 'import_pattern', 'grading_set', set.id, { pieces: kept.map((p) => p.id) }, { pieces: [...kept, ...pieces].map((p) => p.id), outlineIs: input.outlineIs });
+        return get(actor, styleId);
+      }
       const replaced = await sets.replacePieces(actor.studioId, styleId, pieces);
       if (!replaced) throw notFound('Grading set');
       await audit.record(actor, 'import_pattern', 'grading_set', replaced.after.id, { pieces: replaced.before.pieces.map((p) => p.id) }, { pieces: pieces.map((p) => p.id), outlineIs: input.outlineIs });

@@ -72,11 +72,11 @@ const slug = (s: string) => s.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]
  * Pieces to store from the accepted preview: counter-clockwise sewing lines (a cutting line given in the file is
  * offset inwards by the seam allowance), one outline edge with that allowance, notches on the nearest vertex,
  * the grain line from the file or, when the file has none, along the file's y axis through the piece's centre.
- * Every bad piece is a 400 naming it; nothing is built half.
+ * Every bad piece is a 400 naming it; nothing is built half. Ids avoid `takenIds` (pieces the style keeps).
  */
-export function acceptedPieces(input: PatternAcceptInput): Piece[] {
+export function acceptedPieces(input: PatternAcceptInput, takenIds: readonly string[] = []): Piece[] {
   const fields: Record<string, string> = {};
-  const used = new Set<string>();
+  const used = new Set<string>(takenIds);
   const pieces = input.pieces.map((p, i): Piece | null => {
     let ring = p.outline.map(pt);
     if (polygonSignedArea(ring) < 0) ring = ring.reverse();

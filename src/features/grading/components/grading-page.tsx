@@ -8,6 +8,7 @@ import { gradingQueries, useProposeRules } from '../api/grading-queries';
 import { GradeRuleEditor } from './grade-rule-editor';
 import { GradedSetDrawing } from './graded-set-drawing';
 import { PatternImportCard } from './pattern-import-card';
+import { PhotoTraceCard } from './photo-trace-card';
 import { PieceMeasurements } from './piece-measurements';
 import { SeamReport } from './seam-report';
 import { SizeChartGrid } from './size-chart-grid';
@@ -68,6 +69,7 @@ export function GradingPage() {
         <Card title="Seam matching"><SeamReport grading={g} /></Card>
         <Card title="Size chart"><SizeChartGrid styleId={styleId} grading={g} canEdit={canEdit} /></Card>
         {canEdit ? <Card title="Import pattern file"><PatternImportCard styleId={styleId} /></Card> : null}
+        {canEdit ? <Card title="From a photo"><PhotoTraceCard styleId={styleId} /></Card> : null}
         {canEdit ? <Card title="Size mix for a batch"><SizeMixTool styleId={styleId} /></Card> : null}
       </div>
     </>

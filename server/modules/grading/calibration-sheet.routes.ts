@@ -1,0 +1,35 @@
+import type { RequestHandler, Router } from 'express';
+import { calibrationSheetPdf } from '@exports/pdf/calibration-sheet.pdf';
+import { calibrationSheetQuery, type CalibrationSheetQuery } from '../../../shared/schemas/photo-trace';
+import { gradingParams } from '../../../shared/schemas/grading';
+import { sendDownload } from '../../middleware/download';
+import { validate } from '../../middleware/validate';
+import { actorOf } from '../../auth/require';
+import type { GradingService } from './grading.service';
+
+/**
+ * The calibration sheets hold no studio data and never change, so each (kind, paper) is built once per
+ * process and kept: a few kB each, the first request builds it, every later one is a copy from memory.
+ */
+const built = new Map<string, Promise<Buffer>>();
+const sheetBytes = (q: CalibrationSheetQuery) => {
+  const key = `${q.kind}-${q.paper}`;
+  let p = built.get(key);
+  if (!p) {
+    p = calibrationSheetPdf({ kind: q.kind, paper: q.paper });
+    p.catch(() => built.delete(key));
+    built.set(key, p);
+  }
+  return p;
+};
+
+/** GET /api/styles/:id/pattern/calibration-sheet?kind=sheet|border&paper=A4|Letter|whole: the PDF to print. */
+export function addCalibrationSheetRoute(r: Router, read: RequestHandler, service: GradingService): void {
+  r.get('/:id/pattern/calibration-sheet', read, validate({ params: gradingParams, query: calibrationSheetQuery }), async (req, res) => {
+    // The sheet holds no style data, but another studio's style id is still a 404, as on every style route.
+    await service.checkStyle(actorOf(req), Number((req.params as { id: string }).id));
+    const q = req.query as unknown as CalibrationSheetQuery;
+    const name = q.kind === 'sheet' ? `seamrun-calibration-sheet-${q.paper}.pdf` : `seamrun-border-frame-${q.paper}.pdf`;
+    sendDownload(res, { body: await sheetBytes(q), type: 'application/pdf', filename: name });
+  });
+}
