@@ -49,14 +49,16 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     expect(r.placements).toHaveLength(43);
   });
 
-  // Recorded from the engine at commit b9f4f27 (before the fail-fast cell grids and the column
-  // bitsets), seed 1, 400 iterations: L = 67.79405976. The faster overlap tests must not change the
-  // search, so the same budget reaches at least that marker (in fact the identical one).
-  it.skipIf(!hasDatasets)('reaches at least the density of the engine before the fail-fast overlap tests on the same iteration budget', () => {
+  // Was: "reaches at least the density of the engine before the fail-fast overlap tests" (L ≤ 67.794 at 400
+  // iterations, recorded from the engine at b9f4f27). Issue 20 changed the search on purpose (strip cut at a
+  // random x, a pool of failed layouts, compression), so that marker no longer recurs; the floor is now the
+  // reference's single-pass left-bottom baseline (nesting-benchmarks.md, source B, indicative, best of 4:
+  // shapes0 L = 69.286), which the search must beat on a small iteration budget.
+  it.skipIf(!hasDatasets)('beats the single-pass left-bottom baseline on shapes0 on a small iteration budget', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('shapes', 'shapes0.xml'), 'utf8'));
-    const r = nestPieces(input, { seed: 1, maxIterations: 400 });
+    const r = nestPieces(input, { seed: 1, maxIterations: 1000 });
     expect(checkLayout(input, r).errors).toEqual([]);
-    expect(r.length).toBeLessThanOrEqual(67.79405976 + 1e-9);
+    expect(r.length).toBeLessThan(69.286);
   });
 
   const shirtLike: NestingInput = {

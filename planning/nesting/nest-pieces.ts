@@ -31,7 +31,7 @@ const POOL_SIGMA = 0.25;
  * to the left by the difference (sparrow's strip change): the overlaps appear along the cut, spread
  * over the width, instead of piling up at the strip end. Pieces still past the end are pulled in.
  */
-function shortenStrip(layout: LayoutState, length: number, rng: Rng): void {
+export function shortenStrip(layout: LayoutState, length: number, rng: Rng): void {
   const delta = layout.length === Infinity ? layout.usedLength() - length : layout.length - length;
   const cut = rng() * length;
   layout.length = length;
