@@ -97,14 +97,14 @@ async function bestOfTwo(input: NestingInput, seconds: number, seed: number) {
 async function benchGarments(seconds: number, seed: number): Promise<void> {
   const rows = [
     `Garment markers, ${seconds} s each (both cores), demo batch sizes:`,
-    '| style | material | garments | sizes | width mm | pieces | density % | length mm | valid | load avg |',
-    '|---|---|---|---|---|---|---|---|---|---|',
+    '| style | material | garments | sizes | width mm | pieces | density % | length mm | valid | complete | load avg |',
+    '|---|---|---|---|---|---|---|---|---|---|---|',
   ];
   process.stdout.write(rows.join('\n') + '\n');
   for (const m of demoMarkers()) {
     const { r, check } = await bestOfTwo(m.input, seconds, seed);
     const sizes = Object.entries(m.ratio).map(([s, n]) => `${s}×${n}`).join(' ');
-    const line = `| ${m.style} | ${m.material} | ${m.garments} | ${sizes} | ${m.input.stripWidth} | ${r.placements.length} | ${(r.utilisation * 100).toFixed(2)} | ${r.length.toFixed(1)} | ${check.valid} | ${loadavg()[0].toFixed(2)} |`;
+    const line = `| ${m.style} | ${m.material} | ${m.garments} | ${sizes} | ${m.input.stripWidth} | ${r.placements.length} | ${(r.utilisation * 100).toFixed(2)} | ${r.length.toFixed(1)} | ${check.valid} | ${r.complete} | ${loadavg()[0].toFixed(2)} |`;
     process.stdout.write(line + '\n');
     if (!check.valid) process.stderr.write(check.errors.slice(0, 5).join('\n') + '\n');
   }
