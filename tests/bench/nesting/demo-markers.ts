@@ -9,7 +9,7 @@
  * XL 6) shared out over 2, 4 and 6 garments by largest remainder (ties to the larger quantity, then size order).
  * The lined dress has no batch in the demo; it takes the same size mix.
  */
-import { DEMO_SIZE_RUN } from '@grading';
+import { DEMO_SIZE_RUN, demoSizeChart } from '@grading';
 import type { NestingInput } from '../../../planning/nesting';
 import { cuttingPiecesOf, type CuttingPiece } from '../../../server/modules/grading/graded-pieces';
 import { buildMarkerInput } from '../../../server/modules/markers/marker-input';
@@ -17,7 +17,6 @@ import { DEMO_FABRIC } from '../../../server/seed/cutting.seed';
 import { DEMO_QUANTITIES } from '../../../server/seed/demo-studio';
 import { demoGrading } from '../../../server/seed/grading.seed';
 import { LINED_DRESS_FABRICS, LINED_DRESS_STYLE, linedDressGrading } from '../../../server/seed/lined-dress.seed';
-import { demoSizeChart } from '@grading';
 
 export const GARMENT_COUNTS = [2, 4, 6];
 
