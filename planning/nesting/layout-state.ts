@@ -38,10 +38,20 @@ export class LayoutState {
   private readonly itemC0: Int32Array;
   private readonly itemC1: Int32Array;
   private readonly query: Int32Array;
+  /** Per item: √area (the size factor of the overlap cost) and ε = 1 % of the packed shape's diameter. */
+  private readonly size: Float64Array;
+  private readonly eps: Float64Array;
 
   constructor(readonly model: NestModel) {
     const n = model.items.length;
     this.n = n;
+    this.size = new Float64Array(n);
+    this.eps = new Float64Array(n);
+    model.items.forEach((it, i) => {
+      const v = model.variants[it.variants[0]];
+      this.size[i] = Math.sqrt(it.area);
+      this.eps[i] = 0.01 * Math.hypot(v.sMaxX - v.sMinX, v.sMaxY - v.sMinY);
+    });
     this.v = new Int32Array(n);
     this.x = new Float64Array(n);
     this.y = new Float64Array(n);
@@ -92,7 +102,13 @@ export class LayoutState {
     }
   }
 
-  /** Depth of item i (variant vi at xi, yi) into placed item j; 0 when apart or merely touching. */
+  /**
+   * Overlap cost of item i (variant vi at xi, yi) with placed item j; 0 when apart or merely touching.
+   * The penetration depth d from the no-fit polygon (Imamichi, Yagiura & Nagamochi 2009) is turned into
+   * an area-like cost as in Gardeyn, Vanden Berghe & Wauters (2025): sqrt(d² + ε²) × the geometric mean of
+   * the two pieces' √area, with ε = 1 % of the larger piece's diameter. The ε floor makes even a sliver
+   * of overlap cost something (so it gets resolved), the size factor makes large pieces move apart first.
+   */
   pairDepth(i: number, vi: number, xi: number, yi: number, j: number): number {
     const s = this.model.variants[vi];
     if (
@@ -100,7 +116,9 @@ export class LayoutState {
       yi + s.sMinY >= this.by1[j] || yi + s.sMaxY <= this.by0[j]
     ) return 0;
     const d = nfpDepth(this.model.nfps.get(this.v[j], vi), xi - this.x[j], yi - this.y[j]);
-    return d > this.model.touchTolerance ? d : 0;
+    if (d <= this.model.touchTolerance) return 0;
+    const e = Math.max(this.eps[i], this.eps[j]);
+    return Math.sqrt(d * d + e * e) * Math.sqrt(this.size[i] * this.size[j]);
   }
 
   /** Weighted overlap of item i at a trial position; stops early once it exceeds `cutoff`. */

@@ -36,7 +36,7 @@ describe('nestPieces', { timeout: 30_000 }, () => {
 
   it.skipIf(!hasDatasets)('recovers the dighe2 optimum L = 100 (Hopper after Dighe & Jakiela 1996, esicup/dighe/dighe2.xml) for seed 1', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('dighe', 'dighe2.xml'), 'utf8'));
-    const r = nestPieces(input, { seed: 1, maxIterations: 6000 });
+    const r = nestPieces(input, { seed: 1, maxIterations: 3000 });
     expect(checkLayout(input, r).errors).toEqual([]);
     expect(r.length).toBeLessThan(100 + 1e-6);
   });
@@ -49,14 +49,16 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     expect(r.placements).toHaveLength(43);
   });
 
-  // Recorded from the engine at commit b9f4f27 (before the fail-fast cell grids and the column
-  // bitsets), seed 1, 400 iterations: L = 67.79405976. The faster overlap tests must not change the
-  // search, so the same budget reaches at least that marker (in fact the identical one).
-  it.skipIf(!hasDatasets)('reaches at least the density of the engine before the fail-fast overlap tests on the same iteration budget', () => {
+  // Was: "reaches at least the density of the engine before the fail-fast overlap tests" (L ≤ 67.794 at 400
+  // iterations, recorded from the engine at b9f4f27). Issue 20 changed the search on purpose (strip cut at a
+  // random x, a pool of failed layouts, compression), so that marker no longer recurs; the floor is now the
+  // reference's single-pass left-bottom baseline (nesting-benchmarks.md, source B, indicative, best of 4:
+  // shapes0 L = 69.286), which the search must beat on a small iteration budget.
+  it.skipIf(!hasDatasets)('beats the single-pass left-bottom baseline on shapes0 on a small iteration budget', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('shapes', 'shapes0.xml'), 'utf8'));
-    const r = nestPieces(input, { seed: 1, maxIterations: 400 });
+    const r = nestPieces(input, { seed: 1, maxIterations: 1000 });
     expect(checkLayout(input, r).errors).toEqual([]);
-    expect(r.length).toBeLessThanOrEqual(67.79405976 + 1e-9);
+    expect(r.length).toBeLessThan(69.286);
   });
 
   const shirtLike: NestingInput = {
@@ -73,6 +75,23 @@ describe('nestPieces', { timeout: 30_000 }, () => {
     const b = nestPieces(shirtLike, { seed: 42, maxIterations: 300 });
     expect(b).toEqual(a);
     expect(checkLayout(shirtLike, a).errors).toEqual([]);
+  });
+
+  // Issue 20: the search's phases (exploration with its pool of infeasible layouts, then compression) switch
+  // on the share of the iteration budget, never on the clock: a clock running at any speed, with no time
+  // budget, must not change the marker.
+  it.skipIf(!hasDatasets)('returns the identical shapes1 marker for the same seed and iteration budget whatever the clock reads', () => {
+    const { input } = parseEsicupXml(readFileSync(esicup('shapes', 'shapes1.xml'), 'utf8'));
+    let slow = 0, fast = 0;
+    const a = nestPieces(input, { seed: 11, maxIterations: 300, now: () => (slow += 1) });
+    const b = nestPieces(input, { seed: 11, maxIterations: 300, now: () => (fast += 1000) });
+    const c = nestPieces(input, { seed: 11, maxIterations: 300 });
+    expect(checkLayout(input, a).errors).toEqual([]);
+    expect(a.iterations).toBe(300);
+    expect(b).toEqual(a);
+    expect(c).toEqual(a);
+    const other = nestPieces(input, { seed: 12, maxIterations: 300 });
+    expect(other.placements).not.toEqual(a.placements);
   });
 
   it('keeps one-way pieces unrotated and cuts mirrored pieces as normal + mirrored pairs', () => {

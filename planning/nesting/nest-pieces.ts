@@ -4,23 +4,51 @@ import { LayoutState, type LayoutSnapshot } from './layout-state';
 import { buildNestModel, type NestModel } from './nest-model';
 import { createRng, rngInt, type Rng } from './random';
 import { RunBudget } from './run-budget';
-import { EXPLORE_CONFIG, separate } from './separator';
+import { COMPRESS_CONFIG, EXPLORE_CONFIG, separate } from './separator';
 import type { NestingInput, NestingOptions, NestingResult } from './types';
 
 const DEFAULT_MAX_ITERATIONS = 2000;
-/** Strip shortening per step: starts coarse, halves on repeated failure, never below the floor. */
+/**
+ * Exploration (Gardeyn, Vanden Berghe & Wauters 2025, "sparrow"): the strip is shortened by `step`, the
+ * overlaps are removed by guided local search; a failure keeps the infeasible layout in a pool, one of the
+ * pool's layouts (biased to the least overlap) is disrupted by swapping two large pieces and separated
+ * again at the same length. The step starts coarse (a bottom-left start is far from dense) and halves
+ * after `EXPLORE_FAILURES` failures at one length, never below `EXPLORE_MIN_SHRINK` (sparrow's 0.1 %).
+ */
 const INITIAL_SHRINK = 0.02;
-const MIN_SHRINK = 0.0005;
-const COMPRESSION_SHRINK = 0.002;
-const ATTEMPTS_PER_LENGTH = 3;
+const EXPLORE_MIN_SHRINK = 0.001;
+const EXPLORE_FAILURES = 6;
+/** Share of the budget spent exploring; the rest compresses the best marker (sparrow: 80 % / 20 %). */
+const EXPLORE_SHARE = 0.8;
+/** Compression: shrink steps decaying from 0.05 % to 0.001 % over the phase (sparrow's values). */
+const COMPRESS_SHRINK_START = 0.0005;
+const COMPRESS_SHRINK_END = 0.00001;
+/** Standard deviation of |N(0, σ)| picking a pool entry (0 = least overlap, 1 = most). */
+const POOL_SIGMA = 0.25;
 
-/** Move items that stick out past the new strip end back inside it (creating overlaps). */
-function shortenStrip(layout: LayoutState, length: number): void {
+/**
+ * Shorten the strip to `length` by cutting it at a random x and sliding everything right of the cut
+ * to the left by the difference (sparrow's strip change): the overlaps appear along the cut, spread
+ * over the width, instead of piling up at the strip end. Pieces still past the end are pulled in.
+ */
+export function shortenStrip(layout: LayoutState, length: number, rng: Rng): void {
+  const delta = layout.length === Infinity ? layout.usedLength() - length : layout.length - length;
+  const cut = rng() * length;
   layout.length = length;
+  const { variants } = layout.model;
   for (let i = 0; i < layout.n; i++) {
+    const s = variants[layout.v[i]];
+    const centre = layout.x[i] + 0.5 * (s.minX + s.maxX);
     const [x0, x1] = layout.xRange(layout.v[i]);
-    if (layout.x[i] > x1) layout.place(i, layout.v[i], Math.max(x0, x1), layout.y[i]);
+    let x = centre > cut && delta > 0 ? layout.x[i] - delta : layout.x[i];
+    x = Math.min(Math.max(x, x0), Math.max(x0, x1));
+    if (x !== layout.x[i]) layout.place(i, layout.v[i], x, layout.y[i]);
   }
+}
+
+/** Gaussian N(0, 1) by Box–Muller from the seeded generator. */
+function gaussian(rng: Rng): number {
+  return Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
 }
 
 /** Disruption after a failed separation: swap two large items (sparrow's exploration move). */
@@ -68,10 +96,14 @@ function toResult(model: NestModel, layout: LayoutState, snap: LayoutSnapshot, i
  * Nest pattern pieces on a fabric strip of fixed width, minimising the used length.
  *
  * Method (see ../shared/reference/nesting-benchmarks.md, "How the best methods work"): a bottom-left
- * fill on no-fit polygons gives a first marker; then, like Egeblad et al. (2007), Imamichi et al.
- * (2009) and sparrow (Gardeyn et al. 2025), the strip is repeatedly shortened and the overlaps
- * that creates are removed by guided local search over penetration depths; a failed length is
- * retried after swapping two large pieces, then the step shrinks; the best feasible marker is kept.
+ * fill on no-fit polygons gives a first marker (Oliveira, Gomes & Ferreira 2000). Then, as in Egeblad,
+ * Nielsen & Odgaard (2007), Imamichi, Yagiura & Nagamochi (2009) and Gardeyn, Vanden Berghe & Wauters
+ * (2025), the strip is repeatedly shortened and the overlaps that creates are removed by guided local
+ * search (Voudouris & Tsang's adaptive pair penalties) over NFP penetration depths. Exploration (80 % of
+ * the budget, Gardeyn et al. 2025): a failed length keeps its least-overlap layouts in a pool; one of them
+ * is disrupted by swapping two large pieces and separated again; after repeated failures the step halves.
+ * Compression (the last 20 %): tiny decaying steps from the best marker. The best feasible marker is kept.
+ * Every phase switch reads the budget's used share, so a budget in iterations is deterministic.
  *
  * The constructive start polls the budget and the signal before each piece; when either runs out
  * there, the remaining pieces go into bounding-box columns and the marker (valid, but loose) comes
@@ -95,30 +127,63 @@ export function nestPieces(input: NestingInput, options: NestingOptions): Nestin
   const report = () => options.onProgress?.({ bestLength: mm(bestLength), elapsedMs: budget.elapsedMs(), iteration: budget.iterations });
   report();
   const floor = minimumLength(model);
-  let shrink = INITIAL_SHRINK;
   let lastReport = 0;
-  while (constructed && !budget.exhausted()) {
-    const step = budget.fraction() > 0.8 ? Math.min(shrink, COMPRESSION_SHRINK) : shrink;
-    const target = Math.max(floor, bestLength * (1 - step));
-    if (target >= bestLength - 1e-12 * bestLength) break;
-    layout.restore(best);
-    shortenStrip(layout, target);
-    let ok = false;
-    for (let attempt = 0; attempt < ATTEMPTS_PER_LENGTH && !ok && !budget.exhausted(); attempt++) {
-      if (attempt > 0) swapLargeItems(layout, rng);
-      ok = separate(layout, rng, budget, EXPLORE_CONFIG);
-    }
-    if (ok) {
-      best = layout.snapshot();
-      bestLength = layout.usedLength();
-      report();
-    } else {
-      shrink = Math.max(MIN_SHRINK, shrink / 2);
-    }
+  const progress = () => {
     if (budget.iterations - lastReport >= 50) {
       lastReport = budget.iterations;
       report();
     }
+  };
+  const accept = () => {
+    best = layout.snapshot();
+    bestLength = layout.usedLength();
+    report();
+  };
+  // Exploration.
+  let shrink = INITIAL_SHRINK;
+  let pool: { snap: LayoutSnapshot; overlap: number }[] = [];
+  let failures = 0;
+  let target = bestLength;
+  while (constructed && !budget.exhausted() && budget.fraction() < EXPLORE_SHARE) {
+    if (pool.length === 0) {
+      target = Math.max(floor, bestLength * (1 - shrink));
+      if (target >= bestLength - 1e-12 * bestLength) break;
+      layout.restore(best);
+      layout.length = bestLength;
+      shortenStrip(layout, target, rng);
+    } else {
+      const pick = Math.min(pool.length - 1, Math.floor(Math.min(0.999, Math.abs(gaussian(rng)) * POOL_SIGMA) * pool.length));
+      layout.restore(pool[pick].snap);
+      swapLargeItems(layout, rng);
+    }
+    if (separate(layout, rng, budget, EXPLORE_CONFIG)) {
+      accept();
+      pool = [];
+      failures = 0;
+    } else if (!budget.exhausted()) {
+      const overlap = layout.totalOverlap();
+      const at = pool.findIndex((p) => p.overlap > overlap);
+      pool.splice(at < 0 ? pool.length : at, 0, { snap: layout.snapshot(), overlap });
+      if (++failures >= EXPLORE_FAILURES) {
+        shrink = Math.max(EXPLORE_MIN_SHRINK, shrink / 2);
+        pool = [];
+        failures = 0;
+      }
+    }
+    progress();
+  }
+  // Compression: small steps from the best marker, each tried once.
+  const compressFrom = budget.fraction();
+  while (constructed && !budget.exhausted()) {
+    const t = compressFrom < 1 ? Math.min(1, (budget.fraction() - compressFrom) / (1 - compressFrom)) : 1;
+    const step = COMPRESS_SHRINK_START * (COMPRESS_SHRINK_END / COMPRESS_SHRINK_START) ** t;
+    const target = Math.max(floor, bestLength * (1 - step));
+    if (target >= bestLength - 1e-12 * bestLength) break;
+    layout.restore(best);
+    layout.length = bestLength;
+    shortenStrip(layout, target, rng);
+    if (separate(layout, rng, budget, COMPRESS_CONFIG)) accept();
+    progress();
   }
   return toResult(model, layout, best, input, constructed && !budget.aborted, budget.iterations);
 }

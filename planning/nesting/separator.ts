@@ -19,6 +19,15 @@ export const EXPLORE_CONFIG: SeparatorConfig = {
   contactSamples: 12,
 };
 
+/** Compression: more strikes on a layout that is nearly feasible (sparrow: 5 strikes). */
+export const COMPRESS_CONFIG: SeparatorConfig = {
+  strikes: 5,
+  itersWithoutImprovement: 50,
+  uniformSamples: 40,
+  focusedSamples: 20,
+  contactSamples: 12,
+};
+
 interface Pose {
   v: number;
   x: number;
