@@ -46,14 +46,14 @@ function drawLayTicket(doc: PDFKit.PDFDocument, input: CutTicketInput, lay: LayP
     ['Batch', input.batch.code],
     ['Lay no.', String(lay.layNo)],
     ['Size ratio', `${formatRatio(lay.ratio)} (${garments} garments)`],
-    ['Marker length', formatLongLength(lay.markerLengthMm, u)],
+    ['Marker length', formatLongLength(lay.markerLengthMm, u, input.language, input.locale)],
     ['Plies', String(lay.plies)],
     ['Spreading mode', spreadingModeLabel(lay.spreadingMode)],
-    ['End allowance, each end', formatShortLength(lay.endAllowanceMm, u)],
-    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u)}`],
+    ['End allowance, each end', formatShortLength(lay.endAllowanceMm, u, input.language, input.locale)],
+    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u, input.language, input.locale)}`],
   ]);
   doc.font(BOLD_FONT).fontSize(10).text('Plies per roll');
   doc.moveDown(0.3);
-  drawRollTable(doc, lay.rolls, u);
+  drawRollTable(doc, lay.rolls, u, input);
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
 }

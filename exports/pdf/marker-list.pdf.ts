@@ -33,7 +33,7 @@ export async function buildMarkerListPdf(
   drawHeading(doc, MARKER_LIST_TITLE, input, [
     ['Style', `${input.style.code} — ${input.style.name}`],
     ['Batch', input.batch.code],
-    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u)}`],
+    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u, input.language, input.locale)}`],
   ]);
   drawTable(
     doc,
@@ -48,16 +48,16 @@ export async function buildMarkerListPdf(
     input.lays.map((lay) => [
       String(lay.layNo),
       formatRatio(lay.ratio),
-      formatLongLength(lay.markerLengthMm, u),
+      formatLongLength(lay.markerLengthMm, u, input.language, input.locale),
       String(lay.plies),
       spreadingModeLabel(lay.spreadingMode),
-      formatShortLength(lay.endAllowanceMm, u),
+      formatShortLength(lay.endAllowanceMm, u, input.language, input.locale),
     ]),
   );
   for (const lay of input.lays) {
     doc.font(BOLD_FONT).fontSize(10).text(`Lay ${lay.layNo}: rolls`);
     doc.moveDown(0.3);
-    drawRollTable(doc, lay.rolls, u);
+    drawRollTable(doc, lay.rolls, u, input);
   }
   drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
   doc.end();

@@ -72,7 +72,7 @@ export function drawHeading(
     .fontSize(15)
     .text(title, x + 10, top + 10, { lineBreak: false });
   doc.font(BODY_FONT).fontSize(9);
-  const right = `${heading.studioName}  ·  ${formatDate(heading.dateIso, heading.locale)}`;
+  const right = `${heading.studioName}  ·  ${formatDate(heading.dateIso, heading.locale, heading.timeZone)}`;
   doc.text(right, x + 10, top + 13, { width: width - 20, align: 'right', lineBreak: false });
   doc.fillColor(INK).fontSize(10);
   doc.y = top + 46;

@@ -1,9 +1,9 @@
-import type { RollPlan, UnitSystem } from '../types';
+import type { DocumentHeading, RollPlan, UnitSystem } from '../types';
 import { formatLongLength } from './document-format';
 import { drawTable } from './pdf-layout';
 
 /** The rolls of one lay as a table: roll, shade lot, length, plies to spread, expected remnant. */
-export function drawRollTable(doc: PDFKit.PDFDocument, rolls: RollPlan[], unitSystem: UnitSystem) {
+export function drawRollTable(doc: PDFKit.PDFDocument, rolls: RollPlan[], unitSystem: UnitSystem, heading?: DocumentHeading) {
   drawTable(
     doc,
     [
@@ -16,9 +16,9 @@ export function drawRollTable(doc: PDFKit.PDFDocument, rolls: RollPlan[], unitSy
     rolls.map((roll) => [
       roll.rollLabel,
       roll.shadeLot,
-      formatLongLength(roll.lengthMm, unitSystem),
+      formatLongLength(roll.lengthMm, unitSystem, heading?.language, heading?.locale),
       String(roll.pliesToSpread),
-      formatLongLength(roll.expectedRemnantMm, unitSystem),
+      formatLongLength(roll.expectedRemnantMm, unitSystem, heading?.language, heading?.locale),
     ]),
   );
 }

@@ -37,7 +37,7 @@ export function writeTitleBlock(
   sheet.getCell('A1').font = { bold: true, size: 14, color: { argb: HEADER_FILL_ARGB } };
   const rows: (readonly [string, string])[] = [
     ['Studio', heading.studioName],
-    ['Date', formatDate(heading.dateIso, heading.locale)],
+    ['Date', formatDate(heading.dateIso, heading.locale, heading.timeZone)],
     ...extra,
   ];
   rows.forEach(([label, value], i) => {

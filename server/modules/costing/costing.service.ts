@@ -1,3 +1,4 @@
+import { documentSettings } from '../studios/document-settings';
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { MM_PER_YARD, minor, mm, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
@@ -12,7 +13,6 @@ import {
   estimateConsumption,
   ESTIMATE_GARMENT_SAM,
   layTotals,
-  localeForCurrency,
   type LayLike,
 } from './costing-consumption';
 import type { CostingRepository } from './costing.repository';
@@ -127,7 +127,7 @@ export function createCostingService(repo: CostingRepository) {
       fabricFor(studioId, batch),
     ]);
     const sizes = style.sizeRun.map((size) => ({ size, quantity: batch.quantities[size] ?? 0 }));
-    const locale = localeForCurrency(studio.currency);
+    const { locale, language, timeZone } = documentSettings(studio);
     const digits = currencyDigits(studio.currency);
     const notes: string[] = [];
 
@@ -230,6 +230,8 @@ export function createCostingService(repo: CostingRepository) {
       studioName: studio.name,
       dateIso: now.toISOString(),
       locale,
+      language,
+      timeZone,
       currency: studio.currency,
       unitSystem: studio.unitSystem,
       style: { code: style.code, name: style.name },

@@ -2,9 +2,9 @@ import type { BundleRegisterInput, LayPlan, MarkerListInput, SpreadingMode } fro
 import { mm } from '@shared/units/units';
 import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, StudioEntity } from '../../entities';
 import { batchCode } from '../batches/batch.routes';
+import { documentSettings } from '../studios/document-settings';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 
-const LOCALE = 'en-KE';
 
 /** Lays → the marker list / cut ticket input of exports/. End allowance is printed per end (half the per-ply value). */
 export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric: FabricEntity, lays: LayEntity[], today: Date): MarkerListInput {
@@ -22,7 +22,7 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
     })),
   }));
   return {
-    studioName: studio.name, dateIso: today.toISOString(), locale: LOCALE, unitSystem: studio.unitSystem,
+    studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
     fabric: { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: mm(fabric.widthMm) },
     lays: plans,
@@ -33,7 +33,7 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
 export function bundleRegisterInput(studio: StudioEntity, batch: BatchEntity, bundles: BundleEntity[], lays: LayEntity[], ops: OperationEntity[], today: Date): BundleRegisterInput {
   const seqOf = new Map(lays.map((l) => [l.id, l.seq]));
   return {
-    studioName: studio.name, dateIso: today.toISOString(), locale: LOCALE,
+    studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio),
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
     operations: ops.filter((o) => o.section !== 'cutting').map((o) => ({ name: o.name, samMinutes: o.sam })),
     bundles: bundles.map((b) => ({ bundleNo: b.number, size: b.size, shadeLot: b.shadeLot, plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, layNo: seqOf.get(b.layId) ?? 0 })),

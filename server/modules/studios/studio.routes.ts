@@ -12,6 +12,8 @@ const present = (s: StudioEntity): StudioDto => ({
   name: s.name,
   currency: s.currency,
   unitSystem: s.unitSystem,
+  language: s.language,
+  timeZone: s.timeZone,
   workingDayHours: s.workingDayHours,
   machines: s.machines ?? {},
 });

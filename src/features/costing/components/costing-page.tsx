@@ -9,7 +9,7 @@ import { useCan } from '@/lib/auth';
 import { costingQueries, useUpdateCostingSettings } from '../api/costing-queries';
 import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
-import { formatMoney as money } from '@/lib/format';
+import { fmt, formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
 import { AddTrimForm } from './add-trim-form';
 import { paths } from '@/config/paths';
@@ -28,10 +28,10 @@ function Figure({ label, value, testId, strong }: { label: string; value: string
 function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
   const a = sheet.actual;
   const rows: [string, string, string][] = [
-    ['Fabric per garment', a.fabricMmPerGarment.planned ? `${(a.fabricMmPerGarment.planned / 1000).toFixed(3)} m` : '—', a.fabricMmPerGarment.actual !== null ? `${(a.fabricMmPerGarment.actual / 1000).toFixed(3)} m` : 'not cut yet'],
+    ['Fabric per garment', a.fabricMmPerGarment.planned ? fmt().fabricLength(a.fabricMmPerGarment.planned) : '—', a.fabricMmPerGarment.actual !== null ? fmt().fabricLength(a.fabricMmPerGarment.actual) : 'not cut yet'],
     ['Plies spread', String(a.layPlies.planned || '—'), a.layPlies.cut ? String(a.layPlies.cut) : 'not cut yet'],
     ['Standard minutes per garment', String(a.labourMinutesPerGarment.planned), a.labourMinutesPerGarment.actual !== null ? `${a.labourMinutesPerGarment.actual} so far` : 'no work logged'],
-    ['Piece-rate pay logged', '—', money(a.labourPaidMinor, sheet.currency, sheet.locale)],
+    ['Piece-rate pay logged', '—', money(a.labourPaidMinor, sheet.currency)],
   ];
   return (
     <dl className="grid gap-2 text-sm sm:grid-cols-2">
@@ -56,7 +56,7 @@ export function CostingPage() {
   const [downloadError, setDownloadError] = useState<unknown>(null);
   if (error) return <ErrorNote error={error} />;
   if (isLoading || !sheet) return <Spinner />;
-  const fmt = (v: number) => money(v, sheet.currency, sheet.locale);
+  const fmt = (v: number) => money(v, sheet.currency);
   const handleDownload = async () => {
     setDownloadError(null);
     try {

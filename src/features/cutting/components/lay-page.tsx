@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { fmt, formatDateTime } from '@/lib/format';
 import { useEffect, useState } from 'react';
 import { useParams } from 'react-router';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
@@ -77,7 +78,7 @@ export function LayPage() {
         <Card title="Marker">
           <dl className="mb-3 grid grid-cols-2 gap-2 text-sm sm:grid-cols-4">
             <div><dt className="text-xs text-ink-600">Marker length</dt><dd className="font-semibold">{metres(lay.markerLengthMm)}</dd></div>
-            <div><dt className="text-xs text-ink-600">End allowance</dt><dd className="font-semibold">{Math.round(lay.endAllowanceMm / 2)} mm each end</dd></div>
+            <div><dt className="text-xs text-ink-600">End allowance</dt><dd className="font-semibold">{fmt().smallLength(lay.endAllowanceMm / 2)} each end</dd></div>
             <div><dt className="text-xs text-ink-600">Spreading</dt><dd className="font-semibold">{SPREADING_LABELS[lay.spreadingMode] ?? lay.spreadingMode}</dd></div>
             <div><dt className="text-xs text-ink-600">Fabric</dt><dd className="font-semibold">{fabric ? `${fabric.name}, ${Math.round(fabric.widthMm / 10)} cm` : '—'}</dd></div>
           </dl>
@@ -120,7 +121,7 @@ export function LayPage() {
                 onConfirm={() => { const b = body(true); if (b) cut.mutate(b); }}
               />
             </div>
-          ) : retired ? null : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles.</p>}
+          ) : retired ? null : <p className="mt-3 text-sm text-thread-800">Cut {lay.cutAt ? formatDateTime(lay.cutAt) : ''} · {bundles.length} bundles.</p>}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
           {(record.error || cut.error) && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={record.error ?? cut.error} /></div> : null}
         </Card>

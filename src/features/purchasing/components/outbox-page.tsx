@@ -1,4 +1,5 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
+import { formatDateTime } from '@/lib/format';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import type { MailMessageDto } from '@shared/schemas/mail';
@@ -8,7 +9,7 @@ import { outboxQueries } from '../api/purchasing-queries';
 
 const c = createColumnHelper<MailMessageDto>();
 const columns = [
-  c.accessor('createdAt', { header: 'Sent', cell: (i) => new Date(i.getValue()).toLocaleString('en-KE', { dateStyle: 'medium', timeStyle: 'short' }) }),
+  c.accessor('createdAt', { header: 'Sent', cell: (i) => formatDateTime(i.getValue()) }),
   c.accessor('to', { header: 'To' }),
   c.accessor('subject', { header: 'Subject' }),
   c.accessor((m) => m.attachments.map((a) => a.filename).join(', '), { id: 'attachments', header: 'Attachments' }),
