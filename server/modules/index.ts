@@ -8,6 +8,7 @@ import { markersModule } from './markers/markers.module';
 import type { ApiModule } from './module';
 import { payModule } from './pay/pay.module';
 import { purchasingModule } from './purchasing/purchasing.module';
+import { searchModule } from './search/search.module';
 import { uploadsModule } from './uploads/uploads.module';
 
 /** Feature modules in mount order (mail first: others send through it). */
@@ -22,4 +23,5 @@ export const FEATURE_MODULES: ApiModule[] = [
   payModule,
   costingModule,
   purchasingModule,
+  searchModule,
 ];

@@ -110,6 +110,12 @@ export function createAuthService(deps: {
       return { ...toActor(u, 'password'), sessionVersion, mustChangePassword: false };
     },
 
+    /** The person's own language, or null to follow the studio's. */
+    async setLanguage(actor: Actor, language: 'en' | 'fr' | null) {
+      await users.update(actor.studioId, actor.id, { language });
+      await audit.record(actor, 'update', 'user', actor.id, undefined, { language });
+    },
+
     /** Anyone may open a new studio; they become its owner. */
     async createStudio(input: CreateStudioInput) {
       if (await byEmail(input.email)) {
@@ -121,6 +127,8 @@ export function createAuthService(deps: {
           name: input.studioName,
           currency: input.currency,
           unitSystem: input.unitSystem,
+          language: input.language ?? 'en',
+          timeZone: input.timeZone ?? 'UTC',
           workingDayHours: 8,
         });
         const user = await m.getRepository(UserEntity).save({

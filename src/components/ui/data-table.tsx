@@ -8,6 +8,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useSearchParams } from 'react-router';
+import { useTranslation } from '@/lib/i18n';
 
 /**
  * The one table of Seamrun, over TanStack Table. Sort and filter live in the URL query string
@@ -16,9 +17,9 @@ import { useSearchParams } from 'react-router';
 export function DataTable<T>({
   data,
   columns,
-  filterPlaceholder = 'Filter…',
+  filterPlaceholder,
   onRowClick,
-  empty = 'Nothing here yet.',
+  empty,
 }: {
   data: T[];
   columns: ColumnDef<T, any>[];
@@ -26,6 +27,7 @@ export function DataTable<T>({
   onRowClick?: (row: T) => void;
   empty?: string;
 }) {
+  const { t } = useTranslation();
   const [params, setParams] = useSearchParams();
   const q = params.get('q') ?? '';
   const sortParam = params.get('sort');
@@ -59,9 +61,9 @@ export function DataTable<T>({
   return (
     <div>
       <input
-        aria-label="Filter rows"
+        aria-label={filterPlaceholder ?? t('common.filter')}
         className="field-input mb-3 max-w-xs"
-        placeholder={filterPlaceholder}
+        placeholder={filterPlaceholder ?? t('common.filter')}
         value={q}
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
@@ -89,8 +91,19 @@ export function DataTable<T>({
             {table.getRowModel().rows.map((row) => (
               <tr
                 key={row.id}
-                className={`border-t border-calico-200 odd:bg-calico-50 ${onRowClick ? 'cursor-pointer hover:bg-thread-700/5' : ''}`}
+                className={`border-t border-calico-200 odd:bg-calico-50 ${onRowClick ? 'cursor-pointer hover:bg-thread-700/5 focus:outline focus:outline-2 focus:outline-thread-700' : ''}`}
                 onClick={onRowClick ? () => onRowClick(row.original) : undefined}
+                // A row that opens something opens from the keyboard too: Tab to it, then Enter or Space.
+                tabIndex={onRowClick ? 0 : undefined}
+                onKeyDown={
+                  onRowClick
+                    ? (e) => {
+                        if (e.target !== e.currentTarget || (e.key !== 'Enter' && e.key !== ' ')) return;
+                        e.preventDefault();
+                        onRowClick(row.original);
+                      }
+                    : undefined
+                }
               >
                 {row.getVisibleCells().map((cell) => (
                   <td key={cell.id} className="px-3 py-2 align-top">
@@ -102,7 +115,7 @@ export function DataTable<T>({
             {table.getRowModel().rows.length === 0 ? (
               <tr>
                 <td colSpan={columns.length} className="px-3 py-6 text-center text-ink-600">
-                  {empty}
+                  {empty ?? t('common.noRows')}
                 </td>
               </tr>
             ) : null}

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { IconAlert } from './icons';
 import { sentenceOf } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 
 export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: ReactNode; actions?: ReactNode }) {
   return (
@@ -37,6 +38,7 @@ export function Badge({ tone = 'grey', children }: { tone?: keyof typeof tones; 
 
 /** A safety caution panel; always defers to local codes. */
 export function Caution({ title, items, source }: { title: string; items: string[]; source: string }) {
+  const { t } = useTranslation();
   return (
     <aside role="note" className="rounded-card border border-saffron-500/40 bg-saffron-100 p-4 text-sm text-ink-800">
       <p className="mb-2 flex items-center gap-2 font-semibold text-saffron-700">
@@ -48,7 +50,7 @@ export function Caution({ title, items, source }: { title: string; items: string
         ))}
       </ul>
       <p className="mt-2 text-xs text-ink-600">
-        {source} These notes do not replace your local regulations or licensed safety advice; follow them first.
+        {source} {t('common.caution')}
       </p>
     </aside>
   );
@@ -64,6 +66,7 @@ export function ErrorNote({ error }: { error: unknown }) {
   );
 }
 
-export function Spinner({ label = 'Loading…' }: { label?: string }) {
-  return <p className="py-8 text-center text-sm text-ink-600">{label}</p>;
+export function Spinner({ label }: { label?: string }) {
+  const { t } = useTranslation();
+  return <p className="py-8 text-center text-sm text-ink-600">{label ?? t('common.loading')}</p>;
 }
