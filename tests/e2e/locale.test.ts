@@ -13,8 +13,8 @@ import { baseUrl, launchBrowser, shot } from './browser';
 const ZONE = 'America/Toronto';
 const PAGES: Record<string, { email: string; paths: string[] }> = {
   machinist: { email: 'machinist1@tamarind.example', paths: ['/', '/account'] },
-  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/account'] },
-  owner: { email: 'owner@tamarind.example', paths: ['/', '/settings', '/audit', '/account'] },
+  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/fabrics', '/account'] },
+  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/styles', '/costing', '/settings', '/audit', '/account'] },
 };
 
 /** Common English words of the interface (never demo data such as style or fabric names). */
