@@ -13,7 +13,7 @@ import { baseUrl, launchBrowser, shot } from './browser';
 const ZONE = 'America/Toronto';
 const PAGES: Record<string, { email: string; paths: string[] }> = {
   machinist: { email: 'machinist1@tamarind.example', paths: ['/', '/account'] },
-  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/fabrics', '/account'] },
+  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/lays/2', '/fabrics', '/account'] },
   owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/styles', '/costing', '/settings', '/audit', '/account'] },
 };
 
