@@ -84,7 +84,7 @@ describe('a studio in inches and French, in Toronto', () => {
         const found: string[] = [];
         for (const path of paths) {
           const text = await open(page, path);
-          if (path === '/') await shot(page, `fr-inches-${role}-${size}`);
+          await shot(page, `fr-inches-${role}${path === '/' ? '' : path.replace(/\//g, '-')}-${size}`);
           for (const w of englishIn(text)) found.push(`${path}: English "${w}"`);
           const metric = METRIC.exec(text);
           if (metric) found.push(`${path}: metric "${metric[0]}"`);
