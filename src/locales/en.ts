@@ -254,6 +254,13 @@ export const en = {
     fabricPerGarment: 'Fabric per garment', pliesSpread: 'Plies spread', samPerGarment: 'Standard minutes per garment', payLogged: 'Piece-rate pay logged',
     notCut: 'not cut yet', soFar: '{{value}} so far', noWork: 'no work logged', plannedActual: 'Planned {{planned}} · actual {{actual}}',
   },
+  errors: {
+    offline: 'No network: this needs the Seamrun server, which this device cannot reach right now. Try again when the network is back.',
+    unauthenticated: 'The sign-in details are wrong, or you are signed out. Check them and sign in again.',
+    forbidden: 'Your role cannot do this.',
+    rate_limited: 'Too many sign-in attempts; wait a few minutes.',
+    not_found: 'Not found: it may have been removed.',
+  },
   machines: {
     title: 'Machines on the floor',
     intro: 'How many machines of each type the studio has. The line plan never puts more people on a machine type than there are machines; a type not listed here is not limited.',

@@ -256,6 +256,13 @@ export const fr: Dictionary = {
     fabricPerGarment: 'Tissu par vêtement', pliesSpread: 'Plis étendus', samPerGarment: 'Minutes allouées par vêtement', payLogged: 'Paie aux pièces saisie',
     notCut: 'pas encore coupé', soFar: '{{value}} à ce jour', noWork: 'aucun travail saisi', plannedActual: 'Prévu {{planned}} · réel {{actual}}',
   },
+  errors: {
+    offline: 'Pas de réseau : il faut le serveur Seamrun, que cet appareil ne peut pas joindre pour l’instant. Réessayez au retour du réseau.',
+    unauthenticated: 'Les identifiants sont erronés, ou vous êtes déconnecté. Vérifiez-les et reconnectez-vous.',
+    forbidden: 'Votre rôle ne permet pas cette action.',
+    rate_limited: 'Trop de tentatives de connexion ; attendez quelques minutes.',
+    not_found: 'Introuvable : l’élément a peut-être été supprimé.',
+  },
   machines: {
     title: 'Machines de l’atelier',
     intro: 'Combien de machines de chaque type compte l’atelier. Le plan de chaîne ne met jamais plus de personnes sur un type de machine qu’il n’y a de machines ; un type absent de la liste n’est pas limité.',

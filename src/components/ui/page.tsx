@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { IconAlert } from './icons';
 import { sentenceOf } from '@/lib/format';
+import { ApiError } from '@/lib/api-client';
 import { useTranslation } from '@/lib/i18n';
 
 export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: ReactNode; actions?: ReactNode }) {
@@ -56,9 +57,14 @@ export function Caution({ title, items, source }: { title: string; items: string
   );
 }
 
+/** Errors the server words in English, said in the person's language by their stable code (never by their text). */
+const CODED = ['offline', 'unauthenticated', 'forbidden', 'rate_limited', 'not_found'] as const;
+
 export function ErrorNote({ error }: { error: unknown }) {
+  const { t, i18n } = useTranslation();
   if (!error) return null;
-  const message = sentenceOf(error instanceof Error ? error.message : String(error));
+  const coded = error instanceof ApiError && i18n.language !== 'en' && (CODED as readonly string[]).includes(error.code);
+  const message = coded ? t(`errors.${(error as ApiError).code}`) : sentenceOf(error instanceof Error ? error.message : String(error));
   return (
     <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
       {message}
