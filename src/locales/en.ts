@@ -261,6 +261,10 @@ export const en = {
     rate_limited: 'Too many sign-in attempts; wait a few minutes.',
     not_found: 'Not found: it may have been removed.',
   },
+  newBatch: {
+    subtitle: 'Pick a style, enter how many of each size to make, and when it must ship.',
+    quantity: 'Quantity {{size}}', totalGarments: 'Total garments', dueDate: 'Due date', notes: 'Notes', create: 'Create batch',
+  },
   machines: {
     title: 'Machines on the floor',
     intro: 'How many machines of each type the studio has. The line plan never puts more people on a machine type than there are machines; a type not listed here is not limited.',

@@ -263,6 +263,10 @@ export const fr: Dictionary = {
     rate_limited: 'Trop de tentatives de connexion ; attendez quelques minutes.',
     not_found: 'Introuvable : l’élément a peut-être été supprimé.',
   },
+  newBatch: {
+    subtitle: 'Choisissez un modèle, indiquez combien en faire dans chaque taille et quand il doit partir.',
+    quantity: 'Quantité {{size}}', totalGarments: 'Total des vêtements', dueDate: 'Date de livraison', notes: 'Notes', create: 'Créer la série',
+  },
   machines: {
     title: 'Machines de l’atelier',
     intro: 'Combien de machines de chaque type compte l’atelier. Le plan de chaîne ne met jamais plus de personnes sur un type de machine qu’il n’y a de machines ; un type absent de la liste n’est pas limité.',
