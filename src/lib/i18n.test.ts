@@ -1,8 +1,12 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { en } from '@/locales/en';
 import { fr } from '@/locales/fr';
 import { auditChanges, auditSentence } from '@/features/audit/lib/audit-sentence';
-import { i18n } from './i18n';
+import { i18n, loadLanguage } from './i18n';
+
+beforeAll(async () => {
+  await loadLanguage('fr');
+});
 
 const leaves = (o: object, prefix = ''): [string, string][] =>
   Object.entries(o).flatMap(([k, v]) => (typeof v === 'object' ? leaves(v as object, `${prefix}${k}.`) : [[`${prefix}${k}`, String(v)]]));

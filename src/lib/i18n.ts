@@ -2,7 +2,6 @@ import i18n from 'i18next';
 import { initReactI18next, useTranslation } from 'react-i18next';
 import { LANGUAGES, type Language } from '@shared/format/studio-format';
 import { en } from '@/locales/en';
-import { fr } from '@/locales/fr';
 
 const STORED = 'seamrun.language';
 
@@ -14,10 +13,15 @@ function deviceLanguage(): Language {
   return (LANGUAGES as readonly string[]).includes(browser) ? (browser as Language) : 'en';
 }
 
-// Both dictionaries ship in the entry (a few kB gzipped): a phone that goes offline still has its words.
+// English ships in the entry (it is every screen's fallback); other languages are chunks of their own, fetched
+// once and kept by the service worker with the rest of the app, so a phone offline still has its words.
+const LOADERS: Record<Exclude<Language, 'en'>, () => Promise<typeof en>> = {
+  fr: async () => (await import('@/locales/fr')).fr,
+};
+
 void i18n.use(initReactI18next).init({
-  resources: { en: { translation: en }, fr: { translation: fr } },
-  lng: deviceLanguage(),
+  resources: { en: { translation: en } },
+  lng: 'en',
   fallbackLng: 'en',
   supportedLngs: [...LANGUAGES],
   interpolation: { escapeValue: false },
@@ -25,15 +29,25 @@ void i18n.use(initReactI18next).init({
   initAsync: false,
 });
 
-/** Show the app in a language and remember it on this device for the sign-in screen. */
+/** Makes a language's words available (a no-op for English and for one already loaded). */
+export async function loadLanguage(language: Language): Promise<void> {
+  if (language === 'en' || i18n.hasResourceBundle(language, 'translation')) return;
+  i18n.addResourceBundle(language, 'translation', await LOADERS[language](), true, true);
+}
+
+/** Show the app in a language (once its words are here) and remember it on this device for the sign-in screen. */
 export function applyLanguage(language: Language) {
-  if (i18n.language !== language) void i18n.changeLanguage(language);
   try {
     localStorage.setItem(STORED, language);
   } catch {
     // Private mode: the choice lasts for this page only.
   }
   if (typeof document !== 'undefined') document.documentElement.lang = language;
+  if (i18n.language === language) return;
+  void loadLanguage(language).then(() => i18n.changeLanguage(language));
 }
+
+const initial = deviceLanguage();
+if (initial !== 'en' && typeof document !== 'undefined') applyLanguage(initial);
 
 export { i18n, useTranslation };
