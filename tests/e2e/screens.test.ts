@@ -54,11 +54,11 @@ describe('screens', () => {
   it('finds a roll by its label and a style by its code from the one search box, per role', async () => {
     const cutter = await pageFor('cutter@tamarind.example');
     await cutter.locator('#app-search').fill('SCP-0102');
-    await cutter.getByRole('link', { name: /SCP-0102/ }).click();
+    await cutter.getByRole('list', { name: 'Search' }).getByRole('link', { name: /SCP-0102/ }).click();
     await cutter.waitForURL(/\/fabrics\?q=SCP-0102$/);
     const owner = await pageFor('owner@tamarind.example');
     await owner.locator('#app-search').fill('SR-101');
-    await owner.getByRole('link', { name: /SR-101/ }).first().click();
+    await owner.getByRole('list', { name: 'Search' }).getByRole('link', { name: /Style SR-101/ }).click();
     await owner.waitForURL(/\/styles\/\d+$/);
     const machinist = await pageFor('machinist1@tamarind.example');
     expect(await machinist.locator('#app-search').count()).toBe(0);
