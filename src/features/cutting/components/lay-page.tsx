@@ -103,7 +103,7 @@ export function LayPage() {
               <tbody>
                 {lay.rolls.map((r, i) => (
                   <tr key={r.rollId} className="border-t border-calico-200">
-                    <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td>{metres(r.expectedRemnantMm)}</td>
+                    <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td className="whitespace-nowrap">{metres(r.expectedRemnantMm)}</td>
                     <td><input aria-label={t('lay.pliesFrom', { roll: r.label })} className="field-input w-20" type="number" disabled={readOnly} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
                       {fields[`rolls.${i}.actualPlies`] ? <p className="field-error">{fields[`rolls.${i}.actualPlies`]}</p> : null}</td>
                     <td><input aria-label={t('lay.remnantOn', { roll: r.label })} className="field-input w-24" type={imperial ? 'text' : 'number'} step="0.01" disabled={readOnly} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
