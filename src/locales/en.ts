@@ -265,6 +265,11 @@ export const en = {
     subtitle: 'Pick a style, enter how many of each size to make, and when it must ship.',
     quantity: 'Quantity {{size}}', totalGarments: 'Total garments', dueDate: 'Due date', notes: 'Notes', create: 'Create batch',
   },
+  outbox: {
+    title: 'Outbox', subtitle: 'Purchase orders and invitations the studio has e-mailed.', filter: 'Filter messages…', empty: 'Nothing sent yet.',
+    sent: 'Sent', to: 'To', subject: 'Subject', attachments: 'Attachments', toLine: 'To {{to}} · {{files}}', noAttachments: 'no attachments',
+    status: { sent: 'sent', failed: 'failed' },
+  },
   machines: {
     title: 'Machines on the floor',
     intro: 'How many machines of each type the studio has. The line plan never puts more people on a machine type than there are machines; a type not listed here is not limited.',

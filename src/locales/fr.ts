@@ -267,6 +267,11 @@ export const fr: Dictionary = {
     subtitle: 'Choisissez un modèle, indiquez combien en faire dans chaque taille et quand il doit partir.',
     quantity: 'Quantité {{size}}', totalGarments: 'Total des vêtements', dueDate: 'Date de livraison', notes: 'Notes', create: 'Créer la série',
   },
+  outbox: {
+    title: 'Envois', subtitle: 'Bons de commande et invitations envoyés par courriel par l’atelier.', filter: 'Filtrer les messages…', empty: 'Rien d’envoyé pour l’instant.',
+    sent: 'Envoyé le', to: 'À', subject: 'Objet', attachments: 'Pièces jointes', toLine: 'À {{to}} · {{files}}', noAttachments: 'aucune pièce jointe',
+    status: { sent: 'envoyé', failed: 'échec' },
+  },
   machines: {
     title: 'Machines de l’atelier',
     intro: 'Combien de machines de chaque type compte l’atelier. Le plan de chaîne ne met jamais plus de personnes sur un type de machine qu’il n’y a de machines ; un type absent de la liste n’est pas limité.',

@@ -14,7 +14,7 @@ const ZONE = 'America/Toronto';
 const PAGES: Record<string, { email: string; paths: string[] }> = {
   machinist: { email: 'machinist1@tamarind.example', paths: ['/', '/account'] },
   cutter: { email: 'cutter@tamarind.example', paths: ['/', '/lays/2', '/fabrics', '/account'] },
-  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/batches/new', '/styles', '/costing', '/settings', '/audit', '/account'] },
+  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/batches/new', '/styles', '/costing', '/outbox', '/settings', '/audit', '/account'] },
 };
 
 /** Common English words of the interface (never demo data such as style or fabric names). */
