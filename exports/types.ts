@@ -6,6 +6,7 @@
  * unit system; dates arrive as ISO 8601 strings (builders never read the clock).
  */
 import type { Millimetres, MinorUnits } from '@shared/units';
+import type { Language } from '@shared/format/studio-format';
 
 /** How lengths are shown: metres/centimetres, or yards/inches. */
 export type UnitSystem = 'metric' | 'imperial';
@@ -18,6 +19,10 @@ export interface DocumentHeading {
   dateIso: string;
   /** BCP 47 locale for dates and numbers, e.g. `en-GB`. */
   locale: string;
+  /** Language of the document's words (default English). */
+  language?: Language;
+  /** IANA time zone in which dates are shown (default UTC). */
+  timeZone?: string;
 }
 
 /** Heading of a document that shows money. */

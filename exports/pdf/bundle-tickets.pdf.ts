@@ -6,6 +6,7 @@ import QRCode from 'qrcode';
 import type { BundleOperation, BundleTicketsInput } from '../types';
 import { BODY_FONT, BOLD_FONT } from './pdf-fonts';
 import { formatPlyRange } from './document-format';
+import { documentWords } from '../document-words';
 import {
   contentWidth,
   drawCutLine,
@@ -31,9 +32,11 @@ export async function buildBundleTicketsPdf(
   input: BundleTicketsInput,
   options: PdfOptions = {},
 ): Promise<Buffer> {
-  const { doc, bytes } = startPdf(input, BUNDLE_TICKETS_TITLE, options);
+  const t = documentWords(input.language);
+  const title = t('tickets.title');
+  const { doc, bytes } = startPdf(input, title, options);
   if (input.bundles.length === 0)
-    drawHeading(doc, BUNDLE_TICKETS_TITLE, input, [['Batch', input.batch.code]]);
+    drawHeading(doc, title, input, [[t('batch'), input.batch.code]]);
   for (const [i, bundle] of input.bundles.entries()) {
     if (i > 0) doc.addPage();
     const qr = await QRCode.toBuffer(bundle.qrText, {
@@ -41,7 +44,7 @@ export async function buildBundleTicketsPdf(
       margin: 1,
       width: 330,
     });
-    drawHeading(doc, `${BUNDLE_TICKETS_TITLE} — bundle ${bundle.bundleNo}`, input);
+    drawHeading(doc, t('tickets.titleBundle', { bundle: bundle.bundleNo }), input);
     const x = doc.page.margins.left;
     const top = doc.y;
     doc.image(qr, x + contentWidth(doc) - QR_SIZE, top, { width: QR_SIZE, height: QR_SIZE });
@@ -49,16 +52,16 @@ export async function buildBundleTicketsPdf(
       .font(BOLD_FONT)
       .fontSize(26)
       .fillColor(TEAL)
-      .text(`Bundle ${bundle.bundleNo}`, x, top);
+      .text(t('tickets.bundle', { bundle: bundle.bundleNo }), x, top);
     doc.fillColor(INK).fontSize(11);
     const facts: [string, string][] = [
-      ['Style', `${input.style.code} — ${input.style.name}`],
-      ['Batch', input.batch.code],
-      ['Size', bundle.size],
-      ['Shade lot', bundle.shadeLot],
-      ['Plies', formatPlyRange(bundle.plyFrom, bundle.plyTo)],
-      ['Pieces', String(bundle.pieces)],
-      ['Lay no.', String(bundle.layNo)],
+      [t('style'), `${input.style.code} — ${input.style.name}`],
+      [t('batch'), input.batch.code],
+      [t('tickets.size'), bundle.size],
+      [t('tickets.shadeLot'), bundle.shadeLot],
+      [t('tickets.plies'), formatPlyRange(bundle.plyFrom, bundle.plyTo)],
+      [t('tickets.pieces'), String(bundle.pieces)],
+      [t('tickets.layNo'), String(bundle.layNo)],
     ];
     for (const [label, value] of facts) {
       doc
@@ -90,13 +93,14 @@ function drawCoupons(
 ): void {
   const x = doc.page.margins.left;
   const width = contentWidth(doc);
+  const t = documentWords(input.language);
   for (const op of operations) {
     if (doc.y + COUPON_HEIGHT > doc.page.height - doc.page.margins.bottom) {
       doc.addPage();
       doc
         .font(BOLD_FONT)
         .fontSize(11)
-        .text(`Bundle ${bundle.bundleNo} (continued)`, x, doc.page.margins.top);
+        .text(t('tickets.continued', { bundle: bundle.bundleNo }), x, doc.page.margins.top);
       doc.moveDown(0.5);
     }
     const y = doc.y;
@@ -107,8 +111,9 @@ function drawCoupons(
       .fillColor(INK)
       .text(op.name, x + 4, y + 9, { width: width * 0.55, lineBreak: false, ellipsis: true });
     doc.font(BODY_FONT).fontSize(9);
-    doc.text(`SAM ${op.samMinutes.toFixed(2)} min`, x + 4, y + 26, { lineBreak: false });
-    const right = `Bundle ${bundle.bundleNo}  ·  ${input.style.code}  ·  size ${bundle.size}  ·  ${bundle.pieces} pcs`;
+    const sam = new Intl.NumberFormat(input.locale, { minimumFractionDigits: 2, maximumFractionDigits: 2 }).format(op.samMinutes);
+    doc.text(t('tickets.sam', { sam }), x + 4, y + 26, { lineBreak: false });
+    const right = t('tickets.coupon', { bundle: bundle.bundleNo, style: input.style.code, size: bundle.size, count: bundle.pieces });
     doc.text(right, x + width * 0.45, y + 26, {
       width: width * 0.55 - 4,
       align: 'right',

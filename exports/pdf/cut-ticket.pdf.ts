@@ -3,7 +3,8 @@
  */
 import type { CutTicketInput, LayPlan } from '../types';
 import { BOLD_FONT } from './pdf-fonts';
-import { CUTTING_ROOM_CAUTIONS } from './cutting-cautions';
+import { cuttingRoomCautions } from './cutting-cautions';
+import { documentWords } from '../document-words';
 import {
   formatLongLength,
   formatRatio,
@@ -25,10 +26,12 @@ export async function buildCutTicketPdf(
   input: CutTicketInput,
   options: PdfOptions = {},
 ): Promise<Buffer> {
-  const { doc, bytes } = startPdf(input, CUT_TICKET_TITLE, options);
+  const t = documentWords(input.language);
+  const title = input.language && input.language !== 'en' ? t('cutTicket') : CUT_TICKET_TITLE;
+  const { doc, bytes } = startPdf(input, title, options);
   if (input.lays.length === 0) {
-    drawHeading(doc, CUT_TICKET_TITLE, input, [['Batch', input.batch.code]]);
-    doc.text('No lays in this cut order.');
+    drawHeading(doc, title, input, [[t('batch'), input.batch.code]]);
+    doc.text(t('noLays'));
   }
   input.lays.forEach((lay, i) => {
     if (i > 0) doc.addPage();
@@ -40,20 +43,21 @@ export async function buildCutTicketPdf(
 
 function drawLayTicket(doc: PDFKit.PDFDocument, input: CutTicketInput, lay: LayPlan): void {
   const u = input.unitSystem;
+  const t = documentWords(input.language);
   const garments = lay.ratio.reduce((sum, s) => sum + s.count, 0) * lay.plies;
-  drawHeading(doc, `${CUT_TICKET_TITLE} — lay ${lay.layNo}`, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
-    ['Lay no.', String(lay.layNo)],
-    ['Size ratio', `${formatRatio(lay.ratio)} (${garments} garments)`],
-    ['Marker length', formatLongLength(lay.markerLengthMm, u)],
-    ['Plies', String(lay.plies)],
-    ['Spreading mode', spreadingModeLabel(lay.spreadingMode)],
-    ['End allowance, each end', formatShortLength(lay.endAllowanceMm, u)],
-    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u)}`],
+  drawHeading(doc, t('cutTicketLay', { lay: lay.layNo }), input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
+    [t('layNo'), String(lay.layNo)],
+    [t('sizeRatio'), t('ratioGarments', { ratio: formatRatio(lay.ratio), count: garments })],
+    [t('markerLength'), formatLongLength(lay.markerLengthMm, u, input.language, input.locale)],
+    [t('plies'), String(lay.plies)],
+    [t('spreadingMode'), t(`spreading.${lay.spreadingMode}`, { defaultValue: spreadingModeLabel(lay.spreadingMode) })],
+    [t('endAllowanceEach'), formatShortLength(lay.endAllowanceMm, u, input.language, input.locale)],
+    [t('fabric'), t('fabricWidth', { fabric: input.fabric.description, width: formatShortLength(input.fabric.widthMm, u, input.language, input.locale) })],
   ]);
-  doc.font(BOLD_FONT).fontSize(10).text('Plies per roll');
+  doc.font(BOLD_FONT).fontSize(10).text(t('pliesPerRoll'));
   doc.moveDown(0.3);
-  drawRollTable(doc, lay.rolls, u);
-  drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
+  drawRollTable(doc, lay.rolls, u, input);
+  drawCautions(doc, input.cautions ?? cuttingRoomCautions(input.language), input);
 }

@@ -5,6 +5,9 @@
  * Materials*, p. 103 and p. 107 for spread height against the knife; OSHA 29 CFR 1910.212(a)(1) for guarding
  * at the point of operation (as summarised in /work/shared/reference/production-and-costing.md §6).
  */
+import type { Language } from '@shared/format/studio-format';
+import { documentWords } from '../document-words';
+
 export const CUTTING_ROOM_CAUTIONS: readonly string[] = [
   'Keep the knife guard down and adjusted to the spread; wear the five-finger mesh (chain-mail) glove on the hand that holds the lay.',
   'Keep the ply height within the limit of the knife: below the straight knife blade length, about a quarter of a round knife\u2019s diameter.',
@@ -12,6 +15,12 @@ export const CUTTING_ROOM_CAUTIONS: readonly string[] = [
   'Mark the danger area around the cutting table and keep others out while a motorised blade is moving.',
   'Clear fluff and off-cuts; never leave a cutting machine running unattended.',
 ];
+
+/** The usual cautions in the document's language (the English ones above, or their translation). */
+export function cuttingRoomCautions(language: Language = 'en'): string[] {
+  const t = documentWords(language);
+  return [t('cautions.c1'), t('cautions.c2'), t('cautions.c3'), t('cautions.c4'), t('cautions.c5')];
+}
 
 /** Heading and footnote printed with the cautions. */
 export const CUTTING_ROOM_CAUTIONS_TITLE =

@@ -2,7 +2,8 @@
  * Text and number formatting shared by the xlsx and pdf builders: dates from ISO strings, money from minor
  * units, lengths from millimetres in the studio's unit system. Pure; reads no clock.
  */
-import { MM_PER_INCH, MM_PER_YARD } from '@shared/units';
+import { MM_PER_YARD } from '@shared/units';
+import { isTimeZone, studioFormat, type Language } from '@shared/format/studio-format';
 import { currencyDigits, currencyFormatOptions } from '@shared/units/money';
 import type { SpreadingMode, UnitSystem } from '../types';
 
@@ -44,13 +45,15 @@ export function spreadsheetCurrencyFormat(
 }
 
 /**
- * The calendar date of an ISO 8601 string, in UTC, as locale text (`14 Mar 2026` in en-GB).
- * Throws RangeError when the string is not a date.
+ * The calendar date of an ISO 8601 string as locale text (`14 Mar 2026` in en-GB): an instant's date in the
+ * studio's time zone (default UTC), a bare `YYYY-MM-DD` as that day. Throws RangeError when the string is not a date.
  */
-export function formatDate(iso: string, locale: string): string {
-  const time = Date.parse(/^\d{4}-\d{2}-\d{2}$/.test(iso) ? `${iso}T00:00:00Z` : iso);
+export function formatDate(iso: string, locale: string, timeZone = 'UTC'): string {
+  const dateOnly = /^\d{4}-\d{2}-\d{2}$/.test(iso);
+  const time = Date.parse(dateOnly ? `${iso}T00:00:00Z` : iso);
   if (Number.isNaN(time)) throw new RangeError(`not an ISO 8601 date: ${iso}`);
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone: 'UTC' }).format(time);
+  const zone = dateOnly || !isTimeZone(timeZone) ? 'UTC' : timeZone;
+  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone: zone }).format(time);
 }
 
 /** Parses an ISO 8601 string to a Date (for workbook properties). Throws RangeError when invalid. */
@@ -73,16 +76,22 @@ export function toLongLength(lengthMm: number, system: UnitSystem): number {
   return Number(value.toFixed(6));
 }
 
-/** A long length as text: `6.500 m` or `7.109 yd` (3 decimals: 1 mm). */
-export function formatLongLength(lengthMm: number, system: UnitSystem): string {
-  return `${toLongLength(lengthMm, system).toFixed(3)} ${longLengthUnit(system)}`;
+const lengths = (system: UnitSystem, language: Language = 'en', locale?: string) =>
+  studioFormat({ unitSystem: system, currency: 'XXX', language, timeZone: 'UTC', locale: locale ?? language });
+
+/**
+ * A long length (fabric, markers, rolls) as text: `6.50 m`, or yards and inches to 1/8 (`7 yd 3 1/2"`,
+ * never decimal yards), through the one fabric-length formatter of shared/format.
+ */
+export function formatLongLength(lengthMm: number, system: UnitSystem, language?: Language, locale?: string): string {
+  return lengths(system, language, locale).fabricLength(lengthMm);
 }
 
-/** A short length (allowances, widths) as text: `1.0 cm` or `0.39 in`. */
-export function formatShortLength(lengthMm: number, system: UnitSystem): string {
+/** A short length (allowances, widths) as text: `1 cm`/`150 cm`, or inches to 1/8 (`57 1/8"`, never `57.09 in`). */
+export function formatShortLength(lengthMm: number, system: UnitSystem, language?: Language, locale?: string): string {
   return system === 'metric'
-    ? `${(lengthMm / 10).toFixed(1)} cm`
-    : `${(lengthMm / MM_PER_INCH).toFixed(2)} in`;
+    ? `${lengths(system, language, locale).number(lengthMm / 10, 1)} cm`
+    : lengths(system, language, locale).length(lengthMm);
 }
 
 const SPREADING_MODE_LABELS: Record<SpreadingMode, string> = {

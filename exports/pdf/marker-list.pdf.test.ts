@@ -24,10 +24,10 @@ describe('buildMarkerListPdf', () => {
     expect(text).toContain('S×1 M×2 L×1');
     expect(text).toContain('Face to face, zig-zag');
     // Jana (2008) R1 [quoted]: 6.5 m lay; roll A 15 m, 2 plies, 2 m remnant
-    expect(text).toContain('6.500 m');
-    expect(text).toContain('15.000 m');
-    expect(text).toContain('2.000 m');
-    expect(text).toContain('1.0 cm');
+    expect(text).toContain('6.50 m');
+    expect(text).toContain('15.00 m');
+    expect(text).toContain('2.00 m');
+    expect(text).toContain('1 cm');
     expect(text).toContain(CUTTING_ROOM_CAUTIONS_TITLE);
     expect(text).toContain('mesh (chain-mail) glove');
   });
@@ -40,7 +40,9 @@ describe('buildMarkerListPdf', () => {
     const text = pdfText(await buildMarkerListPdf(input, { compress: false }));
     expect(text).toContain('Custom caution from the studio.');
     expect(text).not.toContain('mesh (chain-mail) glove');
-    expect(text).toContain('7.108 yd');
+    // 6.5 m ÷ 0.9144 m/yd = 7.1085 yd = 7 yd 3.906 in (1 yd = 36 in, NIST SP 811 B.9): 3 7/8 in to the nearest 1/8.
+    expect(text).toContain('7 yd 3 7/8"');
+    expect(text).not.toMatch(/\d\.\d+ (yd|in)\b/);
   });
 
   // Jana (2008) R1, via Scribd 561483911 [quoted]: 6.5 m lay; roll A 15 m → 2 plies, 2 m left; roll B 16 m → 2 plies, 3 m left.
@@ -77,7 +79,7 @@ describe('buildCutTicketPdf', () => {
     expect(text).toContain('Cut ticket — lay 2');
     expect(text).toContain('S×1 M×2 L×1 (16 garments)');
     expect(text).toContain('XL×2 (6 garments)');
-    expect(text).toContain('Viscose twill, navy, width 145.0 cm');
+    expect(text).toContain('Viscose twill, navy, width 145 cm');
     expect(
       text.match(new RegExp(CUTTING_ROOM_CAUTIONS_TITLE.replace(/[()]/g, '\\$&'), 'g'))?.length,
     ).toBe(2);

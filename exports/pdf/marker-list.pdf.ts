@@ -4,7 +4,8 @@
  */
 import type { MarkerListInput } from '../types';
 import { BOLD_FONT } from './pdf-fonts';
-import { CUTTING_ROOM_CAUTIONS } from './cutting-cautions';
+import { cuttingRoomCautions } from './cutting-cautions';
+import { documentWords } from '../document-words';
 import {
   formatLongLength,
   formatRatio,
@@ -30,41 +31,43 @@ export async function buildMarkerListPdf(
   input: MarkerListInput,
   options: PdfOptions = {},
 ): Promise<Buffer> {
-  const { doc, bytes } = startPdf(input, MARKER_LIST_TITLE, options);
+  const t = documentWords(input.language);
+  const title = input.language && input.language !== 'en' ? t('markerList') : MARKER_LIST_TITLE;
+  const { doc, bytes } = startPdf(input, title, options);
   const u = input.unitSystem;
-  drawHeading(doc, MARKER_LIST_TITLE, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
-    ['Fabric', `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, u)}`],
+  drawHeading(doc, title, input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
+    [t('fabric'), t('fabricWidth', { fabric: input.fabric.description, width: formatShortLength(input.fabric.widthMm, u, input.language, input.locale) })],
   ]);
   drawTable(
     doc,
     [
-      { header: 'Lay no.', width: 45 },
-      { header: 'Size ratio', width: 120 },
-      { header: 'Marker length', width: 80 },
-      { header: 'Plies', width: 40 },
-      { header: 'Spreading mode', width: 115 },
-      { header: 'End allowance (each end)', width: 115 },
+      { header: t('layNo'), width: 45 },
+      { header: t('sizeRatio'), width: 120 },
+      { header: t('markerLength'), width: 80 },
+      { header: t('plies'), width: 40 },
+      { header: t('spreadingMode'), width: 115 },
+      { header: t('endAllowance'), width: 115 },
     ],
     input.lays.map((lay) => [
       String(lay.layNo),
       formatRatio(lay.ratio),
-      formatLongLength(lay.markerLengthMm, u),
+      formatLongLength(lay.markerLengthMm, u, input.language, input.locale),
       String(lay.plies),
-      spreadingModeLabel(lay.spreadingMode),
-      formatShortLength(lay.endAllowanceMm, u),
+      t(`spreading.${lay.spreadingMode}`, { defaultValue: spreadingModeLabel(lay.spreadingMode) }),
+      formatShortLength(lay.endAllowanceMm, u, input.language, input.locale),
     ]),
   );
   if (input.byRoll) drawRollSections(doc, input.byRoll, u);
   else {
     for (const lay of input.lays) {
-      doc.font(BOLD_FONT).fontSize(10).text(`Lay ${lay.layNo}: rolls`);
+      doc.font(BOLD_FONT).fontSize(10).text(t('layRolls', { lay: lay.layNo }));
       doc.moveDown(0.3);
-      drawRollTable(doc, lay.rolls, u);
+      drawRollTable(doc, lay.rolls, u, input);
     }
   }
-  drawCautions(doc, input.cautions ?? CUTTING_ROOM_CAUTIONS);
+  drawCautions(doc, input.cautions ?? cuttingRoomCautions(input.language), input);
   doc.end();
   return bytes;
 }

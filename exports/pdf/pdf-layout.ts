@@ -7,7 +7,7 @@
 import PDFDocument from 'pdfkit';
 import { BODY_FONT, BOLD_FONT, useSeamrunFonts } from './pdf-fonts';
 import type { DocumentHeading } from '../types';
-import { CUTTING_ROOM_CAUTIONS_SOURCE, CUTTING_ROOM_CAUTIONS_TITLE } from './cutting-cautions';
+import { documentWords } from '../document-words';
 import { formatDate, parseIsoDate } from './document-format';
 
 /** Options every PDF builder takes; `compress: false` keeps content streams readable (tests). */
@@ -72,7 +72,7 @@ export function drawHeading(
     .fontSize(15)
     .text(title, x + 10, top + 10, { lineBreak: false });
   doc.font(BODY_FONT).fontSize(9);
-  const right = `${heading.studioName}  ·  ${formatDate(heading.dateIso, heading.locale)}`;
+  const right = `${heading.studioName}  ·  ${formatDate(heading.dateIso, heading.locale, heading.timeZone)}`;
   doc.text(right, x + 10, top + 13, { width: width - 20, align: 'right', lineBreak: false });
   doc.fillColor(INK).fontSize(10);
   doc.y = top + 46;
@@ -146,8 +146,9 @@ export function drawTable(
   doc.moveDown(0.8);
 }
 
-/** Draws the cutting-room cautions in a sand box. */
-export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[]): void {
+/** Draws the cutting-room cautions in a sand box, titled in the document's language. */
+export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[], heading?: DocumentHeading): void {
+  const t = documentWords(heading?.language);
   const x = doc.page.margins.left;
   const width = contentWidth(doc);
   doc.font(BODY_FONT).fontSize(8.5);
@@ -160,7 +161,7 @@ export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[
     .fillColor(TEAL)
     .font(BOLD_FONT)
     .fontSize(10)
-    .text(CUTTING_ROOM_CAUTIONS_TITLE, x + 8, y + 8, { width: width - 16 });
+    .text(t('cautions.title'), x + 8, y + 8, { width: width - 16 });
   doc
     .fillColor(INK)
     .font(BODY_FONT)
@@ -169,7 +170,7 @@ export function drawCautions(doc: PDFKit.PDFDocument, cautions: readonly string[
   doc
     .fontSize(7)
     .fillColor('#555555')
-    .text(CUTTING_ROOM_CAUTIONS_SOURCE, x + 8, doc.y + 2, { width: width - 16 });
+    .text(t('cautions.source'), x + 8, doc.y + 2, { width: width - 16 });
   doc.fillColor(INK);
   doc.x = x;
   doc.y = y + height + 8;

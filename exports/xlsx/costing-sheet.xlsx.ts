@@ -4,6 +4,8 @@
  * that recalculates follows a changed price and one that does not shows the app's figures.
  */
 import type ExcelJS from 'exceljs';
+import type { TFunction } from 'i18next';
+import { documentWords } from '../document-words';
 import type { CostingSheetInput } from '../types';
 import { longLengthUnit, spreadsheetCurrencyFormat } from '../pdf/document-format';
 import {
@@ -39,27 +41,29 @@ const FIRST_QTY_COL = 5;
  */
 export async function buildCostingSheetXlsx(input: CostingSheetInput): Promise<Buffer> {
   const figures = computeCostingFigures(input);
+  const t = documentWords(input.language);
+  const sheetName = input.language && input.language !== 'en' ? t('costing.sheet') : COSTING_SHEET_NAME;
   const workbook = createWorkbook(input);
-  const sheet = workbook.addWorksheet(COSTING_SHEET_NAME);
+  const sheet = workbook.addWorksheet(sheetName);
   const money = spreadsheetCurrencyFormat(input.currency, input.locale);
   const rateFormat = spreadsheetCurrencyFormat(input.currency, input.locale, 4);
   const n = input.sizes.length;
   const costCol = (i: number) => FIRST_QTY_COL + n + i;
   const totalCol = FIRST_QTY_COL + 2 * n;
 
-  let rowNo = writeTitleBlock(sheet, COSTING_SHEET_NAME, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
-    ['Currency', input.currency],
-    ['Lengths in', longLengthUnit(input.unitSystem) === 'm' ? 'metres' : 'yards'],
+  let rowNo = writeTitleBlock(sheet, sheetName, input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
+    [t('currency'), input.currency],
+    [t('costing.lengthsIn'), longLengthUnit(input.unitSystem) === 'm' ? t('costing.metres') : t('costing.yards')],
   ]);
   writeHeaderRow(sheet, rowNo, [
-    'Cost line',
-    'Kind',
-    'Unit',
-    'Price',
-    ...input.sizes.map((s) => `${s.size}: quantity per garment`),
-    ...input.sizes.map((s) => `${s.size}: cost per garment`),
+    t('costing.costLine'),
+    t('costing.kind'),
+    t('costing.unit'),
+    t('costing.price'),
+    ...input.sizes.map((s) => t('costing.qtyPerGarment', { size: s.size })),
+    ...input.sizes.map((s) => t('costing.costPerGarment', { size: s.size })),
   ]);
   const firstLineRow = rowNo + 1;
   figures.lines.forEach((line, i) => {
@@ -72,16 +76,17 @@ export async function buildCostingSheetXlsx(input: CostingSheetInput): Promise<B
       money,
       rateFormat,
       costCol,
+      t,
     );
     bandRow(sheet.getRow(firstLineRow + i), i, 1, costCol(n - 1));
   });
   const lastLineRow = firstLineRow + figures.lines.length - 1;
   const unitCostRow = lastLineRow + 1;
-  writeUnitCostRow(sheet, unitCostRow, firstLineRow, lastLineRow, figures, money, costCol);
+  writeUnitCostRow(sheet, unitCostRow, firstLineRow, lastLineRow, figures, money, costCol, t);
 
   rowNo = unitCostRow + 2;
-  writeHeaderRow(sheet, rowNo, ['Batch totals', '', '', '']);
-  writeHeaderRow(sheet, rowNo, [...input.sizes.map((s) => s.size), 'Total'], costCol(0));
+  writeHeaderRow(sheet, rowNo, [t('costing.batchTotals'), '', '', '']);
+  writeHeaderRow(sheet, rowNo, [...input.sizes.map((s) => s.size), t('costing.total')], costCol(0));
   const batch = writeBatchRows(
     sheet,
     rowNo + 1,
@@ -91,8 +96,9 @@ export async function buildCostingSheetXlsx(input: CostingSheetInput): Promise<B
     money,
     costCol,
     totalCol,
+    t,
   );
-  writeSummary(sheet, batch.nextRow + 1, batch, input, figures, money);
+  writeSummary(sheet, batch.nextRow + 1, batch, input, figures, money, t);
   setWidths(sheet, totalCol);
   return workbookToBuffer(workbook);
 }
@@ -126,11 +132,12 @@ function writeCostLine(
   money: string,
   rateFormat: string,
   costCol: (i: number) => number,
+  t: TFunction,
 ): void {
   const row = sheet.getRow(rowNo);
   row.getCell(1).value = line.description;
-  row.getCell(2).value = line.kind;
-  row.getCell(3).value = line.unit;
+  row.getCell(2).value = t(`costing.kinds.${line.kind}`, { defaultValue: line.kind });
+  row.getCell(3).value = t(`costing.units.${line.unit}`, { defaultValue: line.unit });
   const price = row.getCell(PRICE_COL);
   price.value = line.priceCell;
   price.numFmt = line.shape === 'percent-of-running' ? '0.00%' : money;
@@ -160,9 +167,10 @@ function writeUnitCostRow(
   figures: CostingFigures,
   money: string,
   costCol: (i: number) => number,
+  t: TFunction,
 ): void {
   const row = sheet.getRow(rowNo);
-  row.getCell(1).value = 'Unit cost';
+  row.getCell(1).value = t('costing.unitCost');
   figures.unitCostMinor.forEach((cost, i) => {
     const cell = row.getCell(costCol(i));
     const sum =
@@ -188,12 +196,13 @@ function writeBatchRows(
   money: string,
   costCol: (i: number) => number,
   totalCol: number,
+  t: TFunction,
 ): BatchCells {
   const scale = 10 ** figures.digits;
   const qtyRow = sheet.getRow(rowNo);
   const costRow = sheet.getRow(rowNo + 1);
-  qtyRow.getCell(1).value = 'Garments in batch';
-  costRow.getCell(1).value = 'Batch cost';
+  qtyRow.getCell(1).value = t('costing.garmentsInBatch');
+  costRow.getCell(1).value = t('costing.batchCost');
   input.sizes.forEach((s, i) => {
     const qty = qtyRow.getCell(costCol(i));
     qty.value = s.quantity;
@@ -229,13 +238,14 @@ function writeSummary(
   input: CostingSheetInput,
   figures: CostingFigures,
   money: string,
+  t: TFunction,
 ): void {
   const d = figures.digits;
   const scale = 10 ** d;
   const at = (offset: number) => ref(PRICE_COL, rowNo + offset);
   const rows: [string, ExcelJS.CellValue, string, boolean][] = [
     [
-      'Average unit cost',
+      t('costing.averageUnitCost'),
       formula(
         `IF(${batch.totalQuantity}=0,0,ROUND(${batch.totalCost}/${batch.totalQuantity},${d}))`,
         figures.averageUnitCostMinor / scale,
@@ -243,16 +253,16 @@ function writeSummary(
       money,
       false,
     ],
-    ['Margin on wholesale price', input.marginPercent / 100, '0.00%', true],
+    [t('costing.margin'), input.marginPercent / 100, '0.00%', true],
     [
-      'Wholesale price',
+      t('costing.wholesale'),
       formula(`ROUND(${at(0)}/(1-${at(1)}),${d})`, figures.wholesaleMinor / scale),
       money,
       false,
     ],
-    ['Retail multiplier (keystone = 2)', figures.retailMultiplier, '0.00', true],
+    [t('costing.multiplier'), figures.retailMultiplier, '0.00', true],
     [
-      'Suggested retail price',
+      t('costing.retail'),
       formula(`ROUND(${at(2)}*${at(3)},${d})`, figures.suggestedRetailMinor / scale),
       money,
       false,
@@ -269,7 +279,7 @@ function writeSummary(
     bandRow(row, i, 1, PRICE_COL);
   });
   sheet.getRow(rowNo + rows.length + 1).getCell(1).value =
-    'Cells with a teal border are inputs: change a price or a quantity and every total follows.';
+    t('costing.inputsNote');
 }
 
 function setWidths(sheet: ExcelJS.Worksheet, lastCol: number): void {

@@ -48,7 +48,7 @@ export async function buildMarkerListXlsx(input: MarkerListInput): Promise<Buffe
     ['Batch', input.batch.code],
     [
       'Fabric',
-      `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, input.unitSystem)}`,
+      `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, input.unitSystem, input.language, input.locale)}`,
     ],
   ]);
 

@@ -6,6 +6,7 @@
 import ExcelJS from 'exceljs';
 import type { DocumentHeading } from '../types';
 import { formatDate, parseIsoDate } from '../pdf/document-format';
+import { documentWords } from '../document-words';
 
 /** Header fill (deep teal) and banding fill (light sand), ARGB. */
 export const HEADER_FILL_ARGB = 'FF0F4C5C';
@@ -36,8 +37,8 @@ export function writeTitleBlock(
   sheet.getCell('A1').value = title;
   sheet.getCell('A1').font = { bold: true, size: 14, color: { argb: HEADER_FILL_ARGB } };
   const rows: (readonly [string, string])[] = [
-    ['Studio', heading.studioName],
-    ['Date', formatDate(heading.dateIso, heading.locale)],
+    [documentWords(heading.language)('studio'), heading.studioName],
+    [documentWords(heading.language)('date'), formatDate(heading.dateIso, heading.locale, heading.timeZone)],
     ...extra,
   ];
   rows.forEach(([label, value], i) => {

@@ -16,6 +16,14 @@ export class StudioEntity {
   @Column({ type: 'varchar', length: 8, default: 'metric' })
   unitSystem: 'metric' | 'imperial';
 
+  /** The studio's language for screens and documents (a person may pick their own): `en` or `fr`. */
+  @Column({ type: 'varchar', length: 8, default: 'en' })
+  language: 'en' | 'fr';
+
+  /** IANA time zone the studio works in (`Africa/Nairobi`); dates and times are shown there. */
+  @Column({ type: 'varchar', length: 64, default: 'UTC' })
+  timeZone: string;
+
   @Column({ type: 'real', default: 8 })
   workingDayHours: number;
 

@@ -70,6 +70,10 @@ export class UserEntity {
   @Column({ type: 'simple-json', nullable: true })
   skills: Record<string, number> | null;
 
+  /** The person's own language (`en`, `fr`); null: the studio's. */
+  @Column({ type: 'varchar', length: 8, nullable: true })
+  language: 'en' | 'fr' | null;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

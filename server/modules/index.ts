@@ -13,6 +13,7 @@ import { createMarkersModule } from './markers/markers.module';
 import type { ApiModule, ModuleContext } from './module';
 import { createPayModule } from './pay/pay.module';
 import { createPurchasingModule } from './purchasing/purchasing.module';
+import { createSearchModule } from './search/search.module';
 import { createStudiosModule } from './studios/studios.module';
 import { createStylesModule } from './styles/styles.module';
 import { createUploadsModule } from './uploads/uploads.module';
@@ -64,9 +65,10 @@ export function createModules(base: Omit<ModuleContext, 'audit'>, opts: ModuleOp
   const floor = createFloorModule(ctx);
   const pay = createPayModule(ctx, { floor: floor.services.progress });
   const purchasing = createPurchasingModule(ctx, { costing: costing.services.costing, mail: mail.services.mail });
+  const search = createSearchModule(ctx);
   return {
     /** Mount order: auth before every area, the areas sharing /api/styles and /api/batches in this order. */
-    modules: { auth, users, studio, styles: stylesModule, batches: batchesModule, audit, mail, uploads, grading, markers, cutting, line, floor, pay, costing, purchasing } satisfies Record<string, ApiModule>,
+    modules: { auth, users, studio, styles: stylesModule, batches: batchesModule, audit, mail, uploads, grading, markers, cutting, line, floor, pay, costing, purchasing, search } satisfies Record<string, ApiModule>,
     /** Each area's services another area, createApp or a test reads; nothing else. */
     services: {
       audit: audit.services,

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { ROLES } from '../auth/permissions';
 import { currencyCode } from './common';
+import { languageField, timeZoneField } from './studio';
 
 /** The one form of a sign-in e-mail, for the account lookup and the rate limiter alike. */
 export const normaliseEmail = (email: unknown) => String(email ?? '').trim().toLowerCase();
@@ -51,6 +52,8 @@ export const createStudioInput = z.object({
   studioName: z.string().trim().min(2, 'Studio name is required').max(120),
   currency: currencyCode,
   unitSystem: z.enum(['metric', 'imperial']),
+  language: languageField.optional(),
+  timeZone: timeZoneField.optional(),
   ownerName: z.string().trim().min(1, 'Your name is required').max(120),
   email: z.string().trim().toLowerCase().email('Enter a valid email').max(200),
   password: passwordRule,
@@ -68,5 +71,15 @@ export type UserDto = z.infer<typeof userSchema> & {
   studioName: string;
   currency: string;
   unitSystem: 'metric' | 'imperial';
+  /** The language this person reads: their own choice, else the studio's. */
+  language: 'en' | 'fr';
+  /** The person's own choice; null when they follow the studio. */
+  ownLanguage: 'en' | 'fr' | null;
+  studioLanguage: 'en' | 'fr';
+  timeZone: string;
   mustChangePassword: boolean;
 };
+
+/** A person's own settings: their language, or null to follow the studio's. */
+export const updateMeInput = z.object({ language: languageField.nullable() });
+export type UpdateMeInput = z.infer<typeof updateMeInput>;

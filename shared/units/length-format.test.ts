@@ -69,6 +69,12 @@ describe('parseLength', () => {
     expect(parseLength('1.5 m', 'imperial')).toBe(1500);
   });
 
+  it('reads the French unit words when a French screen asks for verges and pouces', () => {
+    // 1 yd = 914.4 mm and 1 in = 25.4 mm exactly (NIST SP 811, Appendix B.8).
+    expect(parseLength('1,5 vg', 'imperial')).toBeCloseTo(1371.6, 10);
+    expect(parseLength('54 1/2 po', 'imperial')).toBeCloseTo(1384.3, 10);
+  });
+
   it('rejects malformed text', () => {
     for (const bad of ['', 'abc', '1/0', '3 furlongs', '1 2 3']) expect(parseLength(bad, 'metric')).toBeNull();
   });

@@ -57,6 +57,9 @@ const UNIT_MM: Record<string, number> = {
   yds: MM_PER_YARD,
   yard: MM_PER_YARD,
   yards: MM_PER_YARD,
+  // French: pouce (inch) and verge (yard), as the studio's French screens write them.
+  po: MM_PER_INCH,
+  vg: MM_PER_YARD,
 };
 
 const NUMBER = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;

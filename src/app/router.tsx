@@ -1,6 +1,7 @@
 import { Suspense } from 'react';
 import { createBrowserRouter, Navigate, Outlet, useRouteError } from 'react-router';
 import { Spinner } from '@/components/ui/page';
+import { useTranslation } from '@/lib/i18n';
 import { AppShell } from '@/components/layouts/app-shell';
 import { paths } from '@/config/paths';
 import { queryClient } from '@/lib/query-client';
@@ -13,10 +14,11 @@ import { BATCH_PANELS, EXTRA_HOMES, EXTRA_NAV, EXTRA_ROUTES, SIGN_OUT_CHECKS } f
 
 function SectionError() {
   const error = useRouteError() as Error;
+  const { t } = useTranslation();
   return (
     <div role="alert" className="card p-6">
-      <h1 className="text-lg font-semibold text-madder-700">This page could not load</h1>
-      <p className="mt-2 text-sm text-ink-600">{error?.message ?? 'Unknown error'}</p>
+      <h1 className="text-lg font-semibold text-madder-700">{t('common.couldNotLoad')}</h1>
+      <p className="mt-2 text-sm text-ink-600">{error?.message ?? t('common.unknownError')}</p>
     </div>
   );
 }

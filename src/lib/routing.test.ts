@@ -6,7 +6,7 @@ import { lazyPage, requirePermission, requireSignedIn } from './routing';
 
 const user = (role: UserDto['role']): UserDto => ({
   id: 7, email: `${role}@example.test`, name: 'Test Person', role,
-  studioId: 1, studioName: 'Test Studio', currency: 'KES', unitSystem: 'metric', mustChangePassword: false,
+  studioId: 1, studioName: 'Test Studio', currency: 'KES', unitSystem: 'metric', language: 'en', ownLanguage: null, studioLanguage: 'en', timeZone: 'UTC', mustChangePassword: false,
 });
 
 /** The server as the client sees it: who /api/auth/me says is signed in, or no network at all. */

@@ -10,6 +10,7 @@ import {
   loginInput,
   normaliseEmail,
   pinLoginInput,
+  updateMeInput,
   type FloorListDto,
 } from '../../../shared/schemas/auth';
 import { actorOf, requireAuth, requirePermission, type Actor } from '../../auth/require';
@@ -153,6 +154,10 @@ export function authRoutes(
   });
 
   r.get('/me', requireAuth, respondMe);
+  r.patch('/me', requireAuth, validate({ body: updateMeInput }), async (req, res) => {
+    await auth.setLanguage(actorOf(req), req.body.language);
+    await respondMe(req, res);
+  });
 
   r.post('/logout', (req, res, next) => {
     req.logOut((err) => {

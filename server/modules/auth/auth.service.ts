@@ -110,6 +110,12 @@ export function createAuthService(deps: {
       return { ...toActor(u, 'password'), sessionVersion, mustChangePassword: false };
     },
 
+    /** The person's own language, or null to follow the studio's. */
+    async setLanguage(actor: Actor, language: 'en' | 'fr' | null) {
+      await users.update(actor.studioId, actor.id, { language });
+      await audit.record(actor, 'update', 'user', actor.id, undefined, { language });
+    },
+
     /** Anyone may open a new studio; they become its owner. */
     async createStudio(input: CreateStudioInput) {
       if (await byEmail(input.email)) {
@@ -117,7 +123,7 @@ export function createAuthService(deps: {
       }
       const passwordHash = await hashSecret(input.password);
       const owner = await studios.open(
-        { name: input.studioName, currency: input.currency, unitSystem: input.unitSystem, workingDayHours: 8 },
+        { name: input.studioName, currency: input.currency, unitSystem: input.unitSystem, language: input.language ?? 'en', timeZone: input.timeZone ?? 'UTC', workingDayHours: 8 },
         { name: input.ownerName, email: input.email, passwordHash },
       );
       return toActor(owner);

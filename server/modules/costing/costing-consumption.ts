@@ -82,9 +82,3 @@ export function estimateConsumption(sizeRun: string[], baseSize: string): Record
  * (ordnur.com, web article, quoted in shared/reference/production-and-costing.md §2.5). An estimate.
  */
 export const ESTIMATE_GARMENT_SAM = 33.84;
-
-/** Locale for money and dates from the studio's currency (the studio stores no locale). */
-export function localeForCurrency(currency: string): string {
-  const map: Record<string, string> = { KES: 'en-KE', USD: 'en-US', EUR: 'en-IE', GBP: 'en-GB', TZS: 'en-TZ', UGX: 'en-UG', INR: 'en-IN', ZAR: 'en-ZA', NGN: 'en-NG' };
-  return map[currency] ?? 'en';
-}

@@ -1,3 +1,5 @@
+import { documentSettings } from '../studios/document-settings';
+import { documentWords } from '../../../exports/document-words';
 import type { CostingLineDto, CostingSettingsDto, CostingSheetDto, ConsumptionBasis, LabourBasis } from '../../../shared/schemas/costing';
 import { minor, mm, priceIn, pricePerMetreMinor, type Millimetres } from '../../../shared/units';
 import { currencyDigits } from '../../../shared/units/money';
@@ -13,7 +15,6 @@ import {
   ESTIMATE_GARMENT_SAM,
   layForConsumption,
   layTotals,
-  localeForCurrency,
   type LayLike,
 } from './costing-consumption';
 import type { CostingRepository } from './costing.repository';
@@ -138,7 +139,8 @@ export function createCostingService(repo: CostingRepository) {
       fabricFor(studioId, batch),
     ]);
     const sizes = style.sizeRun.map((size) => ({ size, quantity: batch.quantities[size] ?? 0 }));
-    const locale = localeForCurrency(studio.currency);
+    const { locale, language, timeZone } = documentSettings(studio);
+    const words = documentWords(language);
     const digits = currencyDigits(studio.currency);
     const notes: string[] = [];
 
@@ -167,8 +169,8 @@ export function createCostingService(repo: CostingRepository) {
     const trimLines = trims.map((t) => ({ name: t.name, quantityPerGarment: t.quantityPerGarment, unitPrice: t.unitPriceMinor }));
     const labourLine =
       basis === 'sam'
-        ? { name: `Sewing and finishing (${garmentSam} SAM)`, minutes: garmentSam, costPerMinute: settings.labourCostPerMinuteMinor }
-        : { name: `Labour at piece rates (${operations.length} operations)`, pieceRate: pieceRateMinor };
+        ? { name: words('costing.sewingLine', { sam: garmentSam }), minutes: garmentSam, costPerMinute: settings.labourCostPerMinuteMinor }
+        : { name: words('costing.pieceRateLine', { count: operations.length }), pieceRate: pieceRateMinor };
     // The pure core (planning/costing) prices every size; the workbook gets the same rounded inputs.
     const sheet = costGarment({
       sizes: sizeLabels,
@@ -190,7 +192,7 @@ export function createCostingService(repo: CostingRepository) {
     lines.push('pieceRate' in labourLine
       ? { kind: 'labour', refId: null, description: labourLine.name, unit: 'per garment', priceMinor: pieceRateMinor, percent: null, quantities: perSize(1), costMinor: {} }
       : { kind: 'labour', refId: null, description: labourLine.name, unit: 'min', priceMinor: settings.labourCostPerMinuteMinor, percent: null, quantities: perSize(garmentSam), costMinor: {} });
-    if (settings.overheadPercent > 0) lines.push({ kind: 'overhead', refId: null, description: `Overheads ${settings.overheadPercent} % of materials and labour`, unit: '%', priceMinor: null, percent: settings.overheadPercent, quantities: perSize(0), costMinor: {} });
+    if (settings.overheadPercent > 0) lines.push({ kind: 'overhead', refId: null, description: words('costing.overheadLine', { percent: settings.overheadPercent }), unit: '%', priceMinor: null, percent: settings.overheadPercent, quantities: perSize(0), costMinor: {} });
     sheet.sizes.forEach((sc) => sc.lines.forEach((l, i) => (lines[i].costMinor[sc.size] = l.amount)));
 
     // The headline prices follow the sheet's own formulas: wholesale from the average unit cost.
@@ -246,6 +248,8 @@ export function createCostingService(repo: CostingRepository) {
       studioName: studio.name,
       dateIso: now.toISOString(),
       locale,
+      language,
+      timeZone,
       currency: studio.currency,
       unitSystem: studio.unitSystem,
       style: { code: style.code, name: style.name },

@@ -3,9 +3,9 @@ import { mm } from '@shared/units/units';
 import { rollsInCuttingOrder } from '@planning';
 import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, RollEntity, StudioEntity } from '../../entities';
 import { batchCode } from '../batches/batch.presenter';
+import { documentSettings } from '../studios/document-settings';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 
-const LOCALE = 'en-KE';
 
 /** Lays → the marker list / cut ticket input of exports/. End allowance is printed per end (half the per-ply value). */
 export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric: FabricEntity, lays: LayEntity[], today: Date, rolls?: RollEntity[]): MarkerListInput {
@@ -23,7 +23,7 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
     })),
   }));
   return {
-    studioName: studio.name, dateIso: today.toISOString(), locale: LOCALE, unitSystem: studio.unitSystem,
+    studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
     fabric: { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: mm(fabric.widthMm) },
     lays: plans,
@@ -56,7 +56,7 @@ export function byRoll(lays: LayEntity[], rolls: RollEntity[]): NonNullable<Mark
 export function bundleRegisterInput(studio: StudioEntity, batch: BatchEntity, bundles: BundleEntity[], lays: LayEntity[], ops: OperationEntity[], today: Date): BundleRegisterInput {
   const seqOf = new Map(lays.map((l) => [l.id, l.seq]));
   return {
-    studioName: studio.name, dateIso: today.toISOString(), locale: LOCALE,
+    studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio),
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
     operations: ops.filter((o) => o.section !== 'cutting').map((o) => ({ name: o.name, samMinutes: o.sam })),
     bundles: bundles.map((b) => ({ bundleNo: b.number, size: b.size, shadeLot: b.shadeLot, plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, layNo: seqOf.get(b.layId) ?? 0 })),

@@ -1,3 +1,4 @@
+import { documentSettings } from '../studios/document-settings';
 import { Router } from 'express';
 import type { JobRunner } from '../../jobs/job-runner';
 import { periodQuery } from '../../../shared/schemas/floor';
@@ -47,7 +48,7 @@ export function payRoutes(pay: PayService, mode: () => PayModeDto, jobs: JobRunn
     const bytes = await jobs.run('pay-sheet.xlsx', {
       studioName: studio.name,
       dateIso: new Date(period.createdAt).toISOString(),
-      locale: 'en-GB',
+      ...documentSettings(studio),
       currency: studio.currency,
       periodStartIso: period.fromDay,
       periodEndIso: period.toDay,

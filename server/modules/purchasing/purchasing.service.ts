@@ -6,7 +6,7 @@ import type { PurchaseOrderEntity, RollEntity } from '../../entities';
 import type { PurchaseOrderLine } from '../../entities/purchase-order.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import type { CostingService } from '../costing/costing.service';
-import { localeForCurrency } from '../costing/costing-consumption';
+import { documentSettings } from '../studios/document-settings';
 import type { MailService } from '../mail/mail.service';
 import { netFabricNeed } from '../../../planning/index';
 import { documentLine, poNumber } from './purchasing.presenter';
@@ -130,7 +130,7 @@ export function createPurchasingService(deps: {
     return deps.jobs.run('purchase-order.xlsx', {
       studioName: studio.name,
       dateIso: deps.now().toISOString(),
-      locale: localeForCurrency(studio.currency),
+      ...documentSettings(studio),
       currency: studio.currency,
       unitSystem: studio.unitSystem,
       poNumber: poNumber(order.id),

@@ -6,6 +6,8 @@ export const presentStudio = (s: StudioEntity): StudioDto => ({
   name: s.name,
   currency: s.currency,
   unitSystem: s.unitSystem,
+  language: s.language,
+  timeZone: s.timeZone,
   workingDayHours: s.workingDayHours,
   machines: s.machines ?? {},
 });

@@ -14,7 +14,7 @@ export function createStudioRepository(ds: DataSource, audit: AuditRepository) {
       await updateIfChanged(repo, { id }, patch);
     },
     /** A new studio and its owner in one transaction, with the audit entry of the opening: all or nothing. */
-    open(studio: Pick<StudioEntity, 'name' | 'currency' | 'unitSystem' | 'workingDayHours'>, owner: Pick<UserEntity, 'name' | 'email' | 'passwordHash'>) {
+    open(studio: Pick<StudioEntity, 'name' | 'currency' | 'unitSystem' | 'language' | 'timeZone' | 'workingDayHours'>, owner: Pick<UserEntity, 'name' | 'email' | 'passwordHash'>) {
       return ds.transaction(async (m) => {
         const saved = await m.getRepository(StudioEntity).save(studio);
         const user = await m.getRepository(UserEntity).save({ ...owner, studioId: saved.id, role: 'owner' as const, active: true });

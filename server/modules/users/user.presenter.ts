@@ -24,5 +24,9 @@ export const presentMe = (u: UserEntity, studio: StudioEntity): UserDto => ({
   studioName: studio.name,
   currency: studio.currency,
   unitSystem: studio.unitSystem,
+  language: u.language ?? studio.language ?? 'en',
+  ownLanguage: u.language ?? null,
+  studioLanguage: studio.language ?? 'en',
+  timeZone: studio.timeZone ?? 'UTC',
   mustChangePassword: Boolean(u.mustChangePassword),
 });

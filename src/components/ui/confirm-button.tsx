@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useTranslation } from '@/lib/i18n';
 
 /**
  * A button for an action that cannot be taken back (approve pay, send money): the first press asks the
@@ -17,6 +18,7 @@ export function ConfirmButton({
   onConfirm: () => void;
   disabled?: boolean;
 }) {
+  const { t } = useTranslation();
   const [isAsking, setIsAsking] = useState(false);
   if (!isAsking) {
     return (
@@ -26,7 +28,7 @@ export function ConfirmButton({
     );
   }
   return (
-    <span role="group" aria-label={`Confirm: ${label}`} className="flex flex-wrap items-center gap-2 rounded-lg border border-saffron-500/40 bg-saffron-100 px-3 py-2">
+    <span role="group" aria-label={t('common.confirm', { label })} className="flex flex-wrap items-center gap-2 rounded-lg border border-saffron-500/40 bg-saffron-100 px-3 py-2">
       <span className="text-sm text-ink-800">{question}</span>
       <button
         type="button"
@@ -39,7 +41,7 @@ export function ConfirmButton({
         {confirmLabel}
       </button>
       <button type="button" className="btn-quiet" onClick={() => setIsAsking(false)}>
-        Cancel
+        {t('common.cancel')}
       </button>
     </span>
   );

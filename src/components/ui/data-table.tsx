@@ -8,6 +8,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useSearchParams } from 'react-router';
+import { useTranslation } from '@/lib/i18n';
 
 /**
  * The one table of Seamrun, over TanStack Table. Sort and filter live in the URL query string
@@ -16,9 +17,9 @@ import { useSearchParams } from 'react-router';
 export function DataTable<T>({
   data,
   columns,
-  filterPlaceholder = 'Filter…',
+  filterPlaceholder,
   onRowClick,
-  empty = 'Nothing here yet.',
+  empty,
   urlKey,
   label = 'Table',
 }: {
@@ -32,6 +33,7 @@ export function DataTable<T>({
   /** The accessible name of the table's scrolling region. */
   label?: string;
 }) {
+  const { t } = useTranslation();
   const [params, setParams] = useSearchParams();
   const qKey = urlKey ? `${urlKey}.q` : 'q';
   const sortKey = urlKey ? `${urlKey}.sort` : 'sort';
@@ -67,9 +69,9 @@ export function DataTable<T>({
   return (
     <div>
       <input
-        aria-label={`Filter ${label.toLowerCase()}`}
+        aria-label={filterPlaceholder ?? t('common.filter')}
         className="field-input mb-3 max-w-xs"
-        placeholder={filterPlaceholder}
+        placeholder={filterPlaceholder ?? t('common.filter')}
         value={q}
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
@@ -97,8 +99,19 @@ export function DataTable<T>({
             {table.getRowModel().rows.map((row) => (
               <tr
                 key={row.id}
-                className={`border-t border-calico-200 odd:bg-calico-50 ${onRowClick ? 'cursor-pointer hover:bg-thread-700/5' : ''}`}
+                className={`border-t border-calico-200 odd:bg-calico-50 ${onRowClick ? 'cursor-pointer hover:bg-thread-700/5 focus:outline focus:outline-2 focus:outline-thread-700' : ''}`}
                 onClick={onRowClick ? () => onRowClick(row.original) : undefined}
+                // A row that opens something opens from the keyboard too: Tab to it, then Enter or Space.
+                tabIndex={onRowClick ? 0 : undefined}
+                onKeyDown={
+                  onRowClick
+                    ? (e) => {
+                        if (e.target !== e.currentTarget || (e.key !== 'Enter' && e.key !== ' ')) return;
+                        e.preventDefault();
+                        onRowClick(row.original);
+                      }
+                    : undefined
+                }
               >
                 {row.getVisibleCells().map((cell) => (
                   <td key={cell.id} className="px-3 py-2 align-top">
@@ -110,7 +123,7 @@ export function DataTable<T>({
             {table.getRowModel().rows.length === 0 ? (
               <tr>
                 <td colSpan={columns.length} className="px-3 py-6 text-center text-ink-600">
-                  {empty}
+                  {empty ?? t('common.noRows')}
                 </td>
               </tr>
             ) : null}

@@ -59,3 +59,23 @@ export const IconMenu = (p: SVGProps<SVGSVGElement>) => (
 export const IconMail = (p: SVGProps<SVGSVGElement>) => (
   <svg {...base(p)}><rect x="3" y="6" width="18" height="13" rx="1.5" /><path d="M3.5 7l8.5 6 8.5-6" /></svg>
 );
+/** A pattern piece with its grainline and notches (pattern & grading). */
+export const IconPattern = (p: SVGProps<SVGSVGElement>) => (
+  <svg {...base(p)}><path d="M6 3h8l4 5v13H6z" /><path d="M12 7v10M10.5 15.5L12 17l1.5-1.5" /><path d="M6 10h1.5M6 14h1.5" /></svg>
+);
+/** A delivery van (suppliers). */
+export const IconTruck = (p: SVGProps<SVGSVGElement>) => (
+  <svg {...base(p)}><path d="M3 7h11v9H3zM14 10h4l3 3v3h-7" /><circle cx="7" cy="17.5" r="1.6" /><circle cx="17" cy="17.5" r="1.6" /></svg>
+);
+/** A price tag with its string (costing). */
+export const IconTag = (p: SVGProps<SVGSVGElement>) => (
+  <svg {...base(p)}><path d="M3 12V4h8l9 9-8 8z" /><circle cx="7.5" cy="8.5" r="1.4" /></svg>
+);
+/** A list with a clock (audit trail). */
+export const IconAudit = (p: SVGProps<SVGSVGElement>) => (
+  <svg {...base(p)}><path d="M4 6h9M4 11h6M4 16h5" /><circle cx="16.5" cy="15" r="4.5" /><path d="M16.5 12.8V15l1.6 1.2" /></svg>
+);
+/** A magnifying glass (search). */
+export const IconSearch = (p: SVGProps<SVGSVGElement>) => (
+  <svg {...base(p)}><circle cx="10.5" cy="10.5" r="6" /><path d="M15 15l5 5" /></svg>
+);

@@ -1,6 +1,8 @@
 import type { ReactNode } from 'react';
 import { IconAlert } from './icons';
 import { sentenceOf } from '@/lib/format';
+import { ApiError } from '@/lib/api-client';
+import { useTranslation } from '@/lib/i18n';
 
 export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: ReactNode; actions?: ReactNode }) {
   return (
@@ -37,6 +39,7 @@ export function Badge({ tone = 'grey', children }: { tone?: keyof typeof tones; 
 
 /** A safety caution panel; always defers to local codes. */
 export function Caution({ title, items, source }: { title: string; items: string[]; source: string }) {
+  const { t } = useTranslation();
   return (
     <aside role="note" className="rounded-card border border-saffron-500/40 bg-saffron-100 p-4 text-sm text-ink-800">
       <p className="mb-2 flex items-center gap-2 font-semibold text-saffron-700">
@@ -48,15 +51,20 @@ export function Caution({ title, items, source }: { title: string; items: string
         ))}
       </ul>
       <p className="mt-2 text-xs text-ink-600">
-        {source} These notes do not replace your local regulations or licensed safety advice; follow them first.
+        {source} {t('common.caution')}
       </p>
     </aside>
   );
 }
 
+/** Errors the server words in English, said in the person's language by their stable code (never by their text). */
+const CODED = ['offline', 'unauthenticated', 'forbidden', 'rate_limited', 'not_found'] as const;
+
 export function ErrorNote({ error }: { error: unknown }) {
+  const { t, i18n } = useTranslation();
   if (!error) return null;
-  const message = sentenceOf(error instanceof Error ? error.message : String(error));
+  const coded = error instanceof ApiError && i18n.language !== 'en' && (CODED as readonly string[]).includes(error.code);
+  const message = coded ? t(`errors.${(error as ApiError).code}`) : sentenceOf(error instanceof Error ? error.message : String(error));
   return (
     <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
       {message}
@@ -64,6 +72,7 @@ export function ErrorNote({ error }: { error: unknown }) {
   );
 }
 
-export function Spinner({ label = 'Loading…' }: { label?: string }) {
-  return <p className="py-8 text-center text-sm text-ink-600">{label}</p>;
+export function Spinner({ label }: { label?: string }) {
+  const { t } = useTranslation();
+  return <p className="py-8 text-center text-sm text-ink-600">{label ?? t('common.loading')}</p>;
 }

@@ -1,5 +1,5 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
-import { IconCoins } from '@/components/ui/icons';
+import { IconTag } from '@/components/ui/icons';
 import { lazyComponent, lazyPage } from '@/lib/routing';
 import { paths } from '@/config/paths';
 
@@ -9,6 +9,6 @@ export const costingManifest: FeatureManifest = {
     lazyPage(paths.costing.path, 'costs:read', async () => (await import('./components/costing-index-page')).CostingIndexPage),
     lazyPage(paths.batchCosting.path, 'costs:read', async () => (await import('./components/costing-page')).CostingPage),
   ],
-  nav: [{ to: paths.costing.getHref(), label: 'Costing', icon: IconCoins, permission: 'costs:read' }],
+  nav: [{ to: paths.costing.getHref(), label: 'Costing', labelKey: 'costing', icon: IconTag, permission: 'costs:read' }],
   batchPanels: [{ key: 'costing', Panel: lazyComponent(async () => (await import('./components/costing-panel')).CostingPanel) }],
 };

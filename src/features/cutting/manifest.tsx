@@ -9,7 +9,7 @@ export const cuttingManifest: FeatureManifest = {
     lazyPage(paths.fabrics.path, 'fabric:read', async () => (await import('./components/fabrics-page')).FabricsPage),
     lazyPage(paths.lay.path, 'cutting:work', async () => (await import('./components/lay-page')).LayPage),
   ],
-  nav: [{ to: paths.fabrics.getHref(), label: 'Fabric', icon: IconScissors, permission: 'fabric:read' }],
+  nav: [{ to: paths.fabrics.getHref(), label: 'Fabric', labelKey: 'fabrics', icon: IconScissors, permission: 'fabric:read' }],
   homes: { cutter: lazyComponent(async () => (await import('./components/cutter-home')).CutterHome) },
   batchPanels: [{ key: 'cut-plan', Panel: lazyComponent(async () => (await import('./components/cut-plan-panel')).CutPlanPanel) }],
 };

@@ -13,8 +13,8 @@ export const floorManifest: FeatureManifest = {
     lazyPage(paths.pay.path, 'pay:manage', async () => (await import('./components/pay-page')).PayPage),
   ],
   nav: [
-    { to: paths.floor.getHref(), label: 'Floor', icon: IconChart, permission: 'progress:read' },
-    { to: paths.pay.getHref(), label: 'Pay', icon: IconCoins, permission: 'pay:manage' },
+    { to: paths.floor.getHref(), label: 'Floor', labelKey: 'floor', icon: IconChart, permission: 'progress:read' },
+    { to: paths.pay.getHref(), label: 'Pay', labelKey: 'pay', icon: IconCoins, permission: 'pay:manage' },
   ],
   homes: { machinist: FloorHome, finisher: FloorHome },
   batchPanels: [{ key: 'floor-progress', Panel: lazyComponent(async () => (await import('./components/batch-progress-panel')).BatchProgressPanel) }],

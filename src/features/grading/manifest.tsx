@@ -1,5 +1,5 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
-import { IconDress } from '@/components/ui/icons';
+import { IconPattern } from '@/components/ui/icons';
 import { lazyPage } from '@/lib/routing';
 import { paths } from '@/config/paths';
 
@@ -9,5 +9,5 @@ export const gradingManifest: FeatureManifest = {
     lazyPage(paths.grading.path, 'grading:write', async () => (await import('./components/grading-index-route')).GradingIndexRoute),
     lazyPage(paths.styleGrading.path, 'grading:read', async () => (await import('./components/grading-page')).GradingPage),
   ],
-  nav: [{ to: paths.grading.getHref(), label: 'Pattern & grading', icon: IconDress, permission: 'grading:write' }],
+  nav: [{ to: paths.grading.getHref(), label: 'Pattern & grading', labelKey: 'grading', icon: IconPattern, permission: 'grading:write' }],
 };

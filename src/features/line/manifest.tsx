@@ -14,6 +14,6 @@ function BatchLinePanel({ batch }: { batch: BatchDto }) {
 /** The line area's routes, menu entries and panels; the page and its charts load when first used. */
 export const lineManifest: FeatureManifest = {
   routes: [lazyPage(paths.line.path, 'line:plan', async () => (await import('./components/line-page')).LinePage)],
-  nav: [{ to: paths.line.getHref(), label: 'Line plan', icon: IconNeedle, permission: 'line:plan' }],
+  nav: [{ to: paths.line.getHref(), label: 'Line plan', labelKey: 'line', icon: IconNeedle, permission: 'line:plan' }],
   batchPanels: [{ key: 'line-plan', Panel: BatchLinePanel }],
 };

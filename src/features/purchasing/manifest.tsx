@@ -1,5 +1,5 @@
 import type { FeatureManifest } from '@/app/feature-manifest';
-import { IconBatch, IconMail } from '@/components/ui/icons';
+import { IconMail, IconTruck } from '@/components/ui/icons';
 import { lazyComponent, lazyPage } from '@/lib/routing';
 import { paths } from '@/config/paths';
 
@@ -10,8 +10,8 @@ export const purchasingManifest: FeatureManifest = {
     lazyPage(paths.outbox.path, 'suppliers:manage', async () => (await import('./components/outbox-page')).OutboxPage),
   ],
   nav: [
-    { to: paths.purchasing.getHref(), label: 'Suppliers', icon: IconBatch, permission: 'suppliers:manage' },
-    { to: paths.outbox.getHref(), label: 'Outbox', icon: IconMail, permission: 'suppliers:manage' },
+    { to: paths.purchasing.getHref(), label: 'Suppliers', labelKey: 'purchasing', icon: IconTruck, permission: 'suppliers:manage' },
+    { to: paths.outbox.getHref(), label: 'Outbox', labelKey: 'outbox', icon: IconMail, permission: 'suppliers:manage' },
   ],
   batchPanels: [{ key: 'needs', Panel: lazyComponent(async () => (await import('./components/needs-panel')).NeedsPanel) }],
 };

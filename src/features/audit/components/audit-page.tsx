@@ -3,17 +3,9 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { DataTable } from '@/components/ui/data-table';
 import { PageHeader } from '@/components/ui/page';
 import { api } from '@/lib/api-client';
-
-interface AuditEntry {
-  id: number;
-  userName: string;
-  action: string;
-  entity: string;
-  entityId: number | null;
-  before: string;
-  after: string;
-  createdAt: string;
-}
+import { formatDateTime } from '@/lib/format';
+import { i18n, useTranslation } from '@/lib/i18n';
+import { auditChanges, auditSentence, type AuditEntry } from '../lib/audit-sentence';
 
 export const auditQueries = {
   list: () => queryOptions({ queryKey: ['audit', 'list'], queryFn: async () => (await api.get<{ entries: AuditEntry[] }>('/audit')).entries }),
@@ -21,19 +13,33 @@ export const auditQueries = {
 
 const c = createColumnHelper<AuditEntry>();
 const columns = [
-  c.accessor('createdAt', { header: 'When', cell: (i) => new Date(i.getValue()).toLocaleString() }),
-  c.accessor('userName', { header: 'Who' }),
-  c.accessor('action', { header: 'What' }),
-  c.accessor((e) => `${e.entity}${e.entityId ? ` #${e.entityId}` : ''}`, { id: 'record', header: 'Record' }),
-  c.accessor('after', { header: 'Change', enableSorting: false, cell: (i) => <code className="block max-w-md truncate text-xs" title={i.getValue()}>{i.getValue()}</code> }),
+  c.accessor('createdAt', { header: () => i18n.t('audit.when'), cell: (i) => formatDateTime(i.getValue()) }),
+  c.accessor((e) => auditSentence(e, i18n.t), {
+    id: 'what',
+    header: () => i18n.t('audit.what'),
+    cell: (i) => {
+      const changes = auditChanges(i.row.original, i18n.t);
+      return (
+        <div>
+          <p>{i.getValue()}</p>
+          {changes.length ? (
+            <ul className="mt-1 max-w-xl list-disc pl-5 text-xs text-ink-600" aria-label={i18n.t('audit.changes')}>
+              {changes.slice(0, 8).map((line) => <li key={line}>{line}</li>)}
+            </ul>
+          ) : null}
+        </div>
+      );
+    },
+  }),
 ];
 
 export function AuditPage() {
+  const { t } = useTranslation();
   const { data } = useSuspenseQuery(auditQueries.list());
   return (
     <>
-      <PageHeader title="Audit trail" subtitle="Who changed what and when: batches, plans, pay and prices, failed checks and undone floor logs. Ordinary floor logs carry their own who and when, and count in floor progress and pay." />
-      <DataTable data={data} columns={columns} filterPlaceholder="Filter the trail…" />
+      <PageHeader title={t('audit.title')} subtitle={t('audit.subtitle')} />
+      <DataTable data={data} columns={columns} filterPlaceholder={t('audit.filter')} />
     </>
   );
 }

@@ -9,15 +9,16 @@ import { Field } from '@/components/ui/form';
 import { Logo } from '@/components/ui/logo';
 import { paths } from '@/config/paths';
 import { floorDeviceQueries, useFloorPinLogin, useLogin, usePinLogin } from '@/lib/auth';
+import { useTranslation } from '@/lib/i18n';
 
 type Mode = 'password' | 'pin' | 'floor';
-const MODE_LABELS: Record<Mode, string> = { password: 'Password', pin: 'Floor PIN', floor: 'Floor' };
 
 /**
  * Sign-in. On a studio tablet the owner bound to the floor, people pick their name from the floor list
  * and type only their PIN; elsewhere (a personal phone) the floor PIN goes with the e-mail.
  */
 export function SignInPage() {
+  const { t } = useTranslation();
   const floor = useQuery(floorDeviceQueries.list()).data;
   const [picked, setPicked] = useState<Mode | null>(null);
   const modes: Mode[] = floor ? ['floor', 'password'] : ['password', 'pin'];
@@ -38,14 +39,14 @@ export function SignInPage() {
                 onClick={() => setMode(m)}
                 className={`rounded-md py-1.5 font-medium ${mode === m ? 'bg-white text-thread-800 shadow' : 'text-ink-600'}`}
               >
-                {MODE_LABELS[m]}
+                {t(`auth.modes.${m}`)}
               </button>
             ))}
           </div>
           {mode === 'password' ? <PasswordForm /> : mode === 'floor' && floor ? <FloorListForm floor={floor} /> : <PinForm />}
         </div>
         <p className="mt-4 text-center text-sm text-calico-100">
-          New here? <Link className="font-medium underline" to={paths.newStudio.getHref()}>Open a new studio</Link>
+          {t('auth.newHere')} <Link className="font-medium underline" to={paths.newStudio.getHref()}>{t('auth.openStudio')}</Link>
         </p>
       </div>
     </div>
@@ -53,6 +54,7 @@ export function SignInPage() {
 }
 
 function PasswordForm() {
+  const { t } = useTranslation();
   const login = useLogin();
   const navigate = useNavigate();
   const form = useForm<LoginInput>({ resolver: zodResolver(loginInput), defaultValues: { email: '', password: '' } });
@@ -62,17 +64,18 @@ function PasswordForm() {
   });
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      <Field label="Email" type="email" autoComplete="username" {...form.register('email')} error={form.formState.errors.email?.message} />
-      <Field label="Password" type="password" autoComplete="current-password" {...form.register('password')} error={form.formState.errors.password?.message} />
+      <Field label={t('auth.email')} type="email" autoComplete="username" {...form.register('email')} error={form.formState.errors.email?.message} />
+      <Field label={t('auth.password')} type="password" autoComplete="current-password" {...form.register('password')} error={form.formState.errors.password?.message} />
       <ErrorNote error={login.error} />
       <button type="submit" className="btn-primary w-full" disabled={login.isPending}>
-        Sign in
+        {t('auth.signIn')}
       </button>
     </form>
   );
 }
 
 function PinForm() {
+  const { t } = useTranslation();
   const login = usePinLogin();
   const navigate = useNavigate();
   const [email, setEmail] = useState('');
@@ -84,11 +87,11 @@ function PinForm() {
   };
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
-      <Field label="Email" name="pin-email" type="email" autoComplete="username" value={email} onChange={(e) => setEmail(e.target.value)} />
-      <Field label="PIN" name="pin" type="password" inputMode="numeric" autoComplete="one-time-code" maxLength={6} value={pin} onChange={(e) => setPin(e.target.value.replace(/\D/g, ''))} />
+      <Field label={t('auth.email')} name="pin-email" type="email" autoComplete="username" value={email} onChange={(e) => setEmail(e.target.value)} />
+      <Field label={t('auth.pin')} name="pin" type="password" inputMode="numeric" autoComplete="one-time-code" maxLength={6} value={pin} onChange={(e) => setPin(e.target.value.replace(/\D/g, ''))} />
       <ErrorNote error={login.error} />
       <button type="submit" className="btn-primary w-full" disabled={login.isPending}>
-        Sign in with PIN
+        {t('auth.signInWithPin')}
       </button>
     </form>
   );
@@ -98,6 +101,7 @@ const PIN_KEYS = ['1', '2', '3', '4', '5', '6', '7', '8', '9', '', '0', '⌫'];
 
 /** A bound tablet: the studio's machinists and finishers by name, then a PIN pad. No e-mail on the floor. */
 function FloorListForm({ floor }: { floor: FloorListDto }) {
+  const { t } = useTranslation();
   const login = useFloorPinLogin();
   const navigate = useNavigate();
   const [userId, setUserId] = useState<number | null>(null);
@@ -117,9 +121,9 @@ function FloorListForm({ floor }: { floor: FloorListDto }) {
   };
   return (
     <div className="space-y-4">
-      <p className="text-sm text-ink-600">{floor.studioName} · floor tablet</p>
+      <p className="text-sm text-ink-600">{t('auth.floorTablet', { studio: floor.studioName })}</p>
       {floor.people.length ? (
-        <div role="radiogroup" aria-label="Who are you?" className="grid grid-cols-2 gap-2">
+        <div role="radiogroup" aria-label={t('auth.whoAreYou')} className="grid grid-cols-2 gap-2">
           {floor.people.map((p) => (
             <button
               key={p.id}
@@ -134,15 +138,15 @@ function FloorListForm({ floor }: { floor: FloorListDto }) {
           ))}
         </div>
       ) : (
-        <p className="text-sm text-ink-600">No machinists or finishers with a PIN yet: the owner adds them on the People page.</p>
+        <p className="text-sm text-ink-600">{t('auth.noFloorPeople')}</p>
       )}
       {person ? (
         <form onSubmit={onSubmit} className="space-y-3" noValidate>
-          <Field label={`PIN for ${person.name}`} name="floor-pin" type="password" inputMode="numeric" autoComplete="off" maxLength={6} value={pin} onChange={(e) => setPin(e.target.value.replace(/\D/g, '').slice(0, 6))} />
+          <Field label={t('auth.pinFor', { name: person.name })} name="floor-pin" type="password" inputMode="numeric" autoComplete="off" maxLength={6} value={pin} onChange={(e) => setPin(e.target.value.replace(/\D/g, '').slice(0, 6))} />
           <div className="grid grid-cols-3 gap-2">
             {PIN_KEYS.map((k, i) =>
               k ? (
-                <button key={k} type="button" aria-label={k === '⌫' ? 'Delete a digit' : k} className="rounded-lg bg-calico-100 py-3 text-lg font-semibold text-thread-800" onClick={() => handleKey(k)}>
+                <button key={k} type="button" aria-label={k === '⌫' ? t('auth.deleteDigit') : k} className="rounded-lg bg-calico-100 py-3 text-lg font-semibold text-thread-800" onClick={() => handleKey(k)}>
                   {k}
                 </button>
               ) : (
@@ -152,7 +156,7 @@ function FloorListForm({ floor }: { floor: FloorListDto }) {
           </div>
           <ErrorNote error={login.error} />
           <button type="submit" className="btn-primary w-full" disabled={login.isPending || pin.length < 4}>
-            Sign in
+            {t('auth.signIn')}
           </button>
         </form>
       ) : null}

@@ -4,20 +4,22 @@ import { DataTable } from '@/components/ui/data-table';
 import { IconPlus } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page';
 import { paths } from '@/config/paths';
+import { useTranslation } from '@/lib/i18n';
 import { batchQueries } from '../api/batch-queries';
 import { batchColumns } from './batch-columns';
 
 export function BatchesPage() {
+  const { t } = useTranslation();
   const { data } = useSuspenseQuery(batchQueries.list());
   const navigate = useNavigate();
   return (
     <>
       <PageHeader
-        title="Batches"
-        subtitle="A batch is one style made in a size run, with a due date."
-        actions={<Link className="btn-primary" to={paths.newBatch.getHref()}><IconPlus /> New batch</Link>}
+        title={t('lists.batches')}
+        subtitle={t('lists.batchesSubtitle')}
+        actions={<Link className="btn-primary" to={paths.newBatch.getHref()}><IconPlus /> {t('lists.newBatch')}</Link>}
       />
-      <DataTable data={data} columns={batchColumns} filterPlaceholder="Filter batches…" onRowClick={(b) => navigate(paths.batch.getHref(b.id))} />
+      <DataTable data={data} columns={batchColumns} filterPlaceholder={t('lists.filterBatches')} onRowClick={(b) => navigate(paths.batch.getHref(b.id))} />
     </>
   );
 }

@@ -9,12 +9,13 @@ import { useCan } from '@/lib/auth';
 import { costingQueries, useUpdateCostingSettings } from '../api/costing-queries';
 import { sizeColumns } from './costing-columns';
 import { CostingSettingsForm } from './costing-settings-form';
-import { formatMoney as money } from '@/lib/format';
+import { fmt, fmt as formats, formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
 import { AddTrimForm } from './add-trim-form';
 import { paths } from '@/config/paths';
+import { useTranslation } from '@/lib/i18n';
+import { MM_PER_YARD } from '@shared/units/units';
 
-const BASIS_LABEL = { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' } as const;
 
 function Figure({ label, value, testId, strong }: { label: string; value: string; testId: string; strong?: boolean }) {
   return (
@@ -26,19 +27,20 @@ function Figure({ label, value, testId, strong }: { label: string; value: string
 }
 
 function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
+  const { t } = useTranslation();
   const a = sheet.actual;
   const rows: [string, string, string][] = [
-    ['Fabric per garment', a.fabricMmPerGarment.planned ? `${(a.fabricMmPerGarment.planned / 1000).toFixed(3)} m` : '—', a.fabricMmPerGarment.actual !== null ? `${(a.fabricMmPerGarment.actual / 1000).toFixed(3)} m` : 'not cut yet'],
-    ['Plies spread', String(a.layPlies.planned || '—'), a.layPlies.cut ? String(a.layPlies.cut) : 'not cut yet'],
-    ['Standard minutes per garment', String(a.labourMinutesPerGarment.planned), a.labourMinutesPerGarment.actual !== null ? `${a.labourMinutesPerGarment.actual} so far` : 'no work logged'],
-    ['Piece-rate pay logged', '—', money(a.labourPaidMinor, sheet.currency, sheet.locale)],
+    [t('costingPage.fabricPerGarment'), a.fabricMmPerGarment.planned ? fmt().fabricLength(a.fabricMmPerGarment.planned) : '—', a.fabricMmPerGarment.actual !== null ? fmt().fabricLength(a.fabricMmPerGarment.actual) : t('costingPage.notCut')],
+    [t('costingPage.pliesSpread'), String(a.layPlies.planned || '—'), a.layPlies.cut ? String(a.layPlies.cut) : t('costingPage.notCut')],
+    [t('costingPage.samPerGarment'), fmt().number(a.labourMinutesPerGarment.planned), a.labourMinutesPerGarment.actual !== null ? t('costingPage.soFar', { value: fmt().number(a.labourMinutesPerGarment.actual) }) : t('costingPage.noWork')],
+    [t('costingPage.payLogged'), '—', money(a.labourPaidMinor, sheet.currency)],
   ];
   return (
     <dl className="grid gap-2 text-sm sm:grid-cols-2">
       {rows.map(([k, p, x]) => (
         <div key={k} className="rounded-lg bg-calico-50 px-3 py-2">
           <dt className="font-medium text-thread-800">{k}</dt>
-          <dd className="text-ink-700">Planned {p} · actual {x}</dd>
+          <dd className="text-ink-700">{t('costingPage.plannedActual', { planned: p, actual: x })}</dd>
         </div>
       ))}
     </dl>
@@ -46,6 +48,7 @@ function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
 }
 
 export function CostingPage() {
+  const { t } = useTranslation();
   const id = Number(useParams().id);
   const { data: sheet, isLoading, error, isFetching } = useQuery({ ...costingQueries.sheet(id), placeholderData: (prev) => prev });
   const canEdit = useCan('costs:write');
@@ -56,7 +59,9 @@ export function CostingPage() {
   const [downloadError, setDownloadError] = useState<unknown>(null);
   if (error) return <ErrorNote error={error} />;
   if (isLoading || !sheet) return <Spinner />;
-  const fmt = (v: number) => money(v, sheet.currency, sheet.locale);
+  const fmt = (v: number) => money(v, sheet.currency);
+  const imperialSheet = sheet.unitSystem === 'imperial';
+  const { fabricLength, number: fmtNumber } = formats();
   const handleDownload = async () => {
     setDownloadError(null);
     try {
@@ -68,21 +73,21 @@ export function CostingPage() {
   return (
     <>
       <PageHeader
-        title={`Costing · ${sheet.batch.code}`}
-        subtitle={<>{sheet.style.code} {sheet.style.name} · {sheet.batch.total} garments · prices in {sheet.currency}</>}
+        title={t('costingPage.title', { batch: sheet.batch.code })}
+        subtitle={<>{sheet.style.code} {sheet.style.name} · {t('common.garments', { count: sheet.batch.total })} · {t('costingPage.pricesIn', { currency: sheet.currency })}</>}
         actions={
           <>
-            <Link className="btn-quiet" to={paths.batch.getHref(id)}>Back to batch</Link>
+            <Link className="btn-quiet" to={paths.batch.getHref(id)}>{t('costingPage.back')}</Link>
             <button type="button" className="btn-primary" onClick={handleDownload}>Download XLSX</button>
           </>
         }
       />
       <ErrorNote error={downloadError} />
       <div className="mb-5 grid grid-cols-2 gap-3 lg:grid-cols-4" aria-busy={isFetching}>
-        <Figure label="Average cost per garment" value={fmt(sheet.totals.averageUnitCostMinor)} testId="average-unit-cost" />
-        <Figure label={`Wholesale (${sheet.settings.marginPercent} % margin)`} value={fmt(sheet.totals.wholesaleMinor)} testId="wholesale" strong />
-        <Figure label={`Suggested retail (× ${sheet.settings.retailMultiplier})`} value={fmt(sheet.totals.retailMinor)} testId="retail" />
-        <Figure label="Batch cost" value={fmt(sheet.totals.batchCostMinor)} testId="batch-cost" />
+        <Figure label={t('costingPage.average')} value={fmt(sheet.totals.averageUnitCostMinor)} testId="average-unit-cost" />
+        <Figure label={t('costingPage.wholesale', { margin: fmtNumber(sheet.settings.marginPercent) })} value={fmt(sheet.totals.wholesaleMinor)} testId="wholesale" strong />
+        <Figure label={t('costingPage.retail', { multiplier: fmtNumber(sheet.settings.retailMultiplier) })} value={fmt(sheet.totals.retailMinor)} testId="retail" />
+        <Figure label={t('costingPage.batchCost')} value={fmt(sheet.totals.batchCostMinor)} testId="batch-cost" />
       </div>
       {sheet.notes.length ? (
         <ul className="mb-5 space-y-1 rounded-card border border-saffron-500/40 bg-saffron-100 px-4 py-3 text-sm text-ink-800">
@@ -90,11 +95,17 @@ export function CostingPage() {
         </ul>
       ) : null}
       <div className="space-y-5">
-        <Card title="Cost per garment by size">
-          <DataTable data={sizeRows} columns={sizeColumns} filterPlaceholder="Filter sizes…" />
+        <Card title={t('costingPage.bySize')}>
+          <DataTable data={sizeRows} columns={sizeColumns} filterPlaceholder={t('costingPage.filterSizes')} />
           {sheet.fabric ? (
             <p className="mt-2 text-xs text-ink-600">
-              Fabric: {sheet.fabric.name} at {fmt(sheet.fabric.pricePerMetreMinor)} a metre, {BASIS_LABEL[sheet.fabric.basis]}, {sheet.settings.wastagePercent} % wastage included; {(sheet.fabric.batchFabricMm / 1000).toFixed(1)} m for the batch.
+              {t(imperialSheet ? 'costingPage.fabricNoteYard' : 'costingPage.fabricNoteMetre', {
+                name: sheet.fabric.name,
+                price: fmt(imperialSheet ? Math.round((sheet.fabric.pricePerMetreMinor * MM_PER_YARD) / 1000) : sheet.fabric.pricePerMetreMinor),
+                basis: t(`costingPage.basis.${sheet.fabric.basis}`),
+                wastage: fmtNumber(sheet.settings.wastagePercent),
+                length: fabricLength(sheet.fabric.batchFabricMm),
+              })}
             </p>
           ) : null}
         </Card>

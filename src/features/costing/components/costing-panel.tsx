@@ -16,8 +16,8 @@ export function CostingPanel({ batch }: { batch: BatchDto }) {
     <Card title="Costing">
       {data ? (
         <p className="mb-3 text-sm text-ink-700">
-          {money(data.totals.averageUnitCostMinor, data.currency, data.locale)} a garment on average · wholesale{' '}
-          {money(data.totals.wholesaleMinor, data.currency, data.locale)} · suggested retail {money(data.totals.retailMinor, data.currency, data.locale)}
+          {money(data.totals.averageUnitCostMinor, data.currency)} a garment on average · wholesale{' '}
+          {money(data.totals.wholesaleMinor, data.currency)} · suggested retail {money(data.totals.retailMinor, data.currency)}
         </p>
       ) : null}
       <Link className="btn-primary" to={paths.batchCosting.getHref(batch.id)}>Open costing sheet</Link>

@@ -35,7 +35,7 @@ function PriceInput({ line, sheet }: { line: CostingLineDto; sheet: CostingSheet
 /** The bill of materials with an editable unit price per trim; the sheet re-prices on save. */
 export function TrimPriceEditor({ sheet, canEdit }: { sheet: CostingSheetDto; canEdit: boolean }) {
   const base = sheet.sizes[Math.floor(sheet.sizes.length / 2)]?.size ?? '';
-  const fmt = (v: number) => money(v, sheet.currency, sheet.locale);
+  const fmt = (v: number) => money(v, sheet.currency);
   return (
     <div className="divide-y divide-calico-200 rounded-card border border-calico-200 bg-white text-sm">
       <div className="hidden grid-cols-[1fr_7rem_8rem_8rem] gap-3 bg-thread-700 px-3 py-2 font-medium text-calico-50 sm:grid">

@@ -1,16 +1,19 @@
 import { ratioText } from '@shared/schemas/markers';
+import { studioFormat } from '@shared/format/studio-format';
+import { MM_PER_INCH, MM_PER_YARD } from '@shared/units/units';
+import { fmt } from '@/lib/format';
 
-export const metres = (mm: number) => `${(mm / 1000).toFixed(2)} m`;
+/** A fabric, marker or roll length in the studio's units (metres, or yards and inches). */
+export const metres = (mm: number) => fmt().fabricLength(mm);
 
-/** One yard is exactly 0.9144 m and one inch 25.4 mm (international yard and pound, 1959). */
-export const MM_PER_YARD = 914.4;
-export const MM_PER_INCH = 25.4;
+export { MM_PER_INCH, MM_PER_YARD };
 
-/** Fabric lengths and widths in the studio's units: metres and centimetres, or yards and inches. */
+/** Fabric lengths and widths in the studio's units: metres and centimetres, or yards and inches (to 1/8). */
 export function fabricUnits(imperial: boolean) {
+  const f = studioFormat({ ...fmt().settings, unitSystem: imperial ? 'imperial' : 'metric' });
   return imperial
-    ? { length: (mm: number) => `${(mm / MM_PER_YARD).toFixed(2)} yd`, width: (mm: number) => `${Math.round((mm / MM_PER_INCH) * 8) / 8} in`, lengthUnit: 'yd', widthUnit: 'in', mmPerLength: MM_PER_YARD, mmPerWidth: MM_PER_INCH, pricePer: 'yard' }
-    : { length: metres, width: (mm: number) => `${Math.round(mm / 10)} cm`, lengthUnit: 'm', widthUnit: 'cm', mmPerLength: 1000, mmPerWidth: 10, pricePer: 'metre' };
+    ? { length: f.fabricLength, width: f.fabricWidth, lengthUnit: 'yd', widthUnit: 'in', mmPerLength: MM_PER_YARD, mmPerWidth: MM_PER_INCH, pricePer: 'yard' }
+    : { length: f.fabricLength, width: f.fabricWidth, lengthUnit: 'm', widthUnit: 'cm', mmPerLength: 1000, mmPerWidth: 10, pricePer: 'metre' };
 }
 export const SIZE_ORDER = ['XS', 'S', 'M', 'L', 'XL'];
 export const ratioLabel = (r: Record<string, number>) => ratioText(r, [...SIZE_ORDER, ...Object.keys(r).filter((s) => !SIZE_ORDER.includes(s))]);

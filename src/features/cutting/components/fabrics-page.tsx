@@ -4,22 +4,24 @@ import type { RollDto } from '@shared/schemas/cutting';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useCan, useMe } from '@/lib/auth';
-import { formatMoney } from '@/lib/format';
+import { formatDate, formatMoney } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
 import { fabricUnits } from './cutting-format';
 import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
+  const { t } = useTranslation();
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   return (
     <div role="region" aria-label="Rolls" tabIndex={0} className="overflow-x-auto">
       <table className="w-full text-sm">
-        <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Length</th><th>Left</th><th>Held by plans</th><th>Width</th><th>Received</th></tr></thead>
+        <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('fabric.length')}</th><th>{t('fabric.left')}</th><th>{t('fabric.held')}</th><th>{t('fabric.width')}</th><th>{t('fabric.received')}</th></tr></thead>
         <tbody>
           {rolls.map((r) => (
             <tr key={r.id} className="border-t border-calico-200">
-              <td className="py-1 font-medium">{r.label} {r.isRemnant ? <Badge tone="gold">remnant</Badge> : null}</td>
-              <td>{r.shadeLot}</td><td>{u.length(r.lengthMm)}</td><td>{u.length(r.remainingMm)}</td><td>{r.reservedMm > 0 ? u.length(r.reservedMm) : '—'}</td><td>{u.width(r.widthMm)}</td><td>{r.receivedDate}</td>
+              <td className="py-1 font-medium">{r.label} {r.isRemnant ? <Badge tone="gold">{t('fabric.remnant')}</Badge> : null}</td>
+              <td>{r.shadeLot}</td><td>{u.length(r.lengthMm)}</td><td>{u.length(r.remainingMm)}</td><td>{r.reservedMm > 0 ? u.length(r.reservedMm) : '—'}</td><td>{u.width(r.widthMm)}</td><td>{formatDate(r.receivedDate)}</td>
             </tr>
           ))}
         </tbody>
@@ -78,6 +80,7 @@ function ImportForm({ fabricId }: { fabricId: number }) {
 }
 
 export function FabricsPage() {
+  const { t } = useTranslation();
   const { data: fabrics, isLoading } = useQuery(fabricQueries.list());
   const [openId, setOpenId] = useState<number | null>(null);
   const id = openId ?? fabrics?.[0]?.id ?? null;
@@ -88,23 +91,23 @@ export function FabricsPage() {
   if (isLoading || !fabrics) return <Spinner />;
   return (
     <>
-      <PageHeader title="Fabric and rolls" subtitle="Cuttable width excludes the selvedges. Short ends are kept as remnant rolls." />
-      {fabrics.length === 0 ? <p className="mb-4 text-sm text-ink-600">No fabric yet. Add the self fabric, the lining and any contrast or interfacing the style uses; rolls are entered once a fabric exists.</p> : null}
+      <PageHeader title={t('fabric.title')} subtitle={t('fabric.subtitle')} />
+      {fabrics.length === 0 ? <p className="mb-4 text-sm text-ink-600">{t('fabric.none')}</p> : null}
       <div className="grid gap-4 md:grid-cols-3">
         {fabrics.map((f) => (
           <button type="button" key={f.id} onClick={() => setOpenId(f.id)} className={`card p-4 text-left ${f.id === id ? 'ring-2 ring-thread-700' : ''}`}>
             <p className="font-semibold text-thread-800">{f.name}</p>
-            <p className="text-sm text-ink-600">{[f.composition, `${u.width(f.widthMm)} cuttable`, f.isDirectional ? 'one way' : ''].filter(Boolean).join(' · ')}</p>
-            <p className="mt-1 text-sm">{f.rollCount} rolls · {u.length(f.totalRemainingMm)} in stock</p>
-            {f.price ? <p className="text-sm text-ink-600">{formatMoney(f.price.amountMinor, currency)} per {f.price.per}</p>
-              : f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency)} per {u.pricePer}</p> : null}
-            {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">Shrinks {f.shrinkageLengthPercent ?? f.shrinkagePercent} % along, {f.shrinkageWidthPercent ?? f.shrinkagePercent} % across the grain</p> : null}
+            <p className="text-sm text-ink-600">{[f.composition, t('fabric.cuttable', { width: u.width(f.widthMm) }), f.isDirectional ? t('fabric.oneWay') : ''].filter(Boolean).join(' · ')}</p>
+            <p className="mt-1 text-sm">{t('fabric.stock', { count: f.rollCount, length: u.length(f.totalRemainingMm) })}</p>
+            {f.price ? <p className="text-sm text-ink-600">{formatMoney(f.price.amountMinor, currency)} / {f.price.per === 'yard' ? t('fabric.unitYard', { defaultValue: 'yd' }) : 'm'}</p>
+              : f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{t(`fabric.per.${u.pricePer}`, { price: formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency) })}</p> : null}
+            {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">{t('fabric.shrinkage', { along: f.shrinkageLengthPercent ?? f.shrinkagePercent, across: f.shrinkageWidthPercent ?? f.shrinkagePercent, defaultValue: 'Shrinks {{along}} % along, {{across}} % across the grain' })}</p> : null}
           </button>
         ))}
       </div>
       {id !== null && detail.data ? (
         <div className="mt-5 space-y-5">
-          <Card title={`Rolls of ${detail.data.fabric.name}`}><RollTable rolls={detail.data.rolls} /></Card>
+          <Card title={t('fabric.rollsOf', { name: detail.data.fabric.name })}><RollTable rolls={detail.data.rolls} /></Card>
           {canWrite ? <Card title="Enter a roll"><AddRollForm fabricId={id} widthMm={detail.data.fabric.widthMm} /></Card> : null}
           {canWrite ? <Card title="Import a packing list"><ImportForm fabricId={id} /></Card> : null}
           {canWrite ? <Card title={`Edit ${detail.data.fabric.name}`}><FabricForm key={id} fabric={detail.data.fabric} onDone={() => undefined} /></Card> : null}

@@ -1,4 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
+import { parseLength } from '@shared/units/length-format';
+import { fmt, formatDateTime } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { useEffect, useState } from 'react';
 import { useParams } from 'react-router';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
@@ -10,7 +13,13 @@ import { ConfirmButton } from '@/components/ui/confirm-button';
 
 type Actual = { actualPlies: string; actualRemnantM: string; note: string };
 
+/** The remnant as typed in the studio's units: metres, or inches (`54`, `54 1/2"`) or yards (`1.5 yd`). */
+const remnantText = (mm: number, imperial: boolean) => (imperial ? fmt().length(mm).replace('"', '') : (mm / 1000).toFixed(2));
+const readRemnant = (text: string, imperial: boolean) => (imperial ? parseLength(text, 'imperial') : parseLength(`${text} m`, 'metric'));
+
 export function LayPage() {
+  const { t } = useTranslation();
+  const imperial = fmt().settings.unitSystem === 'imperial';
   const id = Number(useParams().id);
   const { data, isLoading } = useQuery(layQueries.detail(id));
   const record = useRecordLay(id);
@@ -26,11 +35,11 @@ export function LayPage() {
     // Empty until the cutter types what was spread and measured: a pre-filled plan would be saved as fact.
     setActual(Object.fromEntries(data.lay.rolls.map((r) => [r.rollId, {
       actualPlies: r.actualPlies == null ? '' : String(r.actualPlies),
-      actualRemnantM: r.actualRemnantMm == null ? '' : (r.actualRemnantMm / 1000).toFixed(2),
+      actualRemnantM: r.actualRemnantMm == null ? '' : remnantText(r.actualRemnantMm, imperial),
       note: r.note ?? '',
     }])));
     setFlaws(data.lay.flaws);
-  }, [data]);
+  }, [data, imperial]);
   if (isLoading || !data) return <Spinner />;
   const { lay, fabric, bundles } = data;
   const typed = (v: string | undefined) => v !== undefined && v.trim() !== '';
@@ -40,15 +49,16 @@ export function LayPage() {
     const missing: Record<string, string> = {};
     lay.rolls.forEach((r, i) => {
       if (!everyRow && !typed(actual[r.rollId]?.actualPlies) && !typed(actual[r.rollId]?.actualRemnantM)) return;
-      if (!typed(actual[r.rollId]?.actualPlies)) missing[`rolls.${i}.actualPlies`] = 'Enter the plies spread';
-      if (!typed(actual[r.rollId]?.actualRemnantM)) missing[`rolls.${i}.actualRemnantMm`] = 'Measure and enter the remnant';
+      if (!typed(actual[r.rollId]?.actualPlies)) missing[`rolls.${i}.actualPlies`] = t('lay.enterPlies');
+      if (!typed(actual[r.rollId]?.actualRemnantM)) missing[`rolls.${i}.actualRemnantMm`] = t('lay.enterRemnant');
+      else if (readRemnant(actual[r.rollId].actualRemnantM, imperial) === null) missing[`rolls.${i}.actualRemnantMm`] = t('lay.badRemnant');
     });
     const rows = lay.rolls.filter((r) => isTyped(r.rollId));
-    if (!rows.length && !Object.keys(missing).length) missing['rolls.0.actualPlies'] = 'Enter the plies spread';
+    if (!rows.length && !Object.keys(missing).length) missing['rolls.0.actualPlies'] = t('lay.enterPlies');
     setLocal(missing);
     if (Object.keys(missing).length) return null;
     return {
-      rolls: rows.map((r) => ({ rollId: r.rollId, actualPlies: Number(actual[r.rollId].actualPlies), actualRemnantMm: Math.round(Number(actual[r.rollId].actualRemnantM) * 1000), note: actual[r.rollId]?.note || undefined })),
+      rolls: rows.map((r) => ({ rollId: r.rollId, actualPlies: Number(actual[r.rollId].actualPlies), actualRemnantMm: Math.round(readRemnant(actual[r.rollId].actualRemnantM, imperial) ?? 0), note: actual[r.rollId]?.note || undefined })),
       flaws,
     };
   };
@@ -73,63 +83,63 @@ export function LayPage() {
   return (
     <>
       <PageHeader
-        title={`${lay.batchCode} · Lay ${lay.seq}`}
-        subtitle={<>{ratioLabel(lay.ratio)} per ply · {lay.plies} plies · <Badge tone={isCut ? 'teal' : retired ? 'gold' : 'grey'}>{lay.status}</Badge></>}
-        actions={<button type="button" className="btn-quiet" onClick={() => window.print()}>Print</button>}
+        title={t('home.lay', { batch: lay.batchCode, seq: lay.seq })}
+        subtitle={<>{t('lay.perPly', { ratio: ratioLabel(lay.ratio), plies: t('common.plies', { count: lay.plies }) })} · <Badge tone={isCut ? 'teal' : retired ? 'gold' : 'grey'}>{t(`status.${lay.status}`)}</Badge></>}
+        actions={<button type="button" className="btn-quiet" onClick={() => window.print()}>{t('lay.print')}</button>}
       />
       <div className="space-y-5">
         {retired ? (
           <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">
-            This lay was retired when the batch was planned again: do not spread or cut it. The batch's current cut plan lists the lays to cut.
+            {t('lay.retired')}
           </p>
         ) : null}
         {lay.shortage && !readOnly ? (
           <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
-            {lay.shortage.message} Tell the owner before spreading.
+            {lay.shortage.message} {t('lay.tellOwner')}
           </p>
         ) : null}
-        <Card title="Marker">
+        <Card title={t('lay.marker')}>
           <dl className="mb-3 grid grid-cols-2 gap-2 text-sm sm:grid-cols-4">
-            <div><dt className="text-xs text-ink-600">Marker length</dt><dd className="font-semibold">{metres(lay.markerLengthMm)}</dd></div>
-            <div><dt className="text-xs text-ink-600">End allowance</dt><dd className="font-semibold">{Math.round(lay.endAllowanceMm / 2)} mm each end</dd></div>
-            <div><dt className="text-xs text-ink-600">Spreading</dt><dd className="font-semibold">{SPREADING_LABELS[lay.spreadingMode] ?? lay.spreadingMode}</dd></div>
-            <div><dt className="text-xs text-ink-600">Fabric</dt><dd className="font-semibold">{fabric ? `${fabric.name}, ${Math.round(fabric.widthMm / 10)} cm` : '—'}</dd></div>
+            <div><dt className="text-xs text-ink-600">{t('lay.markerLength')}</dt><dd className="font-semibold">{metres(lay.markerLengthMm)}</dd></div>
+            <div><dt className="text-xs text-ink-600">{t('lay.endAllowance')}</dt><dd className="font-semibold">{t('lay.eachEnd', { length: fmt().smallLength(lay.endAllowanceMm / 2) })}</dd></div>
+            <div><dt className="text-xs text-ink-600">{t('lay.spreading')}</dt><dd className="font-semibold">{t(`lay.modes.${lay.spreadingMode}`, { defaultValue: SPREADING_LABELS[lay.spreadingMode] ?? lay.spreadingMode })}</dd></div>
+            <div><dt className="text-xs text-ink-600">{t('lay.fabric')}</dt><dd className="font-semibold">{fabric ? `${fabric.name}, ${fmt().fabricWidth(fabric.widthMm)}` : '—'}</dd></div>
           </dl>
           <p className="mb-2 text-xs text-ink-600">
-            {fabric?.isDirectional ? 'One-way fabric: every ply face up, all running the same way.' : 'Face up; the marker already holds the left and right of every pair, so plies may run both ways.'}
+            {fabric?.isDirectional ? t('lay.oneWay') : t('lay.bothWays')}
           </p>
-          {lay.markerId ? <img src={`/api/markers/${lay.markerId}/svg`} alt={`Marker of lay ${lay.seq}`} className="w-full rounded-lg border border-calico-200 bg-calico-50" /> : <p className="text-sm text-ink-600">No drawn marker stored for this ratio yet; the length is the plan's estimate.</p>}
+          {lay.markerId ? <img src={`/api/markers/${lay.markerId}/svg`} alt={t('lay.markerOf', { seq: lay.seq })} className="w-full rounded-lg border border-calico-200 bg-calico-50" /> : <p className="text-sm text-ink-600">{t('lay.noMarker')}</p>}
         </Card>
-        <Card title="Marker list per roll">
+        <Card title={t('lay.perRoll')}>
           <div role="region" aria-label="Rolls of this lay" tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
-              <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">Roll</th><th>Shade lot</th><th>Plies to spread</th><th>Expected remnant</th><th>Plies spread</th><th>Remnant left (m)</th><th>Note</th></tr></thead>
+              <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('lay.pliesToSpread')}</th><th>{t('lay.expectedRemnant')}</th><th>{t('lay.pliesSpread')}</th><th>{imperial ? t('lay.remnantLeftIn') : t('lay.remnantLeftM')}</th><th>{t('lay.note')}</th></tr></thead>
               <tbody>
                 {lay.rolls.map((r, i) => (
                   <tr key={r.rollId} className="border-t border-calico-200">
-                    <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td>{metres(r.expectedRemnantMm)}</td>
-                    <td><input aria-label={`Plies spread from ${r.label}`} className="field-input w-20" type="number" disabled={readOnly} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
+                    <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td className="whitespace-nowrap">{metres(r.expectedRemnantMm)}</td>
+                    <td><input aria-label={t('lay.pliesFrom', { roll: r.label })} className="field-input w-20" type="number" disabled={readOnly} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
                       {fields[`rolls.${i}.actualPlies`] ? <p className="field-error">{fields[`rolls.${i}.actualPlies`]}</p> : null}</td>
-                    <td><input aria-label={`Remnant left on ${r.label}`} className="field-input w-24" type="number" step="0.01" disabled={readOnly} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
+                    <td><input aria-label={t('lay.remnantOn', { roll: r.label })} className="field-input w-24" type={imperial ? 'text' : 'number'} step="0.01" disabled={readOnly} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
                       {fields[`rolls.${i}.actualRemnantMm`] ? <p className="field-error">{fields[`rolls.${i}.actualRemnantMm`]}</p> : null}</td>
-                    <td><input aria-label={`Note on ${r.label}`} className="field-input" disabled={readOnly} value={actual[r.rollId]?.note ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], note: e.target.value } })} /></td>
+                    <td><input aria-label={t('lay.noteOn', { roll: r.label })} className="field-input" disabled={readOnly} value={actual[r.rollId]?.note ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], note: e.target.value } })} /></td>
                   </tr>
                 ))}
               </tbody>
             </table>
           </div>
-          <p className="mt-2 text-sm">Plies spread: <b>{spreadPlies}</b> of {lay.plies}{fabric && lay.plies > fabric.maxPlies ? ' · above this fabric’s ply limit' : ''}</p>
+          <p className="mt-2 text-sm">{t('lay.spreadOf', { spread: spreadPlies, plies: lay.plies })}{fabric && lay.plies > fabric.maxPlies ? t('lay.aboveLimit') : ''}</p>
           <div className="mt-3">
-            <label className="field-label" htmlFor="lay-flaws">Flaws and shortages</label>
+            <label className="field-label" htmlFor="lay-flaws">{t('lay.flaws')}</label>
             <textarea id="lay-flaws" className="field-input" rows={2} disabled={readOnly} value={flaws} onChange={(e) => setFlaws(e.target.value)} />
           </div>
           {!readOnly ? (
             <div className="mt-3 flex flex-wrap gap-2">
-              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>Save what was spread</button>
+              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>{t('lay.save')}</button>
               <ConfirmButton
-                label="Mark lay cut"
-                question={`Mark lay ${lay.seq} cut? The plies and remnants entered become the roll stock and the bundles are made.`}
-                confirmLabel="Yes, mark it cut"
+                label={t('lay.markCut')}
+                question={t('lay.markCutQuestion', { seq: lay.seq })}
+                confirmLabel={t('lay.markCutYes')}
                 disabled={cut.isPending}
                 onConfirm={() => { const b = body(true); if (b) cut.mutate(b); }}
               />
@@ -147,11 +157,11 @@ export function LayPage() {
             </div>
           ) : (
             <div className="mt-3 flex flex-wrap items-center gap-3">
-              <p className="text-sm text-thread-800">Cut {lay.cutAt ? new Date(lay.cutAt).toLocaleString() : ''} · {bundles.length} bundles. This record is closed.</p>
+              <p className="text-sm text-thread-800">Cut {lay.cutAt ? formatDateTime(lay.cutAt) : ''} · {bundles.length} bundles. This record is closed.</p>
               <button type="button" className="btn-quiet" onClick={() => setCorrecting(true)}>Correct the record</button>
             </div>
           )}
-          {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">Saved.</p> : null}
+          {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">{t('common.saved')}</p> : null}
           {correct.isSuccess && !correcting ? <p className="mt-2 text-sm text-thread-800" role="status">Correction saved.</p> : null}
           {failure && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={failure} /></div> : null}
           {lay.corrections?.length ? (
@@ -160,7 +170,7 @@ export function LayPage() {
               <ul className="mt-1 space-y-1 text-sm">
                 {lay.corrections.map((c) => (
                   <li key={c.at} className="rounded-lg border border-calico-200 px-2 py-1">
-                    {new Date(c.at).toLocaleString()} · {c.by}: {c.reason}{c.changes.length ? ` (${c.changes.join('; ')})` : ''}
+                    {formatDateTime(c.at)} · {c.by}: {c.reason}{c.changes.length ? ` (${c.changes.join('; ')})` : ''}
                   </li>
                 ))}
               </ul>
@@ -168,20 +178,20 @@ export function LayPage() {
           ) : null}
         </Card>
         {bundles.length ? (
-          <Card title="Bundles">
+          <Card title={t('lay.bundles')}>
             <ul className="grid grid-cols-2 gap-2 text-sm sm:grid-cols-4">
-              {bundles.map((b) => <li key={b.id} className="rounded-lg border border-calico-200 px-2 py-1">No. {b.number} · {b.size} · {b.shadeLot} · plies {b.plyFrom}–{b.plyTo}</li>)}
+              {bundles.map((b) => <li key={b.id} className="rounded-lg border border-calico-200 px-2 py-1">{t('lay.bundleLine', { number: b.number, size: b.size, shade: b.shadeLot, from: b.plyFrom, to: b.plyTo })}</li>)}
             </ul>
           </Card>
         ) : null}
-        {retired ? null : <Card title="Documents">
+        {retired ? null : <Card title={t('lay.documents')}>
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Cut ticket (PDF)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-${lay.batchCode}-lay-${lay.seq}.xlsx`)}>Marker list per roll (XLSX)</button>
-            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Marker list per roll (PDF)</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docCutTicket')}</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-${lay.batchCode}-lay-${lay.seq}.xlsx`)}>{t('lay.docMarkerXlsx')}</button>
+            <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docMarkerPdf')}</button>
             {lay.markerId ? <button type="button" className="btn-quiet" onClick={file(`/markers/${lay.markerId}/plot.pdf`, `marker-${lay.batchCode}-${lay.markerId}.pdf`)}>Marker to plot (PDF, 1:1)</button> : null}
-            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>Bundle tickets (PDF)</button> : null}
-            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>Bundle register (XLSX)</button> : null}
+            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docTickets')}</button> : null}
+            {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>{t('lay.docRegister')}</button> : null}
           </div>
         </Card>}
         <CuttingCautions />

@@ -4,6 +4,7 @@ import type { LogWorkResult } from '@shared/schemas/floor';
 import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { api, ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
+import { useTranslation } from '@/lib/i18n';
 import { queryClient } from '@/lib/query-client';
 import { floorQueries } from '../api/floor-queries';
 import { flushOutbox, newIdempotencyKey, othersWaiting, sendLog, waitingFor } from '../lib/outbox';
@@ -18,6 +19,7 @@ import { TodayCard } from './today-card';
  * 15 s. Logs someone else made on this phone stay until that person signs in here.
  */
 function useOutbox(userId: number | undefined) {
+  const { t } = useTranslation();
   const count = () => (userId ? waitingFor(userId).length : 0);
   const others = () => (userId ? othersWaiting(userId) : []);
   const [mine, setMine] = useState(count);
@@ -32,26 +34,27 @@ function useOutbox(userId: number | undefined) {
     const flush = async () => {
       if (!waitingFor(userId).length) return;
       const r = await flushOutbox(userId);
-      if (r.sent) setNote(`${r.sent} saved log${r.sent > 1 ? 's' : ''} sent.`);
-      if (r.refused.length) setNote(`Refused: ${r.refused.join('; ')}`);
+      if (r.sent) setNote(t('floor.sent', { count: r.sent }));
+      if (r.refused.length) setNote(t('floor.refused', { reasons: r.refused.join('; ') }));
       if (r.sent || r.refused.length) await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
     };
     update();
     window.addEventListener('seamrun-outbox', update);
     window.addEventListener('online', flush);
-    const t = setInterval(flush, 15_000);
+    const timer = setInterval(flush, 15_000);
     void flush();
     return () => {
       window.removeEventListener('seamrun-outbox', update);
       window.removeEventListener('online', flush);
-      clearInterval(t);
+      clearInterval(timer);
     };
-  }, [userId]);
+  }, [userId, t]);
   return { count: mine, others: theirs, note };
 }
 
 /** The machinist's and finisher's phone home: find a bundle, log an operation, see today's count. */
 export function FloorHome({ name }: { name: string }) {
+  const { t } = useTranslation();
   const me = useMe().data;
   const [typed, setTyped] = useState('');
   const [target, setTarget] = useState<{ bundleNumber: number; batchId?: number } | null>(null);
@@ -69,7 +72,7 @@ export function FloorHome({ name }: { name: string }) {
   const handleFind = (e: FormEvent) => {
     e.preventDefault();
     const n = Number(typed);
-    if (!Number.isInteger(n) || n < 1) return setError(new Error('Type the bundle number from the ticket'));
+    if (!Number.isInteger(n) || n < 1) return setError(new Error(t('floor.typeNumber')));
     setError(null);
     setResult(null);
     setQueued('');
@@ -94,7 +97,7 @@ export function FloorHome({ name }: { name: string }) {
     try {
       const r = await sendLog(input, `Bundle ${bundle.data.number} · ${op?.code ?? ''}`, { id: me.id, name: me.name });
       if (r.kind === 'sent') setResult(r.result);
-      else setQueued(`No network: bundle ${bundle.data.number} · ${op?.code} ${op?.name} is saved on this phone and will be sent when the network is back.`);
+      else setQueued(t('floor.queued', { number: bundle.data.number, op: `${op?.code} ${op?.name}` }));
       await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });
     } catch (e) {
       setError(e);
@@ -119,41 +122,41 @@ export function FloorHome({ name }: { name: string }) {
 
   return (
     <div className="mx-auto max-w-md space-y-4">
-      <PageHeader title={`Hello, ${name.split(' ')[0]}`} subtitle="Scan or type a bundle, pick the operation, log it done." />
+      <PageHeader title={t('floor.hello', { name: name.split(' ')[0] })} subtitle={t('floor.subtitle')} />
       {outbox.count ? (
         <p role="status" className="rounded-lg bg-saffron-100 px-3 py-2 text-sm text-saffron-700">
-          {outbox.count} log{outbox.count > 1 ? 's' : ''} waiting on this phone for the network.
+          {t('floor.waiting', { count: outbox.count })}
         </p>
       ) : null}
       {outbox.others.map((o) => (
         <p key={o.key} role="status" className="rounded-lg bg-calico-100 px-3 py-2 text-sm text-ink-600">
-          {o.count} log{o.count > 1 ? 's' : ''} waiting for {o.name}: sent under {o.name}’s name when they sign in on this phone, never under yours.
+          {t('floor.waitingFor', { count: o.count, name: o.name })}
         </p>
       ))}
       {outbox.note ? <p className="rounded-lg bg-calico-50 px-3 py-2 text-sm">{outbox.note}</p> : null}
-      <ReworkCard onOpen={(t) => handleScanned(t)} />
-      <Card title="Find a bundle">
+      <ReworkCard onOpen={(code) => handleScanned(code)} />
+      <Card title={t('floor.findCard')}>
         {scanning ? (
           <QrScanner onBundle={handleScanned} onClose={() => setScanning(false)} />
         ) : (
           <div className="space-y-3">
             <button type="button" className="btn-accent w-full py-3 text-base" onClick={() => setScanning(true)}>
-              Scan the ticket’s QR code
+              {t('floor.scan')}
             </button>
             <form onSubmit={handleFind} className="flex items-end gap-2">
               <div className="flex-1">
-                <label className="field-label" htmlFor="bundle-number">Bundle number</label>
+                <label className="field-label" htmlFor="bundle-number">{t('floor.bundleNumber')}</label>
                 <input id="bundle-number" className="field-input text-lg" inputMode="numeric" pattern="[0-9]*" autoComplete="off" value={typed} onChange={(e) => setTyped(e.target.value.replace(/\D/g, ''))} />
               </div>
-              <button type="submit" className="btn-primary py-2.5">Find bundle</button>
+              <button type="submit" className="btn-primary py-2.5">{t('floor.find')}</button>
             </form>
           </div>
         )}
       </Card>
       <ErrorNote error={error ?? (bundle.error && target ? bundle.error : null)} />
       {isAmbiguous && choices.data && target ? (
-        <Card title={`Which bundle ${target.bundleNumber}?`}>
-          <p className="mb-3 text-sm text-ink-600">This number is on tickets of more than one batch. Pick the batch printed on your ticket.</p>
+        <Card title={t('floor.whichBundle', { number: target.bundleNumber })}>
+          <p className="mb-3 text-sm text-ink-600">{t('floor.ambiguous')}</p>
           <div className="grid gap-2">
             {choices.data.map((c) => (
               <button
@@ -162,7 +165,7 @@ export function FloorHome({ name }: { name: string }) {
                 className="btn-quiet w-full justify-start py-3 text-left"
                 onClick={() => setTarget({ bundleNumber: c.number, batchId: c.batchId })}
               >
-                {c.batchCode} · {c.styleName} · size {c.size}
+                {t('floor.choice', { batch: c.batchCode, style: c.styleName, size: c.size })}
               </button>
             ))}
           </div>

@@ -1,10 +1,12 @@
 import { useEffect, useRef, useState } from 'react';
 import { parseBundleQr } from '@shared/schemas/floor';
+import { useTranslation } from '@/lib/i18n';
 
 /** Reads a bundle ticket's QR code from the phone's back camera, frame by frame. */
 export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: number; bundleNumber: number }) => void; onClose: () => void }) {
+  const { t } = useTranslation();
   const video = useRef<HTMLVideoElement>(null);
-  const [status, setStatus] = useState('Starting the camera…');
+  const [status, setStatus] = useState(() => t('floor.camera.starting'));
 
   useEffect(() => {
     let stream: MediaStream | null = null;
@@ -28,14 +30,14 @@ export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: numb
             onBundle(parsed);
             return;
           }
-          setStatus('That QR code is not a Seamrun bundle ticket.');
+          setStatus(t('floor.camera.notTicket'));
         }
       }
       frame = requestAnimationFrame(tick);
     };
     (async () => {
       if (!navigator.mediaDevices?.getUserMedia) {
-        setStatus('This browser cannot use the camera here (it needs a secure https address). Type the number instead.');
+        setStatus(t('floor.camera.noSecure'));
         return;
       }
       try {
@@ -47,10 +49,10 @@ export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: numb
           video.current.srcObject = stream;
           await video.current.play();
         }
-        setStatus('Point the camera at the QR code on the bundle ticket.');
+        setStatus(t('floor.camera.point'));
         frame = requestAnimationFrame(tick);
       } catch {
-        setStatus('The camera is not available. Allow camera use, or type the bundle number.');
+        setStatus(t('floor.camera.unavailable'));
       }
     })();
     return () => {
@@ -58,16 +60,16 @@ export function QrScanner({ onBundle, onClose }: { onBundle: (v: { batchId: numb
       cancelAnimationFrame(frame);
       stream?.getTracks().forEach((t) => t.stop());
     };
-  }, [onBundle]);
+  }, [onBundle, t]);
 
   return (
     <div className="space-y-2">
       <div className="relative overflow-hidden rounded-lg bg-ink-900">
-        <video ref={video} className="aspect-square w-full object-cover" muted playsInline aria-label="Camera view" />
+        <video ref={video} className="aspect-square w-full object-cover" muted playsInline aria-label={t('floor.camera.view')} />
         <div aria-hidden className="pointer-events-none absolute inset-8 rounded-lg border-4 border-saffron-500/80" />
       </div>
       <p role="status" className="text-sm text-ink-600">{status}</p>
-      <button type="button" className="btn-quiet w-full" onClick={onClose}>Close camera</button>
+      <button type="button" className="btn-quiet w-full" onClick={onClose}>{t('floor.camera.close')}</button>
     </div>
   );
 }

@@ -2,12 +2,13 @@ import { useEffect, useState } from 'react';
 import type { GradedPieceDto, GradeRuleDto } from '@shared/schemas/grading';
 import { ErrorNote } from '@/components/ui/page';
 import { usePutGradeRule } from '../api/grading-queries';
+import { parseLength } from '@shared/units/length-format';
 import { useLength } from '../hooks/use-length';
 
 const ruleKey = (r: GradeRuleDto) => (r.target.kind === 'vertex' ? `v${r.target.index}` : `f:${r.target.key}`);
 const ruleName = (r: GradeRuleDto) => r.landmark ?? (r.target.kind === 'vertex' ? `outline point ${r.target.index}` : r.target.key);
 
-/** Edit the movement (dx across, dy up; mm) of one grade point for every size step, then redraw. */
+/** Edit the movement (dx across, dy up) of one grade point for every size step in the studio's units (mm, or inches to 1/8), then redraw. */
 export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelectPoint, canEdit }: {
   styleId: number;
   piece: GradedPieceDto;
@@ -16,18 +17,21 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
   onSelectPoint: (vertex: number) => void;
   canEdit: boolean;
 }) {
-  const { small } = useLength();
+  const { small, system } = useLength();
+  const unit = system === 'metric' ? 'mm' : 'in';
+  const shown = (v: number) => (system === 'metric' ? String(Number(v.toFixed(2))) : small(v).replace('"', ''));
+  const read = (text: string) => (text.trim() === '' ? null : parseLength(`${text} ${unit}`, 'metric'));
   const rules = piece.rules;
   const rule = rules.find((r) => r.target.kind === 'vertex' && r.target.index === selectedPoint) ?? rules[0];
   const [steps, setSteps] = useState<{ dx: string; dy: string }[]>([]);
   const save = usePutGradeRule(styleId);
   useEffect(() => {
-    setSteps(rule ? rule.steps.map((s) => ({ dx: String(Number(s.dx.toFixed(2))), dy: String(Number(s.dy.toFixed(2))) })) : []);
-  }, [rule, piece.id]);
+    setSteps(rule ? rule.steps.map((s) => ({ dx: shown(s.dx), dy: shown(s.dy) })) : []);
+  }, [rule, piece.id, system]);
   if (!rule) return <p className="text-sm text-ink-600">This piece does not grade (no grade points).</p>;
-  const bad = steps.some((s) => !Number.isFinite(Number(s.dx)) || !Number.isFinite(Number(s.dy)) || s.dx === '' || s.dy === '');
+  const bad = steps.some((s) => read(s.dx) === null || read(s.dy) === null);
   const submit = () =>
-    save.mutate({ pieceId: piece.id, rule: { target: rule.target, landmark: rule.landmark, steps: steps.map((s) => ({ dx: Number(s.dx), dy: Number(s.dy) })) } });
+    save.mutate({ pieceId: piece.id, rule: { target: rule.target, landmark: rule.landmark, steps: steps.map((s) => ({ dx: read(s.dx) ?? 0, dy: read(s.dy) ?? 0 })) } });
   return (
     <div className="space-y-3">
       <label className="field-label" htmlFor="grade-point">Grade point</label>
@@ -37,10 +41,10 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
       }}>
         {rules.filter((r) => r.target.kind === 'vertex' && (r.landmark || r === rule)).map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
       </select>
-      <p className="text-xs text-ink-600">Movement per size step in mm: across (+ to the right) and up (+ upwards). The list names the grade points; curve points between them follow the block in every size. Tap a dot on the drawing to pick any point.</p>
+      <p className="text-xs text-ink-600">Movement per size step in {unit === 'mm' ? 'mm' : 'inches (fractions such as 1/8 are read)'}: across (+ to the right) and up (+ upwards). The list names the grade points; curve points between them follow the block in every size. Tap a dot on the drawing to pick any point.</p>
       <div role="region" aria-label="Grade rules" tabIndex={0} className="overflow-x-auto">
         <table className="w-full text-sm">
-          <thead><tr className="text-left text-ink-600"><th className="py-1 pr-2">Step</th><th className="px-1">Across (mm)</th><th className="px-1">Up (mm)</th></tr></thead>
+          <thead><tr className="text-left text-ink-600"><th className="py-1 pr-2">Step</th><th className="px-1">Across ({unit})</th><th className="px-1">Up ({unit})</th></tr></thead>
           <tbody>
             {steps.map((s, i) => (
               <tr key={i}>

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { fmt } from '@/lib/format';
 import { useEffect, useState } from 'react';
 import type { BatchDto } from '@shared/schemas/batches';
 import type { FabricDto } from '@shared/schemas/cutting';
@@ -11,7 +12,7 @@ import { batchQueries, fabricQueries } from '@/lib/queries';
 import { markerQueries, useCancelMarker, useStartMarker } from '../api/marker-queries';
 import { MarkerDrawing } from './marker-drawing';
 
-const m = (mm: number | null) => (mm === null ? '—' : `${(mm / 1000).toFixed(2)} m`);
+const m = (mm: number | null) => (mm === null ? '—' : fmt().fabricLength(mm));
 const tone = { queued: 'grey', running: 'blue', done: 'teal', failed: 'red', cancelled: 'gold' } as const;
 
 function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {

@@ -1,4 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
+import { formatDateTime } from '@/lib/format';
+import { i18n, useTranslation } from '@/lib/i18n';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import type { MailMessageDto } from '@shared/schemas/mail';
@@ -8,24 +10,25 @@ import { outboxQueries } from '../api/purchasing-queries';
 
 const c = createColumnHelper<MailMessageDto>();
 const columns = [
-  c.accessor('createdAt', { header: 'Sent', cell: (i) => new Date(i.getValue()).toLocaleString('en-KE', { dateStyle: 'medium', timeStyle: 'short' }) }),
-  c.accessor('to', { header: 'To' }),
-  c.accessor('subject', { header: 'Subject' }),
-  c.accessor((m) => m.attachments.map((a) => a.filename).join(', '), { id: 'attachments', header: 'Attachments' }),
-  c.accessor('status', { header: 'Status', cell: (i) => <Badge tone={i.getValue() === 'sent' ? 'teal' : 'red'}>{i.getValue()}</Badge> }),
+  c.accessor('createdAt', { header: () => i18n.t('outbox.sent'), cell: (i) => formatDateTime(i.getValue()) }),
+  c.accessor('to', { header: () => i18n.t('outbox.to') }),
+  c.accessor('subject', { header: () => i18n.t('outbox.subject') }),
+  c.accessor((m) => m.attachments.map((a) => a.filename).join(', '), { id: 'attachments', header: () => i18n.t('outbox.attachments') }),
+  c.accessor('status', { header: () => i18n.t('lists.status'), cell: (i) => <Badge tone={i.getValue() === 'sent' ? 'teal' : 'red'}>{i18n.t(`outbox.status.${i.getValue()}`, { defaultValue: i.getValue() })}</Badge> }),
 ];
 
 /** Every message the studio sent, as the mail server received it. */
 export function OutboxPage() {
+  const { t } = useTranslation();
   const { data } = useSuspenseQuery(outboxQueries.list());
   const [open, setOpen] = useState<MailMessageDto | null>(null);
   return (
     <>
-      <PageHeader title="Outbox" subtitle="Purchase orders and invitations the studio has e-mailed." />
-      <DataTable data={data} columns={columns} filterPlaceholder="Filter messages…" onRowClick={setOpen} empty="Nothing sent yet." />
+      <PageHeader title={t('outbox.title')} subtitle={t('outbox.subtitle')} />
+      <DataTable data={data} columns={columns} filterPlaceholder={t('outbox.filter')} onRowClick={setOpen} empty={t('outbox.empty')} />
       {open ? (
         <Card title={open.subject} className="mt-5">
-          <p className="mb-2 text-sm text-ink-600">To {open.to} · {open.attachments.map((a) => `${a.filename} (${Math.ceil(a.size / 1024)} KB)`).join(', ') || 'no attachments'}</p>
+          <p className="mb-2 text-sm text-ink-600">{t('outbox.toLine', { to: open.to, files: open.attachments.map((a) => `${a.filename} (${Math.ceil(a.size / 1024)} KB)`).join(', ') || t('outbox.noAttachments') })}</p>
           <pre className="whitespace-pre-wrap font-sans text-sm text-ink-800">{open.text}</pre>
         </Card>
       ) : null}

@@ -1,2 +1,4 @@
-/** A need or order quantity with its unit; fabric (mm) shown in metres. */
-export const quantityText = (q: number, unit: string) => (unit === 'mm' ? `${(q / 1000).toFixed(1)} m` : `${+q.toFixed(3)} ${unit}`);
+import { fmt } from '@/lib/format';
+
+/** A need or order quantity with its unit; fabric (mm) in the studio's units (metres, or yards and inches). */
+export const quantityText = (q: number, unit: string) => (unit === 'mm' ? fmt().fabricLength(q) : `${fmt().number(q, 3)} ${unit}`);

@@ -4,6 +4,7 @@ import { MACHINE_TYPES } from '@shared/schemas/line';
 import { machinesField, type StudioDto } from '@shared/schemas/studio';
 import { Card, ErrorNote } from '@/components/ui/page';
 import { api, ApiError } from '@/lib/api-client';
+import { useTranslation } from '@/lib/i18n';
 import { queryClient } from '@/lib/query-client';
 
 type Row = { type: string; count: string };
@@ -13,6 +14,7 @@ type Row = { type: string; count: string };
  * machines of it; a type not listed is not limited.
  */
 export function MachinesCard({ studio, invalidateKey }: { studio: StudioDto; invalidateKey: readonly unknown[] }) {
+  const { t } = useTranslation();
   const [rows, setRows] = useState<Row[]>(Object.entries(studio.machines).map(([type, n]) => ({ type, count: String(n) })));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const save = useMutation({
@@ -24,9 +26,9 @@ export function MachinesCard({ studio, invalidateKey }: { studio: StudioDto; inv
     e.preventDefault();
     const found: Record<string, string> = {};
     rows.forEach((r, i) => {
-      if (!r.type.trim()) found[`${i}.type`] = 'Machine type is required';
-      else if (rows.findIndex((x) => x.type.trim() === r.type.trim()) !== i) found[`${i}.type`] = 'Listed twice';
-      if (!/^\d{1,3}$/.test(r.count.trim())) found[`${i}.count`] = 'A whole number from 0 to 999';
+      if (!r.type.trim()) found[`${i}.type`] = t('machines.typeRequired');
+      else if (rows.findIndex((x) => x.type.trim() === r.type.trim()) !== i) found[`${i}.type`] = t('machines.twice');
+      if (!/^\d{1,3}$/.test(r.count.trim())) found[`${i}.count`] = t('machines.whole');
     });
     const parsed = machinesField.safeParse(Object.fromEntries(rows.map((r) => [r.type.trim(), Number(r.count)])));
     if (!parsed.success && !Object.keys(found).length) found.machines = parsed.error.issues[0].message;
@@ -40,34 +42,34 @@ export function MachinesCard({ studio, invalidateKey }: { studio: StudioDto; inv
   };
   const unused = MACHINE_TYPES.filter((t) => !rows.some((r) => r.type === t));
   return (
-    <Card title="Machines on the floor" className="mt-5 max-w-xl">
-      <p className="mb-3 text-sm text-ink-600">How many machines of each type the studio has. The line plan never puts more people on a machine type than there are machines; a type not listed here is not limited.</p>
+    <Card title={t('machines.title')} className="mt-5 max-w-xl">
+      <p className="mb-3 text-sm text-ink-600">{t('machines.intro')}</p>
       <form onSubmit={submit} noValidate>
         <table className="mb-3 text-sm" data-testid="machines">
-          <thead><tr className="text-left text-ink-600"><th className="pr-2">Machine type</th><th className="pr-2">Count</th><th /></tr></thead>
+          <thead><tr className="text-left text-ink-600"><th className="pr-2">{t('machines.type')}</th><th className="pr-2">{t('machines.count')}</th><th /></tr></thead>
           <tbody>{rows.map((r, i) => (
             <tr key={i}>
               <td className="py-1 pr-2 align-top">
-                <input aria-label={`Machine type, row ${i + 1}`} list="studio-machine-types" className="field-input w-44" value={r.type} onChange={(e) => set(i, { type: e.target.value })} aria-invalid={Boolean(errors[`${i}.type`])} />
+                <input aria-label={t('machines.typeRow', { row: i + 1 })} list="studio-machine-types" className="field-input w-44" value={r.type} onChange={(e) => set(i, { type: e.target.value })} aria-invalid={Boolean(errors[`${i}.type`])} />
                 {errors[`${i}.type`] ? <p role="alert" className="text-xs text-madder-700">{errors[`${i}.type`]}</p> : null}
               </td>
               <td className="py-1 pr-2 align-top">
-                <input aria-label={`Count, row ${i + 1}`} inputMode="numeric" className="field-input w-20" value={r.count} onChange={(e) => set(i, { count: e.target.value })} aria-invalid={Boolean(errors[`${i}.count`] ?? errors[`machines.${r.type}`])} />
+                <input aria-label={t('machines.countRow', { row: i + 1 })} inputMode="numeric" className="field-input w-20" value={r.count} onChange={(e) => set(i, { count: e.target.value })} aria-invalid={Boolean(errors[`${i}.count`] ?? errors[`machines.${r.type}`])} />
                 {errors[`${i}.count`] ?? errors[`machines.${r.type}`] ? <p role="alert" className="text-xs text-madder-700">{errors[`${i}.count`] ?? errors[`machines.${r.type}`]}</p> : null}
               </td>
-              <td className="py-1 align-top"><button type="button" className="text-sm underline" onClick={() => setRows(rows.filter((_, k) => k !== i))}>Remove</button></td>
+              <td className="py-1 align-top"><button type="button" className="text-sm underline" onClick={() => setRows(rows.filter((_, k) => k !== i))}>{t('machines.remove')}</button></td>
             </tr>
           ))}</tbody>
         </table>
         <datalist id="studio-machine-types">{MACHINE_TYPES.map((t) => <option key={t} value={t} />)}</datalist>
-        {rows.length === 0 ? <p className="mb-2 text-sm text-ink-600">No machines listed: the plan does not limit any machine type.</p> : null}
+        {rows.length === 0 ? <p className="mb-2 text-sm text-ink-600">{t('machines.none')}</p> : null}
         {errors.machines ? <p role="alert" className="mb-2 text-xs text-madder-700">{errors.machines}</p> : null}
         <div className="flex flex-wrap gap-2">
-          <button type="button" className="btn-quiet" onClick={() => setRows([...rows, { type: unused[0] ?? '', count: '1' }])}>Add machine type</button>
-          <button type="submit" className="btn-primary" disabled={save.isPending}>Save machines</button>
+          <button type="button" className="btn-quiet" onClick={() => setRows([...rows, { type: unused[0] ?? '', count: '1' }])}>{t('machines.add')}</button>
+          <button type="submit" className="btn-primary" disabled={save.isPending}>{t('machines.save')}</button>
         </div>
         <div className="mt-2"><ErrorNote error={save.error && !(save.error instanceof ApiError && Object.keys(save.error.fields).length) ? save.error : null} /></div>
-        {save.isSuccess ? <p className="mt-2 text-sm text-thread-700">Machines saved.</p> : null}
+        {save.isSuccess ? <p className="mt-2 text-sm text-thread-700">{t('machines.saved')}</p> : null}
       </form>
     </Card>
   );

@@ -47,7 +47,7 @@ export function StyleSeamsCard({ style }: { style: StyleDto }) {
         {stored ? 'The seams this style checks, as you set them.' : 'Proposed from the drafted pieces. Fix one and save to keep your own list.'} Each seam must
         sew to the same length in every size, give or take the tolerance; a sleeve cap keeps its ease.
       </p>
-      <div tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label="Seams" tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm">
           <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1.5 pr-2">Seam</th><th className="px-2">First side</th><th className="px-2">Sewn to</th><th className="px-2">Second longer by</th><th className="px-2">Give or take</th><th /></tr></thead>
           <tbody>

@@ -1,0 +1,63 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { en } from '@/locales/en';
+import { fr } from '@/locales/fr';
+import { auditChanges, auditSentence } from '@/features/audit/lib/audit-sentence';
+import { i18n, loadLanguage } from './i18n';
+
+beforeAll(async () => {
+  await loadLanguage('fr');
+});
+
+const leaves = (o: object, prefix = ''): [string, string][] =>
+  Object.entries(o).flatMap(([k, v]) => (typeof v === 'object' ? leaves(v as object, `${prefix}${k}.`) : [[`${prefix}${k}`, String(v)]]));
+
+describe('the dictionaries', () => {
+  it('gives French every English key, each with words and the same placeholders', () => {
+    const frLeaves = new Map(leaves(fr));
+    for (const [key, text] of leaves(en)) {
+      expect(frLeaves.get(key), key).toBeTruthy();
+      const holes = (s: string) => [...s.matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]).sort();
+      expect(holes(frLeaves.get(key)!), key).toEqual(holes(text));
+    }
+  });
+});
+
+describe('plural rules of each language', () => {
+  // CLDR plural rules (Unicode CLDR, Language Plural Rules): English "one" is exactly 1; French "one" is 0 and 1.
+  it('says 0 pieces and 1 piece in English', () => {
+    const t = i18n.getFixedT('en');
+    expect(t('common.pieces', { count: 0 })).toBe('0 pieces');
+    expect(t('common.pieces', { count: 1 })).toBe('1 piece');
+    expect(t('common.pieces', { count: 2 })).toBe('2 pieces');
+  });
+
+  it('says 0 pièce, 1 pièce and 2 pièces in French', () => {
+    const t = i18n.getFixedT('fr');
+    expect(t('common.pieces', { count: 0 })).toBe('0 pièce');
+    expect(t('common.pieces', { count: 1 })).toBe('1 pièce');
+    expect(t('common.pieces', { count: 2 })).toBe('2 pièces');
+    expect(t('floor.waiting', { count: 3 })).toBe('3 saisies attendent le réseau sur ce téléphone.');
+  });
+});
+
+describe('the audit trail as sentences', () => {
+  const entry = {
+    id: 1, userName: 'Zawadi Kerubo', action: 'update', entity: 'studio', entityId: 1, createdAt: '2026-12-02T16:32:57Z',
+    before: JSON.stringify({ name: 'Tamarind', unitSystem: 'metric', workingDayHours: 8 }),
+    after: JSON.stringify({ name: 'Tamarind', unitSystem: 'imperial', workingDayHours: 8 }),
+  };
+
+  it('reads who did what to which record, not raw JSON', () => {
+    expect(auditSentence(entry, i18n.getFixedT('en'))).toBe('Zawadi Kerubo changed the studio');
+    expect(auditSentence({ ...entry, action: 'create', entity: 'batch', entityId: 4 }, i18n.getFixedT('fr'))).toBe('Zawadi Kerubo a créé la série #4');
+  });
+
+  it('lists only the fields that changed, in words', () => {
+    expect(auditChanges(entry, i18n.getFixedT('en'))).toEqual(['units: metric → imperial']);
+    expect(auditChanges({ ...entry, before: '' }, i18n.getFixedT('en'))).toContain('name: Tamarind');
+  });
+
+  it('names an action the dictionary does not know in plain words', () => {
+    expect(auditSentence({ ...entry, action: 'mark_ready', entity: 'cut_order_line', entityId: 2 }, i18n.getFixedT('en'))).toBe('Zawadi Kerubo mark ready cut order line #2');
+  });
+});

@@ -1,0 +1,53 @@
+import i18n from 'i18next';
+import { initReactI18next, useTranslation } from 'react-i18next';
+import { LANGUAGES, type Language } from '@shared/format/studio-format';
+import { en } from '@/locales/en';
+
+const STORED = 'seamrun.language';
+
+/** The language before anyone signs in: the last one used on this device, else the browser's. */
+function deviceLanguage(): Language {
+  const stored = typeof localStorage !== 'undefined' ? localStorage.getItem(STORED) : null;
+  if (stored && (LANGUAGES as readonly string[]).includes(stored)) return stored as Language;
+  const browser = typeof navigator !== 'undefined' ? navigator.language.slice(0, 2) : 'en';
+  return (LANGUAGES as readonly string[]).includes(browser) ? (browser as Language) : 'en';
+}
+
+// English ships in the entry (it is every screen's fallback); other languages are chunks of their own, fetched
+// once and kept by the service worker with the rest of the app, so a phone offline still has its words.
+const LOADERS: Record<Exclude<Language, 'en'>, () => Promise<typeof en>> = {
+  fr: async () => (await import('@/locales/fr')).fr,
+};
+
+void i18n.use(initReactI18next).init({
+  resources: { en: { translation: en } },
+  lng: 'en',
+  fallbackLng: 'en',
+  supportedLngs: [...LANGUAGES],
+  interpolation: { escapeValue: false },
+  returnNull: false,
+  initAsync: false,
+});
+
+/** Makes a language's words available (a no-op for English and for one already loaded). */
+export async function loadLanguage(language: Language): Promise<void> {
+  if (language === 'en' || i18n.hasResourceBundle(language, 'translation')) return;
+  i18n.addResourceBundle(language, 'translation', await LOADERS[language](), true, true);
+}
+
+/** Show the app in a language (once its words are here) and remember it on this device for the sign-in screen. */
+export function applyLanguage(language: Language) {
+  try {
+    localStorage.setItem(STORED, language);
+  } catch {
+    // Private mode: the choice lasts for this page only.
+  }
+  if (typeof document !== 'undefined') document.documentElement.lang = language;
+  if (i18n.language === language) return;
+  void loadLanguage(language).then(() => i18n.changeLanguage(language));
+}
+
+const initial = deviceLanguage();
+if (initial !== 'en' && typeof document !== 'undefined') applyLanguage(initial);
+
+export { i18n, useTranslation };
