@@ -55,9 +55,9 @@ describe('buildMarkerListPdf', () => {
     });
     const text = pdfText(await buildMarkerListPdf(input, { compress: false }));
     expect(text).toContain('Rolls in cutting order');
-    expect(text).toContain('Roll A · shade lot Lot 3 · 15.000 m at the start');
-    expect(text).toContain('Expected remnant: 2.000 m (kept as a remnant)');
-    expect(text).toContain('Expected remnant: 0.800 m (end-of-roll waste)');
+    expect(text).toContain('Roll A · shade lot Lot 3 · 15.00 m at the start');
+    expect(text).toContain('Expected remnant: 2.00 m (kept as a remnant)');
+    expect(text).toContain('Expected remnant: 0.80 m (end-of-roll waste)');
     expect(text).not.toContain('Lay 1: rolls');
     expect(text.indexOf('Roll A ·')).toBeLessThan(text.indexOf('Roll C ·'));
   });

@@ -59,7 +59,7 @@ describe('buildMarkerPlotPdf', () => {
     const boxes = mediaBoxes(pdf);
     expect(boxes[0][3]).toBeCloseTo(((5000 + PLOT_BAND_MM) / 25.4) * 72, 3);
     expect(boxes[1][3]).toBeCloseTo(((2200 + PLOT_BAND_MM) / 25.4) * 72, 3);
-    expect(pdfText(pdf)).toContain('panel 2 of 2: 5.000 m to 7.200 m');
+    expect(pdfText(pdf)).toContain('panel 2 of 2: 5.00 m to 7.20 m');
   });
 
   it('refuses a panel longer than a PDF page can hold', async () => {

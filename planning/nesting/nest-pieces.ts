@@ -9,18 +9,18 @@ import type { NestingInput, NestingOptions, NestingResult } from './types';
 
 const DEFAULT_MAX_ITERATIONS = 2000;
 /**
- * Exploration (Gardeyn, Vanden Berghe & Wauters 2025, "sparrow"): the strip is shortened by `step`, the
+ * Exploration (Gardeyn, Vanden Berghe & Wauters 2025): the strip is shortened by `step`, the
  * overlaps are removed by guided local search; a failure keeps the infeasible layout in a pool, one of the
  * pool's layouts (biased to the least overlap) is disrupted by swapping two large pieces and separated
  * again at the same length. The step starts coarse (a bottom-left start is far from dense) and halves
- * after `EXPLORE_FAILURES` failures at one length, never below `EXPLORE_MIN_SHRINK` (sparrow's 0.1 %).
+ * after `EXPLORE_FAILURES` failures at one length, never below `EXPLORE_MIN_SHRINK` (0.1 % as in Gardeyn et al. 2025).
  */
 const INITIAL_SHRINK = 0.02;
 const EXPLORE_MIN_SHRINK = 0.001;
 const EXPLORE_FAILURES = 6;
-/** Share of the budget spent exploring; the rest compresses the best marker (sparrow: 80 % / 20 %). */
+/** Share of the budget spent exploring; the rest compresses the best marker (Gardeyn et al. 2025: 80 % / 20 %). */
 const EXPLORE_SHARE = 0.8;
-/** Compression: shrink steps decaying from 0.05 % to 0.001 % over the phase (sparrow's values). */
+/** Compression: shrink steps decaying from 0.05 % to 0.001 % over the phase (Gardeyn et al. 2025). */
 const COMPRESS_SHRINK_START = 0.0005;
 const COMPRESS_SHRINK_END = 0.00001;
 /** Standard deviation of |N(0, σ)| picking a pool entry (0 = least overlap, 1 = most). */
@@ -28,7 +28,7 @@ const POOL_SIGMA = 0.25;
 
 /**
  * Shorten the strip to `length` by cutting it at a random x and sliding everything right of the cut
- * to the left by the difference (sparrow's strip change): the overlaps appear along the cut, spread
+ * to the left by the difference (Gardeyn et al. 2025, strip change): the overlaps appear along the cut, spread
  * over the width, instead of piling up at the strip end. Pieces still past the end are pulled in.
  */
 export function shortenStrip(layout: LayoutState, length: number, rng: Rng): void {
@@ -51,7 +51,7 @@ function gaussian(rng: Rng): number {
   return Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
 }
 
-/** Disruption after a failed separation: swap two large items (sparrow's exploration move). */
+/** Disruption after a failed separation: swap two large items (Gardeyn et al. 2025, exploration move). */
 function swapLargeItems(layout: LayoutState, rng: Rng): void {
   const items = layout.model.items;
   const areas = items.map((it) => it.area).sort((a, b) => a - b);

@@ -2,7 +2,7 @@ import type { LayoutState } from './layout-state';
 import { rngInt, rngShuffle, type Rng } from './random';
 import type { RunBudget } from './run-budget';
 
-/** Search effort of one separation; defaults follow sparrow's separator (Gardeyn et al. 2025). */
+/** Search effort of one separation; defaults follow the published separator (Gardeyn et al. 2025). */
 export interface SeparatorConfig {
   strikes: number;
   itersWithoutImprovement: number;
@@ -19,7 +19,7 @@ export const EXPLORE_CONFIG: SeparatorConfig = {
   contactSamples: 12,
 };
 
-/** Compression: more strikes on a layout that is nearly feasible (sparrow: 5 strikes). */
+/** Compression: more strikes on a layout that is nearly feasible (Gardeyn et al. 2025: 5 strikes). */
 export const COMPRESS_CONFIG: SeparatorConfig = {
   strikes: 5,
   itersWithoutImprovement: 50,
