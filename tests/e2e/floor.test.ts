@@ -136,11 +136,11 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await owner.getByRole('link', { name: 'People' }).click();
     const account = owner.getByLabel('Payments account of Achieng Mwende');
     await account.fill('acct 1');
-    await owner.getByRole('button', { name: 'Save' }).click();
+    await owner.getByRole('button', { name: 'Save', exact: true }).click();
     await expect.poll(() => owner.getByRole('alert').first().textContent()).toContain('Letters, digits and _ only');
     await account.fill('acct_1AchiengDemo');
-    await owner.getByRole('button', { name: 'Save' }).click();
-    await expect.poll(() => owner.getByRole('button', { name: 'Save' }).count()).toBe(0);
+    await owner.getByRole('button', { name: 'Save', exact: true }).click();
+    await expect.poll(() => owner.getByRole('button', { name: 'Save', exact: true }).count()).toBe(0);
     await owner.reload();
     await expect.poll(() => owner.getByLabel('Payments account of Achieng Mwende').inputValue()).toBe('acct_1AchiengDemo');
     await shot(owner, 'owner-people-payments-account');

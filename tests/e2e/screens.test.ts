@@ -19,6 +19,8 @@ async function pageFor(email: string, viewport = { width: 1280, height: 900 }): 
 describe('screens', () => {
   it('gives every menu entry its own icon', async () => {
     const page = await pageFor('owner@tamarind.example');
+    // The menu renders once the signed-in shell has loaded: wait for it before reading its icons.
+    await page.locator('nav[aria-label] a svg').first().waitFor();
     const icons = await page.locator('nav[aria-label] a svg').evaluateAll((svgs) => svgs.map((s) => s.innerHTML));
     expect(icons.length).toBeGreaterThan(10);
     expect(new Set(icons).size).toBe(icons.length);
