@@ -1,20 +1,13 @@
 import Drawing from 'dxf-writer';
 import { polygonMirrorX, polygonRotate, polygonTranslate } from '@shared/geometry/polygon';
 import type { Point } from '@shared/geometry/types';
+import type { MarkerPlacementPlan } from '../types';
 
 /** Layers of a whole-marker DXF for a plotter or cutting table. */
 export const MARKER_DXF_LAYERS = { border: 'MARKER-EDGE', cut: 'CUT', grain: 'GRAIN', label: 'LABEL' } as const;
 
-/** One placed copy of a piece in a finished marker (the engine's frame: x along the fabric length, y across). */
-export interface MarkerDxfPlacement {
-  pieceKey: string;
-  size: string;
-  pieceName: string;
-  rotation: number;
-  mirrored: boolean;
-  x: number;
-  y: number;
-}
+/** One placed copy of a piece in a finished marker: the same shape the plotter PDF draws. */
+export type MarkerDxfPlacement = MarkerPlacementPlan;
 
 export interface MarkerDxfInput {
   /** Cutting outlines per piece key in mm, turned so the grain runs along x (the fabric length). */
