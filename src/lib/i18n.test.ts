@@ -2,7 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { en } from '@/locales/en';
 import { fr } from '@/locales/fr';
 import { auditChanges, auditSentence } from '@/features/audit/lib/audit-sentence';
-import { i18n, loadLanguage } from './i18n';
+import { i18n, loadLanguage, type AreaWords, type Words } from './i18n';
+
+/** Every area's own words (`src/features/<area>/words.ts`), registered as their modules load. */
+const AREAS = import.meta.glob<{ words: AreaWords<Words>; area: string }>('/src/features/*/words.ts', { eager: true });
 
 beforeAll(async () => {
   await loadLanguage('fr');
@@ -18,6 +21,34 @@ describe('the dictionaries', () => {
       expect(frLeaves.get(key), key).toBeTruthy();
       const holes = (s: string) => [...s.matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]).sort();
       expect(holes(frLeaves.get(key)!), key).toEqual(holes(text));
+    }
+  });
+});
+
+describe("the areas' own words", () => {
+  const holes = (s: string) => [...s.matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]).sort();
+
+  it('gives French every English key of each area, with words and the same placeholders', () => {
+    for (const [file, { words }] of Object.entries(AREAS)) {
+      const frLeaves = new Map(leaves(words.fr));
+      for (const [key, text] of leaves(words.en)) {
+        expect(frLeaves.get(key), `${file}: ${key}`).toBeTruthy();
+        expect(holes(frLeaves.get(key)!), `${file}: ${key}`).toEqual(holes(text));
+      }
+    }
+  });
+
+  it('registers each area under a name of its own, clear of the main dictionary and of each other', () => {
+    const names = Object.values(AREAS).map((m) => m.area);
+    expect(new Set(names).size).toBe(names.length);
+    for (const name of names) expect(Object.keys(en), name).not.toContain(name);
+  });
+
+  it('finds an area\'s words through i18next in both languages', () => {
+    for (const { area, words } of Object.values(AREAS)) {
+      const [key, text] = leaves(words.en).find(([, v]) => !v.includes('{{'))!;
+      expect(i18n.getFixedT('en')(`${area}.${key}`)).toBe(text);
+      expect(i18n.getFixedT('fr')(`${area}.${key}`)).toBe(new Map(leaves(words.fr)).get(key));
     }
   });
 });

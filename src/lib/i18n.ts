@@ -20,7 +20,7 @@ const LOADERS: Record<Exclude<Language, 'en'>, () => Promise<typeof en>> = {
 };
 
 void i18n.use(initReactI18next).init({
-  resources: { en: { translation: en } },
+  resources: { en: { translation: structuredClone(en) } }, // i18next merges areas into its bundle: keep en.ts as written
   lng: 'en',
   fallbackLng: 'en',
   supportedLngs: [...LANGUAGES],
@@ -29,10 +29,32 @@ void i18n.use(initReactI18next).init({
   initAsync: false,
 });
 
+const loaded = new Set<Language>(['en']);
+
 /** Makes a language's words available (a no-op for English and for one already loaded). */
 export async function loadLanguage(language: Language): Promise<void> {
-  if (language === 'en' || i18n.hasResourceBundle(language, 'translation')) return;
-  i18n.addResourceBundle(language, 'translation', await LOADERS[language](), true, true);
+  if (language === 'en' || loaded.has(language)) return;
+  i18n.addResourceBundle(language, 'translation', structuredClone(await LOADERS[language]()), true, true);
+  loaded.add(language);
+}
+
+/** A nested dictionary of words: every leaf a string. */
+export type Words = { readonly [key: string]: string | Words };
+
+/** The same keys as an English dictionary, each leaf any string: what another language must give. */
+export type SameWords<T> = { readonly [K in keyof T]: T[K] extends string ? string : SameWords<T[K]> };
+
+/** One area's words in every language, French key for key as English (the type checker holds them together). */
+export type AreaWords<T extends Words> = { en: T; fr: SameWords<T> };
+
+/**
+ * Registers an area's words under `area` in every language. An area's screens call it when their module loads,
+ * so the words travel in the area's own chunk rather than in the first load.
+ */
+export function registerWords<T extends Words>(area: string, words: AreaWords<T>): void {
+  for (const language of LANGUAGES) {
+    i18n.addResourceBundle(language, 'translation', { [area]: words[language] }, true, true);
+  }
 }
 
 /** Show the app in a language (once its words are here) and remember it on this device for the sign-in screen. */

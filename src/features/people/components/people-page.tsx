@@ -9,19 +9,22 @@ import { Field } from '@/components/ui/form';
 import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
+import { useTranslation } from '@/lib/i18n';
 import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
 import { AttendanceCard } from './attendance-card';
 import { FloorTabletCard } from './floor-tablet-card';
+import { area } from '../words';
 import { SKILLS_PARAM, SkillsCell, SkillsEditor } from './skills-editor';
 
 const c = createColumnHelper<PersonDto>();
 
 function RoleCell({ person }: { person: PersonDto }) {
+  const { t } = useTranslation();
   const update = useUpdatePerson();
   const me = useMe().data;
   return (
     <select
-      aria-label={`Role of ${person.name}`}
+      aria-label={t(`${area}.roleOf`, { name: person.name })}
       className="rounded border border-calico-300 bg-white px-2 py-1 text-sm"
       value={person.role}
       disabled={person.id === me?.id}
@@ -33,9 +36,10 @@ function RoleCell({ person }: { person: PersonDto }) {
 }
 
 function ActiveCell({ person }: { person: PersonDto }) {
+  const { t } = useTranslation();
   const update = useUpdatePerson();
   const me = useMe().data;
-  if (person.id === me?.id) return <Badge tone="teal">you</Badge>;
+  if (person.id === me?.id) return <Badge tone="teal">{t(`${area}.you`)}</Badge>;
   return (
     <button type="button" className="text-sm underline" onClick={() => update.mutate({ id: person.id, active: !person.active })}>
       {person.active ? 'Deactivate' : 'Reactivate'}
