@@ -13,6 +13,7 @@ export function Logo({ size = 32 }: { size?: number }) {
           strokeDasharray="3 2.6"
         />
       </svg>
+      {/* eslint-disable-next-line i18next/no-literal-string -- the product's name is the same in every language */}
       <span className="text-lg font-bold tracking-tight text-thread-800">Seamrun</span>
     </span>
   );
