@@ -11,6 +11,7 @@ export const en = {
     confirm: 'Confirm: {{label}}',
     filter: 'Filter…',
     noRows: 'Nothing here yet.',
+    table: 'Table',
     pageOf: 'Page {{page}} of {{pages}}',
     previous: 'Previous',
     next: 'Next',

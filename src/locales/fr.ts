@@ -12,6 +12,7 @@ export const fr: Dictionary = {
     saved: 'Enregistré.',
     confirm: 'Confirmer : {{label}}',
     filter: 'Filtrer…',
+    table: 'Tableau',
     noRows: 'Rien ici pour l’instant.',
     pageOf: 'Page {{page}} sur {{pages}}',
     previous: 'Précédente',
