@@ -14,7 +14,8 @@ const ZONE = 'America/Toronto';
 const PAGES: Record<string, { email: string; paths: string[] }> = {
   machinist: { email: 'machinist1@tamarind.example', paths: ['/', '/account'] },
   cutter: { email: 'cutter@tamarind.example', paths: ['/', '/lays/2', '/fabrics', '/account'] },
-  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/batches/new', '/styles', '/costing', '/outbox', '/settings', '/audit', '/account'] },
+  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/batches/new', '/styles', '/costing', '/outbox', '/settings', '/audit', '/account',
+    '/pay', '/people', '/floor', '/line', '/batches/1/costing', '/purchasing', '/markers'] },
 };
 
 /** Common English words of the interface (never demo data such as style or fabric names). */
@@ -23,6 +24,7 @@ const ENGLISH_WORDS = [
   'Hello', 'Good day', 'Earned', 'Pieces', 'Find bundle', 'Bundle number', 'Password', 'Language', 'Search', 'Filter',
   'garments', 'due in', 'In progress', 'Needs attention', 'Working day', 'Time zone', 'Units', 'Audit trail', 'When',
   'changed', 'created', 'Cost line', 'Unit cost', 'Bundle ticket', 'Shade lot', 'Pattern & grading', 'Markers', 'Costing',
+  'Pay rules', 'Attendance', 'Floor progress', 'Working calendar', 'Purchase orders', 'Line balance', 'Time study', 'Suppliers',
 ];
 const METRIC = /\d\s?(?:mm|cm|m|m²|cm²|metres?)(?![\p{L}\d])/u;
 const englishIn = (text: string) => ENGLISH_WORDS.filter((w) => new RegExp(`(?<![\\p{L}])${w}(?![\\p{L}])`, 'u').test(text));
