@@ -6,7 +6,64 @@ import { registerWords, type AreaWords } from '@/lib/i18n';
  */
 export const area = 'gradingRoom';
 
+/**
+ * French names of what the grading core drafts (pieces, seams, edges and grade points), by the core's English name
+ * or id. English shows the core's own names: its side of the dictionary is the same names (see `same`).
+ */
+const CORE_FR = {
+  pieces: {
+    Front: 'Devant', Back: 'Dos', 'Bodice front': 'Devant de corsage', 'Bodice back': 'Dos de corsage', Sleeve: 'Manche',
+    'Collar band': 'Pied de col', Collar: 'Col', 'Patch pocket': 'Poche plaquée', 'Pocket bag': 'Fond de poche', Belt: 'Ceinture',
+    'Front facing': 'Parementure devant', 'Back neck facing': 'Parementure d’encolure dos', 'Circle skirt': 'Jupe cloche',
+    Waistband: 'Ceinture montée', 'Skirt front': 'Devant de jupe', 'Skirt back': 'Dos de jupe',
+    'A-line skirt front': 'Devant de jupe trapèze', 'A-line skirt back': 'Dos de jupe trapèze',
+    'Pencil skirt front': 'Devant de jupe crayon', 'Pencil skirt back': 'Dos de jupe crayon',
+    'Straight skirt front': 'Devant de jupe droite', 'Straight skirt back': 'Dos de jupe droite',
+    Peplum: 'Basque', 'Gathered peplum': 'Basque froncée',
+    'Neck facing front': 'Parementure d’encolure devant', 'Neck facing back': 'Parementure d’encolure dos',
+    'Armhole facing front': 'Parementure d’emmanchure devant', 'Armhole facing back': 'Parementure d’emmanchure dos',
+  },
+  seams: {
+    'Side seam': 'Couture de côté', 'Shoulder seam': 'Couture d’épaule', 'Skirt side seam': 'Couture de côté de jupe',
+    'Sleeve underarm': 'Couture de dessous de manche', 'Sleeve cap to armhole': 'Tête de manche sur emmanchure',
+    'Collar band to neckline': 'Pied de col sur encolure', Seam: 'Couture',
+  },
+  parts: {
+    hem: 'ourlet', side: 'côté', armhole: 'emmanchure', shoulder: 'épaule', neckline: 'encolure', 'neck-extension': 'prolongement d’encolure',
+    'front-edge': 'bord devant', 'underarm-front': 'dessous de bras devant', 'underarm-back': 'dessous de bras dos', underarm: 'dessous de bras',
+    cap: 'tête de manche', 'cap-front': 'tête de manche devant', 'cap-back': 'tête de manche dos', 'cap-top': 'sommet de tête de manche',
+    'centre-back': 'milieu dos', 'centre-front': 'milieu devant', 'cb-fold': 'pli milieu dos', 'cf-fold': 'pli milieu devant', fold: 'pli', bag: 'fond',
+    'bust-dart': 'pince de poitrine', collar: 'col', end: 'extrémité', left: 'gauche', right: 'droite', outer: 'bord extérieur', inner: 'bord intérieur',
+    'stand-extension': 'prolongement du pied', top: 'haut', 'top-extension': 'prolongement du haut', vent: 'fente', waist: 'taille', 'side-seam': 'couture de côté',
+    cf: 'milieu devant', cb: 'milieu dos', 'cf-hem': 'ourlet milieu devant', 'cf-neck': 'encolure milieu devant', 'cf-neck-ext': 'encolure au bord de croisure',
+    'cf-waist': 'taille milieu devant', 'cb-neck': 'encolure milieu dos', 'cb-waist': 'taille milieu dos', 'cb-hem': 'ourlet milieu dos',
+    'cb-end': 'extrémité milieu dos', 'cb-overlap': 'croisement milieu dos', 'cb-outer': 'bord extérieur milieu dos',
+    'side-hem': 'ourlet au côté', 'side-hip': 'hanches au côté', 'side-waist': 'taille au côté', across: 'carrure', hps: 'point haut d’épaule',
+    'top-notch': 'cran du haut', 'top-left': 'angle haut gauche', 'top-right': 'angle haut droit', 'bottom-left': 'angle bas gauche', 'bottom-right': 'angle bas droit',
+    'dart-side-leg': 'branche de pince côté', 'dart-centre-leg': 'branche de pince milieu', 'bust-dart-upper': 'branche haute de la pince de poitrine',
+    'bust-dart-lower': 'branche basse de la pince de poitrine', 'hem-front': 'ourlet devant', 'hem-back': 'ourlet dos', 'hem-start': 'début d’ourlet',
+    'hem-end': 'fin d’ourlet', 'hem-seam': 'ourlet à la couture', 'hem-fold': 'ourlet au pli', 'waist-start': 'début de taille', 'waist-end': 'fin de taille',
+    'waist-seam': 'taille à la couture', 'waist-fold': 'taille au pli', 'neck-end': 'extrémité d’encolure', 'extension-end': 'extrémité de la croisure',
+    'opening-top': 'haut de l’ouverture', 'opening-bottom': 'bas de l’ouverture', 'vent-top': 'haut de fente', 'square-corner': 'angle droit',
+    'centre-waist': 'taille au milieu', 'centre-hem': 'ourlet au milieu', centre: 'milieu', point: 'pointe',
+  },
+  materials: { self: 'tissu principal', lining: 'doublure', contrast: 'contraste', interfacing: 'entoilage' },
+  /** How the core builds names: `notch 2`, `hem start`, `Front lining`, `Front facing to front`. */
+  patterns: { notch: 'cran {{n}}', start: 'début : {{part}}', lining: '{{piece}} (doublure)', interfacing: '{{piece}} (entoilage)', onto: '{{a}} sur {{b}}' },
+};
+
+/** The English side of a French map of the core's names: each name as the core writes it. */
+const same = <T extends Record<string, string>>(map: T) => Object.fromEntries(Object.keys(map).map((k) => [k, k])) as { [K in keyof T]: string };
+
 const en = {
+  core: {
+    pieces: same(CORE_FR.pieces),
+    seams: same(CORE_FR.seams),
+    parts: same(CORE_FR.parts),
+    materials: same(CORE_FR.materials),
+    patterns: { notch: 'notch {{n}}', start: '{{part}} start', lining: '{{piece}} lining', interfacing: '{{piece}} interfacing', onto: '{{a}} to {{b}}' },
+  },
+  side: '{{piece}}: {{edges}}',
   title: 'Pattern & grading',
   subtitle: 'Size run {{sizes}} · base {{base}} · ',
   errors_one: '{{count}} error',
@@ -208,6 +265,8 @@ const en = {
 export const words: AreaWords<typeof en> = {
   en,
   fr: {
+    core: CORE_FR,
+    side: '{{piece}} : {{edges}}',
     title: 'Patron et gradation',
     subtitle: 'Gamme de tailles {{sizes}} · base {{base}} · ',
     errors_one: '{{count}} erreur',

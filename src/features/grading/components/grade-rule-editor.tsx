@@ -5,10 +5,11 @@ import { usePutGradeRule } from '../api/grading-queries';
 import { parseLength } from '@shared/units/length-format';
 import { i18n, useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
+import { usePatternNames, type PatternNames } from '../hooks/use-pattern-names';
 import { area } from '../words';
 
 const ruleKey = (r: GradeRuleDto) => (r.target.kind === 'vertex' ? `v${r.target.index}` : `f:${r.target.key}`);
-const ruleName = (r: GradeRuleDto) => r.landmark ?? (r.target.kind === 'vertex' ? i18n.t(`${area}.rules.outlinePoint`, { n: r.target.index }) : r.target.key);
+const ruleName = (r: GradeRuleDto, names: PatternNames) => (r.landmark ? names.part(r.landmark) : null) ?? (r.target.kind === 'vertex' ? i18n.t(`${area}.rules.outlinePoint`, { n: r.target.index }) : r.target.key);
 
 /** Edit the movement (dx across, dy up) of one grade point for every size step in the studio's units (mm, or inches to 1/8), then redraw. */
 export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelectPoint, canEdit }: {
@@ -20,6 +21,7 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
   canEdit: boolean;
 }) {
   const { t } = useTranslation();
+  const names = usePatternNames();
   const { small, system, cellUnitWord } = useLength();
   const unit = system === 'metric' ? 'mm' : 'in';
   const shown = (v: number) => (system === 'metric' ? String(Number(v.toFixed(2))) : small(v).replace('"', ''));
@@ -42,7 +44,7 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
         const r = rules.find((x) => ruleKey(x) === e.target.value);
         if (r?.target.kind === 'vertex') onSelectPoint(r.target.index);
       }}>
-        {rules.filter((r) => r.target.kind === 'vertex' && (r.landmark || r === rule)).map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r)}</option>)}
+        {rules.filter((r) => r.target.kind === 'vertex' && (r.landmark || r === rule)).map((r) => <option key={ruleKey(r)} value={ruleKey(r)}>{ruleName(r, names)}</option>)}
       </select>
       <p className="text-xs text-ink-600">{t(`${area}.rules.${unit === 'mm' ? 'helpMm' : 'helpIn'}`)}</p>
       <div role="region" aria-label={t(`${area}.rules.region`)} tabIndex={0} className="overflow-x-auto">

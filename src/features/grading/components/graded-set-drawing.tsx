@@ -1,5 +1,6 @@
 import type { GradedPieceDto, PointDto } from '@shared/schemas/grading';
 import { useTranslation } from '@/lib/i18n';
+import { usePatternNames } from '../hooks/use-pattern-names';
 import { area } from '../words';
 import { sizeLineStyle } from './size-line-styles';
 
@@ -18,6 +19,7 @@ export function GradedSetDrawing({ piece, sizes, baseSize, selectedPoint, onSele
   onSelectPoint?: (vertex: number) => void;
 }) {
   const { t } = useTranslation();
+  const names = usePatternNames();
   const all = [...sizes.flatMap((s) => piece.bySize[s]?.outline ?? []), ...piece.baseCutting];
   const xs = all.map((p) => p.x), ys = all.map((p) => -p.y);
   const minX = Math.min(...xs), maxX = Math.max(...xs), minY = Math.min(...ys), maxY = Math.max(...ys);
@@ -25,11 +27,11 @@ export function GradedSetDrawing({ piece, sizes, baseSize, selectedPoint, onSele
   const vb = `${minX - pad} ${minY - pad} ${maxX - minX + 2 * pad} ${maxY - minY + 2 * pad}`;
   const k = (maxX - minX + 2 * pad) / 600; // stroke widths in screen-ish pixels
   const base = piece.bySize[baseSize];
-  const points = piece.rules.flatMap((r) => (r.target.kind === 'vertex' ? [{ index: r.target.index, name: r.landmark ?? t(`${area}.drawing.point`, { n: r.target.index }) }] : []));
+  const points = piece.rules.flatMap((r) => (r.target.kind === 'vertex' ? [{ index: r.target.index, name: r.landmark ? names.part(r.landmark) : t(`${area}.drawing.point`, { n: r.target.index }) }] : []));
   const order = [...sizes.filter((s) => s !== baseSize), baseSize];
   return (
     <figure className="w-full">
-      <svg viewBox={vb} role="img" aria-label={t(`${area}.drawing.graded`, { piece: piece.name, count: sizes.length })} data-testid="graded-set" className="h-[min(70vh,560px)] w-full rounded-lg border border-calico-200 bg-calico-50">
+      <svg viewBox={vb} role="img" aria-label={t(`${area}.drawing.graded`, { piece: names.piece(piece.name), count: sizes.length })} data-testid="graded-set" className="h-[min(70vh,560px)] w-full rounded-lg border border-calico-200 bg-calico-50">
         <path d={path(piece.baseCutting)} fill="none" stroke="#D6C8B0" strokeWidth={1.2 * k} />
         {order.map((s) => {
           const st = sizeLineStyle(sizes, baseSize, s);

@@ -6,6 +6,7 @@ import { downloadFile } from '@/lib/api-client';
 import { useCan } from '@/lib/auth';
 import { useTranslation } from '@/lib/i18n';
 import { gradingQueries, useProposeRules } from '../api/grading-queries';
+import { usePatternNames } from '../hooks/use-pattern-names';
 import { area } from '../words';
 import { GradeRuleEditor } from './grade-rule-editor';
 import { GradedSetDrawing } from './graded-set-drawing';
@@ -20,6 +21,7 @@ import { paths } from '@/config/paths';
 /** Pattern & grading of one style: chart, graded set, rules, seam checks, downloads and the size mix. */
 export function GradingPage() {
   const { t } = useTranslation();
+  const names = usePatternNames();
   const styleId = Number(useParams().id);
   const { data: g, isLoading, error } = useQuery(gradingQueries.detail(styleId));
   const canEdit = useCan('grading:write');
@@ -40,12 +42,12 @@ export function GradingPage() {
       <ErrorNote error={propose.error} />
       {piece ? (
         <div className="grid gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-          <Card title={<span>{t(`${area}.gradedSet`, { piece: piece.name })} <span className="text-sm font-normal text-ink-600">{t(`${area}.cutTimes`, { cut: t(`${area}.cut.${piece.cut}`), count: piece.quantity })}</span></span>}>
+          <Card title={<span>{t(`${area}.gradedSet`, { piece: names.piece(piece.name) })} <span className="text-sm font-normal text-ink-600">{t(`${area}.cutTimes`, { cut: t(`${area}.cut.${piece.cut}`), count: piece.quantity })}</span></span>}>
             <div className="mb-3 flex flex-wrap gap-1.5" role="tablist" aria-label={t(`${area}.pieces`)}>
               {g.pieces.map((p) => (
                 <button key={p.id} type="button" role="tab" aria-selected={p.id === piece.id} onClick={() => { setPieceId(p.id); setPoint(undefined); }}
                   className={`rounded-full border px-3 py-1 text-xs ${p.id === piece.id ? 'border-thread-700 bg-thread-700 text-calico-50' : 'border-calico-300 bg-white text-ink-800'}`}>
-                  {p.name}
+                  {names.piece(p.name)}
                 </button>
               ))}
             </div>

@@ -2,11 +2,13 @@ import type { GradingDto } from '@shared/schemas/grading';
 import { Badge } from '@/components/ui/page';
 import { useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
+import { usePatternNames } from '../hooks/use-pattern-names';
 import { area } from '../words';
 
 /** Seams sewn together, per size: both lengths, the difference against the intended ease, pass or error. */
 export function SeamReport({ grading }: { grading: GradingDto }) {
   const { t } = useTranslation();
+  const pn = usePatternNames();
   const { small, len } = useLength();
   const names = [...new Set(grading.seams.map((s) => s.seam))];
   return (
@@ -26,7 +28,7 @@ export function SeamReport({ grading }: { grading: GradingDto }) {
           <tbody>
             {names.map((n) => (
               <tr key={n} className="border-b border-calico-100 align-top">
-                <td className="py-1.5 pr-2 font-medium">{n}</td>
+                <td className="py-1.5 pr-2 font-medium">{pn.seam(n)}</td>
                 {grading.sizes.map((size) => {
                   const c = grading.seams.find((x) => x.seam === n && x.size === size);
                   if (!c) return <td key={size} />;
