@@ -15,7 +15,6 @@ export interface PatternNames {
   side(piece: string, edges: readonly string[]): string;
 }
 
-const MATERIALS: Record<string, string> = { lining: 'doublure', contrast: 'contraste', interfacing: 'entoilage', self: 'tissu principal' };
 
 /** The names in the language of `t` (a key with a dot or a colon in it is never looked up). */
 export function patternNames(t: TFunction): PatternNames {
