@@ -9,6 +9,7 @@ import { requirePasswordChanged } from './auth/require';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { requestSpeaker } from './i18n/request-speaker';
 import { createModules } from './modules';
 import type { MarkerQueueOptions } from './modules/markers/marker-queue';
 import type { ApiModule } from './modules/module';
@@ -147,7 +148,7 @@ export function createApp(deps: AppDeps): Express {
     };
   }
   api.use(notFoundHandler);
-  api.use(errorHandler(env.NODE_ENV === 'development'));
+  api.use(errorHandler(env.NODE_ENV === 'development', requestSpeaker((id) => services.studio.studios.get(id))));
   app.use('/api', api);
 
   const clientDir = deps.clientDir ?? resolve('dist/client');

@@ -1,5 +1,6 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { can, type Permission, type Role } from '../../shared/auth/permissions';
+import type { Language } from '../../shared/format/studio-format';
 import { AppError, forbidden, unauthenticated } from '../errors';
 
 /** The signed-in person as the server sees them on every request. */
@@ -11,6 +12,8 @@ export interface Actor {
   email: string;
   /** Signed in with a temporary password: only the auth routes answer until it is changed. */
   mustChangePassword?: boolean;
+  /** The person's own language; null or absent: the studio's. */
+  language?: Language | null;
 }
 
 declare global {

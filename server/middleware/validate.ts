@@ -1,6 +1,7 @@
 import type { Request, RequestHandler, Response } from 'express';
 import type { z, ZodType } from 'zod';
-import { badRequest } from '../errors';
+import { AppError, type Spoken } from '../errors';
+import { fieldLabel, issueMessage, lowerFirst, type Speaker } from '../i18n/speak';
 
 type Schemas = { body?: ZodType; query?: ZodType; params?: ZodType };
 
@@ -11,14 +12,18 @@ type Schemas = { body?: ZodType; query?: ZodType; params?: ZodType };
 export function validate(schemas: Schemas): RequestHandler {
   return (req, _res, next) => {
     const fields: Record<string, string> = {};
+    const refused: { issue: z.core.$ZodIssue; input: unknown; key: string }[] = [];
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part];
       if (!schema) continue;
-      const result = schema.safeParse(req[part] ?? {});
+      const input = req[part] ?? {};
+      const result = schema.safeParse(input);
       if (!result.success) {
         for (const issue of result.error.issues) {
           const key = issue.path.length ? issue.path.join('.') : part;
-          fields[key] ??= issue.message;
+          if (fields[key] !== undefined) continue;
+          fields[key] = issue.message;
+          refused.push({ issue, input, key });
         }
       } else if (part === 'query') {
         Object.defineProperty(req, 'query', { value: result.data, writable: true });
@@ -29,10 +34,17 @@ export function validate(schemas: Schemas): RequestHandler {
     const keys = Object.keys(fields);
     if (keys.length) {
       const first = keys[0];
-      return next(badRequest(`${first}: ${fields[first]}`, fields));
+      return next(new AppError(400, 'validation', `${first}: ${fields[first]}`, fields, (who) => spokenRefusal(refused, who)));
     }
     next();
   };
+}
+
+/** A refused request in another language: each field by its name, the first one in the sentence. */
+function spokenRefusal(refused: { issue: z.core.$ZodIssue; input: unknown; key: string }[], who: Speaker): Spoken {
+  const fields = Object.fromEntries(refused.map(({ issue, input, key }) => [key, issueMessage(issue, input, who)]));
+  const first = refused[0];
+  return { message: `${fieldLabel(first.key)}\u202f: ${lowerFirst(fields[first.key])}`, fields };
 }
 
 type Out<T> = T extends ZodType ? z.output<T> : undefined;

@@ -25,7 +25,7 @@ describe('a studio in its language, units and time zone', () => {
   it('refuses a time zone that does not exist with a 400 naming the field, and keeps the saved one', async () => {
     const res = await owner.patch('/api/studio').send({ timeZone: 'Mars/Olympus' });
     expect(res.status).toBe(400);
-    expect(res.body.error.message).toMatch(/^timeZone: /);
+    expect(res.body.error.message).toMatch(/^Fuseau horaire\u202f: /);
     expect((await owner.get('/api/studio')).body.studio.timeZone).toBe('America/Toronto');
     expect((await owner.patch('/api/studio').send({ language: 'de' })).status).toBe(400);
   });

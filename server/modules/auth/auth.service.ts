@@ -35,6 +35,7 @@ export function createAuthService(deps: {
     sessionVersion: u.sessionVersion,
     signedInWith,
     mustChangePassword: signedInWith === 'password' && Boolean(u.mustChangePassword),
+    language: u.language,
   });
 
   /**

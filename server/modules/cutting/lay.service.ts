@@ -4,6 +4,7 @@ import type { CorrectLayInput, RecordLayInput } from '../../../shared/schemas/cu
 import type { RollEntity } from '../../entities';
 import type { LayCorrection, LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
+import { said, type Said } from '../../i18n/speak';
 import { batchCode } from '../batches/batch.presenter';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';
@@ -31,12 +32,12 @@ const remnantField = (input: RecordLayInput | undefined, rollId: number, lineInd
 
 /** A measured remnant can never be longer than what the roll held: stock only goes down. */
 function checkRemnants(lines: LayRollLine[], onHand: Map<number, RollEntity>, input: RecordLayInput | undefined) {
-  const fields: Record<string, string> = {};
+  const fields: Record<string, Said> = {};
   lines.forEach((l, i) => {
     const roll = onHand.get(l.rollId);
     if (!roll || l.actualRemnantMm === undefined) return;
     if (l.actualRemnantMm > roll.remainingMm + REMNANT_EPSILON_MM) {
-      fields[remnantField(input, l.rollId, i)] = `Roll ${l.label} had only ${(roll.remainingMm / 1000).toFixed(2)} m; the remnant cannot be longer`;
+      fields[remnantField(input, l.rollId, i)] = said('remnantTooLong', { label: l.label, remaining: (roll.remainingMm / 1000).toFixed(2), remainingMm: roll.remainingMm });
     }
   });
   if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
@@ -49,13 +50,14 @@ const REMNANT_EPSILON_MM = 1e-6;
  */
 export function checkRollWidths(lines: LayRollLine[], onHand: Map<number, RollEntity>, markerWidthMm: number | undefined, input: RecordLayInput | undefined) {
   if (markerWidthMm === undefined) return;
-  const fields: Record<string, string> = {};
+  const fields: Record<string, string | Said> = {};
   lines.forEach((l, i) => {
     const roll = onHand.get(l.rollId);
     if (!roll || !((l.actualPlies ?? l.plies) > 0)) return;
     const refusal = checkRollWidth({ id: String(roll.id), label: roll.label, width: roll.widthMm }, markerWidthMm);
     const at = input?.rolls.findIndex((r) => r.rollId === l.rollId) ?? -1;
-    if (refusal) fields[`rolls.${at >= 0 ? at : i}.actualPlies`] = refusal.message;
+    // The core's sentence is the English one; the key lets French give both widths in the studio's units.
+    if (refusal) fields[`rolls.${at >= 0 ? at : i}.actualPlies`] = { ...said('rollTooNarrow', { label: roll.label, width: refusal.rollWidth, marker: refusal.markerWidth }), english: refusal.message };
   });
   if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
 }

@@ -5,6 +5,7 @@ import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/fl
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
+import { said } from '../../i18n/speak';
 import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
@@ -122,9 +123,12 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
   async function alreadyLogged(actor: Actor, existing: WorkLogEntity, bundle: BundleEntity, op: OperationEntity) {
     const who = await userName(actor.studioId, existing.userId, actor);
     const at = new Date(existing.createdAt).toISOString().slice(11, 16);
-    return conflict(`Bundle ${bundle.number} · ${op.code} ${op.name} was already logged by ${who} at ${at} UTC`, {
-      operationId: `Logged by ${who}`,
-    });
+    // English keeps its UTC clock time; French gives the time in the studio's zone, from the instant itself.
+    const operation = `${op.code} ${op.name}`;
+    return conflict(
+      { ...said('alreadyLogged', { number: bundle.number, operation, who, at: new Date(existing.createdAt).toISOString() }), english: `Bundle ${bundle.number} · ${operation} was already logged by ${who} at ${at} UTC` },
+      { operationId: `Logged by ${who}` },
+    );
   }
 
   /** The saved log as the original response gave it, for a retried idempotency key. */

@@ -1,0 +1,137 @@
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { z } from 'zod';
+import { MESSAGES_EN, MESSAGES_FR, NOT_FOUND_FR, type MessageKey } from './messages';
+import { english, fieldLabel, issueMessage, render, said, speaker, translate } from './speak';
+import { FIELD_LABELS_FR } from './validation-words';
+
+const fr = speaker({ language: 'fr', unitSystem: 'imperial', currency: 'CAD', timeZone: 'America/Toronto' });
+const en = speaker({ language: 'en' });
+const names = (template: string) => [...template.matchAll(/\{(\w+)(?:\|[\w:]+)?\}/g)].map((m) => m[1]);
+/** Parameters only a sentence written with its key carries (raw millimetres beside the English figure). */
+const KEY_ONLY_PARAMS = new Set(['remainingMm']);
+
+/** Every file under a folder, tests left out. */
+function sources(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const path = join(dir, name);
+    if (statSync(path).isDirectory()) return sources(path);
+    return /\.ts$/.test(name) && !/\.test\.ts$|\.testing\.ts$/.test(name) ? [path] : [];
+  });
+}
+
+/** A literal with its `${…}` parts given a sample value, as the server would write it. */
+const sample = (literal: string) =>
+  literal
+    .replace(/^\$\{[^}]*\}:/, 'name:')
+    .replace(/(?<=\p{L})\$\{[^}]*\}/gu, 's')
+    .replace(/\$\{[^}]*\}/g, '7');
+/** A literal that is only a field and a sentence made elsewhere (`file: ${m}`): its words are checked where they are made. */
+const madeElsewhere = (literal: string) => /^(?:[\w.]+|\$\{[^}]*\}): \$\{[^}]*\}$/.test(literal) || /^\$\{[^}]*\}$/.test(literal);
+
+describe('the server dictionary', () => {
+  it('has French for every English sentence, with no parameter French does not get', () => {
+    for (const key of Object.keys(MESSAGES_EN) as MessageKey[]) {
+      expect(MESSAGES_FR[key], key).toBeTruthy();
+      expect(MESSAGES_FR[key], key).not.toBe(MESSAGES_EN[key]);
+      for (const name of names(MESSAGES_FR[key])) expect([...names(MESSAGES_EN[key]), ...KEY_ONLY_PARAMS], `${key}: {${name}}`).toContain(name);
+    }
+  });
+
+  it('sets the narrow no-break space of French typography before : ; ! ? % and never a plain one', () => {
+    for (const key of Object.keys(MESSAGES_EN) as MessageKey[]) {
+      const text = render(said(key, { what: 'Batch', n: 3 }), fr);
+      expect(text, key).not.toMatch(/ [:;!?%]/);
+    }
+    expect(render(said('lockedOut'), fr)).toBe('Trop d’essais manqués\u202f; réessayez dans 15 minutes');
+  });
+
+  it('writes English byte for byte as the server always did', () => {
+    expect(english(said('markerQueueFull', { max: 5 }))).toBe(
+      'Your studio already has 5 markers waiting to run; wait for one to finish or cancel one, then start this marker again',
+    );
+    expect(translate('supplierId: no such supplier', en)).toBe('supplierId: no such supplier');
+  });
+
+  it('knows every sentence the server refuses with, by its English wording', () => {
+    const unknown: string[] = [];
+    const call = /(?:badRequest|conflict|forbidden|unauthenticated|notFound|new AppError\(\s*\d+,\s*'\w+',)\(?\s*((?:'[^']*'|`[^`]*`|"[^"]*"))/g;
+    for (const file of sources('server')) {
+      for (const m of readFileSync(file, 'utf8').matchAll(call)) {
+        if (/(?:errors|speak)\.ts$/.test(file) || madeElsewhere(m[1].slice(1, -1))) continue;
+        const text = sample(m[1].slice(1, -1));
+        if (/^notFound/.test(m[0])) {
+          if (!(text in NOT_FOUND_FR)) unknown.push(`${file}: notFound('${text}')`);
+        } else if (translate(text, fr) === null) unknown.push(`${file}: ${text}`);
+      }
+    }
+    expect(unknown).toEqual([]);
+  });
+
+  it('knows every sentence the shared schemas say when they refuse a value', () => {
+    const unknown: string[] = [];
+    const message = /(?:error|message): ?('[^']*'|`[^`]*`)|\.(?:min|max|int|positive|nonnegative|regex|length|email|gte|lte|gt|lt|multipleOf)\([^)]*?('[^']+'|`[^`]+`)\s*\)/g;
+    for (const file of sources('shared/schemas')) {
+      for (const m of readFileSync(file, 'utf8').matchAll(message)) {
+        const text = sample((m[1] ?? m[2]).slice(1, -1));
+        if (translate(text, fr) === null) unknown.push(`${file}: ${text}`);
+      }
+    }
+    expect(unknown).toEqual([]);
+  });
+
+  it('names every field of the shared schemas in French', async () => {
+    const keys = new Set<string>();
+    const seen = new Set<unknown>();
+    const walk = (schema: unknown) => {
+      const def = (schema as { _zod?: { def?: Record<string, unknown> } })?._zod?.def;
+      if (!def || seen.has(schema)) return;
+      seen.add(schema);
+      if (def.type === 'object') {
+        for (const [k, v] of Object.entries(def.shape as object)) {
+          keys.add(k);
+          walk(v);
+        }
+      }
+      for (const k of ['innerType', 'in', 'out', 'element', 'left', 'right', 'schema', 'valueType', 'keyType']) walk(def[k]);
+      for (const o of [...((def.options as unknown[]) ?? []), ...((def.items as unknown[]) ?? [])]) walk(o);
+    };
+    for (const file of sources('shared/schemas')) for (const v of Object.values(await import(`../../${file}`))) if (v instanceof z.ZodType) walk(v);
+    expect(keys.size).toBeGreaterThan(100);
+    expect([...keys].filter((k) => !(k in FIELD_LABELS_FR))).toEqual([]);
+  });
+});
+
+describe('a French answer', () => {
+  it('gives a remnant and a roll width in yards and inches for an imperial studio', () => {
+    // 1 yd = 914.4 mm and 1 in = 25.4 mm exactly (NIST SP 811, Appendix B): 2743.2 mm = 3 yd; 1524 mm = 60".
+    expect(render(said('remnantTooLong', { label: 'R-1', remaining: '2.74', remainingMm: 2743.2 }), fr)).toBe(
+      'Le rouleau R-1 n’avait plus que 3 vg\u202f; le reste ne peut pas être plus long',
+    );
+    expect(render(said('rollTooNarrow', { label: 'R-2', width: 1397, marker: 1524 }), fr)).toContain('laize de 55"');
+  });
+
+  it('tells the time of an earlier log in the studio’s zone, not in UTC', () => {
+    const text = render(said('alreadyLogged', { number: 12, operation: 'S1 Join shoulders', who: 'Amina', at: '2026-12-02T16:32:00Z' }), fr);
+    // Toronto is UTC−5 in December (IANA tz database, America/Toronto).
+    expect(text).toBe('Paquet 12 · S1 Join shoulders\u202f: déjà enregistré par Amina à 11 h 32');
+  });
+
+  it('names the field in French before what is wrong with it', () => {
+    expect(translate('supplierId: no such supplier', fr)).toBe('Fournisseur\u202f: fournisseur inconnu');
+    expect(translate('Batch not found', fr)).toBe('Série introuvable');
+    expect(translate('Batch B-0003 is shipped; nothing more is logged on it', fr)).toBe('La série B-0003 est expédiée\u202f; plus rien n’y est enregistré');
+    expect(fieldLabel('lines.2.quantity')).toBe('Quantité (n° 3)');
+    expect(fieldLabel('ratio.M')).toBe('Répartition des tailles (M)');
+  });
+
+  it('says zod’s own checks in French, and a schema’s own words in French', () => {
+    const schema = z.object({ name: z.string().min(1, 'Name is required').max(5), qty: z.number().int() });
+    const input = { name: 'too long', qty: undefined };
+    const issues = schema.safeParse(input).error!.issues;
+    expect(issues.map((i) => issueMessage(i, input, fr))).toEqual(['Au plus 5 caractères', 'À remplir']);
+    const empty = { name: '', qty: 1.5 };
+    expect(schema.safeParse(empty).error!.issues.map((i) => issueMessage(i, empty, fr))).toEqual(['À remplir', 'Doit être un nombre entier']);
+  });
+});
