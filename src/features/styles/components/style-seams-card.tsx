@@ -80,7 +80,7 @@ function blankSeam(pieces: DraftedPiece[], n: number): SeamInput {
 }
 
 function sideText(sides: Side[], pieces: DraftedPiece[], names: PatternNames): string {
-  return sides.map((s) => names.side(pieces.find((p) => p.id === s.pieceId)?.name ?? i18n.t(`${area}.seams.missingPiece`, { id: s.pieceId }), s.edges)).join('; ');
+  return sides.map((s) => names.side(pieces.find((p) => p.id === s.pieceId)?.name ?? i18n.t(`${area}.seams.missingPiece`, { id: s.pieceId }), s.edges)).join(i18n.t(`${area}.seams.sideJoin`));
 }
 
 function SeamRow({ seam, pieces, canEdit, isOpen, onOpen, onChange, onRemove }: {
