@@ -188,6 +188,7 @@ const en = {
     piece: '{{side}}: piece',
     edge: '{{side}}: edge',
     removeSeam: 'Remove this seam',
+    sideJoin: '; ',
   },
 };
 
@@ -374,6 +375,7 @@ export const words: AreaWords<typeof en> = {
       piece: '{{side}} : pièce',
       edge: '{{side}} : bord',
       removeSeam: 'Retirer cette couture',
+      sideJoin: ' ; ',
     },
   },
 };
