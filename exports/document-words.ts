@@ -310,7 +310,7 @@ const fr: typeof en = {
     waste: 'perte de fin de rouleau',
   },
   material: {
-    title: 'Fiche de coupe par matière',
+    title: 'Fiche de coupe',
     material: 'Matière',
     garments: 'Vêtements',
     notLinked: 'pas encore relié\u202f: choisissez-le sur la page du modèle',
