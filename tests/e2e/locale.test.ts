@@ -13,8 +13,11 @@ import { baseUrl, launchBrowser, shot } from './browser';
 const ZONE = 'America/Toronto';
 const PAGES: Record<string, { email: string; paths: string[] }> = {
   machinist: { email: 'machinist1@tamarind.example', paths: ['/', '/account'] },
-  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/lays/2', '/fabrics', '/account'] },
-  owner: { email: 'owner@tamarind.example', paths: ['/', '/batches', '/batches/new', '/styles', '/costing', '/outbox', '/settings', '/audit', '/account'] },
+  cutter: { email: 'cutter@tamarind.example', paths: ['/', '/lays/2', '/lays/1', '/fabrics', '/account'] },
+  owner: {
+    email: 'owner@tamarind.example',
+    paths: ['/', '/batches', '/batches/new', '/styles', '/styles/new', '/styles/1', '/grading', '/styles/1/grading', '/fabrics', '/costing', '/outbox', '/settings', '/audit', '/account'],
+  },
 };
 
 /** Common English words of the interface (never demo data such as style or fabric names). */
@@ -23,6 +26,8 @@ const ENGLISH_WORDS = [
   'Hello', 'Good day', 'Earned', 'Pieces', 'Find bundle', 'Bundle number', 'Password', 'Language', 'Search', 'Filter',
   'garments', 'due in', 'In progress', 'Needs attention', 'Working day', 'Time zone', 'Units', 'Audit trail', 'When',
   'changed', 'created', 'Cost line', 'Unit cost', 'Bundle ticket', 'Shade lot', 'Pattern & grading', 'Markers', 'Costing',
+  'Style details', 'Blocks and materials', 'Seam', 'Side seam', 'Style files', 'Upload', 'Size chart', 'Grade rule', 'Measurements per size',
+  'Export CSV', 'Rolls', 'Add roll', 'Remove', 'Cut plan', 'Plan the cut', 'Fabric used', 'Lower bound', 'Bodice', 'Sleeve', 'Front facing',
 ];
 const METRIC = /\d\s?(?:mm|cm|m|m²|cm²|metres?)(?![\p{L}\d])/u;
 const englishIn = (text: string) => ENGLISH_WORDS.filter((w) => new RegExp(`(?<![\\p{L}])${w}(?![\\p{L}])`, 'u').test(text));
