@@ -72,6 +72,8 @@ export const MESSAGES_EN = {
   undoOwnOnly: 'You can undo only your own logs',
   undoWindowPassed: 'The undo window has passed; ask the owner',
   failedCheckUndo: 'A failed check sent work back for rework; ask the owner to correct it',
+  notLoggedYet: '{operation} is not logged yet on this bundle',
+  sentBack: 'Sent back to {who} for rework of {operation} (not paid again)',
   // Styles, batches, markers, costing.
   noSuchSupplier: 'No such supplier',
   noSuchStyle: 'No such style',
@@ -264,6 +266,8 @@ export const MESSAGES_FR: Record<MessageKey, string> = {
   undoOwnOnly: 'Vous ne pouvez annuler que vos propres saisies',
   undoWindowPassed: 'Le délai d’annulation est passé ; demandez à la gérante',
   failedCheckUndo: 'Un contrôle non conforme a renvoyé le travail en reprise ; demandez à la gérante de le corriger',
+  notLoggedYet: '{operation} : pas encore enregistrée sur ce paquet',
+  sentBack: 'Renvoyé à {who} pour reprise de {operation} (pas payé une seconde fois)',
   noSuchSupplier: 'Fournisseur inconnu',
   noSuchStyle: 'Modèle inconnu',
   noSuchStyleHere: 'Modèle inconnu dans cet atelier',

@@ -69,6 +69,16 @@ describe('a studio in French and inches', () => {
     expect(res.body.error.fields.operationId).toBe('Pas un travail de mécanicienne');
   });
 
+  it('warns a machinist in French of the operations not yet logged before theirs', async () => {
+    const ops = await ds.getRepository(OperationEntity).find({ order: { seq: 'ASC' } });
+    const join = ops.find((o) => o.code === 'OP06')!;
+    const bundles = ds.getRepository(BundleEntity);
+    const bundle = await bundles.save(bundles.create({ studioId: 1, batchId: 1, layId: 0, number: 901, size: 'M', shadeLot: 'A', plyFrom: 1, plyTo: 10, pieces: 10, reopened: {} }));
+    const res = await machinist.post('/api/floor/logs').send({ bundleNumber: bundle.number, batchId: bundle.batchId, operationId: join.id, idempotencyKey: 'words-key-3' });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.warnings).toContain(`OP02 ${ops.find((o) => o.code === 'OP02')!.name}${NNBSP}: pas encore enregistrée sur ce paquet`);
+  });
+
   it('gives the cutter a narrow roll and a too-long remnant in inches and yards, in French', async () => {
     const lay = ((await cutter.get('/api/lays')).body.lays as Lay[]).find((l) => l.status === 'planned' && l.rolls.length)!;
     const line = lay.rolls[0];
