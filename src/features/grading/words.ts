@@ -161,6 +161,7 @@ const en = {
     designation: 'EN {{designation}}',
     grade: 'grade',
     note: 'Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval (cm) under each size.',
+    noteImperial: 'Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval under each size.',
   },
   pom: {
     bust: 'Bust', 'under-bust': 'Under bust', 'upper-chest': 'Upper chest', waist: 'Waist', 'waist-straight': 'Waist straight',
@@ -187,6 +188,7 @@ const en = {
     to: 'to',
     customers: 'Customers',
     en13402: 'Customers per EN 13402-3 bust interval (cm)',
+    en13402Imperial: 'Customers per EN 13402-3 bust interval',
   },
   pattern: {
     drawn: '{{piece}} drawn to scale',
@@ -364,6 +366,7 @@ export const words: AreaWords<typeof en> = {
       designation: 'EN {{designation}}',
       grade: 'gradation',
       note: 'Petits chiffres gris entre les tailles : la gradation d’une taille à la suivante. Sous chaque taille, l’intervalle de tour de poitrine EN 13402-3 (cm).',
+      noteImperial: 'Petits chiffres gris entre les tailles : la gradation d’une taille à la suivante. Sous chaque taille, l’intervalle de tour de poitrine EN 13402-3.',
     },
     pom: {
       bust: 'Tour de poitrine', 'under-bust': 'Tour sous poitrine', 'upper-chest': 'Tour de poitrine haut', waist: 'Tour de taille', 'waist-straight': 'Tour de taille à l’horizontale',
@@ -390,6 +393,7 @@ export const words: AreaWords<typeof en> = {
       to: 'à',
       customers: 'Clientes',
       en13402: 'Clientes par intervalle de tour de poitrine EN 13402-3 (cm)',
+      en13402Imperial: 'Clientes par intervalle de tour de poitrine EN 13402-3',
     },
     pattern: {
       drawn: '{{piece}} dessinée à l’échelle',
