@@ -121,6 +121,9 @@ const en = {
     ok: 'ok',
     error: 'error',
     note: 'Each cell: second side minus first side (the sleeve cap carries its intended ease). Tolerances are common practice.',
+    mismatch: '{{seam}}, size {{size}}: off by {{off}} (allowed ±{{allowed}})',
+    flipped: '{{piece}} {{size}}: outline turned clockwise',
+    crosses: '{{piece}} {{size}}: outline crosses itself',
   },
   rules: {
     outlinePoint: 'outline point {{n}}',
@@ -326,6 +329,9 @@ export const words: AreaWords<typeof en> = {
       ok: 'ok',
       error: 'erreur',
       note: 'Chaque case : second côté moins premier côté (la tête de manche porte son embu prévu). Les tolérances sont celles de l’usage.',
+      mismatch: '{{seam}}, taille {{size}} : écart de {{off}} (tolérance ±{{allowed}})',
+      flipped: '{{piece}} {{size}} : le contour s’est retourné (sens horaire)',
+      crosses: '{{piece}} {{size}} : le contour se croise',
     },
     rules: {
       outlinePoint: 'point du contour {{n}}',
