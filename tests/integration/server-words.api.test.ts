@@ -100,6 +100,18 @@ describe('a studio in French and inches', () => {
     expect(tooLong.body.error.message).toBe(said);
   });
 
+  it('refuses a packing list in French, row by row', async () => {
+    const bad = 'Roll,Length m,Width cm,Shade lot,Received\nP-2,abc,147,Lot D,2026-11-28\nP-3,20,147,,28/11/2026\n';
+    const res = await owner.post('/api/fabrics/1/rolls/import').set('X-Seamrun-Csrf', '1').attach('file', Buffer.from(bad), 'packing.csv');
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toBe(`3 problèmes dans la liste de colisage${NNBSP}; rien n’a été importé`);
+    expect(res.body.rows).toEqual([
+      { row: 2, column: 'Length m', message: 'La longueur «\u202fabc\u202f» n’est pas un nombre positif' },
+      { row: 3, column: 'Shade lot', message: 'Le bain est vide' },
+      { row: 3, column: 'Received', message: 'La date «\u202f28/11/2026\u202f» n’est pas une date AAAA-MM-JJ' },
+    ]);
+  });
+
   it('answers a person in their own language when they picked one', async () => {
     expect((await machinist.patch('/api/auth/me').send({ language: 'en' })).status).toBe(200);
     expect((await machinist.get('/api/audit')).body.error.message).toBe('Your role cannot do this');
