@@ -118,6 +118,16 @@ describe('a studio in French and inches', () => {
     expect((await machinist.patch('/api/auth/me').send({ language: null })).status).toBe(200);
   });
 
+  it('tells a machinist in French that their PIN is locked, and keeps the English for a browser that asks for none', async () => {
+    const { app: locking } = await buildTestApp({ env: { LOGIN_LOCK_AFTER: '3' } });
+    for (let i = 0; i < 3; i++) await request(locking).post('/api/auth/pin').send({ email: DEMO.machinist, pin: '0000' });
+    const fr = await request(locking).post('/api/auth/pin').set('Accept-Language', 'fr').send({ email: DEMO.machinist, pin: '4011' });
+    expect(fr.status).toBe(429);
+    expect(fr.body.error.message).toBe(`Trop d’essais manqués${NNBSP}; réessayez dans 15 minutes`);
+    const en = await request(locking).post('/api/auth/pin').send({ email: DEMO.machinist, pin: '4011' });
+    expect(en.body.error.message).toBe('Too many failed attempts; try again in 15 minutes');
+  });
+
   it('refuses a sign-in in the language the browser asks for, English without one', async () => {
     const wrong = { email: DEMO.owner, password: 'not-the-password' };
     const fr = await request(app).post('/api/auth/login').set('Accept-Language', 'fr-CA,fr;q=0.9,en;q=0.5').send(wrong);
