@@ -112,6 +112,18 @@ describe('a studio in French and inches', () => {
     ]);
   });
 
+  it('names a roll left out of a cut plan in French, both widths in inches', async () => {
+    // 1397 mm = 55" and 1450 mm = 57 1/8" to the nearest 1/8 (1 in = 25.4 mm exactly, NIST SP 811 Appendix B).
+    const add = await owner.post('/api/fabrics/1/rolls').send({ rolls: [{ label: 'NARROW-FR', lengthMm: 60_000, widthMm: 1397, shadeLot: 'Lot N', receivedDate: '2026-11-30' }] });
+    expect(add.status).toBe(201);
+    const b = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 2, S: 4, M: 6, L: 5, XL: 3 }, dueDate: '2027-01-15' });
+    const plan = await owner.post(`/api/batches/${b.body.batch.id}/cut-plan`).send({ fabricId: 1, maxPlies: 10, maxGarmentsPerMarker: 3, rollIds: [add.body.rolls[0].id, 1, 2, 3, 4, 5] });
+    expect(plan.status, JSON.stringify(plan.body)).toBe(201);
+    expect(plan.body.cutPlan.rollRefusals).toEqual([
+      `Le rouleau NARROW-FR a une laize de 55", plus étroite que le placement de 57 1/8"${NNBSP}: il ne peut pas être matelassé pour ce matelas`,
+    ]);
+  });
+
   it('answers a person in their own language when they picked one', async () => {
     expect((await machinist.patch('/api/auth/me').send({ language: 'en' })).status).toBe(200);
     expect((await machinist.get('/api/audit')).body.error.message).toBe('Your role cannot do this');
