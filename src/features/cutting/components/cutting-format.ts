@@ -8,12 +8,12 @@ export const metres = (mm: number) => fmt().fabricLength(mm);
 
 export { MM_PER_INCH, MM_PER_YARD };
 
-/** Fabric lengths and widths in the studio's units: metres and centimetres, or yards and inches (to 1/8). */
+/** Fabric lengths and widths in the studio's units and language: metres and centimetres, or yards and inches (to 1/8). */
 export function fabricUnits(imperial: boolean) {
   const f = studioFormat({ ...fmt().settings, unitSystem: imperial ? 'imperial' : 'metric' });
   return imperial
-    ? { length: f.fabricLength, width: f.fabricWidth, lengthUnit: 'yd', widthUnit: 'in', mmPerLength: MM_PER_YARD, mmPerWidth: MM_PER_INCH, pricePer: 'yard' }
-    : { length: f.fabricLength, width: f.fabricWidth, lengthUnit: 'm', widthUnit: 'cm', mmPerLength: 1000, mmPerWidth: 10, pricePer: 'metre' };
+    ? { length: f.fabricLength, width: f.fabricWidth, lengthUnit: f.fabricLengthUnit, widthUnit: f.fabricWidthUnit, mmPerLength: MM_PER_YARD, mmPerWidth: MM_PER_INCH, pricePer: 'yard' }
+    : { length: f.fabricLength, width: f.fabricWidth, lengthUnit: f.fabricLengthUnit, widthUnit: f.fabricWidthUnit, mmPerLength: 1000, mmPerWidth: 10, pricePer: 'metre' };
 }
 export const SIZE_ORDER = ['XS', 'S', 'M', 'L', 'XL'];
 export const ratioLabel = (r: Record<string, number>) => ratioText(r, [...SIZE_ORDER, ...Object.keys(r).filter((s) => !SIZE_ORDER.includes(s))]);

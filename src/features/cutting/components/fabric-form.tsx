@@ -2,13 +2,16 @@ import { useMutation, useQuery } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import type { CreateFabricInput, FabricDto } from '@shared/schemas/cutting';
 import { parseMajor, toMajorText } from '@shared/units/money';
+import { parseLength } from '@shared/units/length-format';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError, api } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
+import { fmt } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { queryClient } from '@/lib/query-client';
 import { purchasingQueries } from '@/features/purchasing/api/purchasing-queries';
-import { MM_PER_INCH, MM_PER_YARD } from './cutting-format';
-
+import { area } from '../words';
+import { MM_PER_YARD } from './cutting-format';
 
 interface Draft {
   name: string;
@@ -23,18 +26,22 @@ interface Draft {
   maxPlies: string;
 }
 
-function draftOf(f: FabricDto | null, imperial: boolean, currency: string): Draft {
+/** A decimal as typed in the language: `450,5` in French reads as 450.5 (spaces between thousands are dropped). */
+const decimalText = (text: string, french: boolean) => (french ? text.replace(/[\s\u202f\u00a0]/g, '').replace(',', '.') : text);
+
+function draftOf(f: FabricDto | null, imperial: boolean, currency: string, french = false): Draft {
   if (!f) return { name: '', composition: '', width: '', shrinkageLength: '0', shrinkageWidth: '0', isDirectional: false, price: '', priceUnit: imperial ? 'yard' : 'metre', supplierId: '', maxPlies: '40' };
   // The price as the supplier quoted it; older fabrics only have a rate per metre.
   const quoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
   return {
     name: f.name,
     composition: f.composition,
-    width: imperial ? String(Math.round((f.widthMm / MM_PER_INCH) * 8) / 8) : String(f.widthMm / 10),
+    // Inches with fractions to 1/8 (`57 1/2`), as the studio writes them.
+    width: imperial ? fmt().fabricWidth(f.widthMm).replace('"', '') : String(f.widthMm / 10),
     shrinkageLength: String(f.shrinkageLengthPercent ?? f.shrinkagePercent),
     shrinkageWidth: String(f.shrinkageWidthPercent ?? f.shrinkagePercent),
     isDirectional: f.isDirectional,
-    price: quoted ? toMajorText(quoted.amountMinor, currency) : '',
+    price: quoted ? (french ? toMajorText(quoted.amountMinor, currency).replace('.', ',') : toMajorText(quoted.amountMinor, currency)) : '',
     priceUnit: quoted?.per ?? (imperial ? 'yard' : 'metre'),
     supplierId: f.supplierId === null ? '' : String(f.supplierId),
     maxPlies: String(f.maxPlies),
@@ -46,18 +53,20 @@ function draftOf(f: FabricDto | null, imperial: boolean, currency: string): Draf
  * (cm, or inches), the price per metre or per yard as quoted, shrinkage along and across the grain, one-way, and the supplier it is bought from.
  */
 export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDone: (f: FabricDto) => void }) {
+  const { t } = useTranslation();
   const me = useMe().data;
   const imperial = me?.unitSystem === 'imperial';
+  const french = fmt().settings.language === 'fr';
   const currency = me?.currency ?? 'KES';
   const suppliers = useQuery(purchasingQueries.suppliers());
-  const [d, setD] = useState<Draft>(() => draftOf(fabric, imperial, currency));
+  const [d, setD] = useState<Draft>(() => draftOf(fabric, imperial, currency, french));
   const [localErrors, setLocalErrors] = useState<Record<string, string>>({});
   const save = useMutation({
     mutationFn: async (v: CreateFabricInput) =>
       (fabric ? await api.put<{ fabric: FabricDto }>(`/fabrics/${fabric.id}`, v) : await api.post<{ fabric: FabricDto }>('/fabrics', v)).fabric,
     onSuccess: async (f) => {
       await queryClient.invalidateQueries({ queryKey: ['fabrics'] });
-      if (!fabric) setD(draftOf(null, imperial, currency));
+      if (!fabric) setD(draftOf(null, imperial, currency, french));
       onDone(f);
     },
   });
@@ -67,26 +76,26 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
   const handleSubmit = (e: FormEvent) => {
     e.preventDefault();
     const problems: Record<string, string> = {};
-    const width = Number(d.width);
-    if (!d.width.trim() || !Number.isFinite(width) || width <= 0) problems.widthMm = 'Enter the cuttable width, above 0';
-    const price = d.price.trim() === '' ? 0 : parseMajor(d.price, currency);
-    if (price === null || price < 0) problems.priceMinor = 'Enter a price such as 450.00, or leave it empty';
+    const widthMm = imperial ? (parseLength(`${d.width} in`, 'imperial') ?? NaN) : Number(decimalText(d.width, french)) * 10;
+    if (!d.width.trim() || !Number.isFinite(widthMm) || widthMm <= 0) problems.widthMm = t(`${area}.form.widthNeeded`);
+    const price = d.price.trim() === '' ? 0 : parseMajor(decimalText(d.price, french), currency);
+    if (price === null || price < 0) problems.priceMinor = t(`${area}.form.priceNeeded`);
     for (const [key, field] of [['shrinkageLength', 'shrinkageLengthPercent'], ['shrinkageWidth', 'shrinkageWidthPercent']] as const) {
-      const v = Number(d[key] || 0);
-      if (!Number.isFinite(v) || v < 0 || v > 30) problems[field] = 'Between 0 and 30 %';
+      const v = Number(decimalText(d[key], french) || 0);
+      if (!Number.isFinite(v) || v < 0 || v > 30) problems[field] = t(`${area}.form.shrinkRange`);
     }
     const plies = Number(d.maxPlies);
-    if (!Number.isInteger(plies)) problems.maxPlies = 'Whole plies';
+    if (!Number.isInteger(plies)) problems.maxPlies = t(`${area}.form.wholePlies`);
     setLocalErrors(problems);
     if (Object.keys(problems).length) return;
     // Kept exactly as quoted; the rate per metre is only for older readers of the fabric.
     const perMetre = d.priceUnit === 'yard' ? Math.round(((price ?? 0) * 1000) / MM_PER_YARD) : (price ?? 0);
-    const shrinkLength = Number(d.shrinkageLength || 0);
-    const shrinkWidth = Number(d.shrinkageWidth || 0);
+    const shrinkLength = Number(decimalText(d.shrinkageLength, french) || 0);
+    const shrinkWidth = Number(decimalText(d.shrinkageWidth, french) || 0);
     save.mutate({
       name: d.name,
       composition: d.composition,
-      widthMm: Math.round(imperial ? width * MM_PER_INCH : width * 10),
+      widthMm: Math.round(widthMm),
       shrinkagePercent: Math.max(shrinkLength, shrinkWidth),
       shrinkageLengthPercent: shrinkLength,
       shrinkageWidthPercent: shrinkWidth,
@@ -120,36 +129,36 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
   );
 
   return (
-    <form onSubmit={handleSubmit} className="grid grid-cols-1 gap-3 sm:grid-cols-4 sm:items-start" aria-label={fabric ? `Edit ${fabric.name}` : 'Add a fabric'}>
-      {text('name', 'Name', 'name', 'text', 'Self, lining, contrast or interfacing, e.g. "Navy crepe" or "Ivory lining"')}
-      {text('composition', 'Composition', 'composition', 'text', 'e.g. 100 % polyester')}
-      {text('width', imperial ? 'Cuttable width (in)' : 'Cuttable width (cm)', 'widthMm', 'number', 'Between the selvedges, not the full width')}
-      {text('price', `Price per ${d.priceUnit} (${currency})`, 'priceMinor', 'text', 'As the supplier quotes it')}
+    <form onSubmit={handleSubmit} className="grid grid-cols-1 gap-3 sm:grid-cols-4 sm:items-start" aria-label={fabric ? t(`${area}.rolls.edit`, { name: fabric.name }) : t(`${area}.form.add`)}>
+      {text('name', t(`${area}.form.name`), 'name', 'text', t(`${area}.form.nameHint`))}
+      {text('composition', t(`${area}.form.composition`), 'composition', 'text', t(`${area}.form.compositionHint`))}
+      {text('width', t(`${area}.form.width`, { unit: fmt().fabricWidthUnit }), 'widthMm', imperial ? 'text' : 'number', t(`${area}.form.widthHint`))}
+      {text('price', t(`${area}.form.price.${d.priceUnit}`, { currency }), 'priceMinor', 'text', t(`${area}.form.priceHint`))}
       <div>
-        <label className="field-label" htmlFor={`${prefix}-priceUnit`}>Supplier prices it by the</label>
+        <label className="field-label" htmlFor={`${prefix}-priceUnit`}>{t(`${area}.form.priceUnit`)}</label>
         <select id={`${prefix}-priceUnit`} className="field-input" value={d.priceUnit} onChange={(e) => setD({ ...d, priceUnit: e.target.value === 'yard' ? 'yard' : 'metre' })}>
-          <option value="metre">metre</option>
-          <option value="yard">yard</option>
+          <option value="metre">{t(`${area}.form.metre`)}</option>
+          <option value="yard">{t(`${area}.form.yard`)}</option>
         </select>
       </div>
-      {text('shrinkageLength', 'Shrinkage along the grain (%)', 'shrinkageLengthPercent', 'number', 'Lengthwise (warp); pieces are cut longer to make up for it')}
-      {text('shrinkageWidth', 'Shrinkage across the grain (%)', 'shrinkageWidthPercent', 'number', 'Widthwise (weft)')}
-      {text('maxPlies', 'Most plies in a lay', 'maxPlies', 'number')}
+      {text('shrinkageLength', t(`${area}.form.shrinkAlong`), 'shrinkageLengthPercent', french ? 'text' : 'number', t(`${area}.form.shrinkAlongHint`))}
+      {text('shrinkageWidth', t(`${area}.form.shrinkAcross`), 'shrinkageWidthPercent', french ? 'text' : 'number', t(`${area}.form.shrinkAcrossHint`))}
+      {text('maxPlies', t(`${area}.form.maxPlies`), 'maxPlies', 'number')}
       <div>
-        <label className="field-label" htmlFor={`${prefix}-supplier`}>Supplier</label>
+        <label className="field-label" htmlFor={`${prefix}-supplier`}>{t(`${area}.form.supplier`)}</label>
         <select id={`${prefix}-supplier`} className="field-input" value={d.supplierId} onChange={(e) => setD({ ...d, supplierId: e.target.value })} aria-invalid={Boolean(errors.supplierId)}>
-          <option value="">Not set</option>
+          <option value="">{t(`${area}.form.notSet`)}</option>
           {(suppliers.data ?? []).map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
         </select>
         {errors.supplierId ? <p className="field-error">{errors.supplierId}</p> : null}
       </div>
       <label className="flex items-center gap-2 pt-6 text-sm">
         <input type="checkbox" checked={d.isDirectional} onChange={(e) => setD({ ...d, isDirectional: e.target.checked })} />
-        One way (nap or print): every piece cut in the same direction
+        {t(`${area}.form.oneWay`)}
       </label>
       <div className="col-span-full flex items-center gap-3">
-        <button type="submit" className="btn-primary" disabled={save.isPending}>{fabric ? 'Save fabric' : 'Add fabric'}</button>
-        {save.isSuccess ? <p className="text-sm text-thread-800" role="status">Saved.</p> : null}
+        <button type="submit" className="btn-primary" disabled={save.isPending}>{fabric ? t(`${area}.form.save`) : t(`${area}.form.addButton`)}</button>
+        {save.isSuccess ? <p className="text-sm text-thread-800" role="status">{t('common.saved')}</p> : null}
       </div>
       {save.error && !Object.keys(serverErrors).length ? <div className="col-span-full"><ErrorNote error={save.error} /></div> : null}
     </form>

@@ -4,17 +4,21 @@ import type { RollDto } from '@shared/schemas/cutting';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useCan, useMe } from '@/lib/auth';
-import { formatDate, formatMoney } from '@/lib/format';
+import { fmt, formatDate, formatMoney } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
+import { Trans } from 'react-i18next';
+import { dayInZone } from '@shared/format/studio-format';
+import { parseLength } from '@shared/units/length-format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
-import { fabricUnits } from './cutting-format';
+import { area } from '../words';
+import { fabricUnits, MM_PER_YARD } from './cutting-format';
 import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
   const { t } = useTranslation();
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   return (
-    <div role="region" aria-label="Rolls" tabIndex={0} className="overflow-x-auto">
+    <div role="region" aria-label={t(`${area}.rolls.table`)} tabIndex={0} className="overflow-x-auto">
       <table className="w-full text-sm">
         <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('fabric.length')}</th><th>{t('fabric.left')}</th><th>{t('fabric.held')}</th><th>{t('fabric.width')}</th><th>{t('fabric.received')}</th></tr></thead>
         <tbody>
@@ -31,13 +35,19 @@ function RollTable({ rolls }: { rolls: RollDto[] }) {
 }
 
 function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number }) {
+  const { t } = useTranslation();
   const add = useAddRolls(fabricId);
-  const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
-  const [f, setF] = useState({ label: '', lengthM: '', widthCm: String(Math.round(((widthMm + 20) / u.mmPerWidth) * 8) / 8), shadeLot: '', receivedDate: new Date().toISOString().slice(0, 10) });
+  const me = useMe().data;
+  const imperial = me?.unitSystem === 'imperial';
+  const u = fabricUnits(imperial);
+  // An imperial width is typed in inches with fractions (`58 1/8`), as the studio writes it.
+  const widthText = (mm: number) => (imperial ? u.width(mm).replace('"', '') : String(Math.round((mm / u.mmPerWidth) * 8) / 8));
+  const readWidth = (text: string) => (imperial ? parseLength(`${text} in`, 'imperial') ?? NaN : Number(text) * u.mmPerWidth);
+  const [f, setF] = useState({ label: '', lengthM: '', widthCm: widthText(widthMm + 20), shadeLot: '', receivedDate: dayInZone(new Date(), me?.timeZone ?? 'UTC') });
   const fields = add.error instanceof ApiError ? add.error.fields : {};
   const handleSubmit = (e: FormEvent) => {
     e.preventDefault();
-    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * u.mmPerLength), widthMm: Math.round(Number(f.widthCm) * u.mmPerWidth), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
+    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * u.mmPerLength), widthMm: Math.round(readWidth(f.widthCm)), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
       onSuccess: () => setF({ ...f, label: '', lengthM: '' }),
     });
   };
@@ -50,29 +60,30 @@ function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number 
   );
   return (
     <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
-      {input('label', 'Roll label', 'text', fields['rolls.0.label'])}
-      {input('lengthM', `Length (${u.lengthUnit})`, 'number', fields['rolls.0.lengthMm'])}
-      {input('widthCm', `Width (${u.widthUnit})`, 'number', fields['rolls.0.widthMm'])}
-      {input('shadeLot', 'Shade lot', 'text', fields['rolls.0.shadeLot'])}
-      {input('receivedDate', 'Received', 'date', fields['rolls.0.receivedDate'])}
-      <button type="submit" className="btn-primary" disabled={add.isPending}>Add roll</button>
+      {input('label', t(`${area}.rolls.label`), 'text', fields['rolls.0.label'])}
+      {input('lengthM', t(`${area}.rolls.length`, { unit: u.lengthUnit }), 'number', fields['rolls.0.lengthMm'])}
+      {input('widthCm', t(`${area}.rolls.width`, { unit: u.widthUnit }), imperial ? 'text' : 'number', fields['rolls.0.widthMm'])}
+      {input('shadeLot', t('fabric.shadeLot'), 'text', fields['rolls.0.shadeLot'])}
+      {input('receivedDate', t('fabric.received'), 'date', fields['rolls.0.receivedDate'])}
+      <button type="submit" className="btn-primary" disabled={add.isPending}>{t(`${area}.rolls.add`)}</button>
       {add.error && !Object.keys(fields).length ? <div className="col-span-full"><ErrorNote error={add.error} /></div> : null}
     </form>
   );
 }
 
 function ImportForm({ fabricId }: { fabricId: number }) {
+  const { t } = useTranslation();
   const imp = useImportRolls(fabricId);
   const [file, setFile] = useState<File | null>(null);
   const rows = imp.error instanceof ApiError ? Object.entries(imp.error.fields) : [];
   return (
     <div className="space-y-2">
-      <p className="text-sm text-ink-600">Supplier packing list as CSV or XLSX with columns <b>Roll</b>, <b>Length m</b> (or Length mm / Length yd), <b>Width cm</b>, <b>Shade lot</b>, <b>Received</b> (YYYY-MM-DD). Nothing is saved unless every row is right.</p>
+      <p className="text-sm text-ink-600"><Trans i18nKey={`${area}.rolls.importHelp`} components={{ b: <b /> }} /></p>
       <div className="flex flex-wrap items-center gap-2">
-        <input aria-label="Packing list file" type="file" accept=".csv,.xlsx" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
-        <button type="button" className="btn-quiet" disabled={!file || imp.isPending} onClick={() => file && imp.mutate(file)}>Import packing list</button>
+        <input aria-label={t(`${area}.rolls.importFile`)} type="file" accept=".csv,.xlsx" onChange={(e) => setFile(e.target.files?.[0] ?? null)} />
+        <button type="button" className="btn-quiet" disabled={!file || imp.isPending} onClick={() => file && imp.mutate(file)}>{t(`${area}.rolls.import`)}</button>
       </div>
-      {imp.isSuccess ? <p className="text-sm text-thread-800">{imp.data.length} rolls imported.</p> : null}
+      {imp.isSuccess ? <p className="text-sm text-thread-800">{t(`${area}.rolls.imported`, { count: imp.data.length })}</p> : null}
       {imp.error ? <ErrorNote error={imp.error} /> : null}
       {rows.length ? <ul className="list-disc pl-5 text-sm text-madder-700">{rows.map(([k, v]) => <li key={k}>{k}: {v}</li>)}</ul> : null}
     </div>
@@ -88,6 +99,9 @@ export function FabricsPage() {
   const canWrite = useCan('fabric:write');
   const currency = useMe().data?.currency ?? 'KES';
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
+  /** A quoted price per metre or per yard, per the studio's own unit (as quoted when the two agree). */
+  const inStudioUnit = (price: { amountMinor: number; per: 'metre' | 'yard' }) =>
+    price.per === u.pricePer ? price.amountMinor : Math.round((price.amountMinor * u.mmPerLength) / (price.per === 'yard' ? MM_PER_YARD : 1000));
   if (isLoading || !fabrics) return <Spinner />;
   return (
     <>
@@ -99,21 +113,21 @@ export function FabricsPage() {
             <p className="font-semibold text-thread-800">{f.name}</p>
             <p className="text-sm text-ink-600">{[f.composition, t('fabric.cuttable', { width: u.width(f.widthMm) }), f.isDirectional ? t('fabric.oneWay') : ''].filter(Boolean).join(' · ')}</p>
             <p className="mt-1 text-sm">{t('fabric.stock', { count: f.rollCount, length: u.length(f.totalRemainingMm) })}</p>
-            {f.price ? <p className="text-sm text-ink-600">{formatMoney(f.price.amountMinor, currency)} / {f.price.per === 'yard' ? t('fabric.unitYard', { defaultValue: 'yd' }) : 'm'}</p>
+            {f.price ? <p className="text-sm text-ink-600">{formatMoney(inStudioUnit(f.price), currency)} / {u.pricePer === 'yard' ? t(`${area}.rolls.unitYard`) : t(`${area}.rolls.unitMetre`)}</p>
               : f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{t(`fabric.per.${u.pricePer}`, { price: formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency) })}</p> : null}
-            {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">{t('fabric.shrinkage', { along: f.shrinkageLengthPercent ?? f.shrinkagePercent, across: f.shrinkageWidthPercent ?? f.shrinkagePercent, defaultValue: 'Shrinks {{along}} % along, {{across}} % across the grain' })}</p> : null}
+            {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">{t(`${area}.rolls.shrinkage`, { along: fmt().number(f.shrinkageLengthPercent ?? f.shrinkagePercent), across: fmt().number(f.shrinkageWidthPercent ?? f.shrinkagePercent) })}</p> : null}
           </button>
         ))}
       </div>
       {id !== null && detail.data ? (
         <div className="mt-5 space-y-5">
           <Card title={t('fabric.rollsOf', { name: detail.data.fabric.name })}><RollTable rolls={detail.data.rolls} /></Card>
-          {canWrite ? <Card title="Enter a roll"><AddRollForm fabricId={id} widthMm={detail.data.fabric.widthMm} /></Card> : null}
-          {canWrite ? <Card title="Import a packing list"><ImportForm fabricId={id} /></Card> : null}
-          {canWrite ? <Card title={`Edit ${detail.data.fabric.name}`}><FabricForm key={id} fabric={detail.data.fabric} onDone={() => undefined} /></Card> : null}
+          {canWrite ? <Card title={t(`${area}.rolls.enter`)}><AddRollForm fabricId={id} widthMm={detail.data.fabric.widthMm} /></Card> : null}
+          {canWrite ? <Card title={t(`${area}.rolls.importTitle`)}><ImportForm fabricId={id} /></Card> : null}
+          {canWrite ? <Card title={t(`${area}.rolls.edit`, { name: detail.data.fabric.name })}><FabricForm key={id} fabric={detail.data.fabric} onDone={() => undefined} /></Card> : null}
         </div>
       ) : null}
-      {canWrite ? <div className="mt-5"><Card title="Add a fabric, lining or interfacing"><FabricForm fabric={null} onDone={(f) => setOpenId(f.id)} /></Card></div> : null}
+      {canWrite ? <div className="mt-5"><Card title={t(`${area}.rolls.addFabric`)}><FabricForm fabric={null} onDone={(f) => setOpenId(f.id)} /></Card></div> : null}
     </>
   );
 }

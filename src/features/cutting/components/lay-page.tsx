@@ -7,6 +7,7 @@ import { useParams } from 'react-router';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
 import { layQueries, useCorrectLay, useCutLay, useRecordLay } from '../api/cutting-queries';
+import { area } from '../words';
 import { CuttingCautions } from './cutting-cautions';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { ConfirmButton } from '@/components/ui/confirm-button';
@@ -73,7 +74,7 @@ export function LayPage() {
     const b = body(true);
     if (!b) return;
     if (reason.trim().length < 3) {
-      setLocal({ reason: 'Say why the record is corrected' });
+      setLocal({ reason: t(`${area}.lay.sayWhy`) });
       return;
     }
     correct.mutate({ ...b, reason }, { onSuccess: () => { setCorrecting(false); setReason(''); } });
@@ -111,7 +112,7 @@ export function LayPage() {
           {lay.markerId ? <img src={`/api/markers/${lay.markerId}/svg`} alt={t('lay.markerOf', { seq: lay.seq })} className="w-full rounded-lg border border-calico-200 bg-calico-50" /> : <p className="text-sm text-ink-600">{t('lay.noMarker')}</p>}
         </Card>
         <Card title={t('lay.perRoll')}>
-          <div role="region" aria-label="Rolls of this lay" tabIndex={0} className="overflow-x-auto">
+          <div role="region" aria-label={t(`${area}.lay.rolls`)} tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
               <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('lay.pliesToSpread')}</th><th>{t('lay.expectedRemnant')}</th><th>{t('lay.pliesSpread')}</th><th>{imperial ? t('lay.remnantLeftIn') : t('lay.remnantLeftM')}</th><th>{t('lay.note')}</th></tr></thead>
               <tbody>
@@ -146,27 +147,27 @@ export function LayPage() {
             </div>
           ) : retired ? null : correcting ? (
             <div className="mt-3 space-y-2">
-              <label className="field-label" htmlFor="lay-correction-reason">Why is the record corrected?</label>
+              <label className="field-label" htmlFor="lay-correction-reason">{t(`${area}.lay.why`)}</label>
               <textarea id="lay-correction-reason" className="field-input" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} aria-invalid={Boolean(fields.reason)} />
               {fields.reason ? <p className="field-error">{fields.reason}</p> : null}
               <div className="flex flex-wrap gap-2">
-                <button type="button" className="btn-primary" disabled={correct.isPending} onClick={handleCorrect}>Save the correction</button>
-                <button type="button" className="btn-quiet" onClick={() => { setCorrecting(false); setLocal({}); }}>Cancel</button>
+                <button type="button" className="btn-primary" disabled={correct.isPending} onClick={handleCorrect}>{t(`${area}.lay.saveCorrection`)}</button>
+                <button type="button" className="btn-quiet" onClick={() => { setCorrecting(false); setLocal({}); }}>{t('common.cancel')}</button>
               </div>
-              <p className="text-xs text-ink-600">The roll stock follows the corrected remnants. The old figures, who changed them and why stay in the record.</p>
+              <p className="text-xs text-ink-600">{t(`${area}.lay.correctionNote`)}</p>
             </div>
           ) : (
             <div className="mt-3 flex flex-wrap items-center gap-3">
-              <p className="text-sm text-thread-800">Cut {lay.cutAt ? formatDateTime(lay.cutAt) : ''} · {bundles.length} bundles. This record is closed.</p>
-              <button type="button" className="btn-quiet" onClick={() => setCorrecting(true)}>Correct the record</button>
+              <p className="text-sm text-thread-800">{t('lay.cutAt', { when: lay.cutAt ? formatDateTime(lay.cutAt) : '', bundles: t('common.bundles', { count: bundles.length }) })} {t(`${area}.lay.closed`)}</p>
+              <button type="button" className="btn-quiet" onClick={() => setCorrecting(true)}>{t(`${area}.lay.correct`)}</button>
             </div>
           )}
           {record.isSuccess && !isCut ? <p className="mt-2 text-sm text-thread-800">{t('common.saved')}</p> : null}
-          {correct.isSuccess && !correcting ? <p className="mt-2 text-sm text-thread-800" role="status">Correction saved.</p> : null}
+          {correct.isSuccess && !correcting ? <p className="mt-2 text-sm text-thread-800" role="status">{t(`${area}.lay.correctionSaved`)}</p> : null}
           {failure && !Object.keys(server).length ? <div className="mt-2"><ErrorNote error={failure} /></div> : null}
           {lay.corrections?.length ? (
             <div className="mt-3">
-              <h3 className="text-sm font-semibold">Corrections</h3>
+              <h3 className="text-sm font-semibold">{t(`${area}.lay.corrections`)}</h3>
               <ul className="mt-1 space-y-1 text-sm">
                 {lay.corrections.map((c) => (
                   <li key={c.at} className="rounded-lg border border-calico-200 px-2 py-1">
@@ -189,7 +190,7 @@ export function LayPage() {
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/cut-ticket.pdf`, `cut-ticket-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docCutTicket')}</button>
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.xlsx`, `marker-list-${lay.batchCode}-lay-${lay.seq}.xlsx`)}>{t('lay.docMarkerXlsx')}</button>
             <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/marker-list.pdf`, `marker-list-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docMarkerPdf')}</button>
-            {lay.markerId ? <button type="button" className="btn-quiet" onClick={file(`/markers/${lay.markerId}/plot.pdf`, `marker-${lay.batchCode}-${lay.markerId}.pdf`)}>Marker to plot (PDF, 1:1)</button> : null}
+            {lay.markerId ? <button type="button" className="btn-quiet" onClick={file(`/markers/${lay.markerId}/plot.pdf`, `marker-${lay.batchCode}-${lay.markerId}.pdf`)}>{t(`${area}.lay.plot`)}</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docTickets')}</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>{t('lay.docRegister')}</button> : null}
           </div>

@@ -17,5 +17,9 @@ export function useLength() {
     cell: (v: number) => (system === 'metric' ? String(Number(v.toFixed(1))) : f.length(v).replace('"', '')),
     parseCell: (text: string) => parseLength(system === 'metric' ? `${text} mm` : `${text} in`, 'metric'),
     cellUnit: system === 'metric' ? 'mm' : 'in',
+    /** The unit word of a grid cell as the studio's language writes it (`mm`, `in`, `po`). */
+    cellUnitWord: system === 'metric' ? 'mm' : f.fabricWidthUnit,
+    /** The unit word of a garment length typed in centimetres or inches (`cm`, `in`, `po`). */
+    lengthUnitWord: f.fabricWidthUnit,
   };
 }

@@ -9,9 +9,13 @@ import { ErrorNote } from '@/components/ui/page';
 import { fabricQueries } from '@/features/cutting/api/cutting-queries';
 import { gradingQueries } from '@/features/grading/api/grading-queries';
 import { useLength } from '@/features/grading/hooks/use-length';
+import { usePatternNames } from '@/features/grading/hooks/use-pattern-names';
 import { useCan } from '@/lib/auth';
+import { fmt } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { useSaveComposition } from '../api/style-queries';
-import { BLOCK_FIELDS, BLOCK_LABELS, getAt, materialsOf, setAt, type BlockField, type BlockName } from './block-fields';
+import { area } from '../words';
+import { BLOCK_FIELDS, BLOCK_NAMES, getAt, materialsOf, setAt, type BlockField, type BlockName } from './block-fields';
 
 const MATERIAL_CHOICES = ['self', 'lining', 'contrast', 'interfacing'];
 
@@ -20,6 +24,9 @@ const MATERIAL_CHOICES = ['self', 'lining', 'contrast', 'interfacing'];
  * their options, defaults shown), the fabric each material is cut from, and a drawing to scale of the base size.
  */
 export function StyleBlocksCard({ style }: { style: StyleDto }) {
+  const { t } = useTranslation();
+  const material = (m: string) => t(`${area}.materials.${m}`, { defaultValue: m });
+  const preset = (id: string, part: 'name' | 'description', text: string) => t(`${area}.presets.${id}.${part}`, { defaultValue: text });
   const canEdit = useCan('styles:write');
   const [comp, setComp] = useState<StyleComposition>(style.composition ?? { preset: null, blocks: [] });
   const [links, setLinks] = useState<Record<string, number>>(style.materialFabrics);
@@ -35,15 +42,15 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
   return (
     <div className="grid gap-4" data-testid="style-blocks">
       <div className="flex flex-wrap items-center gap-2">
-        <span className="text-sm text-ink-600">Start from a preset:</span>
+        <span className="text-sm text-ink-600">{t(`${area}.blocks.startFrom`)}</span>
         {STYLE_PRESETS.map((p) => (
-          <button key={p.id} type="button" className={comp.preset === p.id ? 'btn-primary' : 'btn-quiet'} disabled={!canEdit} title={p.description} onClick={() => setComp(presetComposition(p.id))}>
-            {p.name}
+          <button key={p.id} type="button" className={comp.preset === p.id ? 'btn-primary' : 'btn-quiet'} disabled={!canEdit} title={preset(p.id, 'description', p.description)} onClick={() => setComp(presetComposition(p.id))}>
+            {preset(p.id, 'name', p.name)}
           </button>
         ))}
       </div>
       {comp.preset === 'shirt-dress' && comp.blocks.length === 0 ? (
-        <p className="text-sm text-ink-600">{STYLE_PRESETS[0].description} Drafted from the shirt dress blocks: choose the preset again to see and edit them.</p>
+        <p className="text-sm text-ink-600">{preset(STYLE_PRESETS[0].id, 'description', STYLE_PRESETS[0].description)} {t(`${area}.blocks.shirtDressNote`)}</p>
       ) : (
         <ol className="grid gap-3">
           {comp.blocks.map((b, i) => (
@@ -54,21 +61,21 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
       {canEdit ? (
         <div className="flex flex-wrap items-end gap-2">
           <label className="text-sm">
-            <span className="field-label">Add a block</span>
-            <select className="field-input" value={adding} onChange={(e) => setAdding(e.target.value as BlockName)} aria-label="Block to add">
-              {Object.entries(BLOCK_LABELS).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
+            <span className="field-label">{t(`${area}.blocks.addBlock`)}</span>
+            <select className="field-input" value={adding} onChange={(e) => setAdding(e.target.value as BlockName)} aria-label={t(`${area}.blocks.blockToAdd`)}>
+              {BLOCK_NAMES.map((k) => <option key={k} value={k}>{t(`${area}.blockNames.${k}`)}</option>)}
             </select>
           </label>
-          <button type="button" className="btn-quiet" onClick={() => setComp({ ...comp, blocks: [...comp.blocks, { block: adding } as BlockSpecInput] })}>Add block</button>
+          <button type="button" className="btn-quiet" onClick={() => setComp({ ...comp, blocks: [...comp.blocks, { block: adding } as BlockSpecInput] })}>{t(`${area}.blocks.add`)}</button>
         </div>
       ) : null}
       <fieldset className="grid gap-2 sm:grid-cols-2">
-        <legend className="field-label">Fabric of each material</legend>
+        <legend className="field-label">{t(`${area}.blocks.fabricOfMaterial`)}</legend>
         {materials.map((m) => (
           <label key={m} className="text-sm">
-            <span className="field-label capitalize">{m}</span>
-            <select className="field-input" aria-label={`Fabric for ${m}`} disabled={!canEdit} value={links[m] ?? ''} onChange={(e) => setLinks({ ...links, [m]: Number(e.target.value) })}>
-              <option value="">Not linked yet</option>
+            <span className="field-label">{material(m).charAt(0).toUpperCase() + material(m).slice(1)}</span>
+            <select className="field-input" aria-label={t(`${area}.blocks.fabricFor`, { material: material(m) })} disabled={!canEdit} value={links[m] ?? ''} onChange={(e) => setLinks({ ...links, [m]: Number(e.target.value) })}>
+              <option value="">{t(`${area}.blocks.notLinked`)}</option>
               {(fabrics.data ?? []).map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
             </select>
             {save.error && 'fields' in save.error ? <span className="field-error">{(save.error.fields as Record<string, string>)[`materialFabrics.${m}`]}</span> : null}
@@ -77,9 +84,9 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
       </fieldset>
       {canEdit ? (
         <div className="flex flex-wrap items-center gap-3">
-          <button type="button" className="btn-primary" disabled={save.isPending} onClick={submit}>{save.isPending ? 'Saving…' : 'Save blocks and materials'}</button>
-          <Link className="btn-quiet" to={`/styles/${style.id}/grading`}>Pattern &amp; grading</Link>
-          {save.isSuccess ? <span className="text-sm text-ink-600" role="status">Saved. Propose rules from the chart on Pattern &amp; grading to draft the pieces.</span> : null}
+          <button type="button" className="btn-primary" disabled={save.isPending} onClick={submit}>{save.isPending ? t(`${area}.blocks.saving`) : t(`${area}.blocks.save`)}</button>
+          <Link className="btn-quiet" to={`/styles/${style.id}/grading`}>{t(`${area}.blocks.grading`)}</Link>
+          {save.isSuccess ? <span className="text-sm text-ink-600" role="status">{t(`${area}.blocks.saved`)}</span> : null}
         </div>
       ) : null}
       {save.error ? <ErrorNote error={save.error} /> : null}
@@ -89,28 +96,32 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
 }
 
 function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: number; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void; onRemove: () => void }) {
+  const { t } = useTranslation();
   return (
     <li className="rounded-lg border border-calico-200 p-3" data-testid={`block-${index}`}>
       <div className="mb-2 flex flex-wrap items-center gap-3">
-        <strong>{BLOCK_LABELS[spec.block]}</strong>
+        <strong>{t(`${area}.blockNames.${spec.block}`)}</strong>
         <label className="text-sm">
-          Material{' '}
-          <select className="field-input inline-block w-auto" aria-label={`Material of block ${index + 1}`} disabled={!canEdit} value={spec.material ?? 'self'} onChange={(e) => onChange(setAt(spec, 'material', e.target.value === 'self' ? undefined : e.target.value))}>
-            {[...new Set([...MATERIAL_CHOICES, spec.material ?? 'self'])].map((m) => <option key={m} value={m}>{m}</option>)}
+          {t(`${area}.blocks.material`)}{' '}
+          <select className="field-input inline-block w-auto" aria-label={t(`${area}.blocks.materialOf`, { n: index + 1 })} disabled={!canEdit} value={spec.material ?? 'self'} onChange={(e) => onChange(setAt(spec, 'material', e.target.value === 'self' ? undefined : e.target.value))}>
+            {[...new Set([...MATERIAL_CHOICES, spec.material ?? 'self'])].map((m) => <option key={m} value={m}>{t(`${area}.materials.${m}`, { defaultValue: m })}</option>)}
           </select>
         </label>
-        {canEdit ? <button type="button" className="btn-quiet ml-auto" onClick={onRemove}>Remove</button> : null}
+        {canEdit ? <button type="button" className="btn-quiet ml-auto" onClick={onRemove}>{t(`${area}.blocks.remove`)}</button> : null}
       </div>
       <div className="grid gap-2 sm:grid-cols-3">
-        {BLOCK_FIELDS[spec.block].map((f) => <OptionField key={f.path} index={index} field={f} spec={spec} canEdit={canEdit} onChange={onChange} />)}
+        {BLOCK_FIELDS[spec.block].map((f) => <OptionField key={f.path} index={index} block={spec.block} field={f} spec={spec} canEdit={canEdit} onChange={onChange} />)}
       </div>
     </li>
   );
 }
 
-function OptionField({ index, field: f, spec, canEdit, onChange }: { index: number; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
-  const { len, system } = useLength();
+function OptionField({ index, block, field: f, spec, canEdit, onChange }: { index: number; block: BlockName; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
+  const { t } = useTranslation();
+  const { len, system, lengthUnitWord } = useLength();
   const unit = system === 'metric' ? 'cm' : 'in';
+  const label = t(`${area}.fields.${block}.${f.path.replace(/\./g, '_')}`);
+  const choice = (c: string) => t(`${area}.choices.${c}`, { defaultValue: c });
   const cell = (v: number) => (system === 'metric' ? String(Number((v / 10).toFixed(2))) : formatLength(v, system).replace('"', ''));
   const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
   const value = getAt(spec, f.path);
@@ -121,27 +132,27 @@ function OptionField({ index, field: f, spec, canEdit, onChange }: { index: numb
     return (
       <label className="flex items-center gap-2 text-sm" htmlFor={id}>
         <input id={id} type="checkbox" disabled={!canEdit} checked={on} onChange={(e) => set(e.target.checked === f.default ? undefined : e.target.checked ? f.on : f.on === true ? false : null)} />
-        {f.label}
+        {label}
       </label>
     );
   }
   if (f.kind === 'choice') {
     return (
       <label className="text-sm" htmlFor={id}>
-        <span className="field-label">{f.label}</span>
+        <span className="field-label">{label}</span>
         <select id={id} className="field-input" disabled={!canEdit} value={(value as string | undefined) ?? ''} onChange={(e) => set(e.target.value || undefined)}>
-          <option value="">Default ({f.default})</option>
-          {f.choices.map((c) => <option key={c} value={c}>{c}</option>)}
+          <option value="">{t(`${area}.blocks.defaultChoice`, { value: choice(f.default) })}</option>
+          {f.choices.map((c) => <option key={c} value={c}>{choice(c)}</option>)}
         </select>
       </label>
     );
   }
-  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : String(f.default)) : f.default;
+  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : fmt().number(f.default, 3)) : t(`${area}.defaults.${f.default}`);
   return (
     <label className="text-sm" htmlFor={id}>
-      <span className="field-label">{f.label}{f.kind === 'length' ? ` (${unit})` : ''}</span>
+      <span className="field-label">{label}{f.kind === 'length' ? ` (${lengthUnitWord})` : ''}</span>
       <input
-        id={id} className="field-input" disabled={!canEdit} placeholder={`Default ${shown}`}
+        id={id} className="field-input" disabled={!canEdit} placeholder={t(`${area}.blocks.defaultValue`, { value: shown })}
         defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : String(value)}
         onBlur={(e) => {
           const t = e.target.value.trim();
@@ -156,7 +167,9 @@ function OptionField({ index, field: f, spec, canEdit, onChange }: { index: numb
 
 /** The base size's pieces drafted in the browser from the blocks as edited, to scale (sewing line, cutting line, grain). */
 function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; baseSize: string; composition: StyleComposition }) {
+  const { t } = useTranslation();
   const { len } = useLength();
+  const names = usePatternNames();
   const grading = useQuery(gradingQueries.detail(styleId));
   const chart = grading.data?.chart;
   const drafted = useMemo((): { pieces: DraftedPiece[] } | { error: string } | null => {
@@ -170,9 +183,9 @@ function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; 
       return { error: err instanceof Error ? err.message : String(err) };
     }
   }, [chart, baseSize, composition]);
-  if (!chart) return <p className="text-sm text-ink-600">Import the size chart on Pattern &amp; grading to see the pieces drawn here.</p>;
+  if (!chart) return <p className="text-sm text-ink-600">{t(`${area}.blocks.importChart`)}</p>;
   if (!drafted) return null;
-  if ('error' in drafted) return <p className="field-error" role="alert">These blocks cannot be drafted yet: {drafted.error}</p>;
+  if ('error' in drafted) return <p className="field-error" role="alert">{t(`${area}.blocks.cannotDraft`, { error: drafted.error })}</p>;
   if (!drafted.pieces.length) return null;
   const gap = 40;
   let x = 0;
@@ -191,19 +204,19 @@ function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; 
   const d = (pts: { x: number; y: number }[], dx: number, dy: number) => `M${pts.map((q) => `${(q.x + dx).toFixed(1)},${(-q.y + dy).toFixed(1)}`).join('L')}Z`;
   return (
     <figure>
-      <svg viewBox={`-20 -20 ${x + 20} ${height + 20}`} className="h-96 w-full rounded-lg border border-calico-200 bg-calico-50" role="img" aria-label={`${drafted.pieces.length} pieces of size ${baseSize} to scale`} data-testid="blocks-drawing">
+      <svg viewBox={`-20 -20 ${x + 20} ${height + 20}`} className="h-96 w-full rounded-lg border border-calico-200 bg-calico-50" role="img" aria-label={t(`${area}.blocks.drawing`, { count: drafted.pieces.length, size: baseSize })} data-testid="blocks-drawing">
         {laid.map(({ p, cut, dx, dy, h }, i) => (
           <g key={p.id} data-piece={p.id}>
             <path d={d(cut, dx, dy)} fill="none" stroke="#C9B48F" strokeWidth={1.5 * k} />
             <path d={d(p.outline, dx, dy)} fill={p.material === 'lining' ? 'rgba(120,90,160,0.08)' : p.material === 'contrast' ? 'rgba(190,90,60,0.1)' : 'rgba(15,76,92,0.06)'} stroke="#0F4C5C" strokeWidth={1.5 * k} />
             <line x1={p.grainLine.from.x + dx} y1={-p.grainLine.from.y + dy} x2={p.grainLine.to.x + dx} y2={-p.grainLine.to.y + dy} stroke="#434B50" strokeWidth={k} strokeDasharray={`${6 * k} ${3 * k}`} />
-            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{p.name} ×{p.copies}</text>
+            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{names.piece(p.name)} ×{p.copies}</text>
           </g>
         ))}
         <line x1={0} y1={height} x2={100} y2={height} stroke="#434B50" strokeWidth={2 * k} />
         <text x={110} y={height + font / 3} fontSize={font} fill="#434B50">{len(100)}</text>
       </svg>
-      <figcaption className="mt-1 text-xs text-ink-600">Size {baseSize}, drafted from the blocks as edited: sewing line dark, cutting line pale, grain dashed; self teal, lining violet, contrast rust; the bar is {len(100)}.</figcaption>
+      <figcaption className="mt-1 text-xs text-ink-600">{t(`${area}.blocks.caption`, { size: baseSize, bar: len(100) })}</figcaption>
     </figure>
   );
 }

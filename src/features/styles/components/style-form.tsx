@@ -6,11 +6,14 @@ import { createStyleInput, STYLE_STATUSES, type CreateStyleInput, type StyleDto 
 import { Field } from '@/components/ui/form';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
+import { useTranslation } from '@/lib/i18n';
 import { useSaveStyle } from '../api/style-queries';
+import { area } from '../words';
 
 type FormValues = z.input<typeof createStyleInput>;
 
 export function StyleForm({ style, onSaved }: { style?: StyleDto; onSaved: (s: StyleDto) => void }) {
+  const { t } = useTranslation();
   const save = useSaveStyle(style?.id);
   const [sizesText, setSizesText] = useState((style?.sizeRun ?? ['XS', 'S', 'M', 'L', 'XL']).join(', '));
   const form = useForm<FormValues>({
@@ -22,32 +25,32 @@ export function StyleForm({ style, onSaved }: { style?: StyleDto; onSaved: (s: S
   const onSubmit = form.handleSubmit(async (v) => onSaved(await save.mutateAsync(v as CreateStyleInput)));
   return (
     <form onSubmit={onSubmit} className="grid max-w-2xl gap-4 sm:grid-cols-2" noValidate>
-      <Field label="Code" {...form.register('code')} error={e.code?.message ?? serverFields.code} />
-      <Field label="Name" {...form.register('name')} error={e.name?.message} />
+      <Field label={t(`${area}.form.code`)} {...form.register('code')} error={e.code?.message ?? serverFields.code} />
+      <Field label={t(`${area}.form.name`)} {...form.register('name')} error={e.name?.message} />
       <div className="sm:col-span-2">
-        <label className="field-label" htmlFor="description">Description</label>
+        <label className="field-label" htmlFor="description">{t(`${area}.form.description`)}</label>
         <textarea id="description" rows={3} className="field-input" {...form.register('description')} />
       </div>
       <Field
-        label="Size run (in order, comma separated)"
+        label={t(`${area}.form.sizeRun`)}
         name="sizeRunText"
         value={sizesText}
         onChange={(ev) => {
           setSizesText(ev.target.value);
           form.setValue('sizeRun', ev.target.value.split(',').map((s) => s.trim()).filter(Boolean), { shouldValidate: true });
         }}
-        error={e.sizeRun?.message ?? e.sizeRun?.root?.message ?? (Array.isArray(e.sizeRun) ? 'Check each size label' : undefined)}
+        error={e.sizeRun?.message ?? e.sizeRun?.root?.message ?? (Array.isArray(e.sizeRun) ? t(`${area}.form.checkSizes`) : undefined)}
       />
-      <Field label="Base size" {...form.register('baseSize')} error={e.baseSize?.message} />
+      <Field label={t(`${area}.form.baseSize`)} {...form.register('baseSize')} error={e.baseSize?.message} />
       <div>
-        <label className="field-label" htmlFor="status">Status</label>
+        <label className="field-label" htmlFor="status">{t(`${area}.form.status`)}</label>
         <select id="status" className="field-input" {...form.register('status')}>
-          {STYLE_STATUSES.map((s) => <option key={s} value={s}>{s}</option>)}
+          {STYLE_STATUSES.map((s) => <option key={s} value={s}>{t(`styleStatus.${s}`)}</option>)}
         </select>
       </div>
       <div className="sm:col-span-2 space-y-3">
         <ErrorNote error={save.error} />
-        <button type="submit" className="btn-primary" disabled={save.isPending}>Save style</button>
+        <button type="submit" className="btn-primary" disabled={save.isPending}>{t(`${area}.form.save`)}</button>
       </div>
     </form>
   );
