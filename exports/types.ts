@@ -192,6 +192,8 @@ export interface MarkerPlacementPlan {
 
 /** A finished marker to plot at 1:1. Lengths in mm; outlines turned so the grain runs along x. */
 export interface MarkerPlotInput extends DocumentHeading {
+  /** Units of the lengths printed and of the check bar; default metric. */
+  unitSystem?: UnitSystem;
   style: { code: string; name: string };
   batch: { code: string };
   ratio: SizeRatio[];

@@ -9,7 +9,7 @@ import { requirePasswordChanged } from './auth/require';
 import type { Env } from './env';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
-import { requestSpeaker } from './i18n/request-speaker';
+import { attachSpeaker, requestSpeaker } from './i18n/request-speaker';
 import { createModules } from './modules';
 import type { MarkerQueueOptions } from './modules/markers/marker-queue';
 import type { ApiModule } from './modules/module';
@@ -129,6 +129,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(renewSession);
   api.use(passport.initialize());
   api.use(passport.session());
+  const speakerOf = requestSpeaker((id) => services.studio.studios.get(id));
+  api.use(attachSpeaker(speakerOf));
   api.use(csrfGuard);
   api.use(requirePasswordChanged);
 
@@ -148,7 +150,7 @@ export function createApp(deps: AppDeps): Express {
     };
   }
   api.use(notFoundHandler);
-  api.use(errorHandler(env.NODE_ENV === 'development', requestSpeaker((id) => services.studio.studios.get(id))));
+  api.use(errorHandler(env.NODE_ENV === 'development', speakerOf));
   app.use('/api', api);
 
   const clientDir = deps.clientDir ?? resolve('dist/client');

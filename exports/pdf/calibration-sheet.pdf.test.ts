@@ -17,6 +17,16 @@ describe('calibrationSheetPdf', () => {
     expect(raw).toContain(`${layout.scaleBar.x} ${layout.scaleBar.y} 100 1.2 re`);
   });
 
+  it('speaks French and draws a 4 in check bar for a studio in inches, with no millimetre in its words', async () => {
+    const pdf = await calibrationSheetPdf({ kind: 'sheet', paper: 'Letter', uncompressed: true, language: 'fr', unitSystem: 'imperial' });
+    const layout = calibrationLayout('sheet', 'Letter');
+    // 4 in = 101.6 mm exactly (1 in = 25.4 mm, NIST SP 811 Appendix B).
+    expect(pdf.toString('latin1')).toContain(`${layout.scaleBar.x} ${layout.scaleBar.y} 101.6 1.2 re`);
+    const text = pdfText(pdf);
+    expect(text).toContain('Cette barre mesure 4"');
+    expect(text).not.toMatch(/\d\s?mm\b|This bar/);
+  });
+
   it('prints Letter (8 1/2 × 11 in = 612 × 792 pt) and the same bytes for the same options', async () => {
     const a = await calibrationSheetPdf({ kind: 'sheet', paper: 'Letter', uncompressed: true });
     const b = await calibrationSheetPdf({ kind: 'sheet', paper: 'Letter', uncompressed: true });

@@ -59,7 +59,7 @@ export async function buildMarkerListPdf(
       formatShortLength(lay.endAllowanceMm, u, input.language, input.locale),
     ]),
   );
-  if (input.byRoll) drawRollSections(doc, input.byRoll, u);
+  if (input.byRoll) drawRollSections(doc, input.byRoll, u, input);
   else {
     for (const lay of input.lays) {
       doc.font(BOLD_FONT).fontSize(10).text(t('layRolls', { lay: lay.layNo }));

@@ -1,9 +1,11 @@
 /**
  * The whole marker at 1:1 for a plotter: page width = the marker's width, one page per panel of the
  * marker's length, every placed piece's cutting line, its grain line, notches, "size piece-name", the
- * splice zones, and a title band with a 100 mm check bar.
+ * splice zones, and a title band with a check bar (100 mm, or 4 in for a studio in inches), in the studio's words and units.
  */
 import PDFDocument from 'pdfkit';
+import { MM_PER_INCH } from '@shared/units';
+import { documentWords } from '../document-words';
 import { placedOutline } from '../dxf/marker-dxf';
 import type { MarkerPlotInput } from '../types';
 import { formatLongLength, formatRatio, formatShortLength, parseIsoDate } from './document-format';
@@ -30,7 +32,8 @@ type Pt = { x: number; y: number };
 export async function buildMarkerPlotPdf(input: MarkerPlotInput, options: PdfOptions = {}): Promise<Buffer> {
   const panel = input.panelLengthMm ?? DEFAULT_PANEL_LENGTH_MM;
   if (!(panel > 0 && panel <= 5000)) throw new RangeError(`panel length must be above 0 and at most 5000 mm, got ${panel}`);
-  const title = `Marker ${input.batch.code} — ${input.style.code}`;
+  const t = documentWords(input.language);
+  const title = t('plot.title', { batch: input.batch.code, style: input.style.code });
   const doc = new PDFDocument({
     autoFirstPage: false,
     compress: options.compress ?? true,
@@ -60,8 +63,8 @@ export async function buildMarkerPlotPdf(input: MarkerPlotInput, options: PdfOpt
       drawPiece(doc, ring, (input.notches?.[p.pieceKey] ?? []).map((n) => placedOutline([n], p)[0]), `${p.size} ${p.pieceName}`, toPage);
     }
     for (const z of input.spliceZones ?? []) {
-      drawSpliceLine(doc, z.near, 'Splice: the new roll starts here', from, to, input.widthMm);
-      drawSpliceLine(doc, z.far, 'Splice: the old roll runs to here', from, to, input.widthMm);
+      drawSpliceLine(doc, z.near, t('plot.spliceNew'), from, to, input.widthMm);
+      drawSpliceLine(doc, z.far, t('plot.spliceOld'), from, to, input.widthMm);
     }
     doc.restore();
   }
@@ -74,16 +77,20 @@ function drawBand(doc: PDFKit.PDFDocument, input: MarkerPlotInput, k: number, pa
   const w = mmPt(input.widthMm);
   doc.save().rect(0, 0, w, mmPt(PLOT_BAND_MM)).fill('#FFFFFF').restore();
   const size = mmPt(5);
-  doc.fillColor(TEAL).font(BOLD_FONT).fontSize(size).text(`Batch ${input.batch.code} · ${input.style.code} ${input.style.name} · ${formatRatio(input.ratio)}`, mmPt(5), mmPt(4), { lineBreak: false });
+  const t = documentWords(input.language);
+  doc.fillColor(TEAL).font(BOLD_FONT).fontSize(size).text(`${t('batch')} ${input.batch.code} · ${input.style.code} ${input.style.name} · ${formatRatio(input.ratio)}`, mmPt(5), mmPt(4), { lineBreak: false });
   doc.fillColor(INK).font(BODY_FONT).fontSize(mmPt(3.5));
-  const lengthText = `${formatLongLength(input.lengthMm, 'metric')} long × ${formatShortLength(input.widthMm, 'metric')} wide`;
-  const panelText = panels > 1 ? ` · panel ${k + 1} of ${panels}: ${formatLongLength(from, 'metric')} to ${formatLongLength(to, 'metric')}` : '';
-  doc.text(`${lengthText}${panelText} · plot at 1:1 (actual size, no scaling)`, mmPt(5), mmPt(12), { lineBreak: false });
-  // Check bar: measure it on the plot; it must be exactly 100 mm.
-  doc.save().lineWidth(mmPt(0.5)).strokeColor(INK).moveTo(mmPt(5), mmPt(26)).lineTo(mmPt(105), mmPt(26)).stroke();
-  for (const x of [5, 105]) doc.moveTo(mmPt(x), mmPt(23)).lineTo(mmPt(x), mmPt(29)).stroke();
+  const u = input.unitSystem ?? 'metric';
+  const long = (lengthMm: number) => formatLongLength(lengthMm, u, input.language, input.locale);
+  const lengthText = t('plot.size', { length: long(input.lengthMm), width: formatShortLength(input.widthMm, u, input.language, input.locale) });
+  const panelText = panels > 1 ? t('plot.panel', { k: k + 1, n: panels, from: long(from), to: long(to) }) : '';
+  doc.text(t('plot.scale', { size: lengthText, panel: panelText }), mmPt(5), mmPt(12), { lineBreak: false });
+  // Check bar: measure it on the plot with the studio's ruler; it must be exactly 100 mm, or 4 in (101.6 mm).
+  const bar = u === 'imperial' ? 4 * MM_PER_INCH : 100;
+  doc.save().lineWidth(mmPt(0.5)).strokeColor(INK).moveTo(mmPt(5), mmPt(26)).lineTo(mmPt(5 + bar), mmPt(26)).stroke();
+  for (const x of [5, 5 + bar]) doc.moveTo(mmPt(x), mmPt(23)).lineTo(mmPt(x), mmPt(29)).stroke();
   doc.restore();
-  doc.fontSize(mmPt(3)).text('This bar is 100 mm', mmPt(110), mmPt(24.5), { lineBreak: false });
+  doc.fontSize(mmPt(3)).text(t(u === 'imperial' ? 'plot.barInches' : 'plot.bar'), mmPt(10 + bar), mmPt(24.5), { lineBreak: false });
 }
 
 function drawPiece(doc: PDFKit.PDFDocument, ring: Pt[], notches: Pt[], label: string, toPage: (q: Pt) => readonly [number, number]) {

@@ -4,7 +4,8 @@
  */
 import type { DocumentHeading, UnitSystem } from '../types';
 import { BOLD_FONT } from './pdf-fonts';
-import { CUTTING_ROOM_CAUTIONS } from './cutting-cautions';
+import { documentWords, wordFor } from '../document-words';
+import { cuttingRoomCautions } from './cutting-cautions';
 import { formatShortLength } from './document-format';
 import { contentWidth, drawCautions, drawHeading, drawTable, startPdf, type PdfOptions } from './pdf-layout';
 
@@ -23,7 +24,7 @@ export interface MaterialCutTicketInput extends DocumentHeading {
   pieces: { name: string; copiesPerGarment: number; mirrored: boolean }[];
 }
 
-/** Document title of a material's cut ticket. */
+/** Document title of a material's cut ticket (in English; the document's language names it in its own). */
 export const MATERIAL_CUT_TICKET_TITLE = 'Cut ticket by material';
 
 /**
@@ -33,38 +34,42 @@ export const MATERIAL_CUT_TICKET_TITLE = 'Cut ticket by material';
  * left out. A material with no pieces prints a line saying so.
  */
 export async function buildMaterialCutTicketPdf(input: MaterialCutTicketInput, options: PdfOptions = {}): Promise<Buffer> {
-  const { doc, bytes } = startPdf(input, MATERIAL_CUT_TICKET_TITLE, options);
+  const t = documentWords(input.language);
+  const title = t('material.title');
+  const material = wordFor(t, 'material.names', input.material);
+  const { doc, bytes } = startPdf(input, title, options);
   const sizes = input.sizes.filter((s) => s.quantity > 0);
   const garments = sizes.reduce((a, s) => a + s.quantity, 0);
-  drawHeading(doc, `${MATERIAL_CUT_TICKET_TITLE}: ${input.material}`, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
-    ['Material', input.material],
-    ['Fabric', input.fabric ? `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, input.unitSystem)}` : 'not linked yet: choose it on the style page'],
-    ['Garments', `${garments} (${sizes.map((s) => `${s.size} ${s.quantity}`).join(', ')})`],
+  const width = input.fabric && formatShortLength(input.fabric.widthMm, input.unitSystem, input.language, input.locale);
+  drawHeading(doc, `${title}${input.language === 'fr' ? '\u202f' : ''}: ${material}`, input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
+    [t('material.material'), material],
+    [t('fabric'), input.fabric ? t('fabricWidth', { fabric: input.fabric.description, width }) : t('material.notLinked')],
+    [t('material.garments'), `${garments} (${sizes.map((s) => `${s.size} ${s.quantity}`).join(', ')})`],
   ]);
-  if (input.pieces.length === 0) doc.text(`No pieces are cut from ${input.material} in this style.`);
+  if (input.pieces.length === 0) doc.text(t('material.noPieces', { material }));
   else {
-    doc.font(BOLD_FONT).fontSize(10).text('Pieces to cut');
+    doc.font(BOLD_FONT).fontSize(10).text(t('material.piecesToCut'));
     doc.moveDown(0.3);
     const width = contentWidth(doc);
     const fixed = 170 + 60 + 55;
     const sizeWidth = Math.max(30, Math.min(60, (width - fixed) / Math.max(1, sizes.length)));
     const columns = [
-      { header: 'Piece', width: 170 },
-      { header: 'Per garment', width: 60 },
+      { header: t('material.piece'), width: 170 },
+      { header: t('material.perGarment'), width: 60 },
       ...sizes.map((s) => ({ header: s.size, width: sizeWidth })),
-      { header: 'Total', width: 55 },
+      { header: t('material.total'), width: 55 },
     ];
     const rows = input.pieces.map((p) => {
       const counts = sizes.map((s) => p.copiesPerGarment * s.quantity);
-      return [`${p.name}${p.mirrored ? ' (pairs)' : ''}`, String(p.copiesPerGarment), ...counts.map(String), String(counts.reduce((a, c) => a + c, 0))];
+      return [`${p.name}${p.mirrored ? t('material.pairs') : ''}`, String(p.copiesPerGarment), ...counts.map(String), String(counts.reduce((a, c) => a + c, 0))];
     });
     const perGarment = input.pieces.reduce((a, p) => a + p.copiesPerGarment, 0);
-    rows.push(['All pieces', String(perGarment), ...sizes.map((s) => String(perGarment * s.quantity)), String(perGarment * garments)]);
+    rows.push([t('material.allPieces'), String(perGarment), ...sizes.map((s) => String(perGarment * s.quantity)), String(perGarment * garments)]);
     drawTable(doc, columns, rows);
   }
-  drawCautions(doc, CUTTING_ROOM_CAUTIONS);
+  drawCautions(doc, cuttingRoomCautions(input.language), input);
   doc.end();
   return bytes;
 }

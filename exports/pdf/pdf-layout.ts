@@ -80,7 +80,7 @@ export function drawHeading(
     doc.x = x;
     doc
       .font(BOLD_FONT)
-      .text(`${label}: `, { continued: true })
+      .text(`${label}${heading.language === 'fr' ? '\u202f' : ''}: `, { continued: true })
       .font(BODY_FONT)
       .text(value);
   }

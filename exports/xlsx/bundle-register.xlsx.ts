@@ -3,6 +3,7 @@
  * a status column per sewing operation, and the total pieces as a formula.
  */
 import type { BundleRegisterInput } from '../types';
+import { documentWords, wordFor } from '../document-words';
 import { formatPlyRange } from '../pdf/document-format';
 import {
   bandRow,
@@ -15,7 +16,7 @@ import {
   writeTitleBlock,
 } from './xlsx-theme';
 
-/** Worksheet name of the bundle register. */
+/** Worksheet name of the bundle register (in English; the document's language names it in its own). */
 export const BUNDLE_REGISTER_SHEET_NAME = 'Bundle register';
 
 /**
@@ -24,13 +25,15 @@ export const BUNDLE_REGISTER_SHEET_NAME = 'Bundle register';
  * Bundles appear in input order; the last row totals pieces with SUM (0 for no bundles).
  */
 export async function buildBundleRegisterXlsx(input: BundleRegisterInput): Promise<Buffer> {
+  const t = documentWords(input.language);
   const workbook = createWorkbook(input);
-  const sheet = workbook.addWorksheet(BUNDLE_REGISTER_SHEET_NAME);
-  const header = writeTitleBlock(sheet, BUNDLE_REGISTER_SHEET_NAME, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
+  const name = t('register.sheet');
+  const sheet = workbook.addWorksheet(name);
+  const header = writeTitleBlock(sheet, name, input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
   ]);
-  const labels = ['Bundle no.', 'Size', 'Shade lot', 'Plies', 'Pieces', 'Lay no.'];
+  const labels = ['bundleNo', 'size', 'shadeLot', 'plies', 'pieces', 'layNo'].map((k) => t(`register.${k}`));
   const lastCol = labels.length + input.operations.length;
   writeHeaderRow(sheet, header, [...labels, ...input.operations.map((o) => o.name)]);
   input.bundles.forEach((b, i) => {
@@ -42,13 +45,16 @@ export async function buildBundleRegisterXlsx(input: BundleRegisterInput): Promi
       formatPlyRange(b.plyFrom, b.plyTo),
       b.pieces,
       b.layNo,
-      ...input.operations.map((o) => b.statusByOperation?.[o.name] ?? ''),
+      ...input.operations.map((o) => {
+        const status = b.statusByOperation?.[o.name] ?? '';
+        return status && wordFor(t, 'register.status', status);
+      }),
     ];
     bandRow(row, i, 1, lastCol);
   });
   const totalNo = header + 1 + input.bundles.length;
   const total = sheet.getRow(totalNo);
-  total.getCell(1).value = 'Total pieces';
+  total.getCell(1).value = t('register.totalPieces');
   const pieces = input.bundles.reduce((sum, b) => sum + b.pieces, 0);
   const sum = input.bundles.length ? `SUM(${ref(5, header + 1)}:${ref(5, totalNo - 1)})` : '0';
   total.getCell(5).value = formula(sum, pieces);

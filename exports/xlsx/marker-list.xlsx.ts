@@ -3,11 +3,8 @@
  * cutting-room cautions. Lengths are shown in the studio's unit system (m / cm or yd / in).
  */
 import type { MarkerListInput } from '../types';
-import {
-  CUTTING_ROOM_CAUTIONS,
-  CUTTING_ROOM_CAUTIONS_SOURCE,
-  CUTTING_ROOM_CAUTIONS_TITLE,
-} from '../pdf/cutting-cautions';
+import { documentWords } from '../document-words';
+import { cuttingRoomCautions } from '../pdf/cutting-cautions';
 import {
   formatRatio,
   formatShortLength,
@@ -37,30 +34,33 @@ export const MARKER_LIST_SHEET_NAME = 'Marker list per roll';
  * remnant, in lay then input order. Then the cautions (input's or `CUTTING_ROOM_CAUTIONS`).
  */
 export async function buildMarkerListXlsx(input: MarkerListInput): Promise<Buffer> {
+  const t = documentWords(input.language);
   const workbook = createWorkbook(input);
-  const sheet = workbook.addWorksheet(MARKER_LIST_SHEET_NAME);
-  const long = longLengthUnit(input.unitSystem);
-  const short = input.unitSystem === 'metric' ? 'cm' : 'in';
+  const name = t('markerSheet.sheet');
+  const sheet = workbook.addWorksheet(name);
+  // Lengths stay numbers a spreadsheet can add up, in the studio's unit, which each header names.
+  const long = t(`markerSheet.units.${longLengthUnit(input.unitSystem)}`);
+  const short = t(`markerSheet.units.${input.unitSystem === 'metric' ? 'cm' : 'in'}`);
   const toShort = (lengthMm: number) =>
     Number((input.unitSystem === 'metric' ? lengthMm / 10 : lengthMm / MM_PER_INCH).toFixed(4));
-  let r = writeTitleBlock(sheet, MARKER_LIST_SHEET_NAME, input, [
-    ['Style', `${input.style.code} — ${input.style.name}`],
-    ['Batch', input.batch.code],
+  let r = writeTitleBlock(sheet, name, input, [
+    [t('style'), `${input.style.code} — ${input.style.name}`],
+    [t('batch'), input.batch.code],
     [
-      'Fabric',
-      `${input.fabric.description}, width ${formatShortLength(input.fabric.widthMm, input.unitSystem, input.language, input.locale)}`,
+      t('fabric'),
+      t('fabricWidth', { fabric: input.fabric.description, width: formatShortLength(input.fabric.widthMm, input.unitSystem, input.language, input.locale) }),
     ],
   ]);
 
   writeHeaderRow(sheet, r, [
-    'Lay no.',
-    'Size ratio',
-    'Garments per ply',
-    `Marker length (${long})`,
-    'Plies',
-    'Garments',
-    'Spreading mode',
-    `End allowance, each end (${short})`,
+    t('layNo'),
+    t('sizeRatio'),
+    t('markerSheet.garmentsPerPly'),
+    t('markerSheet.markerLength', { unit: long }),
+    t('plies'),
+    t('markerSheet.garments'),
+    t('spreadingMode'),
+    t('markerSheet.endAllowance', { unit: short }),
   ]);
   input.lays.forEach((lay, i) => {
     const rowNo = r + 1 + i;
@@ -73,7 +73,7 @@ export async function buildMarkerListXlsx(input: MarkerListInput): Promise<Buffe
       toLongLength(lay.markerLengthMm, input.unitSystem),
       lay.plies,
       formula(`${ref(3, rowNo)}*${ref(5, rowNo)}`, perPly * lay.plies),
-      spreadingModeLabel(lay.spreadingMode),
+      t(`spreading.${lay.spreadingMode}`, { defaultValue: spreadingModeLabel(lay.spreadingMode) }),
       toShort(lay.endAllowanceMm),
     ];
     row.getCell(4).numFmt = '0.000';
@@ -82,12 +82,12 @@ export async function buildMarkerListXlsx(input: MarkerListInput): Promise<Buffe
   r += input.lays.length + 2;
 
   writeHeaderRow(sheet, r, [
-    'Lay no.',
-    'Roll',
-    'Shade lot',
-    `Roll length (${long})`,
-    'Plies to spread',
-    `Expected remnant (${long})`,
+    t('layNo'),
+    t('markerSheet.roll'),
+    t('tickets.shadeLot'),
+    t('markerSheet.rollLength', { unit: long }),
+    t('markerSheet.pliesToSpread'),
+    t('markerSheet.remnant', { unit: long }),
   ]);
   let band = 0;
   for (const lay of input.lays) {
@@ -109,13 +109,13 @@ export async function buildMarkerListXlsx(input: MarkerListInput): Promise<Buffe
   }
 
   r += 2;
-  sheet.getRow(r).getCell(1).value = CUTTING_ROOM_CAUTIONS_TITLE;
+  sheet.getRow(r).getCell(1).value = t('cautions.title');
   boldRow(sheet.getRow(r), 1, 1);
-  for (const caution of input.cautions ?? CUTTING_ROOM_CAUTIONS) {
+  for (const caution of input.cautions ?? cuttingRoomCautions(input.language)) {
     r += 1;
     sheet.getRow(r).getCell(1).value = `• ${caution}`;
   }
-  sheet.getRow(r + 1).getCell(1).value = CUTTING_ROOM_CAUTIONS_SOURCE;
+  sheet.getRow(r + 1).getCell(1).value = t('cautions.source');
   [10, 26, 12, 16, 12, 18, 24, 18].forEach((w, i) => (sheet.getColumn(i + 1).width = w));
   return workbookToBuffer(workbook);
 }

@@ -2,6 +2,7 @@
  * Piece-rate pay for one period: one row per person and operation (pieces × rate, as a formula), a subtotal
  * per person and a grand total over the subtotals, with the approval line.
  */
+import { documentWords } from '../document-words';
 import type { PaySheetInput, PieceworkEntry } from '../types';
 import { currencyDigits, formatDate, spreadsheetCurrencyFormat } from '../pdf/document-format';
 import { roundHalfAwayFromZero } from './spreadsheet-round';
@@ -43,14 +44,16 @@ export async function buildPaySheetXlsx(input: PaySheetInput): Promise<Buffer> {
   const digits = currencyDigits(input.currency);
   const scale = 10 ** digits;
   const money = spreadsheetCurrencyFormat(input.currency, input.locale);
+  const t = documentWords(input.language);
   const workbook = createWorkbook(input);
-  const sheet = workbook.addWorksheet(PAY_SHEET_NAME);
+  const name = t('pay.sheet');
+  const sheet = workbook.addWorksheet(name);
   const period = `${formatDate(input.periodStartIso, input.locale)} – ${formatDate(input.periodEndIso, input.locale)}`;
-  let r = writeTitleBlock(sheet, PAY_SHEET_NAME, input, [
-    ['Period', period],
-    ['Currency', input.currency],
+  let r = writeTitleBlock(sheet, name, input, [
+    [t('pay.period'), period],
+    [t('currency'), input.currency],
   ]);
-  writeHeaderRow(sheet, r, ['Person', 'Operation', 'Pieces', 'Rate per piece', 'Amount']);
+  writeHeaderRow(sheet, r, ['person', 'operation', 'pieces', 'rate', 'amount'].map((k) => t(`pay.${k}`)));
   r += 1;
 
   const subtotalCells: string[] = [];
@@ -80,7 +83,7 @@ export async function buildPaySheetXlsx(input: PaySheetInput): Promise<Buffer> {
     }
     const sub = sheet.getRow(r);
     sub.getCell(1).value = person;
-    sub.getCell(2).value = 'Subtotal';
+    sub.getCell(2).value = t('pay.subtotal');
     sub.getCell(5).value = formula(`SUM(${ref(5, first)}:${ref(5, r - 1)})`, personMinor / scale);
     sub.getCell(5).numFmt = money;
     boldRow(sub, 1, 5);
@@ -89,7 +92,7 @@ export async function buildPaySheetXlsx(input: PaySheetInput): Promise<Buffer> {
     r += 1;
   }
   const total = sheet.getRow(r);
-  total.getCell(1).value = 'Total';
+  total.getCell(1).value = t('pay.total');
   total.getCell(5).value = formula(
     subtotalCells.length ? subtotalCells.join('+') : '0',
     totalMinor / scale,
@@ -97,11 +100,11 @@ export async function buildPaySheetXlsx(input: PaySheetInput): Promise<Buffer> {
   total.getCell(5).numFmt = money;
   boldRow(total, 1, 5);
 
-  sheet.getRow(r + 2).getCell(1).value = 'Approved by';
+  sheet.getRow(r + 2).getCell(1).value = t('pay.approvedBy');
   sheet.getRow(r + 2).getCell(2).value = input.approvedBy ?? '';
-  sheet.getRow(r + 3).getCell(1).value = 'Approved at';
+  sheet.getRow(r + 3).getCell(1).value = t('pay.approvedAt');
   sheet.getRow(r + 3).getCell(2).value = input.approvedAtIso
-    ? formatDate(input.approvedAtIso, input.locale)
+    ? formatDate(input.approvedAtIso, input.locale, input.timeZone)
     : '';
   [24, 30, 10, 16, 16].forEach((w, i) => (sheet.getColumn(i + 1).width = w));
   return workbookToBuffer(workbook);

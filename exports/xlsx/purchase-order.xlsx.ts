@@ -1,6 +1,7 @@
 /**
  * A fabric and trims purchase order for one supplier, as a workbook with live line-total and total formulas.
  */
+import { documentWords, wordFor } from '../document-words';
 import type { PurchaseOrderInput, PurchaseOrderLine, UnitSystem } from '../types';
 import {
   currencyDigits,
@@ -48,27 +49,22 @@ export function purchaseOrderLineTotalMinor(line: PurchaseOrderLine, system: Uni
 export async function buildPurchaseOrderXlsx(input: PurchaseOrderInput): Promise<Buffer> {
   const digits = currencyDigits(input.currency);
   const money = spreadsheetCurrencyFormat(input.currency, input.locale);
+  const t = documentWords(input.language);
   const workbook = createWorkbook(input);
-  const sheet = workbook.addWorksheet(PURCHASE_ORDER_SHEET_NAME);
+  const name = t('order.sheet');
+  const sheet = workbook.addWorksheet(name);
   const extra: [string, string][] = [
-    ['PO number', input.poNumber],
-    ['Supplier', input.supplier.name],
+    [t('order.poNumber'), input.poNumber],
+    [t('order.supplier'), input.supplier.name],
   ];
-  if (input.supplier.address) extra.push(['Address', input.supplier.address]);
-  if (input.supplier.contact) extra.push(['Contact', input.supplier.contact]);
+  if (input.supplier.address) extra.push([t('order.address'), input.supplier.address]);
+  if (input.supplier.contact) extra.push([t('order.contact'), input.supplier.contact]);
   extra.push(
-    ['Delivery date', formatDate(input.deliveryDateIso, input.locale)],
-    ['Currency', input.currency],
+    [t('order.deliveryDate'), formatDate(input.deliveryDateIso, input.locale)],
+    [t('currency'), input.currency],
   );
-  const headerRow = writeTitleBlock(sheet, PURCHASE_ORDER_SHEET_NAME, input, extra);
-  writeHeaderRow(sheet, headerRow, [
-    'Item',
-    'Description',
-    'Quantity',
-    'Unit',
-    'Unit price',
-    'Line total',
-  ]);
+  const headerRow = writeTitleBlock(sheet, name, input, extra);
+  writeHeaderRow(sheet, headerRow, ['item', 'description', 'quantity', 'unit', 'unitPrice', 'lineTotal'].map((k) => t(`order.${k}`)));
 
   let totalMinor = 0;
   input.lines.forEach((line, i) => {
@@ -78,10 +74,11 @@ export async function buildPurchaseOrderXlsx(input: PurchaseOrderInput): Promise
     const lineMinor = purchaseOrderLineTotalMinor(line, input.unitSystem);
     totalMinor += lineMinor;
     row.getCell(1).value = line.item;
-    row.getCell(2).value = line.description;
+    row.getCell(2).value = wordFor(t, 'order.items', line.description);
     row.getCell(3).value = quantity;
     row.getCell(3).numFmt = line.quantity.kind === 'length' ? '0.000' : '0.###';
-    row.getCell(4).value = unit;
+    // A length's unit is the studio's (m or yd); a trim keeps the unit it is counted in.
+    row.getCell(4).value = line.quantity.kind === 'length' ? wordFor(t, 'markerSheet.units', unit) : unit;
     row.getCell(5).value = line.unitPriceMinor / 10 ** digits;
     row.getCell(5).numFmt = money;
     row.getCell(6).value = formula(
@@ -96,12 +93,12 @@ export async function buildPurchaseOrderXlsx(input: PurchaseOrderInput): Promise
 
   const totalRowNo = headerRow + 1 + input.lines.length;
   const totalRow = sheet.getRow(totalRowNo);
-  totalRow.getCell(5).value = 'Total';
+  totalRow.getCell(5).value = t('order.total');
   const sum = input.lines.length ? `SUM(${ref(6, headerRow + 1)}:${ref(6, totalRowNo - 1)})` : '0';
   totalRow.getCell(6).value = formula(sum, totalMinor / 10 ** digits);
   totalRow.getCell(6).numFmt = money;
   boldRow(totalRow, 5, 6);
-  if (input.notes) sheet.getRow(totalRowNo + 2).getCell(1).value = `Notes: ${input.notes}`;
+  if (input.notes) sheet.getRow(totalRowNo + 2).getCell(1).value = t('order.notes', { notes: input.notes });
   [16, 40, 12, 8, 14, 16].forEach((w, i) => (sheet.getColumn(i + 1).width = w));
   return workbookToBuffer(workbook);
 }

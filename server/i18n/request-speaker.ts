@@ -1,4 +1,4 @@
-import type { Request } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { LANGUAGES, type FormatSettings, type Language } from '../../shared/format/studio-format';
 import { speaker, type Speaker } from './speak';
 
@@ -14,5 +14,23 @@ export function requestSpeaker(studioOf: (studioId: number) => Promise<Pick<Form
     if (user.language === 'en') return speaker({ language: 'en' });
     const studio = await studioOf(user.studioId);
     return speaker({ ...studio, language: user.language ?? studio.language });
+  };
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Request {
+      /** Who this request's answer speaks to (see {@link requestSpeaker}); read only when an answer has words to say. */
+      speaker?: () => Promise<Speaker>;
+    }
+  }
+}
+
+/** Lets a route say its own sentences (a log's warnings) in the person's language: `await req.speaker?.()`. */
+export function attachSpeaker(speakerOf: (req: Request) => Promise<Speaker>): RequestHandler {
+  return (req, _res, next) => {
+    req.speaker = () => speakerOf(req);
+    next();
   };
 }

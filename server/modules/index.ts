@@ -44,7 +44,7 @@ export function createModules(base: Omit<ModuleContext, 'audit'>, opts: ModuleOp
   const { batches } = batchesModule.services;
   const mail = createMailModule(ctx);
   const uploads = createUploadsModule(ctx);
-  const grading = createGradingModule(ctx, { styles });
+  const grading = createGradingModule(ctx, { styles, studios: studio.services.studios });
   const { cuttingPieces } = grading.services;
   const costing = createCostingModule(ctx, { cuttingPieces });
   const markers = createMarkersModule(ctx, {

@@ -1,3 +1,4 @@
+import { documentSettings } from '../studios/document-settings';
 import { z } from 'zod';
 import type { MaterialCutTicketInput } from '@exports/pdf/material-cut-ticket.pdf';
 import { piecesPerGarment } from '@grading';
@@ -26,7 +27,7 @@ export async function materialCutTicketInput(sets: Pick<GradingSetRepository, 'b
   const fabricId = style.materialFabrics?.[material];
   const fabric = fabricId ? await fabrics.get(studio.id, fabricId) : null;
   return {
-    studioName: studio.name, dateIso: today.toISOString(), locale: 'en-GB', unitSystem: studio.unitSystem,
+    studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
     style: { code: style.code, name: style.name }, batch: { code: batchCode(batch.id) }, material,
     fabric: fabric ? { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: fabric.widthMm } : null,
     sizes: style.sizeRun.map((size) => ({ size, quantity: batch.quantities[size] ?? 0 })),

@@ -1,3 +1,4 @@
+import { translate } from '../../i18n/speak';
 import { Router } from 'express';
 import { attendanceQuery, batchIdParam, bundleLookupQuery, bundleMatchesQuery, logWorkInput, putAttendanceInput } from '../../../shared/schemas/floor';
 import { idParam } from '../../../shared/schemas/common';
@@ -27,6 +28,10 @@ export function floorRoutes(floor: FloorService, progress: FloorProgressService,
   });
   r.post('/logs', requirePermission('bundles:log'), validate({ body: logWorkInput }), async (req, res) => {
     const { status, result } = await floor.log(actorOf(req), req.body);
+    if (result.warnings.length) {
+      const who = await req.speaker?.();
+      if (who) result.warnings = result.warnings.map((w) => translate(w, who) ?? w);
+    }
     res.status(status).json(result);
   });
   r.delete('/logs/:id', requirePermission('bundles:log'), validate({ params: idParam }), async (req, res) => {

@@ -8,7 +8,7 @@ import type { GradingService } from './grading.service';
 import { sendDownload } from '../../middleware/download';
 import { uploadFile } from '../../middleware/upload';
 import { PATTERN_UPLOAD_LIMIT_BYTES } from './pattern-import';
-import { addCalibrationSheetRoute } from './calibration-sheet.routes';
+import { addCalibrationSheetRoute, type StudioSettingsOf } from './calibration-sheet.routes';
 
 /** Largest upload accepted for charts and customer measurements. */
 export const GRADING_UPLOAD_LIMIT_BYTES = 2 * 1024 * 1024;
@@ -20,7 +20,7 @@ const singleFile = uploadFile({ maxBytes: GRADING_UPLOAD_LIMIT_BYTES, tooLarge: 
 const patternFile = uploadFile({ maxBytes: PATTERN_UPLOAD_LIMIT_BYTES, maxFields: 10, tooLarge: 'field' });
 
 /** Routes under /api/styles/:id/grading. */
-export function gradingRoutes(service: GradingService) {
+export function gradingRoutes(service: GradingService, studioOf: StudioSettingsOf) {
   const r = Router();
   const read = requirePermission('grading:read');
   const write = requirePermission('grading:write');
@@ -48,7 +48,7 @@ export function gradingRoutes(service: GradingService) {
       sendDownload(res, await service.pieceFile(actorOf(req), params.id, params.pieceId, kind, query));
     }));
   }
-  addCalibrationSheetRoute(r, read, service);
+  addCalibrationSheetRoute(r, read, service, studioOf);
   r.post('/:id/pattern/import', write, patternFile, ...validated({ params: gradingParams, body: patternImportInput }, async ({ params, body }, req, res) => {
     res.json({ preview: await service.previewPattern(actorOf(req), params.id, req.file, body) });
   }));

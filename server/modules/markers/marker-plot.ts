@@ -12,12 +12,13 @@ import type { MarkerDrawingDto } from '../../../shared/schemas/markers';
 export function markerPlotInput(
   m: { lengthMm: number; widthMm: number; ratio: Record<string, number>; drawing: MarkerDrawingDto; notches?: Record<string, { x: number; y: number }[]> },
   heading: { studioName: string; dateIso: string; styleCode: string; styleName: string; batchCode: string; sizes: string[] },
+  settings: Pick<MarkerPlotInput, 'locale' | 'language' | 'timeZone' | 'unitSystem'> = { locale: 'en-GB' },
 ): MarkerPlotInput {
   const placed = m.drawing.placements.map((p) => placedOutline(m.drawing.outlines[p.pieceKey] ?? [], p));
   return {
     studioName: heading.studioName,
     dateIso: heading.dateIso,
-    locale: 'en-GB',
+    ...settings,
     style: { code: heading.styleCode, name: heading.styleName },
     batch: { code: heading.batchCode },
     ratio: heading.sizes.filter((s) => (m.ratio[s] ?? 0) > 0).map((s) => ({ size: s, count: m.ratio[s] })),

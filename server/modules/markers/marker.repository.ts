@@ -12,7 +12,8 @@ export function createMarkerRepository(ds: DataSource) {
   const sql = createStatements(ds);
   return {
     /** The studio's name, printed on a marker plot. */
-    studioName: async (studioId: number) => (await ds.getRepository(StudioEntity).findOneBy({ id: studioId }))?.name ?? '',
+    /** The studio's name and the language, units and time zone its documents are written in. */
+    studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
     get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
     list: (studioId: number, where: { styleId?: number; batchId?: number } = {}) =>
       repo.find({ where: { studioId, ...where }, order: { id: 'DESC' }, take: 100 }),

@@ -15,6 +15,7 @@ import type { MarkerQueue } from './marker-queue';
 import type { MarkerRepository } from './marker.repository';
 import { markerSvg } from './marker-svg';
 import { markerPlotInput } from './marker-plot';
+import { documentSettings } from '../studios/document-settings';
 import { runCpuTask } from '../../jobs/cpu-pool';
 
 /** The fabrics a marker is laid on; the cutting area owns them and hands this lookup in. */
@@ -104,9 +105,11 @@ export function createMarkerService(deps: MarkerServiceDeps) {
       return { body: markerSvg(dto.drawing, { lengthMm: dto.lengthMm, widthMm: dto.widthMm, sizes, title }), type: 'image/svg+xml', filename: `${name}.svg` };
     }
     if (kind === 'pdf') {
+      const studio = await markers.studio(studioId);
       const input = markerPlotInput(
         { lengthMm: dto.lengthMm, widthMm: dto.widthMm, ratio: dto.ratio, drawing: dto.drawing, notches: (entity.input as MarkerJobInput | null)?.notches },
-        { studioName: await markers.studioName(studioId), dateIso: (deps.now?.() ?? new Date()).toISOString(), styleCode: style?.code ?? '', styleName: style?.name ?? '', batchCode: batch ?? 'no batch', sizes },
+        { studioName: studio.name, dateIso: (deps.now?.() ?? new Date()).toISOString(), styleCode: style?.code ?? '', styleName: style?.name ?? '', batchCode: batch ?? 'no batch', sizes },
+        { ...documentSettings(studio), unitSystem: studio.unitSystem },
       );
       return { body: await runCpuTask('marker-plot.pdf', input), type: 'application/pdf', filename: `${name}.pdf` };
     }

@@ -1,9 +1,17 @@
 import { registerWords, type AreaWords } from '@/lib/i18n';
 
-/** The markers page's words (build a marker, watch it shorten, its files); French key for key. */
-export const area = 'markerRoom';
+/** The markers screen's own words (build a marker, watch it shorten, its chart and files); French key for key. */
+export const area = 'markerRun';
 
 const en = {
+  chartTitle: 'Length and density over time',
+  chartLabel: 'Best marker length and density over the run',
+  length: 'Length',
+  density: 'Density',
+  seconds: '{{value}} s',
+  noPointsYet: 'The first marker is being laid; the chart starts with it.',
+  cores_one: 'on {{count}} core',
+  cores_other: 'on {{count}} cores',
   title: 'Markers',
   subtitle: 'Graded pieces packed across the fabric width; shorter markers use less fabric.',
   noBatch: 'No batch yet.',
@@ -46,6 +54,14 @@ const en = {
 export const words: AreaWords<typeof en> = {
   en,
   fr: {
+    chartTitle: 'Longueur et densité au fil du calcul',
+    chartLabel: 'Longueur du meilleur placement et densité au fil du calcul',
+    length: 'Longueur',
+    density: 'Densité',
+    seconds: '{{value}} s',
+    noPointsYet: 'Le premier placement est en cours ; le graphique commence avec lui.',
+    cores_one: 'sur {{count}} cœur',
+    cores_other: 'sur {{count}} cœurs',
     title: 'Placements',
     subtitle: 'Les pièces gradées disposées sur la laize du tissu ; un placement plus court consomme moins de tissu.',
     noBatch: 'Aucune série pour l’instant.',

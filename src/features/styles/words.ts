@@ -22,6 +22,20 @@ const en = {
     status: 'Status',
     save: 'Save style',
   },
+  /** The shared style schema's sentences (shared/schemas/styles.ts), by key; the form finds the key by the English. */
+  validation: {
+    codeRequired: 'Code is required',
+    max12: 'At most 12 characters',
+    max24: 'At most 24 characters',
+    max120: 'At most 120 characters',
+    codeChars: 'Letters, digits, - and _ only',
+    nameRequired: 'Name is required',
+    oneSize: 'Give at least one size',
+    max20Sizes: 'At most 20 sizes',
+    uniqueSizes: 'Sizes must be unique',
+    sizeRequired: 'Size label is required',
+    baseInRun: 'Base size must be one of the size run',
+  },
   files: {
     title: 'Style files',
     kinds: { sketch: 'Sketch', photo: 'Photo', swatch: 'Fabric swatch', measurements: 'Measurements (CSV or XLSX)' },
@@ -188,6 +202,7 @@ const en = {
     piece: '{{side}}: piece',
     edge: '{{side}}: edge',
     removeSeam: 'Remove this seam',
+    sideJoin: '; ',
   },
 };
 
@@ -208,6 +223,19 @@ export const words: AreaWords<typeof en> = {
       baseSize: 'Taille de base',
       status: 'État',
       save: 'Enregistrer le modèle',
+    },
+    validation: {
+      codeRequired: 'Le code est obligatoire',
+      max12: '12 caractères au plus',
+      max24: '24 caractères au plus',
+      max120: '120 caractères au plus',
+      codeChars: 'Lettres, chiffres, - et _ seulement',
+      nameRequired: 'Le nom est obligatoire',
+      oneSize: 'Donnez au moins une taille',
+      max20Sizes: '20 tailles au plus',
+      uniqueSizes: 'Chaque taille ne doit figurer qu’une fois',
+      sizeRequired: 'La taille est obligatoire',
+      baseInRun: 'La taille de base doit faire partie de la gamme de tailles',
     },
     files: {
       title: 'Fichiers du modèle',
@@ -374,6 +402,7 @@ export const words: AreaWords<typeof en> = {
       piece: '{{side}} : pièce',
       edge: '{{side}} : bord',
       removeSeam: 'Retirer cette couture',
+      sideJoin: ' ; ',
     },
   },
 };

@@ -11,7 +11,7 @@ import { dayInZone } from '@shared/format/studio-format';
 import { parseLength } from '@shared/units/length-format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
 import { area } from '../words';
-import { fabricUnits } from './cutting-format';
+import { fabricUnits, MM_PER_YARD } from './cutting-format';
 import { FabricForm } from './fabric-form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
@@ -99,6 +99,9 @@ export function FabricsPage() {
   const canWrite = useCan('fabric:write');
   const currency = useMe().data?.currency ?? 'KES';
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
+  /** A quoted price per metre or per yard, per the studio's own unit (as quoted when the two agree). */
+  const inStudioUnit = (price: { amountMinor: number; per: 'metre' | 'yard' }) =>
+    price.per === u.pricePer ? price.amountMinor : Math.round((price.amountMinor * u.mmPerLength) / (price.per === 'yard' ? MM_PER_YARD : 1000));
   if (isLoading || !fabrics) return <Spinner />;
   return (
     <>
@@ -110,7 +113,7 @@ export function FabricsPage() {
             <p className="font-semibold text-thread-800">{f.name}</p>
             <p className="text-sm text-ink-600">{[f.composition, t('fabric.cuttable', { width: u.width(f.widthMm) }), f.isDirectional ? t('fabric.oneWay') : ''].filter(Boolean).join(' · ')}</p>
             <p className="mt-1 text-sm">{t('fabric.stock', { count: f.rollCount, length: u.length(f.totalRemainingMm) })}</p>
-            {f.price ? <p className="text-sm text-ink-600">{formatMoney(f.price.amountMinor, currency)} / {f.price.per === 'yard' ? t(`${area}.rolls.unitYard`) : t(`${area}.rolls.unitMetre`)}</p>
+            {f.price ? <p className="text-sm text-ink-600">{formatMoney(inStudioUnit(f.price), currency)} / {u.pricePer === 'yard' ? t(`${area}.rolls.unitYard`) : t(`${area}.rolls.unitMetre`)}</p>
               : f.pricePerMetreMinor !== undefined ? <p className="text-sm text-ink-600">{t(`fabric.per.${u.pricePer}`, { price: formatMoney(Math.round((f.pricePerMetreMinor * u.mmPerLength) / 1000), currency) })}</p> : null}
             {(f.shrinkageLengthPercent ?? f.shrinkagePercent) || (f.shrinkageWidthPercent ?? f.shrinkagePercent) ? <p className="text-xs text-ink-600">{t(`${area}.rolls.shrinkage`, { along: fmt().number(f.shrinkageLengthPercent ?? f.shrinkagePercent), across: fmt().number(f.shrinkageWidthPercent ?? f.shrinkagePercent) })}</p> : null}
           </button>

@@ -1,4 +1,7 @@
 import type { GradedPieceDto, PointDto } from '@shared/schemas/grading';
+import { useTranslation } from '@/lib/i18n';
+import { usePatternNames } from '../hooks/use-pattern-names';
+import { area } from '../words';
 import { sizeLineStyle } from './size-line-styles';
 
 const path = (pts: PointDto[], close = true) =>
@@ -15,6 +18,8 @@ export function GradedSetDrawing({ piece, sizes, baseSize, selectedPoint, onSele
   selectedPoint?: number;
   onSelectPoint?: (vertex: number) => void;
 }) {
+  const { t } = useTranslation();
+  const names = usePatternNames();
   const all = [...sizes.flatMap((s) => piece.bySize[s]?.outline ?? []), ...piece.baseCutting];
   const xs = all.map((p) => p.x), ys = all.map((p) => -p.y);
   const minX = Math.min(...xs), maxX = Math.max(...xs), minY = Math.min(...ys), maxY = Math.max(...ys);
@@ -22,11 +27,11 @@ export function GradedSetDrawing({ piece, sizes, baseSize, selectedPoint, onSele
   const vb = `${minX - pad} ${minY - pad} ${maxX - minX + 2 * pad} ${maxY - minY + 2 * pad}`;
   const k = (maxX - minX + 2 * pad) / 600; // stroke widths in screen-ish pixels
   const base = piece.bySize[baseSize];
-  const points = piece.rules.flatMap((r) => (r.target.kind === 'vertex' ? [{ index: r.target.index, name: r.landmark ?? `point ${r.target.index}` }] : []));
+  const points = piece.rules.flatMap((r) => (r.target.kind === 'vertex' ? [{ index: r.target.index, name: r.landmark ? names.part(r.landmark) : t(`${area}.drawing.point`, { n: r.target.index }) }] : []));
   const order = [...sizes.filter((s) => s !== baseSize), baseSize];
   return (
     <figure className="w-full">
-      <svg viewBox={vb} role="img" aria-label={`${piece.name} graded in ${sizes.length} sizes`} data-testid="graded-set" className="h-[min(70vh,560px)] w-full rounded-lg border border-calico-200 bg-calico-50">
+      <svg viewBox={vb} role="img" aria-label={t(`${area}.drawing.graded`, { piece: names.piece(piece.name), count: sizes.length })} data-testid="graded-set" className="h-[min(70vh,560px)] w-full rounded-lg border border-calico-200 bg-calico-50">
         <path d={path(piece.baseCutting)} fill="none" stroke="#D6C8B0" strokeWidth={1.2 * k} />
         {order.map((s) => {
           const st = sizeLineStyle(sizes, baseSize, s);
@@ -57,18 +62,18 @@ export function GradedSetDrawing({ piece, sizes, baseSize, selectedPoint, onSele
           );
         }) : null}
       </svg>
-      <figcaption className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-600" aria-label="Legend">
+      <figcaption className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-600" aria-label={t(`${area}.drawing.legend`)}>
         {sizes.map((s) => {
           const st = sizeLineStyle(sizes, baseSize, s);
           return (
             <span key={s} className="inline-flex items-center gap-1.5">
               <svg width="34" height="8" aria-hidden><line x1="1" y1="4" x2="33" y2="4" stroke={st.stroke} strokeWidth={st.width} strokeDasharray={st.dash} /></svg>
-              <span className={s === baseSize ? 'font-semibold text-thread-800' : ''}>{s}{s === baseSize ? ' (base)' : ''}</span>
+              <span className={s === baseSize ? 'font-semibold text-thread-800' : ''}>{s === baseSize ? t(`${area}.drawing.base`, { size: s }) : s}</span>
             </span>
           );
         })}
         <span className="inline-flex items-center gap-1.5">
-          <svg width="34" height="8" aria-hidden><line x1="1" y1="4" x2="33" y2="4" stroke="#D6C8B0" strokeWidth="2" /></svg>cutting line ({baseSize})
+          <svg width="34" height="8" aria-hidden><line x1="1" y1="4" x2="33" y2="4" stroke="#D6C8B0" strokeWidth="2" /></svg>{t(`${area}.drawing.cuttingLine`, { size: baseSize })}
         </span>
       </figcaption>
     </figure>

@@ -3,19 +3,24 @@ import { polygonArea, polygonPerimeter } from '@shared/geometry/polygon';
 import type { Point } from '@shared/geometry/types';
 import { ErrorNote } from '@/components/ui/page';
 import { useAcceptPattern } from '../api/grading-queries';
+import { parseLength } from '@shared/units/length-format';
+import { fmt } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
-import { TRACE_FAILURE_TEXT, useTracePhoto } from '../photo-trace/use-trace-photo';
+import { TRACE_FAILURES, useTracePhoto } from '../photo-trace/use-trace-photo';
+import { area } from '../words';
 
 type Cut = 'cut1' | 'pair' | 'fold';
 type Mode = 'corners' | 'grain' | 'notches';
 type Sheet = 'sheet-A4' | 'sheet-Letter' | 'border-A4';
 
+/** The sheets to print; their names are `photo.sheets.<label>` in ../words.ts. */
 const SHEET_LINKS: { label: string; kind: 'sheet' | 'border'; paper: 'A4' | 'Letter' | 'whole' }[] = [
-  { label: 'Sheet, A4', kind: 'sheet', paper: 'A4' },
-  { label: 'Sheet, Letter', kind: 'sheet', paper: 'Letter' },
-  { label: 'Border frame on A4 pages', kind: 'border', paper: 'A4' },
-  { label: 'Border frame on Letter pages', kind: 'border', paper: 'Letter' },
-  { label: 'Border frame on one large page', kind: 'border', paper: 'whole' },
+  { label: 'sheetA4', kind: 'sheet', paper: 'A4' },
+  { label: 'sheetLetter', kind: 'sheet', paper: 'Letter' },
+  { label: 'borderA4', kind: 'border', paper: 'A4' },
+  { label: 'borderLetter', kind: 'border', paper: 'Letter' },
+  { label: 'borderWhole', kind: 'border', paper: 'whole' },
 ];
 
 /** The point of `ring` nearest to `q` on its edges, and the edge it lies on. */
@@ -37,7 +42,21 @@ function nearestOnRing(ring: Point[], q: Point): { at: Point; edge: number } {
  * corners, marks the grain line and notches, sets the piece's details and adds it to the style's pieces.
  */
 export function PhotoTraceCard({ styleId }: { styleId: number }) {
-  const { len, area } = useLength();
+  const { t } = useTranslation();
+  const { len, area: areaOf, small, system, cellUnitWord } = useLength();
+  /** A fine length (the trace's tolerance): millimetres, or inches to the nearest 1/64 in an imperial studio. */
+  const fine = (mm: number, digits?: number) => {
+    if (system === 'metric') {
+      const n = digits === undefined ? fmt().number(mm, 2) : new Intl.NumberFormat(fmt().locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(mm);
+      return `${n} mm`;
+    }
+    let num = Math.round((mm / 25.4) * 64), den = 64;
+    if (num === 0) return '< 1/64"';
+    while (num % 2 === 0 && den > 1) { num /= 2; den /= 2; }
+    return den === 1 ? `${num}"` : `${Math.floor(num / den) ? `${Math.floor(num / den)} ` : ''}${num % den}/${den}"`;
+  };
+  /** A seam allowance as shown and typed: millimetres, or inches with fractions (`3/8`). */
+  const seamMm = (text: string) => (system === 'metric' ? Number(text.replace(',', '.')) : (parseLength(`${text} in`, 'imperial') ?? NaN));
   const { state, trace, reset } = useTracePhoto();
   const accept = useAcceptPattern(styleId);
   const [sheet, setSheet] = useState<Sheet>('sheet-A4');
@@ -50,7 +69,7 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
   const [cut, setCut] = useState<Cut>('cut1');
   const [copies, setCopies] = useState('1');
   const [material, setMaterial] = useState('');
-  const [seam, setSeam] = useState('10');
+  const [seam, setSeam] = useState(() => (system === 'metric' ? '10' : len(9.525).replace('"', '')));
   const [outlineIs, setOutlineIs] = useState('');
   const svg = useRef<SVGSVGElement>(null);
 
@@ -96,7 +115,7 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
     outlineIs: outlineIs as 'sewing' | 'cutting', keepExisting: true,
     pieces: [{
       name: name.trim(), outline: outline.map(up), grainLine: { from: up(grain!.from), to: up(grain!.to!) },
-      notches: notches.map(up), cut, copies: Number(copies), material: material.trim() || undefined, seamAllowanceMm: Number(seam),
+      notches: notches.map(up), cut, copies: Number(copies), material: material.trim() || undefined, seamAllowanceMm: seamMm(seam),
     }],
   }, { onSuccess: () => { reset(); setOutline([]); setGrain(null); setNotches([]); setName(''); } });
 
@@ -106,46 +125,44 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
   return (
     <div className="space-y-3">
       <p className="text-sm text-ink-600">
-        Print a calibration sheet at 100 % and check its 100 mm bar with a ruler. Lay the paper piece flat on the blue field (or, for a large
-        piece, on a plain table inside the border frame), then take the photo from above with all four corner marks in view. The photo is
-        traced on this device; only the finished outline is saved.
+        {t(`${area}.photo.help`, { bar: small(100) })}
       </p>
       <p className="text-sm">
-        Print:{' '}
+        {t(`${area}.photo.print`)}{' '}
         {SHEET_LINKS.map((l, i) => (
-          <span key={l.label}>{i ? ' · ' : ''}<a className="underline" href={`/api/styles/${styleId}/pattern/calibration-sheet?kind=${l.kind}&paper=${l.paper}`}>{l.label}</a></span>
+          <span key={l.label}>{i ? ' · ' : ''}<a className="underline" href={`/api/styles/${styleId}/pattern/calibration-sheet?kind=${l.kind}&paper=${l.paper}`}>{t(`${area}.photo.sheets.${l.label}`)}</a></span>
         ))}
       </p>
       <div className="grid gap-3 sm:grid-cols-2">
         <div>
-          <label className="field-label" htmlFor="photo-sheet">Photographed on</label>
+          <label className="field-label" htmlFor="photo-sheet">{t(`${area}.photo.photographedOn`)}</label>
           <select id="photo-sheet" className="field-input" value={sheet} onChange={(e) => setSheet(e.target.value as Sheet)}>
-            <option value="sheet-A4">the A4 sheet</option>
-            <option value="sheet-Letter">the Letter sheet</option>
-            <option value="border-A4">the border frame</option>
+            <option value="sheet-A4">{t(`${area}.photo.onA4`)}</option>
+            <option value="sheet-Letter">{t(`${area}.photo.onLetter`)}</option>
+            <option value="border-A4">{t(`${area}.photo.onBorder`)}</option>
           </select>
         </div>
         <div>
-          <label className="field-label" htmlFor="photo-file">Photo of the piece</label>
+          <label className="field-label" htmlFor="photo-file">{t(`${area}.photo.photo`)}</label>
           <input id="photo-file" type="file" accept="image/*" capture="environment" className="field-input" onChange={(e) => void handleFile(e.target.files?.[0])} />
         </div>
       </div>
-      {state.status === 'tracing' ? <p className="text-sm" role="status">Tracing the photo…</p> : null}
-      {state.status === 'failed' ? <p className="field-error" role="alert">{TRACE_FAILURE_TEXT[state.code] ?? TRACE_FAILURE_TEXT.failed}</p> : null}
+      {state.status === 'tracing' ? <p className="text-sm" role="status">{t(`${area}.photo.tracing`)}</p> : null}
+      {state.status === 'failed' ? <p className="field-error" role="alert">{t(`${area}.photo.failures.${TRACE_FAILURES.includes(state.code) ? state.code : 'failed'}`)}</p> : null}
       {v && done ? (
         <div className="space-y-3" data-testid="photo-trace">
           <p className="text-sm text-ink-600">
-            Traced within {v.toleranceMm} mm; the sheet&apos;s marks fit to {v.markResidualMm.toFixed(2)} mm.
-            {figures ? ` Size ${len(Math.max(...outline.map((p) => p.x)) - Math.min(...outline.map((p) => p.x)))} × ${len(maxY - Math.min(...outline.map((p) => p.y)))} · area ${area(figures.area)} · perimeter ${len(figures.perimeter)}.` : ''}
+            {t(`${area}.photo.traced`, { tolerance: fine(v.toleranceMm), residual: fine(v.markResidualMm, 2) })}
+            {figures ? t(`${area}.photo.figures`, { width: len(Math.max(...outline.map((p) => p.x)) - Math.min(...outline.map((p) => p.x))), height: len(maxY - Math.min(...outline.map((p) => p.y))), area: areaOf(figures.area), perimeter: len(figures.perimeter) }) : ''}
           </p>
-          <div role="radiogroup" aria-label="What a tap on the photo does" className="flex flex-wrap gap-3 text-sm">
-            {([['corners', 'Move corners'], ['grain', 'Mark the grain line (two taps)'], ['notches', 'Add notches']] as const).map(([m, label]) => (
-              <label key={m} className="flex items-center gap-1"><input type="radio" name="photo-mode" checked={mode === m} onChange={() => setMode(m)} />{label}</label>
+          <div role="radiogroup" aria-label={t(`${area}.photo.tapDoes`)} className="flex flex-wrap gap-3 text-sm">
+            {(['corners', 'grain', 'notches'] as const).map((m) => (
+              <label key={m} className="flex items-center gap-1"><input type="radio" name="photo-mode" checked={mode === m} onChange={() => setMode(m)} />{t(`${area}.photo.modes.${m}`)}</label>
             ))}
           </div>
           <svg
             ref={svg} viewBox={`${v.viewOrigin.x} ${v.viewOrigin.y} ${vw} ${vh}`} className="h-[70vh] w-full max-w-3xl touch-none border border-calico-200"
-            role="group" aria-label="Traced outline over the photo" data-testid="photo-trace-canvas"
+            role="group" aria-label={t(`${area}.photo.canvas`)} data-testid="photo-trace-canvas"
             onPointerMove={handleMove} onPointerUp={() => setDragging(null)} onPointerLeave={() => setDragging(null)} onClick={handleClick}
           >
             <image href={done.viewUrl} x={v.viewOrigin.x} y={v.viewOrigin.y} width={vw} height={vh} preserveAspectRatio="none" />
@@ -155,7 +172,7 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
             {mode === 'corners' ? outline.map((p, k) => (
               <circle
                 key={k} cx={p.x} cy={p.y} r={handle} fill="#fff" stroke="#d9480f" strokeWidth={handle / 4} role="button" tabIndex={0}
-                aria-label={`Corner ${k + 1}: drag, or use the arrow keys`}
+                aria-label={t(`${area}.photo.corner`, { n: k + 1 })}
                 onPointerDown={(e) => { e.stopPropagation(); (e.target as Element).setPointerCapture?.(e.pointerId); setDragging(k); }}
                 onKeyDown={(e) => {
                   const step = 0.5;
@@ -166,28 +183,28 @@ export function PhotoTraceCard({ styleId }: { styleId: number }) {
             )) : null}
           </svg>
           <p className="text-xs text-ink-600">
-            {grain?.to ? 'Grain line marked.' : 'Mark the grain line: tap its two ends.'} {notches.length ? `${notches.length} notch${notches.length > 1 ? 'es' : ''}.` : ''}{' '}
-            {notches.length || grain ? <button type="button" className="underline" onClick={() => { setGrain(null); setNotches([]); }}>Clear grain line and notches</button> : null}
+            {grain?.to ? t(`${area}.photo.grainMarked`) : t(`${area}.photo.markGrain`)} {notches.length ? t(`${area}.photo.notches`, { count: notches.length }) : ''}{' '}
+            {notches.length || grain ? <button type="button" className="underline" onClick={() => { setGrain(null); setNotches([]); }}>{t(`${area}.photo.clear`)}</button> : null}
           </p>
           <div className="grid gap-3 sm:grid-cols-3">
-            <div><label className="field-label" htmlFor="photo-name">Piece name</label><input id="photo-name" className="field-input" value={name} onChange={(e) => setName(e.target.value)} /></div>
+            <div><label className="field-label" htmlFor="photo-name">{t(`${area}.photo.name`)}</label><input id="photo-name" className="field-input" value={name} onChange={(e) => setName(e.target.value)} /></div>
             <div>
-              <label className="field-label" htmlFor="photo-cut">Cut</label>
+              <label className="field-label" htmlFor="photo-cut">{t(`${area}.photo.cut`)}</label>
               <select id="photo-cut" className="field-input" value={cut} onChange={(e) => setCut(e.target.value as Cut)}>
-                <option value="cut1">cut 1</option><option value="pair">cut a mirrored pair</option><option value="fold">cut on fold</option>
+                {(['cut1', 'pair', 'fold'] as const).map((c) => <option key={c} value={c}>{t(`${area}.cut.${c}`)}</option>)}
               </select>
             </div>
-            <div><label className="field-label" htmlFor="photo-copies">Copies</label><input id="photo-copies" className="field-input" inputMode="numeric" value={copies} onChange={(e) => setCopies(e.target.value)} /></div>
-            <div><label className="field-label" htmlFor="photo-material">Material</label><input id="photo-material" className="field-input" value={material} onChange={(e) => setMaterial(e.target.value)} /></div>
-            <div><label className="field-label" htmlFor="photo-seam">Seam allowance (mm)</label><input id="photo-seam" className="field-input" inputMode="decimal" value={seam} onChange={(e) => setSeam(e.target.value)} /></div>
+            <div><label className="field-label" htmlFor="photo-copies">{t(`${area}.photo.copies`)}</label><input id="photo-copies" className="field-input" inputMode="numeric" value={copies} onChange={(e) => setCopies(e.target.value)} /></div>
+            <div><label className="field-label" htmlFor="photo-material">{t(`${area}.photo.material`)}</label><input id="photo-material" className="field-input" value={material} onChange={(e) => setMaterial(e.target.value)} /></div>
+            <div><label className="field-label" htmlFor="photo-seam">{t(`${area}.photo.seam`, { unit: cellUnitWord })}</label><input id="photo-seam" className="field-input" inputMode="decimal" value={seam} onChange={(e) => setSeam(e.target.value)} /></div>
             <div>
-              <label className="field-label" htmlFor="photo-outline">The paper piece&apos;s edge is the</label>
+              <label className="field-label" htmlFor="photo-outline">{t(`${area}.photo.edgeIs`)}</label>
               <select id="photo-outline" className="field-input" value={outlineIs} onChange={(e) => setOutlineIs(e.target.value)}>
-                <option value="">Choose…</option><option value="sewing">sewing line</option><option value="cutting">cutting line (allowance included)</option>
+                <option value="">{t(`${area}.pattern.choose`)}</option><option value="sewing">{t(`${area}.pattern.sewing`)}</option><option value="cutting">{t(`${area}.pattern.cutting`)}</option>
               </select>
             </div>
           </div>
-          <button type="button" className="btn-primary" disabled={!canAccept || accept.isPending} onClick={doAccept}>{accept.isPending ? 'Saving…' : 'Add to the style\u2019s pieces'}</button>
+          <button type="button" className="btn-primary" disabled={!canAccept || accept.isPending} onClick={doAccept}>{accept.isPending ? t(`${area}.photo.saving`) : t(`${area}.photo.add`)}</button>
           <ErrorNote error={accept.error} />
         </div>
       ) : null}

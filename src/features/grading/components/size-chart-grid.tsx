@@ -3,13 +3,24 @@ import type { GradingDto } from '@shared/schemas/grading';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError, downloadFile } from '@/lib/api-client';
 import { useImportChart, usePutChart } from '../api/grading-queries';
+import { i18n, useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
+import { area } from '../words';
 
-const label = (pom: string) => pom.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
+/** An EN 13402-3 bust interval (`82–86`, in cm as the standard writes it) in the studio's unit: unchanged in cm. */
+export function enInterval(label: string, system: 'metric' | 'imperial', len: (mm: number) => string): string {
+  if (system === 'metric') return label;
+  const m = /^(\d+(?:\.\d+)?)\s*[–-]\s*(\d+(?:\.\d+)?)$/.exec(label.trim());
+  return m ? `${len(Number(m[1]) * 10)}–${len(Number(m[2]) * 10)}` : label;
+}
+
+/** A point of measure's name in the studio's language (a key the chart does not know reads as plain words). */
+const label = (pom: string) => i18n.t(`${area}.pom.${pom}`, { defaultValue: pom.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase()) });
 
 /** The body chart as an editable grid (studio units), the grade between neighbouring sizes, import and export. */
 export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; grading: GradingDto; canEdit: boolean }) {
-  const { cell, parseCell, cellUnit, small } = useLength();
+  const { t } = useTranslation();
+  const { cell, parseCell, cellUnit, cellUnitWord, small, len, system } = useLength();
   const chart = grading.chart;
   const [cells, setCells] = useState<string[][]>([]);
   const [cellErrors, setCellErrors] = useState<Record<string, string>>({});
@@ -26,18 +37,18 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
   ) : null;
   const importControl = canEdit ? (
     <>
-      <button type="button" className={chart ? 'btn-quiet' : 'btn-primary'} disabled={imp.isPending} onClick={() => fileRef.current?.click()}>{imp.isPending ? 'Importing…' : 'Import CSV or XLSX'}</button>
-      <input ref={fileRef} type="file" accept=".csv,.xlsx" className="hidden" aria-label="Size chart file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
+      <button type="button" className={chart ? 'btn-quiet' : 'btn-primary'} disabled={imp.isPending} onClick={() => fileRef.current?.click()}>{imp.isPending ? t(`${area}.chart.importing`) : t(`${area}.chart.import`)}</button>
+      <input ref={fileRef} type="file" accept=".csv,.xlsx" className="hidden" aria-label={t(`${area}.chart.file`)} onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
     </>
   ) : null;
   if (!chart) {
     return (
       <div className="space-y-3 text-sm">
-        <p className="text-ink-600">No size chart yet.{canEdit ? ' Import the body measurements of the size run from a CSV or XLSX file:' : ''}</p>
+        <p className="text-ink-600">{t(`${area}.chart.none`)}{canEdit ? t(`${area}.chart.importHow`) : ''}</p>
         {canEdit ? (
           <p className="text-ink-600">
-            first row <code>Point of measure, unit, {grading.sizes.join(', ')}</code>; then one row per measurement, e.g.{' '}
-            <code>bust, cm, 82, 86, 90, 96, 102</code>. Units mm, cm or in (fractions such as <code>37 1/4</code> are read). Nothing is saved unless every cell is right.
+            {t(`${area}.chart.firstRow`)} <code>{t(`${area}.chart.header`, { sizes: grading.sizes.join(', ') })}</code>{t(`${area}.chart.thenRows`)}{' '}
+            <code>{t(`${area}.chart.example`)}</code>{t(`${area}.chart.unitsNote`)} <code>{t(`${area}.chart.fraction`)}</code> {t(`${area}.chart.unitsNoteEnd`)}
           </p>
         ) : null}
         <div className="flex flex-wrap gap-2">{importControl}</div>
@@ -49,9 +60,9 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
     const errs: Record<string, string> = {};
     const rows = chart.rows.map((r, i) => ({
       pointOfMeasure: r.pointOfMeasure,
-      values: cells[i].map((t, j) => {
-        const v = parseCell(t.trim());
-        if (v === null || !(v > 0)) errs[`${i}.${j}`] = 'Not a length';
+      values: cells[i].map((text, j) => {
+        const v = parseCell(text.trim());
+        if (v === null || !(v > 0)) errs[`${i}.${j}`] = t(`${area}.chart.notALength`);
         return v ?? 0;
       }),
     }));
@@ -61,21 +72,21 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
-        {canEdit ? <button type="button" className="btn-primary" onClick={save} disabled={put.isPending}>{put.isPending ? 'Saving…' : 'Save chart'}</button> : null}
+        {canEdit ? <button type="button" className="btn-primary" onClick={save} disabled={put.isPending}>{put.isPending ? t(`${area}.chart.saving`) : t(`${area}.chart.save`)}</button> : null}
         {importControl}
-        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.csv')}>Export CSV</button>
-        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.xlsx')}>Export XLSX</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.csv')}>{t(`${area}.chart.exportCsv`)}</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.xlsx')}>{t(`${area}.chart.exportXlsx`)}</button>
       </div>
       <ErrorNote error={put.error} />
       {importProblems}
-      <div role="region" className="overflow-x-auto" tabIndex={0} aria-label="Size chart">
+      <div role="region" className="overflow-x-auto" tabIndex={0} aria-label={t(`${area}.chart.region`)}>
         <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
           <thead>
             <tr className="border-b border-calico-200 text-left">
-              <th className="py-1 pr-2 text-ink-600">Body ({cellUnit})</th>
+              <th className="py-1 pr-2 text-ink-600">{t(`${area}.chart.body`, { unit: cellUnitWord })}</th>
               {chart.sizes.map((s, j) => (
                 <th key={s} className="px-1 text-center" colSpan={j < chart.sizes.length - 1 ? 2 : 1}>
-                  {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">EN {grading.designations[s]}</span> : null}
+                  {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">{t(`${area}.chart.designation`, { designation: enInterval(grading.designations[s], system, len) })}</span> : null}
                 </th>
               ))}
             </tr>
@@ -100,16 +111,17 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
           </tbody>
         </table>
       </div>
-      <p className="text-xs text-ink-600">Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval (cm) under each size.</p>
+      <p className="text-xs text-ink-600">{t(`${area}.chart.${system === 'metric' ? 'note' : 'noteImperial'}`)}</p>
     </div>
   );
 }
 
 function FragmentCells({ children, last, gradeText }: { children: React.ReactNode; last: boolean; grade?: number; gradeText: string }) {
+  const { t } = useTranslation();
   return (
     <>
       <td className="px-1 py-1 text-center">{children}</td>
-      {last ? null : <td className="px-0.5 text-center text-[11px] text-ink-400 tabular-nums" aria-label="grade">{gradeText}</td>}
+      {last ? null : <td className="px-0.5 text-center text-[11px] text-ink-400 tabular-nums" aria-label={t(`${area}.chart.grade`)}>{gradeText}</td>}
     </>
   );
 }

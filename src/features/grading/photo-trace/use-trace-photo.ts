@@ -8,13 +8,8 @@ export type TraceState =
   | { status: 'done'; result: Extract<TraceResponse, { ok: true }>; viewUrl: string }
   | { status: 'failed'; code: string; message: string };
 
-/** Plain words for what went wrong, by the worker's code. */
-export const TRACE_FAILURE_TEXT: Record<string, string> = {
-  marks_not_found: 'The four corner marks of the sheet were not all found. Take the photo again from above, with all four marks in view and none covered.',
-  no_piece: 'No piece was found on the sheet. Lay the piece on the field and take the photo again.',
-  piece_touches_edge: 'The piece reaches the edge of the field. Move it inside, clear of the edge, and take the photo again.',
-  failed: 'The photo could not be traced.',
-};
+/** What can go wrong, by the worker's code; the words for each are `photo.failures.<code>` in ../words.ts. */
+export const TRACE_FAILURES: readonly string[] = ['marks_not_found', 'no_piece', 'piece_touches_edge', 'failed'];
 
 /** Trace a photo in a web worker (created on first use, ended when the component goes). */
 export function useTracePhoto() {

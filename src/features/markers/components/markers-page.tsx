@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { fmt } from '@/lib/format';
-import { useEffect, useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import type { BatchDto } from '@shared/schemas/batches';
 import type { FabricDto } from '@shared/schemas/cutting';
 import type { CutPlanDto } from '@shared/schemas/cutting';
@@ -10,10 +10,14 @@ import { api, ApiError, downloadFile } from '@/lib/api-client';
 import { useCan } from '@/lib/auth';
 import { batchQueries, fabricQueries } from '@/lib/queries';
 import { markerQueries, useCancelMarker, useStartMarker } from '../api/marker-queries';
+import { useTranslation } from '@/lib/i18n';
 import { MarkerDrawing } from './marker-drawing';
 import { Trans } from 'react-i18next';
-import { i18n, useTranslation } from '@/lib/i18n';
+import { i18n } from '@/lib/i18n';
 import { area } from '../words';
+
+// recharts loads with the first run that has points to draw, not with the page.
+const MarkerProgressChart = lazy(async () => ({ default: (await import('./marker-progress-chart')).MarkerProgressChart }));
 
 const m = (mm: number | null) => (mm === null ? '—' : fmt().fabricLength(mm));
 const tone = { queued: 'grey', running: 'blue', done: 'teal', failed: 'red', cancelled: 'gold' } as const;
@@ -21,10 +25,10 @@ const w = (key: string, values?: Record<string, unknown>) => i18n.t(`${area}.${k
 const b = { b: <b /> };
 
 function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
-  useTranslation();
   const { data: marker } = useQuery(markerQueries.detail(id));
   const cancel = useCancelMarker();
   const canWrite = useCan('markers:write');
+  const { t } = useTranslation();
   if (!marker) return <Spinner />;
   const isLive = marker.status === 'queued' || marker.status === 'running';
   const pct = marker.budgetSeconds ? Math.min(100, (marker.elapsedMs / (marker.budgetSeconds * 1000)) * 100) : 0;
@@ -33,7 +37,7 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
       <div className="flex flex-wrap items-center gap-3 text-sm">
         <Badge tone={tone[marker.status]}>{w(`status.${marker.status}`)}</Badge>
         <span><Trans i18nKey={`${area}.view.best`} values={{ length: m(marker.lengthMm) }} components={{ b: <b data-testid="marker-length" /> }} /></span>
-        <span><Trans i18nKey={`${area}.view.elapsed`} values={{ elapsed: fmt().number(marker.elapsedMs / 1000, 1), budget: fmt().number(marker.budgetSeconds) }} components={b} /></span>
+        <span><Trans i18nKey={`${area}.view.elapsed`} values={{ elapsed: fmt().number(marker.elapsedMs / 1000, 1), budget: fmt().number(marker.budgetSeconds) }} components={b} />{marker.cores > 0 ? ` ${t(`${area}.cores`, { count: marker.cores })}` : ''}</span>
         {marker.utilisation !== null && !isLive ? <span><Trans i18nKey={`${area}.view.utilisation`} values={{ percent: fmt().percent(marker.utilisation * 100) }} components={{ b: <b data-testid="marker-utilisation" /> }} /></span> : null}
         {marker.lengthPerGarmentMm ? <span>{w('view.perGarment', { length: m(marker.lengthPerGarmentMm) })}</span> : null}
         <span>{w('view.facts', { count: marker.pieceCount, width: fmt().fabricWidth(marker.widthMm) })}</span>
@@ -46,6 +50,13 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
           <p className="mt-1 text-xs text-ink-600">{marker.status === 'queued' ? w('view.waiting') : w('view.nesting')}</p>
           {canWrite ? <button type="button" className="btn-quiet mt-2" onClick={() => cancel.mutate(marker.id)}>{w('view.stop')}</button> : null}
         </div>
+      ) : null}
+      {marker.progress.length > 0 ? (
+        <Suspense fallback={<div className="mt-3 h-48" />}>
+          <MarkerProgressChart points={marker.progress} />
+        </Suspense>
+      ) : isLive && marker.status === 'running' ? (
+        <p className="mt-2 text-xs text-ink-600">{t(`${area}.noPointsYet`)}</p>
       ) : null}
       {marker.error ? <p className={`mt-2 text-sm ${marker.status === 'failed' ? 'text-madder-700' : 'text-ink-600'}`}>{marker.error}</p> : null}
       {marker.drawing && marker.lengthMm ? (

@@ -9,7 +9,9 @@ import { ErrorNote } from '@/components/ui/page';
 import { fabricQueries } from '@/features/cutting/api/cutting-queries';
 import { gradingQueries } from '@/features/grading/api/grading-queries';
 import { useLength } from '@/features/grading/hooks/use-length';
+import { usePatternNames } from '@/features/grading/hooks/use-pattern-names';
 import { useCan } from '@/lib/auth';
+import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { useSaveComposition } from '../api/style-queries';
 import { area } from '../words';
@@ -71,7 +73,7 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
         <legend className="field-label">{t(`${area}.blocks.fabricOfMaterial`)}</legend>
         {materials.map((m) => (
           <label key={m} className="text-sm">
-            <span className="field-label capitalize">{material(m)}</span>
+            <span className="field-label">{material(m).charAt(0).toUpperCase() + material(m).slice(1)}</span>
             <select className="field-input" aria-label={t(`${area}.blocks.fabricFor`, { material: material(m) })} disabled={!canEdit} value={links[m] ?? ''} onChange={(e) => setLinks({ ...links, [m]: Number(e.target.value) })}>
               <option value="">{t(`${area}.blocks.notLinked`)}</option>
               {(fabrics.data ?? []).map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
@@ -116,11 +118,11 @@ function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: numb
 
 function OptionField({ index, block, field: f, spec, canEdit, onChange }: { index: number; block: BlockName; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
   const { t } = useTranslation();
-  const { len, system, lengthUnitWord } = useLength();
+  const { len, system, lengthUnitWord, decimal } = useLength();
   const unit = system === 'metric' ? 'cm' : 'in';
   const label = t(`${area}.fields.${block}.${f.path.replace(/\./g, '_')}`);
   const choice = (c: string) => t(`${area}.choices.${c}`, { defaultValue: c });
-  const cell = (v: number) => (system === 'metric' ? String(Number((v / 10).toFixed(2))) : formatLength(v, system).replace('"', ''));
+  const cell = (v: number) => (system === 'metric' ? decimal(String(Number((v / 10).toFixed(2)))) : formatLength(v, system).replace('"', ''));
   const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
   const value = getAt(spec, f.path);
   const id = `b${index}-${f.path}`;
@@ -145,17 +147,17 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
       </label>
     );
   }
-  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : String(f.default)) : t(`${area}.defaults.${f.default}`);
+  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : fmt().number(f.default, 3)) : t(`${area}.defaults.${f.default}`);
   return (
     <label className="text-sm" htmlFor={id}>
       <span className="field-label">{label}{f.kind === 'length' ? ` (${lengthUnitWord})` : ''}</span>
       <input
         id={id} className="field-input" disabled={!canEdit} placeholder={t(`${area}.blocks.defaultValue`, { value: shown })}
-        defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : String(value)}
+        defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : decimal(String(value))}
         onBlur={(e) => {
           const t = e.target.value.trim();
           if (!t) return set(undefined);
-          const v = f.kind === 'length' ? parseCell(t) : Number(t);
+          const v = f.kind === 'length' ? parseCell(t) : Number(t.replace(',', '.'));
           if (v !== null && Number.isFinite(v)) set(v);
         }}
       />
@@ -167,6 +169,7 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
 function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; baseSize: string; composition: StyleComposition }) {
   const { t } = useTranslation();
   const { len } = useLength();
+  const names = usePatternNames();
   const grading = useQuery(gradingQueries.detail(styleId));
   const chart = grading.data?.chart;
   const drafted = useMemo((): { pieces: DraftedPiece[] } | { error: string } | null => {
@@ -207,7 +210,7 @@ function BaseSizeDrawing({ styleId, baseSize, composition }: { styleId: number; 
             <path d={d(cut, dx, dy)} fill="none" stroke="#C9B48F" strokeWidth={1.5 * k} />
             <path d={d(p.outline, dx, dy)} fill={p.material === 'lining' ? 'rgba(120,90,160,0.08)' : p.material === 'contrast' ? 'rgba(190,90,60,0.1)' : 'rgba(15,76,92,0.06)'} stroke="#0F4C5C" strokeWidth={1.5 * k} />
             <line x1={p.grainLine.from.x + dx} y1={-p.grainLine.from.y + dy} x2={p.grainLine.to.x + dx} y2={-p.grainLine.to.y + dy} stroke="#434B50" strokeWidth={k} strokeDasharray={`${6 * k} ${3 * k}`} />
-            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{p.name} ×{p.copies}</text>
+            <text x={dx + Math.min(...p.outline.map((q) => q.x))} y={dy + h + font * (i % 2 ? 2.4 : 1.2)} fontSize={font} fill="#434B50">{names.piece(p.name)} ×{p.copies}</text>
           </g>
         ))}
         <line x1={0} y1={height} x2={100} y2={height} stroke="#434B50" strokeWidth={2 * k} />

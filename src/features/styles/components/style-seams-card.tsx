@@ -6,6 +6,7 @@ import type { StyleDto } from '@shared/schemas/styles';
 import { ErrorNote } from '@/components/ui/page';
 import { gradingQueries } from '@/features/grading/api/grading-queries';
 import { useLength } from '@/features/grading/hooks/use-length';
+import { usePatternNames, type PatternNames } from '@/features/grading/hooks/use-pattern-names';
 import { useCan } from '@/lib/auth';
 import { i18n, useTranslation } from '@/lib/i18n';
 import { useSaveComposition } from '../api/style-queries';
@@ -78,21 +79,22 @@ function blankSeam(pieces: DraftedPiece[], n: number): SeamInput {
   return { name: i18n.t(`${area}.seams.newName`, { n: n + 1 }), a: [{ pieceId: p.id, edges: [edge] }], b: [{ pieceId: p.id, edges: [edge] }], toleranceMm: SEAM_TOLERANCE_MM.side };
 }
 
-function sideText(sides: Side[], pieces: DraftedPiece[]): string {
-  return sides.map((s) => `${pieces.find((p) => p.id === s.pieceId)?.name ?? i18n.t(`${area}.seams.missingPiece`, { id: s.pieceId })}: ${s.edges.join(' + ')}`).join('; ');
+function sideText(sides: Side[], pieces: DraftedPiece[], names: PatternNames): string {
+  return sides.map((s) => names.side(pieces.find((p) => p.id === s.pieceId)?.name ?? i18n.t(`${area}.seams.missingPiece`, { id: s.pieceId }), s.edges)).join(i18n.t(`${area}.seams.sideJoin`));
 }
 
 function SeamRow({ seam, pieces, canEdit, isOpen, onOpen, onChange, onRemove }: {
   seam: SeamInput; pieces: DraftedPiece[]; canEdit: boolean; isOpen: boolean; onOpen: () => void; onChange: (s: SeamInput) => void; onRemove: () => void;
 }) {
   const { t } = useTranslation();
+  const names = usePatternNames();
   const { small } = useLength();
   return (
     <>
       <tr className="border-b border-calico-100 align-top">
-        <td className="py-1.5 pr-2 font-medium">{seam.name}</td>
-        <td className="px-2 py-1.5">{sideText(seam.a, pieces)}</td>
-        <td className="px-2 py-1.5">{sideText(seam.b, pieces)}</td>
+        <td className="py-1.5 pr-2 font-medium">{names.seam(seam.name)}</td>
+        <td className="px-2 py-1.5">{sideText(seam.a, pieces, names)}</td>
+        <td className="px-2 py-1.5">{sideText(seam.b, pieces, names)}</td>
         <td className="px-2 py-1.5">{small(seam.easeMm ?? 0)}</td>
         <td className="px-2 py-1.5">{small(seam.toleranceMm)}</td>
         <td className="px-2 py-1.5">{canEdit ? <button type="button" className="btn-quiet" aria-expanded={isOpen} onClick={onOpen}>{isOpen ? t(`${area}.seams.close`) : t(`${area}.seams.fix`)}</button> : null}</td>
@@ -140,6 +142,7 @@ function SeamEditor({ seam, pieces, onChange, onRemove }: { seam: SeamInput; pie
 
 function SideFields({ label, side, pieces, onChange }: { label: string; side: Side; pieces: DraftedPiece[]; onChange: (s: Side) => void }) {
   const { t } = useTranslation();
+  const pn = usePatternNames();
   const piece = pieces.find((p) => p.id === side.pieceId);
   const names = [...new Set((piece?.edges ?? []).map((e) => e.name))];
   const current = side.edges.join(' + ');
@@ -153,13 +156,13 @@ function SideFields({ label, side, pieces, onChange }: { label: string; side: Si
           onChange({ pieceId: e.target.value, edges: [p?.edges[0]?.name ?? ''] });
         }}>
           {piece ? null : <option value={side.pieceId}>{t(`${area}.seams.missingPieceOption`, { id: side.pieceId })}</option>}
-          {pieces.filter((p) => p.material !== 'interfacing').map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
+          {pieces.filter((p) => p.material !== 'interfacing').map((p) => <option key={p.id} value={p.id}>{pn.piece(p.name)}</option>)}
         </select>
       </label>
       <label className="text-sm">
         <span className="field-label">{t(`${area}.seams.edge`, { side: label })}</span>
         <select className="field-input" value={current} onChange={(e) => onChange({ ...side, edges: e.target.value.split(' + ') })}>
-          {choices.map((c) => <option key={c} value={c}>{c}</option>)}
+          {choices.map((c) => <option key={c} value={c}>{pn.part(c)}</option>)}
         </select>
       </label>
     </div>
