@@ -5,7 +5,7 @@ import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { purchasingQueries, useCreateOrder } from '../api/purchasing-queries';
 import { area } from '../words';
-import { readFabricInput, unitText } from './quantity-text';
+import { readFabricInput, trimByYard, unitText } from './quantity-text';
 
 /** A draft order by hand: a supplier, one fabric or trim, how much, and the batch it is for. */
 export function NewOrderForm() {
@@ -21,7 +21,8 @@ export function NewOrderForm() {
   const [quantity, setQuantity] = useState('');
   const [batchId, setBatchId] = useState<number>(0);
   const [error, setError] = useState('');
-  const unit = item?.kind === 'fabric' ? fmt().fabricLengthUnit : unitText(item?.unit ?? '');
+  const byYard = item?.kind === 'trim' && trimByYard(item.unit);
+  const unit = item?.kind === 'fabric' || byYard ? fmt().fabricLengthUnit : unitText(item?.unit ?? '');
   const handleItem = (key: string) => {
     setItemKey(key);
     const next = items.find((i) => `${i.kind}-${i.refId}` === key);
@@ -29,7 +30,8 @@ export function NewOrderForm() {
   };
   const handleSubmit = async (e: React.FormEvent) => {
     e.preventDefault();
-    const q = item?.kind === 'fabric' ? readFabricInput(quantity) : Number(quantity.replace(',', '.'));
+    const mm = item?.kind === 'fabric' || byYard ? readFabricInput(quantity) : null;
+    const q = item?.kind === 'fabric' ? mm : byYard ? (mm === null ? null : mm / 1000) : Number(quantity.replace(',', '.'));
     if (!item || q === null || !(q > 0)) return setError(w('howMuch'));
     setError('');
     await create.mutateAsync({ supplierId, batchId: batchId || null, lines: [{ kind: item.kind, refId: item.refId, quantity: q }] });

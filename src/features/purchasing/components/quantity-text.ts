@@ -4,13 +4,22 @@ import { fmt } from '@/lib/format';
 import { i18n } from '@/lib/i18n';
 import { area } from '../words';
 
+const imperial = () => fmt().settings.unitSystem === 'imperial';
+
 /** A trim's unit in the person's language when it is one of the usual ones (`pcs`, `pair`); else as the studio typed it. */
 export const unitText = (unit: string) => i18n.t(`${area}.units.${unit}`, { defaultValue: unit });
 
 /** A need or order quantity with its unit; fabric (mm) in the studio's units (metres, or yards and inches). */
-export const quantityText = (q: number, unit: string) => (unit === 'mm' ? fmt().fabricLength(q) : `${fmt().number(q, 3)} ${unitText(unit)}`);
+export const quantityText = (q: number, unit: string) => {
+  if (unit === 'mm') return fmt().fabricLength(q);
+  // A trim sold by the metre (tape, elastic) reads in yards and inches in an imperial studio.
+  if (unit === 'm' && imperial()) return fmt().fabricLength(q * 1000);
+  return `${fmt().number(q, 3)} ${unitText(unit)}`;
+};
 
-const imperial = () => fmt().settings.unitSystem === 'imperial';
+
+/** A trim counted in metres, typed in yards in an imperial studio like fabric. */
+export const trimByYard = (unit: string) => unit === 'm' && imperial();
 
 /** A fabric length (mm) as the number to put in an input: metres, or yards, to one decimal. */
 export const fabricInputText = (mm: number) => (mm / (imperial() ? MM_PER_YARD : 1000)).toFixed(1);

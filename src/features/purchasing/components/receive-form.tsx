@@ -5,7 +5,7 @@ import { useReceiveOrder } from '../api/purchasing-queries';
 import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { area } from '../words';
-import { fabricInputText, quantityText, readFabricInput, unitText } from './quantity-text';
+import { fabricInputText, quantityText, readFabricInput, trimByYard, unitText } from './quantity-text';
 
 /** Receive an order into stock: one roll per fabric line (label, length, shade lot), counts for trims. */
 export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone: () => void }) {
@@ -13,7 +13,7 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
   const w = (key: string, values?: Record<string, unknown>) => t(`${area}.receiveForm.${key}`, values);
   const receive = useReceiveOrder();
   const [v, setV] = useState(() =>
-    order.lines.map((l, i) => ({ label: `${order.number}-R${i + 1}`, metres: fabricInputText(Math.max(0, l.quantity - l.receivedQuantity)), shadeLot: 'A', quantity: String(Math.max(0, l.quantity - l.receivedQuantity)) })),
+    order.lines.map((l, i) => ({ label: `${order.number}-R${i + 1}`, metres: fabricInputText(Math.max(0, l.quantity - l.receivedQuantity)), shadeLot: 'A', quantity: trimByYard(l.unit) ? fabricInputText(Math.max(0, l.quantity - l.receivedQuantity) * 1000) : String(Math.max(0, l.quantity - l.receivedQuantity)) })),
   );
   const [lengthErrors, setLengthErrors] = useState<Record<number, string>>({});
   const set = (i: number, k: keyof (typeof v)[number], value: string) => setV(v.map((x, j) => (j === i ? { ...x, [k]: value } : x)));
@@ -28,7 +28,7 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
     const lines = order.lines.map((l, i) =>
       l.kind === 'fabric'
         ? { index: i, rolls: [{ label: v[i].label, lengthMm: lengths[i] ?? 0, shadeLot: v[i].shadeLot }] }
-        : { index: i, quantity: Number(v[i].quantity) },
+        : { index: i, quantity: trimByYard(l.unit) ? (readFabricInput(v[i].quantity) ?? Number.NaN) / 1000 : Number(v[i].quantity) },
     );
     await receive.mutateAsync({ id: order.id, lines });
     onDone();
@@ -50,7 +50,7 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
               <label>{w('shadeLot')}<input className="field-input" value={v[i].shadeLot} onChange={(e) => set(i, 'shadeLot', e.target.value)} /></label>
             </>
           ) : (
-            <label>{w('received', { unit: unitText(l.unit) })}<input className="field-input" inputMode="decimal" value={v[i].quantity} onChange={(e) => set(i, 'quantity', e.target.value)} /></label>
+            <label>{w('received', { unit: trimByYard(l.unit) ? fmt().fabricLengthUnit : unitText(l.unit) })}<input className="field-input" inputMode="decimal" value={v[i].quantity} onChange={(e) => set(i, 'quantity', e.target.value)} /></label>
           )}
         </div>
       ))}
