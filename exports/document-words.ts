@@ -3,6 +3,7 @@
  * their own (no global state: a worker thread may build an English and a French document side by side).
  */
 import { createInstance, type TFunction } from 'i18next';
+import { withFrenchTypography } from '@shared/format/french-typography';
 import type { Language } from '@shared/format/studio-format';
 
 const en = {
@@ -378,7 +379,8 @@ const fr: typeof en = {
 };
 
 const instance = createInstance();
-void instance.init({ resources: { en: { translation: en }, fr: { translation: fr } }, lng: 'en', fallbackLng: 'en', interpolation: { escapeValue: false }, initAsync: false });
+// French is typed with plain spaces; the narrow no-break space of French typography is set once, here.
+void instance.init({ resources: { en: { translation: en }, fr: { translation: withFrenchTypography(fr) } }, lng: 'en', fallbackLng: 'en', interpolation: { escapeValue: false }, initAsync: false });
 
 /** The documents' words in `language` (English when none is given). */
 export function documentWords(language: Language = 'en'): TFunction {

@@ -122,6 +122,10 @@ describe('a French answer', () => {
     expect(translate('supplierId: no such supplier', fr)).toBe('Fournisseur\u202f: fournisseur inconnu');
     expect(translate('Batch not found', fr)).toBe('Série introuvable');
     expect(translate('Batch B-0003 is shipped; nothing more is logged on it', fr)).toBe('La série B-0003 est expédiée\u202f; plus rien n’y est enregistré');
+    expect(translate('Your studio already has 5 markers waiting to run; wait for one to finish or cancel one, then start this marker again', fr)).toBe(
+      'Votre atelier a déjà 5 placements en attente\u202f; attendez qu’un placement se termine ou annulez-en un, puis relancez celui-ci',
+    );
+    expect(translate('This marker is cancelled; only a queued or running marker can be cancelled', fr)).toMatch(/^Ce placement est annulé\u202f;/);
     expect(fieldLabel('lines.2.quantity')).toBe('Quantité (n° 3)');
     expect(fieldLabel('ratio.M')).toBe('Répartition des tailles (M)');
   });

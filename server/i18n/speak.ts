@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { frenchTypography } from '../../shared/format/french-typography';
 import { studioFormat, type FormatSettings, type Language, type StudioFormat } from '../../shared/format/studio-format';
 import { MESSAGES_EN, MESSAGES_FR, NOT_FOUND_FR, VALUES_FR, type MessageKey } from './messages';
 import { FIELD_LABELS_FR, SCHEMA_MESSAGES_FR } from './validation-words';
@@ -15,16 +16,6 @@ export interface Said {
 export const said = (key: MessageKey, params?: Said['params']): Said => ({ key, params });
 
 const PLACEHOLDER = /\{(\w+)(?:\|([\w:]+))?\}/g;
-
-/**
- * French typography: a narrow no-break space (U+202F) before : ; ! ? % and inside « », where the source
- * has a plain space or none (Lexique des règles typographiques en usage à l'Imprimerie nationale).
- */
-export function frenchTypography(text: string): string {
-  return text
-    .replace(/ ([:;!?%»])/g, '\u202f$1')
-    .replace(/« /g, '«\u202f');
-}
 
 /** The sentence in English, exactly as the server always wrote it. */
 export function english(s: Said): string {

@@ -100,10 +100,44 @@ describe('a studio in French and inches', () => {
     expect(tooLong.body.error.message).toBe(said);
   });
 
+  it('refuses a packing list in French, row by row', async () => {
+    const bad = 'Roll,Length m,Width cm,Shade lot,Received\nP-2,abc,147,Lot D,2026-11-28\nP-3,20,147,,28/11/2026\n';
+    const res = await owner.post('/api/fabrics/1/rolls/import').set('X-Seamrun-Csrf', '1').attach('file', Buffer.from(bad), 'packing.csv');
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toBe(`3 problèmes dans la liste de colisage${NNBSP}; rien n’a été importé`);
+    expect(res.body.rows).toEqual([
+      { row: 2, column: 'Length m', message: 'La longueur «\u202fabc\u202f» n’est pas un nombre positif' },
+      { row: 3, column: 'Shade lot', message: 'Le bain est vide' },
+      { row: 3, column: 'Received', message: 'La date «\u202f28/11/2026\u202f» n’est pas une date AAAA-MM-JJ' },
+    ]);
+  });
+
+  it('names a roll left out of a cut plan in French, both widths in inches', async () => {
+    // 1397 mm = 55" and 1450 mm = 57 1/8" to the nearest 1/8 (1 in = 25.4 mm exactly, NIST SP 811 Appendix B).
+    const add = await owner.post('/api/fabrics/1/rolls').send({ rolls: [{ label: 'NARROW-FR', lengthMm: 60_000, widthMm: 1397, shadeLot: 'Lot N', receivedDate: '2026-11-30' }] });
+    expect(add.status).toBe(201);
+    const b = await owner.post('/api/batches').send({ styleId: 1, quantities: { XS: 2, S: 4, M: 6, L: 5, XL: 3 }, dueDate: '2027-01-15' });
+    const plan = await owner.post(`/api/batches/${b.body.batch.id}/cut-plan`).send({ fabricId: 1, maxPlies: 10, maxGarmentsPerMarker: 3, rollIds: [add.body.rolls[0].id, 1, 2, 3, 4, 5] });
+    expect(plan.status, JSON.stringify(plan.body)).toBe(201);
+    expect(plan.body.cutPlan.rollRefusals).toEqual([
+      `Le rouleau NARROW-FR a une laize de 55", plus étroite que le placement de 57 1/8"${NNBSP}: il ne peut pas être matelassé pour ce matelas`,
+    ]);
+  });
+
   it('answers a person in their own language when they picked one', async () => {
     expect((await machinist.patch('/api/auth/me').send({ language: 'en' })).status).toBe(200);
     expect((await machinist.get('/api/audit')).body.error.message).toBe('Your role cannot do this');
     expect((await machinist.patch('/api/auth/me').send({ language: null })).status).toBe(200);
+  });
+
+  it('tells a machinist in French that their PIN is locked, and keeps the English for a browser that asks for none', async () => {
+    const { app: locking } = await buildTestApp({ env: { LOGIN_LOCK_AFTER: '3' } });
+    for (let i = 0; i < 3; i++) await request(locking).post('/api/auth/pin').send({ email: DEMO.machinist, pin: '0000' });
+    const fr = await request(locking).post('/api/auth/pin').set('Accept-Language', 'fr').send({ email: DEMO.machinist, pin: '4011' });
+    expect(fr.status).toBe(429);
+    expect(fr.body.error.message).toBe(`Trop d’essais manqués${NNBSP}; réessayez dans 15 minutes`);
+    const en = await request(locking).post('/api/auth/pin').send({ email: DEMO.machinist, pin: '4011' });
+    expect(en.body.error.message).toBe('Too many failed attempts; try again in 15 minutes');
   });
 
   it('refuses a sign-in in the language the browser asks for, English without one', async () => {

@@ -1,3 +1,4 @@
+import { translate } from '../../i18n/speak';
 import { createHash, randomBytes } from 'node:crypto';
 import { Router, type Request, type Response } from 'express';
 import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';
@@ -46,8 +47,11 @@ export function authRoutes(
 ) {
   const r = Router();
   const { devices } = opts;
-  const refuse = (_req: Request, res: Response) =>
-    res.status(429).json({ error: { code: 'rate_limited', message: 'Too many sign-in attempts; wait a few minutes' } });
+  const refuse = async (req: Request, res: Response) => {
+    const message = 'Too many sign-in attempts; wait a few minutes';
+    const who = await req.speaker?.().catch(() => undefined);
+    res.status(429).json({ error: { code: 'rate_limited', message: who ? (translate(message, who) ?? message) : message } });
+  };
   // Per address and account: the e-mail is normalised exactly as the lookup does, so padding or capitals
   // never open a fresh bucket; a tablet's PIN sign-in is keyed by the person picked.
   const limiter = rateLimit({

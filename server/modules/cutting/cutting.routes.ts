@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { idParam } from '../../../shared/schemas/common';
 import { correctLayInput, createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
@@ -6,9 +6,17 @@ import { sendDownload } from '../../middleware/download';
 import { validated } from '../../middleware/validate';
 import type { BatchDocument, CuttingService, LayDocument } from './cutting.service';
 import { materialTicketQuery } from './material-cut-ticket';
+import { translate } from '../../i18n/speak';
 
 const BATCH_DOCUMENTS: BatchDocument[] = ['marker-list.xlsx', 'marker-list.pdf', 'bundle-register.xlsx', 'bundle-tickets.pdf'];
 const LAY_DOCUMENTS: LayDocument[] = ['cut-ticket.pdf', 'marker-list.xlsx', 'marker-list.pdf', 'bundle-tickets.pdf'];
+
+/** A plan's refused rolls (a roll narrower than its marker) in the person's language, widths in the studio's units. */
+async function spokenPlan<T extends { rollRefusals?: string[] } | null>(req: Request, plan: T): Promise<T> {
+  if (!plan?.rollRefusals?.length) return plan;
+  const who = await req.speaker?.();
+  return who ? { ...plan, rollRefusals: plan.rollRefusals.map((m) => translate(m, who) ?? m) } : plan;
+}
 
 /** Cut plans of batches, the cutter's lays and their documents. */
 export function cuttingRoutes(service: CuttingService) {
@@ -19,10 +27,10 @@ export function cuttingRoutes(service: CuttingService) {
   const cutter = requirePermission('cutting:work');
 
   batches.get('/:id/cut-plan', plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
-    res.json({ cutPlan: await service.cutPlan(actorOf(req), params.id) });
+    res.json({ cutPlan: await spokenPlan(req, await service.cutPlan(actorOf(req), params.id)) });
   }));
   batches.post('/:id/cut-plan', planner, ...validated({ params: idParam, body: createCutPlanInput }, async ({ params, body }, req, res) => {
-    res.status(201).json({ cutPlan: await service.planCut(actorOf(req), params.id, body) });
+    res.status(201).json({ cutPlan: await spokenPlan(req, await service.planCut(actorOf(req), params.id, body)) });
   }));
   for (const doc of BATCH_DOCUMENTS) {
     batches.get(`/:id/${doc}`, plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {

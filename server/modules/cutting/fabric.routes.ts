@@ -1,11 +1,12 @@
 import { format } from 'date-fns';
-import { Router, type Response } from 'express';
+import { Router, type Request, type Response } from 'express';
 import { can } from '../../../shared/auth/permissions';
 import { fabricColumns, setsPrice } from './fabric-fields';
 import { createFabricInput, createRollsInput, updateFabricInput, type RollInput } from '../../../shared/schemas/cutting';
 import { idParam } from '../../../shared/schemas/common';
 import { actorOf, requirePermission, type Actor } from '../../auth/require';
 import { badRequest, conflict, forbidden, notFound } from '../../errors';
+import { translate } from '../../i18n/speak';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { FabricRepository } from './fabric.repository';
@@ -19,13 +20,16 @@ import { LISTED_ERRORS } from '../uploads/table-limits';
  * and as the envelope's `fields` the client lists; the message gives the total. A 400,000-row file with a
  * bad cell in each answers with 20, not 800,000 entries.
  */
-function refuseImport(res: Response, problems: { key: string; row: number; column: string; message: string }[]) {
+async function refuseImport(req: Request, res: Response, problems: { key: string; row: number; column: string; message: string }[]) {
   const listed = problems.slice(0, LISTED_ERRORS);
   const n = problems.length;
   const message = `${n} problem${n > 1 ? 's' : ''} in the packing list${n > LISTED_ERRORS ? ` (the first ${LISTED_ERRORS} are listed)` : ''}; nothing was imported`;
+  // The person's language (English as ever): each sentence by its English wording in the server's dictionary.
+  const who = await req.speaker?.();
+  const say = (text: string) => (who ? (translate(text, who) ?? text) : text);
   res.status(400).json({
-    error: { code: 'validation', message, fields: Object.fromEntries(listed.map((p) => [p.key, p.message])) },
-    rows: listed.map(({ row, column, message: m }) => ({ row, column, message: m })),
+    error: { code: 'validation', message: say(message), fields: Object.fromEntries(listed.map((p) => [p.key, say(p.message)])) },
+    rows: listed.map(({ row, column, message: m }) => ({ row, column, message: say(m) })),
   });
 }
 
@@ -123,7 +127,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     if (!req.file) throw badRequest('file: attach the packing list (CSV or XLSX)', { file: 'Attach the packing list' });
     const { rolls, errors } = await parsePackingList(req.file, { widthMm: f.widthMm, receivedDate: format(opts.now(), 'yyyy-MM-dd') });
     if (errors.length) {
-      refuseImport(res, errors.map((e) => ({ ...e, key: `row ${e.row}${e.column ? ` · ${e.column}` : ''}` })));
+      await refuseImport(req, res, errors.map((e) => ({ ...e, key: `row ${e.row}${e.column ? ` · ${e.column}` : ''}` })));
       return;
     }
     try {
@@ -132,7 +136,7 @@ export function fabricRoutes(fabrics: FabricRepository, audit: AuditRepository, 
     } catch (err) {
       const fields = (err as { fields?: Record<string, string> }).fields;
       if (!fields) throw err;
-      refuseImport(res, Object.entries(fields).map(([key, message]) => ({ key, row: Number(key.replace('row ', '')), column: 'roll', message })));
+      await refuseImport(req, res, Object.entries(fields).map(([key, message]) => ({ key, row: Number(key.replace('row ', '')), column: 'roll', message })));
     }
   });
   return r;
