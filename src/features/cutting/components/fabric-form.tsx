@@ -31,6 +31,7 @@ const decimalText = (text: string, french: boolean) => (french ? text.replace(/[
 
 function draftOf(f: FabricDto | null, imperial: boolean, currency: string, french = false): Draft {
   if (!f) return { name: '', composition: '', width: '', shrinkageLength: '0', shrinkageWidth: '0', isDirectional: false, price: '', priceUnit: imperial ? 'yard' : 'metre', supplierId: '', maxPlies: '40' };
+  const inLanguage = (text: string) => (french ? text.replace('.', ',') : text);
   // The price as the supplier quoted it; older fabrics only have a rate per metre. An imperial studio prices by
   // the yard: a quote per metre is shown per yard there (and saved so once the form is saved).
   const asQuoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
@@ -40,8 +41,8 @@ function draftOf(f: FabricDto | null, imperial: boolean, currency: string, frenc
     composition: f.composition,
     // Inches with fractions to 1/8 (`57 1/2`), as the studio writes them.
     width: imperial ? fmt().fabricWidth(f.widthMm).replace('"', '') : String(f.widthMm / 10),
-    shrinkageLength: String(f.shrinkageLengthPercent ?? f.shrinkagePercent),
-    shrinkageWidth: String(f.shrinkageWidthPercent ?? f.shrinkagePercent),
+    shrinkageLength: inLanguage(String(f.shrinkageLengthPercent ?? f.shrinkagePercent)),
+    shrinkageWidth: inLanguage(String(f.shrinkageWidthPercent ?? f.shrinkagePercent)),
     isDirectional: f.isDirectional,
     price: quoted ? (french ? toMajorText(quoted.amountMinor, currency).replace('.', ',') : toMajorText(quoted.amountMinor, currency)) : '',
     priceUnit: quoted?.per ?? (imperial ? 'yard' : 'metre'),
