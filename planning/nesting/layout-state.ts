@@ -22,21 +22,31 @@ export class LayoutState {
   readonly placed: Uint8Array;
   readonly ov: Float64Array;
   readonly w: Float64Array;
+  /** Row sums of `ov`, kept by `place` so the separator's per-sweep totals are O(n), not O(n²). */
+  private readonly ovSum: Float64Array;
+  /** Overlapping pairs per item: a row sum is reset to exactly 0 when its count reaches 0. */
+  private readonly ovCount: Int32Array;
   private readonly bx0: Float64Array;
   private readonly bx1: Float64Array;
   private readonly by0: Float64Array;
   private readonly by1: Float64Array;
   /**
-   * Broad phase: the strip cut into columns of fixed width along x; `colBits` holds, per column, a
-   * bitset of the placed items whose packed-shape box reaches into it. Candidates come out in
-   * ascending item order, so sums and early cut-offs are those of a plain scan over all items.
+   * Broad phase: the strip cut into a grid of cells (columns along x, rows along y, each about one
+   * mean packed-shape box wide and high); `cellBits` holds, per cell, a bitset of the placed items
+   * whose packed-shape box reaches into it, so a trial position meets only the items near it.
+   * Candidates come out in ascending item order, so sums and early cut-offs are those of a plain
+   * scan over all items.
    */
   private readonly words: number;
   private readonly colWidth: number;
   private readonly cols: number;
-  private readonly colBits: Int32Array;
+  private readonly rowHeight: number;
+  private readonly rows: number;
+  private readonly cellBits: Int32Array;
   private readonly itemC0: Int32Array;
   private readonly itemC1: Int32Array;
+  private readonly itemR0: Int32Array;
+  private readonly itemR1: Int32Array;
   private readonly query: Int32Array;
   /** Per item: √area (the size factor of the overlap cost) and ε = 1 % of the packed shape's diameter. */
   private readonly size: Float64Array;
@@ -58,23 +68,30 @@ export class LayoutState {
     this.placed = new Uint8Array(n);
     this.ov = new Float64Array(n * n);
     this.w = new Float64Array(n * n).fill(1);
+    this.ovSum = new Float64Array(n);
+    this.ovCount = new Int32Array(n);
     this.bx0 = new Float64Array(n);
     this.bx1 = new Float64Array(n);
     this.by0 = new Float64Array(n);
     this.by1 = new Float64Array(n);
     this.words = Math.max(1, Math.ceil(n / 32));
-    let sumW = 0;
+    let sumW = 0, sumH = 0;
     for (const it of model.items) {
       const v = model.variants[it.variants[0]];
       sumW += v.sMaxX - v.sMinX;
+      sumH += Math.min(v.sMaxY - v.sMinY, v.sMaxX - v.sMinX);
     }
     this.colWidth = n > 0 ? Math.max(sumW / n, 1e-12) : 1;
     // Any marker the engine builds is shorter than all boxes side by side; positions beyond the last
-    // column fold into it (still correct, only less selective).
+    // column (or row) fold into it (still correct, only less selective).
     this.cols = Math.min(4096, Math.ceil(sumW / this.colWidth) + 2);
-    this.colBits = new Int32Array(this.cols * this.words);
+    this.rowHeight = n > 0 ? Math.max(sumH / n, model.width / 64, 1e-12) : model.width || 1;
+    this.rows = Math.max(1, Math.min(64, Math.ceil(model.width / this.rowHeight)));
+    this.cellBits = new Int32Array(this.cols * this.rows * this.words);
     this.itemC0 = new Int32Array(n).fill(-1);
     this.itemC1 = new Int32Array(n).fill(-1);
+    this.itemR0 = new Int32Array(n);
+    this.itemR1 = new Int32Array(n);
     this.query = new Int32Array(this.words);
   }
 
@@ -83,22 +100,33 @@ export class LayoutState {
     return c < 0 ? 0 : c >= this.cols ? this.cols - 1 : c;
   }
 
-  /** Fill `query` with the items whose columns meet [x0, x1]. */
-  private gather(x0: number, x1: number): void {
-    const W = this.words, q = this.query, bits = this.colBits;
+  private row(y: number): number {
+    const r = Math.floor(y / this.rowHeight);
+    return r < 0 ? 0 : r >= this.rows ? this.rows - 1 : r;
+  }
+
+  /** Fill `query` with the items whose cells meet [x0, x1] × [y0, y1]. */
+  private gather(x0: number, x1: number, y0: number, y1: number): void {
+    const W = this.words, q = this.query, bits = this.cellBits, R = this.rows;
     q.fill(0);
-    const c1 = this.col(x1);
+    const c1 = this.col(x1), r0 = this.row(y0), r1 = this.row(y1);
     for (let c = this.col(x0); c <= c1; c++) {
-      const o = c * W;
-      for (let w = 0; w < W; w++) q[w] |= bits[o + w];
+      for (let r = r0; r <= r1; r++) {
+        const o = (c * R + r) * W;
+        for (let w = 0; w < W; w++) q[w] |= bits[o + w];
+      }
     }
   }
 
   private register(i: number, on: boolean): void {
-    const W = this.words, word = i >>> 5, bit = 1 << (i & 31);
+    const W = this.words, R = this.rows, word = i >>> 5, bit = 1 << (i & 31);
+    const r0 = this.itemR0[i], r1 = this.itemR1[i];
     for (let c = this.itemC0[i]; c >= 0 && c <= this.itemC1[i]; c++) {
-      if (on) this.colBits[c * W + word] |= bit;
-      else this.colBits[c * W + word] &= ~bit;
+      for (let r = r0; r <= r1; r++) {
+        const o = (c * R + r) * W + word;
+        if (on) this.cellBits[o] |= bit;
+        else this.cellBits[o] &= ~bit;
+      }
     }
   }
 
@@ -124,7 +152,7 @@ export class LayoutState {
   /** Weighted overlap of item i at a trial position; stops early once it exceeds `cutoff`. */
   evaluate(i: number, vi: number, xi: number, yi: number, cutoff: number): number {
     const s = this.model.variants[vi];
-    this.gather(xi + s.sMinX, xi + s.sMaxX);
+    this.gather(xi + s.sMinX, xi + s.sMaxX, yi + s.sMinY, yi + s.sMaxY);
     let sum = 0;
     const row = i * this.n;
     const q = this.query;
@@ -157,12 +185,18 @@ export class LayoutState {
     this.bx1[i] = xi + s.sMaxX;
     this.by0[i] = yi + s.sMinY;
     this.by1[i] = yi + s.sMaxY;
-    const n = this.n;
-    for (let j = 0; j < n; j++) {
-      this.ov[i * n + j] = 0;
-      this.ov[j * n + i] = 0;
+    const n = this.n, ov = this.ov, ovSum = this.ovSum, ovCount = this.ovCount;
+    for (let j = 0, r = i * n; j < n; j++) {
+      const d = ov[r + j];
+      if (d !== 0) {
+        ov[r + j] = 0;
+        ov[j * n + i] = 0;
+        ovSum[j] = --ovCount[j] === 0 ? 0 : ovSum[j] - d;
+      }
     }
-    this.gather(this.bx0[i], this.bx1[i]);
+    ovSum[i] = 0;
+    ovCount[i] = 0;
+    this.gather(this.bx0[i], this.bx1[i], this.by0[i], this.by1[i]);
     const q = this.query;
     for (let w = 0; w < this.words; w++) {
       let m = q[w];
@@ -172,30 +206,42 @@ export class LayoutState {
         m ^= low;
         if (j === i) continue;
         const d = this.pairDepth(i, vi, xi, yi, j);
-        this.ov[i * n + j] = d;
-        this.ov[j * n + i] = d;
+        if (d !== 0) {
+          ov[i * n + j] = d;
+          ov[j * n + i] = d;
+          ovSum[i] += d;
+          ovSum[j] += d;
+          ovCount[i]++;
+          ovCount[j]++;
+        }
       }
     }
     this.itemC0[i] = this.col(this.bx0[i]);
     this.itemC1[i] = this.col(this.bx1[i]);
+    this.itemR0[i] = this.row(this.by0[i]);
+    this.itemR1[i] = this.row(this.by1[i]);
     this.register(i, true);
   }
 
+  /**
+   * Overlap of item i with all others (unweighted). Kept incrementally, so it may carry rounding of
+   * the order of 1e-16 × the depths it has seen; an item with no overlapping pair reads exactly 0
+   * (its pair count says so, not the sum).
+   */
   overlapOf(i: number): number {
-    let s = 0;
-    for (let j = 0, r = i * this.n; j < this.n; j++) s += this.ov[r + j];
-    return s;
+    return this.ovSum[i];
   }
 
+  /** Sum of the pairwise depths (unweighted); exactly 0 when no pair overlaps. */
   totalOverlap(): number {
     let s = 0;
-    for (let k = 0; k < this.ov.length; k++) s += this.ov[k];
+    for (let i = 0; i < this.n; i++) s += this.ovSum[i];
     return s / 2;
   }
 
   collidingItems(): number[] {
     const out: number[] = [];
-    for (let i = 0; i < this.n; i++) if (this.overlapOf(i) > 0) out.push(i);
+    for (let i = 0; i < this.n; i++) if (this.ovCount[i] > 0) out.push(i);
     return out;
   }
 
@@ -228,7 +274,10 @@ export class LayoutState {
   /** Rebuild all positions and depths from a snapshot (every item placed). */
   restore(s: LayoutSnapshot): void {
     this.placed.fill(0);
-    this.colBits.fill(0);
+    this.ov.fill(0);
+    this.ovSum.fill(0);
+    this.ovCount.fill(0);
+    this.cellBits.fill(0);
     this.itemC0.fill(-1);
     this.itemC1.fill(-1);
     for (let i = 0; i < this.n; i++) this.place(i, s.v[i], s.x[i], s.y[i]);

@@ -20,10 +20,21 @@ export interface Nfp {
   /** Cells per unit length along x and y. */
   gx: number;
   gy: number;
-  /** Per cell, built on first use: the edges (by end-point index) that can be nearest to a point of the cell. */
+  /**
+   * Per cell, built on first use: the edges (by end-point index) that can be nearest to a point of the
+   * cell, by increasing distance from the cell to the edge's bounding box (`nearLb2`, squared), so a
+   * nearest-edge search stops at the first edge that cannot beat the best so far.
+   */
   near: (Int32Array | undefined)[];
+  nearLb2: (Float64Array | undefined)[];
   /** Start-point index of the edge ending at each point (rings are closed). */
   prev: Int32Array;
+  /**
+   * Per edge (by end-point index): +1 when the NFP's inside lies to the left of the directed edge,
+   * −1 when to the right. Lets a point whose nearest boundary point is inside an edge be classified
+   * by one cross product instead of an even-odd scan of every edge.
+   */
+  side: Int8Array;
 }
 
 const CELL_OUT = 0;
@@ -77,10 +88,38 @@ function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
   }
   const nfp: Nfp = {
     coords, ringStarts, minX, maxX, minY, maxY, grid: new Uint8Array(gridSize * gridSize).fill(CELL_UNKNOWN), gridSize, gx, gy,
-    near: new Array<Int32Array | undefined>(gridSize * gridSize), prev,
+    near: new Array<Int32Array | undefined>(gridSize * gridSize), nearLb2: new Array<Float64Array | undefined>(gridSize * gridSize), prev, side: new Int8Array(prev.length),
   };
   classifyCells(nfp);
+  ringSides(nfp);
   return nfp;
+}
+
+/**
+ * Which side of each ring is inside, decided once per ring by the even-odd rule at a point just off
+ * the middle of its longest edge (Clipper's orientation convention is not relied on: mirrored copies
+ * reverse it). Rings of a union do not cross, so one edge decides the whole ring.
+ */
+function ringSides(nfp: Nfp): void {
+  const { coords: c, ringStarts: rs, prev, side } = nfp;
+  for (let r = 0; r < rs.length - 1; r++) {
+    let best = -1, bestLen = 0;
+    for (let i = rs[r]; i < rs[r + 1]; i++) {
+      const a = prev[i];
+      const len = Math.hypot(c[2 * i] - c[2 * a], c[2 * i + 1] - c[2 * a + 1]);
+      if (len > bestLen) {
+        bestLen = len;
+        best = i;
+      }
+    }
+    if (best < 0) continue;
+    const a = prev[best];
+    const dx = (c[2 * best] - c[2 * a]) / bestLen, dy = (c[2 * best + 1] - c[2 * a + 1]) / bestLen;
+    const off = 1e-6 * bestLen;
+    const mx = 0.5 * (c[2 * best] + c[2 * a]) - dy * off, my = 0.5 * (c[2 * best + 1] + c[2 * a + 1]) + dx * off;
+    const s = insideEvenOdd(nfp, mx, my) ? 1 : -1;
+    for (let i = rs[r]; i < rs[r + 1]; i++) side[i] = s;
+  }
 }
 
 function cellIndex(v: number, lo: number, g: number, size: number): number {
@@ -140,7 +179,8 @@ function segmentDist2(c: Float64Array, a: number, b: number, px: number, py: num
  * Edges that may be nearest to some point of cell k. The distance to a segment is convex, so its
  * largest value over the cell is at a corner: U = min over edges of that corner maximum bounds the
  * nearest distance of every point in the cell; an edge whose bounding box is farther than U from
- * the cell can never be nearest. A small slack covers points rounded into the cell.
+ * the cell can never be nearest. A small slack covers points rounded into the cell. Kept sorted by that
+ * bounding-box distance (`nearLb2`), so a search can stop early.
  */
 function nearEdges(nfp: Nfp, k: number): Int32Array {
   const { coords: c, prev, gridSize: G, gx, gy } = nfp;
@@ -156,17 +196,40 @@ function nearEdges(nfp: Nfp, k: number): Int32Array {
     if (far < u2) u2 = far;
   }
   const u = Math.sqrt(u2) + slack;
-  const out: number[] = [];
+  if (scratchEdges.length < m) {
+    scratchEdges = new Int32Array(2 * m);
+    scratchLb2 = new Float64Array(2 * m);
+  }
+  const edges = scratchEdges, lb2 = scratchLb2;
+  let count = 0;
   for (let i = 0; i < m; i++) {
     const a = prev[i];
     const ex0 = Math.min(c[2 * a], c[2 * i]), ex1 = Math.max(c[2 * a], c[2 * i]);
     const ey0 = Math.min(c[2 * a + 1], c[2 * i + 1]), ey1 = Math.max(c[2 * a + 1], c[2 * i + 1]);
     const dx = ex0 > x1 ? ex0 - x1 : x0 > ex1 ? x0 - ex1 : 0;
     const dy = ey0 > y1 ? ey0 - y1 : y0 > ey1 ? y0 - ey1 : 0;
-    if (dx * dx + dy * dy <= u * u) out.push(i);
+    if (dx * dx + dy * dy <= u * u) {
+      edges[count] = i;
+      lb2[count++] = dx * dx + dy * dy;
+    }
   }
-  return Int32Array.from(out);
+  const order = new Int32Array(count);
+  for (let e = 0; e < count; e++) order[e] = e;
+  order.sort((p, q) => lb2[p] - lb2[q] || edges[p] - edges[q]);
+  const near = new Int32Array(count);
+  const nearLb2 = new Float64Array(count);
+  for (let e = 0; e < count; e++) {
+    near[e] = edges[order[e]];
+    nearLb2[e] = lb2[order[e]];
+  }
+  nfp.near[k] = near;
+  nfp.nearLb2[k] = nearLb2;
+  return near;
 }
+
+/** Scratch buffers of `nearEdges` (one thread runs one search at a time). */
+let scratchEdges = new Int32Array(256);
+let scratchLb2 = new Float64Array(256);
 
 function insideEvenOdd(nfp: Nfp, px: number, py: number): boolean {
   const c = nfp.coords;
@@ -273,15 +336,37 @@ export function nfpDepth(nfp: Nfp, px: number, py: number): number {
   let cell = nfp.grid[k];
   if (cell === CELL_UNKNOWN) cell = classifyCell(nfp, k);
   if (cell === CELL_OUT) return 0;
-  if (cell === CELL_MIXED && !insideEvenOdd(nfp, px, py)) return 0;
-  const edges = nfp.near[k] ?? (nfp.near[k] = nearEdges(nfp, k));
+  const edges = nfp.near[k] ?? nearEdges(nfp, k);
+  const lb2 = nfp.nearLb2[k]!;
   const c = nfp.coords;
   const prev = nfp.prev;
   let best = Infinity;
-  for (let e = 0; e < edges.length; e++) {
+  let bestEdge = -1;
+  for (let e = 0; e < edges.length && lb2[e] < best; e++) {
     const i = edges[e];
     const d2 = segmentDist2(c, prev[i], i, px, py);
-    if (d2 < best) best = d2;
+    if (d2 < best) {
+      best = d2;
+      bestEdge = i;
+    }
   }
+  if (cell === CELL_MIXED && !insideNear(nfp, bestEdge, px, py)) return 0;
   return Math.sqrt(best);
+}
+
+/**
+ * Inside test from the nearest edge: when the nearest boundary point lies strictly inside that edge,
+ * the segment from the point to it crosses no boundary, so the point is on the edge's inside side.
+ * A nearest point at a vertex (where rings may touch) falls back to the even-odd scan.
+ */
+function insideNear(nfp: Nfp, i: number, px: number, py: number): boolean {
+  const c = nfp.coords;
+  const a = nfp.prev[i];
+  const ax = c[2 * a], ay = c[2 * a + 1];
+  const dx = c[2 * i] - ax, dy = c[2 * i + 1] - ay;
+  const dot = (px - ax) * dx + (py - ay) * dy;
+  const len2 = dx * dx + dy * dy;
+  if (dot <= 0 || dot >= len2) return insideEvenOdd(nfp, px, py);
+  const cross = dx * (py - ay) - dy * (px - ax);
+  return nfp.side[i] * cross > 0;
 }

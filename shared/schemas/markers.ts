@@ -45,6 +45,15 @@ export interface MarkerDrawingDto {
   placements: MarkerPlacementDto[];
 }
 
+/** One point of a marker run's progress: the best length found by then and its density. */
+export interface MarkerProgressPointDto {
+  /** Since the run started. */
+  elapsedMs: number;
+  lengthMm: number;
+  /** Piece area ÷ (length × width), 0–1. */
+  utilisation: number;
+}
+
 export interface MarkerDto {
   id: number;
   styleId: number;
@@ -66,6 +75,10 @@ export interface MarkerDto {
   complete: boolean | null;
   error: string;
   pieceCount: number;
+  /** Worker threads the run uses now (0 when not running). */
+  cores: number;
+  /** Best length and density over time, oldest first: live while running, as stored once finished. */
+  progress: MarkerProgressPointDto[];
   createdAt: string;
   drawing?: MarkerDrawingDto;
 }

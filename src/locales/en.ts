@@ -100,6 +100,8 @@ export const en = {
     waitingFor_other: '{{count}} logs waiting for {{name}}: sent under {{name}}’s name when they sign in on this phone, never under yours.',
     sent_one: '{{count}} saved log sent.',
     sent_other: '{{count}} saved logs sent.',
+    signOutWaiting_one: "{{count}} log you made is still waiting for the network. It stays on this phone and is sent under your name when you sign in here again, never under anyone else's.",
+    signOutWaiting_other: "{{count}} logs you made are still waiting for the network. They stay on this phone and are sent under your name when you sign in here again, never under anyone else's.",
     refused: 'Refused: {{reasons}}',
     findCard: 'Find a bundle',
     scan: 'Scan the ticket’s QR code',

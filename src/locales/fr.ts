@@ -102,6 +102,8 @@ export const fr: Dictionary = {
     waitingFor_other: '{{count}} saisies attendent {{name}} : envoyées au nom de {{name}} quand cette personne se connecte sur ce téléphone, jamais au vôtre.',
     sent_one: '{{count}} saisie gardée a été envoyée.',
     sent_other: '{{count}} saisies gardées ont été envoyées.',
+    signOutWaiting_one: '{{count}} saisie que vous avez faite attend encore le réseau. Elle reste sur ce téléphone et sera envoyée à votre nom quand vous vous reconnecterez ici, jamais au nom de quelqu’un d’autre.',
+    signOutWaiting_other: '{{count}} saisies que vous avez faites attendent encore le réseau. Elles restent sur ce téléphone et seront envoyées à votre nom quand vous vous reconnecterez ici, jamais au nom de quelqu’un d’autre.',
     refused: 'Refusé : {{reasons}}',
     findCard: 'Trouver un paquet',
     scan: 'Scanner le code QR du ticket',

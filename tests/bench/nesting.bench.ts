@@ -5,9 +5,10 @@
  *     one instance; prints ONE JSON line: {instance, stripWidth, length, density, ratio (to the best
  *     known), loadAverage, seconds, valid, placements: [{item, rotation, x, y}]} (rotate the item
  *     polygon about its origin, then translate).
- *   npm run bench:nesting -- --all --seconds N [--seed S] [--garments --garment-seconds G]
- *     every instance in the folder; prints a table of density against the best known; with
- *     --garments also the garment-marker table (below), G s per marker (default 10).
+ *   npm run bench:nesting -- --all --seconds N [--seed S] [--json] [--garments --garment-seconds G]
+ *     every instance in the folder; prints a table of density against the best known (with --json
+ *     instead one JSON line per instance, as --instance prints it); with --garments also the
+ *     garment-marker table (below), G s per marker (default 10).
  *   npm run bench:nesting -- --garments [--garment-seconds G] [--seed S]
  *     only the garment markers: the demo styles SR-101 (shirt dress) and SR-202 (lined dress), per
  *     material, 2, 4 and 6 garments in the demo batch's sizes (tests/bench/nesting/demo-markers.ts);
@@ -141,6 +142,15 @@ async function main(): Promise<void> {
   if (args.garments && !args.all) return benchGarments(args.garmentSeconds, args.seed);
   const dir = datasetDir('json');
   const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
+  if (args.json) {
+    // One JSON line per instance, as --instance --json prints it.
+    for (const f of files) {
+      const { errors, ...out } = await benchInstance(path.join(dir, f), args.seconds, args.seed);
+      if (errors.length) process.stderr.write(errors.join('\n') + '\n');
+      process.stdout.write(JSON.stringify(out) + '\n');
+    }
+    return;
+  }
   const rows: string[] = ['| instance | density % | best known % (sparrow S1-rec) | ratio | length | valid | load avg |', '|---|---|---|---|---|---|---|'];
   process.stdout.write(rows.join('\n') + '\n');
   for (const f of files) {

@@ -54,9 +54,7 @@ const PAGES: { path: string; permission?: Permission }[] = [
 const PAGES_STILL_MOVING = new Set<string>([
   paths.batch.getHref(1),
   paths.people.getHref(),
-  paths.styleGrading.getHref(1),
   paths.markers.getHref(),
-  paths.fabrics.getHref(),
   paths.line.getHref(1),
   paths.floor.getHref(1),
   paths.pay.getHref(),

@@ -11,7 +11,7 @@ afterAll(async () => {
 });
 
 describe('markers: the owner builds a marker for the demo batch', () => {
-  it('starts a marker, watches the progress bar, sees utilisation and the SVG holds every piece', async () => {
+  it('starts a marker, watches the progress bar, sees utilisation, the progress chart and the SVG holds every piece', async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
     await signInAs(page, 'owner@tamarind.example');
     await page.getByRole('link', { name: 'Markers' }).click();
@@ -23,6 +23,8 @@ describe('markers: the owner builds a marker for the demo batch', () => {
     await expect.poll(() => page.getByTestId('marker-utilisation').isVisible(), { timeout: 240_000, interval: 1000 }).toBe(true);
     const util = Number((await page.getByTestId('marker-utilisation').textContent())!.replace(/[^\d.]/g, ''));
     expect(util).toBeGreaterThan(30);
+    // The run's length and density over time, drawn once recharts has loaded on its own.
+    await expect.poll(() => page.getByRole('img', { name: 'Best marker length and density over the run' }).isVisible(), { timeout: 20_000 }).toBe(true);
     await shot(page, 'owner-marker-done');
     const id = await page.evaluate(async () => (await (await fetch('/api/markers')).json()).markers[0].id as number);
     const svg = await page.evaluate(async (mid) => (await fetch(`/api/markers/${mid}/svg`)).text(), id);

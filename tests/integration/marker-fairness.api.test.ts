@@ -12,8 +12,8 @@ import { DEMO, DEMO_PASSWORD, signIn, TEST_TODAY } from '../fixtures/test-app';
 type Agent = Awaited<ReturnType<typeof signIn>>;
 
 // Two studios share the one marker queue. Studio A (the demo studio) fills its share of places; studio B
-// then starts one marker. The queue runs one marker at a time, so the order markers finish in is the
-// order they ran in (recorded through the queue's onDone hook).
+// then starts one marker. The queue is given one core, so it runs one marker at a time and the order markers
+// finish in is the order they ran in (recorded through the queue's onDone hook).
 let ctx: AppControl;
 let ownerA: Agent, ownerB: Agent;
 let fabricB: number, styleB: number;
@@ -25,7 +25,7 @@ beforeAll(async () => {
   await seedDemoStudio(ds, { password: DEMO_PASSWORD, pinPrefix: '40', today: TEST_TODAY });
   const env = loadEnv({ NODE_ENV: 'test', LOGIN_RATE_LIMIT: '1000', NESTING_SECONDS: '1' });
   const control: { current?: AppControl } = {};
-  const options: MarkerQueueOptions = { maxQueuedPerStudio: MAX_WAITING, onDone: async (_studio, id) => void finished.push(id) };
+  const options: MarkerQueueOptions = { maxQueuedPerStudio: MAX_WAITING, cores: 1, onDone: async (_studio, id) => void finished.push(id) };
   const app = createApp({ ds, env, clientDir: '/nonexistent', control, markerQueue: options });
   ctx = control.current!;
   ownerA = await signIn(app, DEMO.owner);

@@ -34,9 +34,9 @@ beforeAll(async () => {
   [owner, cutter, machinist] = await Promise.all([login(app, DEMO.owner), login(app, DEMO.cutter), login(app, DEMO.machinist)]);
 });
 
-/** A second app on the same database whose queue runs a test double of the worker. */
+/** A second app on the same database whose queue runs a test double of the worker, one job at a time. */
 async function appWithWorker(entry: string, overrunMs: number) {
-  const a = createApp({ ds, env, clientDir: '/nonexistent', markerQueue: { workerEntry: new URL(entry, import.meta.url).href, overrunMs } });
+  const a = createApp({ ds, env, clientDir: '/nonexistent', markerQueue: { workerEntry: new URL(entry, import.meta.url).href, overrunMs, cores: 1 } });
   return login(a, DEMO.owner);
 }
 
@@ -50,6 +50,12 @@ describe('markers', () => {
     expect(done.status).toBe('done');
     expect(done.utilisation).toBeGreaterThan(0.3);
     expect(done.lengthMm).toBeGreaterThan(0);
+    // Progress over time: lengths never grow, the last point is the stored marker, density = area ÷ (L × W).
+    const points = done.progress as { elapsedMs: number; lengthMm: number; utilisation: number }[];
+    expect(points.length).toBeGreaterThan(0);
+    points.slice(1).forEach((p, k) => expect(p.lengthMm).toBeLessThanOrEqual(points[k].lengthMm));
+    expect(points.at(-1)!.lengthMm).toBeCloseTo(done.lengthMm, 6);
+    expect(points.at(-1)!.utilisation).toBeCloseTo(done.utilisation, 6);
     const full = (await cutter.get(`/api/markers/${done.id}`)).body.marker;
     expect(full.drawing.placements.length).toBe(full.pieceCount);
     const svg = await cutter.get(`/api/markers/${done.id}/svg`).buffer(true).parse((r, cb) => { let s = ''; r.on('data', (c: Buffer) => (s += c)); r.on('end', () => cb(null, s)); });
@@ -113,6 +119,19 @@ describe('markers', () => {
     const size = await owner.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { XXL: 2 } });
     expect(size.body.error.fields['ratio.XXL']).toMatch(/not in the style's size run/);
   });
+
+  it('runs a marker alone on both cores and splits them when a second marker starts', async () => {
+    const a = await login(createApp({ ds, env, clientDir: '/nonexistent', markerQueue: { cores: 2 } }), DEMO.owner);
+    const first = (await a.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { S: 2 }, seconds: 6 })).body.marker;
+    const alone = await poll(a, first.id, (m) => (m as { cores?: number }).cores === 2, 20_000);
+    expect(alone.cores).toBe(2);
+    const second = (await a.post('/api/markers').send({ styleId: 1, fabricId: 1, ratio: { M: 2 }, seconds: 4 })).body.marker;
+    const sharing = await poll(a, second.id, (m) => (m as { cores?: number }).cores === 1, 20_000);
+    expect(sharing.status).toBe('running');
+    expect((await a.get(`/api/markers/${first.id}?drawing=false`)).body.marker.cores).toBe(1);
+    const ends = await Promise.all([first.id, second.id].map((id) => poll(a, id, (m) => m.status !== 'queued' && m.status !== 'running', 30_000)));
+    expect(ends.map((m) => m.status)).toEqual(['done', 'done']);
+  }, 60_000);
 
   it('cancels a queued marker', async () => {
     const a = await appWithWorker('../../server/workers/testing/hanging.worker.ts', 60_000);

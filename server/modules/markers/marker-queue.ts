@@ -1,7 +1,7 @@
 import { AppError } from '../../errors';
 import { FairQueue } from './fair-queue';
-import type { NestingRunHandle } from '../../workers/nesting-runner';
-import { executeMarkerJob, type LiveProgress, type MarkerDoneHook } from './marker-job';
+import type { NestingSearchHandle } from '../../workers/nesting-search';
+import { defaultMarkerLanes, executeMarkerJob, type LiveProgress, type MarkerDoneHook } from './marker-job';
 import type { MarkerJobInput } from './marker-input';
 import type { MarkerRepository } from './marker.repository';
 
@@ -14,6 +14,11 @@ export interface MarkerQueueOptions {
   onDone?: MarkerDoneHook;
   /** Markers one studio may have waiting (not counting the one running); default {@link MAX_QUEUED_PER_STUDIO}. */
   maxQueuedPerStudio?: number;
+  /**
+   * Worker threads all marker runs share (default {@link defaultMarkerLanes}: both cores). One job alone
+   * takes them all; when another starts, they are split between the running jobs.
+   */
+  cores?: number;
 }
 
 /** Default cap on one studio's waiting markers. */
@@ -47,10 +52,12 @@ export interface MarkerQueue {
 }
 
 /**
- * The marker job queue: one nesting run at a time (the machine has 2 cores and the request thread keeps
- * one), taken from the studios' waiting markers in turn ({@link FairQueue}), each studio holding at most
- * `maxQueuedPerStudio` waiting. Each job runs on a worker thread; progress is kept in memory for
- * GET /api/markers/:id; the finished marker is checked by the independent layout checker and stored.
+ * The marker job queue: markers are taken from the studios' waiting markers in turn ({@link FairQueue}),
+ * each studio holding at most `maxQueuedPerStudio` waiting. Runs share `cores` worker threads: a job running
+ * alone searches on all of them (independent seeds, the shortest marker kept); when a second job starts,
+ * the first gives up a thread to it, and a job left alone takes the freed threads back. As many jobs run
+ * at once as there are cores. Progress is kept in memory for GET /api/markers/:id; the finished marker is
+ * checked by the independent layout checker and stored.
  */
 export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOptions = {}): MarkerQueue & { queuedCount(studioId: number): number } {
   const maxQueued = opts.maxQueuedPerStudio ?? MAX_QUEUED_PER_STUDIO;
@@ -58,23 +65,38 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
   /** Places taken by a caller between its cap check and its enqueue (the marker row is being stored). */
   const reserved = new Map<number, number>();
   const live = new Map<number, LiveProgress>();
-  const running = new Map<number, NestingRunHandle>();
+  const running = new Map<number, NestingSearchHandle>();
+  const cores = Math.max(1, Math.floor(opts.cores ?? defaultMarkerLanes()));
+  /** Jobs started and not yet finished (a job is counted before its worker handle exists). */
+  let active = 0;
   const idleWaiters: (() => void)[] = [];
   /** Jobs queued here and not yet started, so a sweep does not queue them twice in this process. */
   const pending = new Set<number>();
-  let busy = false;
   let stopped = false;
+
+  /** Split the cores between the running jobs: the earliest-started get the remainder. */
+  function rebalance() {
+    const handles = [...running.values()];
+    handles.forEach((h, k) => h.setLanes(Math.floor(cores / handles.length) + (k < cores % handles.length ? 1 : 0)));
+  }
 
   async function run(studioId: number, id: number, job: MarkerJobInput) {
     pending.delete(id);
     if (stopped) return;
+    // Lanes to start with: an equal share of the cores among the jobs running once this one starts.
+    const lanes = Math.max(1, Math.floor(cores / active));
     try {
       await executeMarkerJob(markers, studioId, id, job, {
         overrunMs: opts.overrunMs,
         workerEntry: opts.workerEntry,
         onDone: opts.onDone,
+        lanes,
         onProgress: (p) => live.set(id, p),
-        onStart: (h) => running.set(id, h),
+        onStart: (h) => {
+          running.set(id, h);
+          live.set(id, { bestLength: null, elapsedMs: 0, iteration: 0, lanes: h.lanes(), history: [] });
+          rebalance();
+        },
         isStopped: () => stopped,
       });
     } catch (err) {
@@ -83,24 +105,27 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
     } finally {
       running.delete(id);
       live.delete(id);
+      rebalance();
     }
   }
 
-  /** Runs waiting jobs one after another, the studios taking turns, until none is left. */
-  async function drain() {
-    if (busy) return;
-    busy = true;
-    try {
-      for (let next = waiting.shift(); next && !stopped; next = waiting.shift()) {
-        const { studioId, item } = next;
-        await run(studioId, item.id, item.job).catch(async (err: unknown) => {
+  /** Starts waiting jobs, the studios taking turns, while fewer than `cores` run. */
+  function drain() {
+    while (!stopped && active < cores && waiting.size) {
+      const next = waiting.shift();
+      if (!next) break;
+      active++;
+      const { studioId, item } = next;
+      void run(studioId, item.id, item.job)
+        .catch(async (err: unknown) => {
           const message = err instanceof Error ? err.message : String(err);
           await markers.update(studioId, item.id, { status: 'failed', error: `The marker job failed: ${message}` }).catch(() => undefined);
+        })
+        .finally(() => {
+          active--;
+          drain();
+          if ((active === 0 && !waiting.size) || stopped) idleWaiters.splice(0).forEach((resolve) => resolve());
         });
-      }
-    } finally {
-      busy = false;
-      if (!waiting.size || stopped) idleWaiters.splice(0).forEach((resolve) => resolve());
     }
   }
 
@@ -129,11 +154,16 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
       if (pending.has(id) || running.has(id)) return;
       pending.add(id);
       waiting.push(studioId, { id, job });
-      void drain();
+      drain();
     },
     /** Waiting markers of a studio (not counting a running one). */
     queuedCount: (studioId: number) => waiting.countOf(studioId),
-    progress: (id: number) => live.get(id),
+    progress(id: number) {
+      const p = live.get(id);
+      const h = running.get(id);
+      // Lanes change between progress reports when jobs start or end: read them from the run itself.
+      return p && h ? { ...p, lanes: h.lanes() } : p;
+    },
     isRunning: (id: number) => running.has(id),
     cancel(id: number): boolean {
       const h = running.get(id);
@@ -145,7 +175,7 @@ export function createMarkerQueue(markers: MarkerRepository, opts: MarkerQueueOp
       pending.delete(id);
       return false;
     },
-    idle: () => (busy || waiting.size ? new Promise<void>((resolve) => idleWaiters.push(resolve)) : Promise.resolve()),
+    idle: () => (active || waiting.size ? new Promise<void>((resolve) => idleWaiters.push(resolve)) : Promise.resolve()),
     async stop() {
       stopped = true;
       waiting.clear();

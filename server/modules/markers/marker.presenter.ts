@@ -28,6 +28,8 @@ export function presentMarker(m: MarkerEntity, live?: LiveProgress, withDrawing 
     complete: result ? result.complete : null,
     error: m.error,
     pieceCount: input ? input.engine.pieces.reduce((a, p) => a + p.quantity * (p.mirrored ? 2 : 1), 0) : 0,
+    cores: live?.lanes ?? 0,
+    progress: live?.history ?? result?.progress ?? [],
     createdAt: new Date(m.createdAt).toISOString(),
   };
   if (withDrawing && input && result) dto.drawing = markerDrawing(input, result);

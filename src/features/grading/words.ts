@@ -121,6 +121,9 @@ const en = {
     ok: 'ok',
     error: 'error',
     note: 'Each cell: second side minus first side (the sleeve cap carries its intended ease). Tolerances are common practice.',
+    mismatch: '{{seam}}, size {{size}}: off by {{off}} (allowed ±{{allowed}})',
+    flipped: '{{piece}} {{size}}: outline turned clockwise',
+    crosses: '{{piece}} {{size}}: outline crosses itself',
   },
   rules: {
     outlinePoint: 'outline point {{n}}',
@@ -161,6 +164,7 @@ const en = {
     designation: 'EN {{designation}}',
     grade: 'grade',
     note: 'Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval (cm) under each size.',
+    noteImperial: 'Small grey figures between sizes: the grade from one size to the next. EN 13402-3 bust interval under each size.',
   },
   pom: {
     bust: 'Bust', 'under-bust': 'Under bust', 'upper-chest': 'Upper chest', waist: 'Waist', 'waist-straight': 'Waist straight',
@@ -187,6 +191,7 @@ const en = {
     to: 'to',
     customers: 'Customers',
     en13402: 'Customers per EN 13402-3 bust interval (cm)',
+    en13402Imperial: 'Customers per EN 13402-3 bust interval',
   },
   pattern: {
     drawn: '{{piece}} drawn to scale',
@@ -283,7 +288,7 @@ export const words: AreaWords<typeof en> = {
     svgAll: 'SVG (toutes les tailles)',
     dxfAll: 'DXF (toutes les tailles)',
     printA4: 'Imprimer 1:1, A4',
-    printLetter: 'Imprimer 1:1, Letter',
+    printLetter: 'Imprimer 1:1, Lettre US',
     tiledNote: 'L’impression en pages a des recouvrements, des repères d’assemblage et un carré de contrôle : mesurez-le avant de couper.',
     gradeRule: 'Règle de gradation',
     noPatternPieces: 'Pas encore de pièces de patron.',
@@ -324,6 +329,9 @@ export const words: AreaWords<typeof en> = {
       ok: 'ok',
       error: 'erreur',
       note: 'Chaque case : second côté moins premier côté (la tête de manche porte son embu prévu). Les tolérances sont celles de l’usage.',
+      mismatch: '{{seam}}, taille {{size}} : écart de {{off}} (tolérance ±{{allowed}})',
+      flipped: '{{piece}} {{size}} : le contour s’est retourné (sens horaire)',
+      crosses: '{{piece}} {{size}} : le contour se croise',
     },
     rules: {
       outlinePoint: 'point du contour {{n}}',
@@ -364,6 +372,7 @@ export const words: AreaWords<typeof en> = {
       designation: 'EN {{designation}}',
       grade: 'gradation',
       note: 'Petits chiffres gris entre les tailles : la gradation d’une taille à la suivante. Sous chaque taille, l’intervalle de tour de poitrine EN 13402-3 (cm).',
+      noteImperial: 'Petits chiffres gris entre les tailles : la gradation d’une taille à la suivante. Sous chaque taille, l’intervalle de tour de poitrine EN 13402-3.',
     },
     pom: {
       bust: 'Tour de poitrine', 'under-bust': 'Tour sous poitrine', 'upper-chest': 'Tour de poitrine haut', waist: 'Tour de taille', 'waist-straight': 'Tour de taille à l’horizontale',
@@ -390,6 +399,7 @@ export const words: AreaWords<typeof en> = {
       to: 'à',
       customers: 'Clientes',
       en13402: 'Clientes par intervalle de tour de poitrine EN 13402-3 (cm)',
+      en13402Imperial: 'Clientes par intervalle de tour de poitrine EN 13402-3',
     },
     pattern: {
       drawn: '{{piece}} dessinée à l’échelle',
@@ -424,16 +434,16 @@ export const words: AreaWords<typeof en> = {
     photo: {
       sheets: {
         sheetA4: 'Feuille, A4',
-        sheetLetter: 'Feuille, Letter',
+        sheetLetter: 'Feuille, Lettre US',
         borderA4: 'Cadre sur pages A4',
-        borderLetter: 'Cadre sur pages Letter',
+        borderLetter: 'Cadre sur pages Lettre US',
         borderWhole: 'Cadre sur une grande page',
       },
       help: 'Imprimez une feuille d’étalonnage à 100 % et vérifiez sa barre de {{bar}} à la règle. Posez la pièce de papier à plat sur la zone bleue (ou, pour une grande pièce, sur une table unie à l’intérieur du cadre), puis photographiez d’au-dessus avec les quatre repères d’angle visibles. La photo est détourée sur cet appareil ; seul le contour final est enregistré.',
       print: 'Imprimer :',
       photographedOn: 'Photographiée sur',
       onA4: 'la feuille A4',
-      onLetter: 'la feuille Letter',
+      onLetter: 'la feuille Lettre US',
       onBorder: 'le cadre',
       photo: 'Photo de la pièce',
       tracing: 'Détourage de la photo…',

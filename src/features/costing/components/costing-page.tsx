@@ -15,6 +15,7 @@ import { AddTrimForm } from './add-trim-form';
 import { paths } from '@/config/paths';
 import { useTranslation } from '@/lib/i18n';
 import { MM_PER_YARD } from '@shared/units/units';
+import { area } from '../words';
 
 
 function Figure({ label, value, testId, strong }: { label: string; value: string; testId: string; strong?: boolean }) {
@@ -31,7 +32,7 @@ function PlannedActual({ sheet }: { sheet: CostingSheetDto }) {
   const a = sheet.actual;
   const rows: [string, string, string][] = [
     [t('costingPage.fabricPerGarment'), a.fabricMmPerGarment.planned ? fmt().fabricLength(a.fabricMmPerGarment.planned) : '—', a.fabricMmPerGarment.actual !== null ? fmt().fabricLength(a.fabricMmPerGarment.actual) : t('costingPage.notCut')],
-    [t('costingPage.pliesSpread'), String(a.layPlies.planned || '—'), a.layPlies.cut ? String(a.layPlies.cut) : t('costingPage.notCut')],
+    [t('costingPage.pliesSpread'), a.layPlies.planned ? fmt().number(a.layPlies.planned) : '—', a.layPlies.cut ? fmt().number(a.layPlies.cut) : t('costingPage.notCut')],
     [t('costingPage.samPerGarment'), fmt().number(a.labourMinutesPerGarment.planned), a.labourMinutesPerGarment.actual !== null ? t('costingPage.soFar', { value: fmt().number(a.labourMinutesPerGarment.actual) }) : t('costingPage.noWork')],
     [t('costingPage.payLogged'), '—', money(a.labourPaidMinor, sheet.currency)],
   ];
@@ -78,7 +79,7 @@ export function CostingPage() {
         actions={
           <>
             <Link className="btn-quiet" to={paths.batch.getHref(id)}>{t('costingPage.back')}</Link>
-            <button type="button" className="btn-primary" onClick={handleDownload}>Download XLSX</button>
+            <button type="button" className="btn-primary" onClick={handleDownload}>{t(`${area}.download`)}</button>
           </>
         }
       />
@@ -112,32 +113,32 @@ export function CostingPage() {
         <Card
           title={
             <span className="flex flex-wrap items-center justify-between gap-2">
-              <span>Cost lines (bill of materials, labour, overheads)</span>
+              <span>{t(`${area}.lines`)}</span>
               <label className="flex items-center gap-2 text-sm font-normal text-ink-700">
-                Labour costed by
-                <select aria-label="Labour costed by" className="field-input w-auto py-1" value={sheet.settings.labourBasis} disabled={!canEdit || saveSettings.isPending} onChange={(e) => saveSettings.mutate({ styleId: sheet.style.id, labourBasis: e.target.value as LabourBasis })}>
-                  <option value="sam">standard minutes × cost per minute</option>
-                  <option value="piece-rates">piece rates</option>
+                {t(`${area}.labourBy`)}
+                <select aria-label={t(`${area}.labourBy`)} className="field-input w-auto py-1" value={sheet.settings.labourBasis} disabled={!canEdit || saveSettings.isPending} onChange={(e) => saveSettings.mutate({ styleId: sheet.style.id, labourBasis: e.target.value as LabourBasis })}>
+                  <option value="sam">{t(`${area}.bySam`)}</option>
+                  <option value="piece-rates">{t(`${area}.byPieceRates`)}</option>
                 </select>
-                {sheet.labour.isEstimate ? <Badge tone="gold">estimate</Badge> : null}
+                {sheet.labour.isEstimate ? <Badge tone="gold">{t(`${area}.estimate`)}</Badge> : null}
               </label>
             </span>
           }
         >
           <TrimPriceEditor sheet={sheet} canEdit={canEdit} />
-          <p className="mt-2 text-xs text-ink-600">Change a unit price and press Enter: every total follows. Costs are shown for the middle size; the XLSX has every size.</p>
+          <p className="mt-2 text-xs text-ink-600">{t(`${area}.linesHint`)}</p>
         </Card>
         {canEdit ? (
-          <Card title="Add a trim (zip, buttons, shoulder pads, thread, labels)">
+          <Card title={t(`${area}.addTrimTitle`)}>
             <AddTrimForm styleId={sheet.style.id} currency={sheet.currency} />
           </Card>
         ) : null}
         {canEdit ? (
-          <Card title="Costing settings for this style">
+          <Card title={t(`${area}.settingsTitle`)}>
             <CostingSettingsForm key={JSON.stringify(sheet.settings)} sheet={sheet} />
           </Card>
         ) : null}
-        <Card title="Planned against actual">
+        <Card title={t(`${area}.plannedActual`)}>
           <PlannedActual sheet={sheet} />
         </Card>
       </div>

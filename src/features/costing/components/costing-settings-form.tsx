@@ -6,9 +6,13 @@ import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useUpdateCostingSettings } from '../api/costing-queries';
 import { parseMajor, toMajorText } from '@shared/units/money';
+import { useTranslation } from '@/lib/i18n';
+import { area } from '../words';
 
 /** Labour cost per minute, overheads, wastage, margin and the retail multiplier of the style. */
 export function CostingSettingsForm({ sheet }: { sheet: CostingSheetDto }) {
+  const { t } = useTranslation();
+  const w = (key: string, values?: Record<string, unknown>) => t(`${area}.settings.${key}`, values);
   const s = sheet.settings;
   const save = useUpdateCostingSettings();
   const [v, setV] = useState({
@@ -37,14 +41,14 @@ export function CostingSettingsForm({ sheet }: { sheet: CostingSheetDto }) {
   );
   return (
     <form onSubmit={handleSubmit} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-5" noValidate>
-      {field('labour', `Labour cost per minute (${sheet.currency})`, 'labourCostPerMinuteMinor', 'Monthly wage ÷ working minutes, ÷ line efficiency')}
-      {field('overhead', 'Overheads, % of materials and labour', 'overheadPercent')}
-      {field('wastage', 'Fabric wastage %', 'wastagePercent', '3–5 % is common practice')}
-      {field('margin', 'Margin on wholesale price %', 'marginPercent', 'Wholesale = cost ÷ (1 − margin)')}
-      {field('multiplier', 'Retail multiplier', 'retailMultiplier', 'Keystone is 2 × wholesale')}
+      {field('labour', w('labour', { currency: sheet.currency }), 'labourCostPerMinuteMinor', w('labourHint'))}
+      {field('overhead', w('overhead'), 'overheadPercent')}
+      {field('wastage', w('wastage'), 'wastagePercent', w('wastageHint'))}
+      {field('margin', w('margin'), 'marginPercent', w('marginHint'))}
+      {field('multiplier', w('multiplier'), 'retailMultiplier', w('multiplierHint'))}
       <div className="sm:col-span-2 lg:col-span-5">
         <ErrorNote error={save.error} />
-        <button className="btn-quiet" type="submit" disabled={save.isPending}>Save settings</button>
+        <button className="btn-quiet" type="submit" disabled={save.isPending}>{w('save')}</button>
       </div>
     </form>
   );

@@ -3,22 +3,26 @@ import type { CostingLineDto, CostingSheetDto } from '@shared/schemas/costing';
 import { ErrorNote } from '@/components/ui/page';
 import { useUpdateTrim } from '../api/costing-queries';
 import { parseMajor, toMajorText } from '@shared/units/money';
-import { formatMoney as money } from '@/lib/format';
+import { MM_PER_YARD } from '@shared/units/units';
+import { fmt as formats, formatMoney as money } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
+import { area } from '../words';
 
 function PriceInput({ line, sheet }: { line: CostingLineDto; sheet: CostingSheetDto }) {
+  const { t } = useTranslation();
   const update = useUpdateTrim();
   const [text, setText] = useState(toMajorText(line.priceMinor ?? 0, sheet.currency));
   const [error, setError] = useState('');
   const save = () => {
     const value = parseMajor(text, sheet.currency);
-    if (value === null) return setError('Enter an amount, e.g. 5.50');
+    if (value === null) return setError(t(`${area}.priceNeeded`, { example: '5.50' }));
     setError('');
     if (value !== line.priceMinor) update.mutate({ id: line.refId!, unitPriceMinor: value });
   };
   return (
     <div>
       <input
-        aria-label={`Unit price, ${line.description}`}
+        aria-label={t(`${area}.unitPriceOf`, { line: line.description })}
         inputMode="decimal"
         className="field-input w-28 text-right"
         value={text}
@@ -34,22 +38,38 @@ function PriceInput({ line, sheet }: { line: CostingLineDto; sheet: CostingSheet
 
 /** The bill of materials with an editable unit price per trim; the sheet re-prices on save. */
 export function TrimPriceEditor({ sheet, canEdit }: { sheet: CostingSheetDto; canEdit: boolean }) {
+  const { t } = useTranslation();
   const base = sheet.sizes[Math.floor(sheet.sizes.length / 2)]?.size ?? '';
   const fmt = (v: number) => money(v, sheet.currency);
+  const f = formats();
+  const imperial = f.settings.unitSystem === 'imperial';
+  // Fabric lines come in metres (quantity) and per metre (price): shown in the studio's fabric length, a yard's price in yards.
+  const isMetres = (l: CostingLineDto) => l.kind === 'fabric' && l.unit === 'm';
+  const quantity = (l: CostingLineDto) => {
+    const q = l.quantities[base] ?? 0;
+    if (l.percent !== null) return `${f.number(l.percent)} %`;
+    if (isMetres(l)) return f.fabricLength(q * 1000);
+    return `${f.number(q, 3)} ${t(`${area}.units.${l.unit}`, { defaultValue: l.unit })}`;
+  };
+  const price = (l: CostingLineDto) =>
+    l.priceMinor === null ? '—' : fmt(isMetres(l) && imperial ? Math.round((l.priceMinor * MM_PER_YARD) / 1000) : l.priceMinor);
   return (
     <div className="divide-y divide-calico-200 rounded-card border border-calico-200 bg-white text-sm">
       <div className="hidden grid-cols-[1fr_7rem_8rem_8rem] gap-3 bg-thread-700 px-3 py-2 font-medium text-calico-50 sm:grid">
-        <span>Cost line</span><span className="text-right">Per garment</span><span className="text-right">Unit price</span><span className="text-right">Cost ({base})</span>
+        <span>{t(`${area}.cols.line`)}</span>
+        <span className="text-right">{t(`${area}.cols.perGarment`)}</span>
+        <span className="text-right">{t(`${area}.cols.unitPrice`)}</span>
+        <span className="text-right">{t(`${area}.cols.cost`, { size: base })}</span>
       </div>
       {sheet.lines.map((l, i) => (
         <div key={`${l.kind}-${l.refId ?? i}`} className="grid grid-cols-2 items-center gap-2 px-3 py-2 odd:bg-calico-50 sm:grid-cols-[1fr_7rem_8rem_8rem] sm:gap-3">
           <span className="col-span-2 sm:col-span-1">
-            <span className="mr-2 text-xs uppercase tracking-wide text-ink-600">{l.kind}</span>
+            <span className="mr-2 text-xs uppercase tracking-wide text-ink-600">{t(`${area}.kinds.${l.kind}`)}</span>
             {l.description}
           </span>
-          <span className="sm:text-right">{l.percent !== null ? `${l.percent} %` : `${+(l.quantities[base] ?? 0).toFixed(3)} ${l.unit}`}</span>
+          <span className="sm:text-right">{quantity(l)}</span>
           <span className="flex sm:justify-end">
-            {l.kind === 'trim' && canEdit ? <PriceInput line={l} sheet={sheet} /> : l.priceMinor !== null ? fmt(l.priceMinor) : '—'}
+            {l.kind === 'trim' && canEdit ? <PriceInput line={l} sheet={sheet} /> : price(l)}
           </span>
           <span className="text-right font-medium">{fmt(l.costMinor[base] ?? 0)}</span>
         </div>

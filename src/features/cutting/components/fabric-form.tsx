@@ -31,8 +31,10 @@ const decimalText = (text: string, french: boolean) => (french ? text.replace(/[
 
 function draftOf(f: FabricDto | null, imperial: boolean, currency: string, french = false): Draft {
   if (!f) return { name: '', composition: '', width: '', shrinkageLength: '0', shrinkageWidth: '0', isDirectional: false, price: '', priceUnit: imperial ? 'yard' : 'metre', supplierId: '', maxPlies: '40' };
-  // The price as the supplier quoted it; older fabrics only have a rate per metre.
-  const quoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
+  // The price as the supplier quoted it; older fabrics only have a rate per metre. An imperial studio prices by
+  // the yard: a quote per metre is shown per yard there (and saved so once the form is saved).
+  const asQuoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
+  const quoted = imperial && asQuoted?.per === 'metre' ? { amountMinor: Math.round((asQuoted.amountMinor * MM_PER_YARD) / 1000), per: 'yard' as const } : asQuoted;
   return {
     name: f.name,
     composition: f.composition,
@@ -134,13 +136,13 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
       {text('composition', t(`${area}.form.composition`), 'composition', 'text', t(`${area}.form.compositionHint`))}
       {text('width', t(`${area}.form.width`, { unit: fmt().fabricWidthUnit }), 'widthMm', imperial ? 'text' : 'number', t(`${area}.form.widthHint`))}
       {text('price', t(`${area}.form.price.${d.priceUnit}`, { currency }), 'priceMinor', 'text', t(`${area}.form.priceHint`))}
-      <div>
+      {imperial ? null : <div>
         <label className="field-label" htmlFor={`${prefix}-priceUnit`}>{t(`${area}.form.priceUnit`)}</label>
         <select id={`${prefix}-priceUnit`} className="field-input" value={d.priceUnit} onChange={(e) => setD({ ...d, priceUnit: e.target.value === 'yard' ? 'yard' : 'metre' })}>
           <option value="metre">{t(`${area}.form.metre`)}</option>
           <option value="yard">{t(`${area}.form.yard`)}</option>
         </select>
-      </div>
+      </div>}
       {text('shrinkageLength', t(`${area}.form.shrinkAlong`), 'shrinkageLengthPercent', french ? 'text' : 'number', t(`${area}.form.shrinkAlongHint`))}
       {text('shrinkageWidth', t(`${area}.form.shrinkAcross`), 'shrinkageWidthPercent', french ? 'text' : 'number', t(`${area}.form.shrinkAcrossHint`))}
       {text('maxPlies', t(`${area}.form.maxPlies`), 'maxPlies', 'number')}

@@ -3,7 +3,7 @@ import type { BundleDto, FloorOperationDto, LogWorkInput } from '@shared/schemas
 import { Caution } from '@/components/ui/page';
 import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
-
+import { area } from '../words';
 
 export type LogChoice = Pick<LogWorkInput, 'operationId' | 'outcome' | 'defect' | 'reworkOperationId'>;
 
@@ -15,7 +15,7 @@ function OperationOption({ op, state, selected, onSelect }: { op: FloorOperation
       <span className="flex-1">
         <span className="font-medium">{op.code} {op.name}</span>
         <span className="block text-xs text-ink-600">
-          {t('floor.opFacts', { section: op.section, machine: op.machineType, sam: fmt().number(op.sam, 2) })}
+          {t('floor.opFacts', { section: t(`${area}.sections.${op.section}`), machine: op.machineType, sam: fmt().number(op.sam, 2) })}
           {state?.attempt ? ` · ${t('floor.rework', { attempt: state.attempt })}` : ''}
         </span>
       </span>

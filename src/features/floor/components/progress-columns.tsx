@@ -1,23 +1,27 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import type { OperationProgress, PersonEfficiency } from '@shared/schemas/floor';
-import { formatEfficiency } from '@/lib/format';
+import { fmt, formatEfficiency } from '@/lib/format';
+import { i18n } from '@/lib/i18n';
+import { area } from '../words';
+
+const col = (key: string) => () => i18n.t(`${area}.progress.cols.${key}`);
 
 const op = createColumnHelper<OperationProgress>();
 export const operationProgressColumns = [
-  op.accessor('code', { header: 'Op', cell: (i) => <span className="font-mono">{i.getValue()}</span> }),
-  op.accessor('name', { header: 'Operation' }),
-  op.accessor('section', { header: 'Section' }),
-  op.accessor((o) => `${o.bundlesDone} / ${o.bundlesTotal}`, { id: 'done', header: 'Bundles done', enableSorting: false }),
-  op.accessor('piecesDone', { header: 'Pieces done' }),
-  op.accessor('bundlesReady', { header: 'Waiting here (WIP)' }),
+  op.accessor('code', { header: col('op'), cell: (i) => <span className="font-mono">{i.getValue()}</span> }),
+  op.accessor('name', { header: col('operation') }),
+  op.accessor('section', { header: col('section'), cell: (i) => i18n.t(`${area}.sections.${i.getValue()}`) }),
+  op.accessor((o) => `${o.bundlesDone} / ${o.bundlesTotal}`, { id: 'done', header: col('bundlesDone'), enableSorting: false }),
+  op.accessor('piecesDone', { header: col('piecesDone'), cell: (i) => fmt().number(i.getValue()) }),
+  op.accessor('bundlesReady', { header: col('waiting') }),
 ];
 
 const person = createColumnHelper<PersonEfficiency>();
 export const efficiencyColumns = [
-  person.accessor('name', { header: 'Person' }),
-  person.accessor('role', { header: 'Role' }),
-  person.accessor('pieces', { header: 'Pieces' }),
-  person.accessor('earnedMinutes', { header: 'Standard min earned', cell: (i) => i.getValue().toFixed(1) }),
-  person.accessor('attendedMinutes', { header: 'Min worked' }),
-  person.accessor('efficiencyPercent', { header: 'Efficiency', cell: (i) => formatEfficiency(i.getValue()) }),
+  person.accessor('name', { header: col('person') }),
+  person.accessor('role', { header: col('role'), cell: (i) => i18n.t(`roles.${i.getValue()}`, { defaultValue: i.getValue() }) }),
+  person.accessor('pieces', { header: col('pieces'), cell: (i) => fmt().number(i.getValue()) }),
+  person.accessor('earnedMinutes', { header: col('earned'), cell: (i) => new Intl.NumberFormat(fmt().locale, { minimumFractionDigits: 1, maximumFractionDigits: 1 }).format(i.getValue()) }),
+  person.accessor('attendedMinutes', { header: col('worked'), cell: (i) => fmt().number(i.getValue()) }),
+  person.accessor('efficiencyPercent', { header: col('efficiency'), cell: (i) => formatEfficiency(i.getValue()) }),
 ];

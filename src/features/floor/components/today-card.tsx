@@ -1,8 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
 import { Card } from '@/components/ui/page';
-import { formatMoney } from '@/lib/format';
+import { formatDate, formatMoney } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { floorQueries } from '../api/floor-queries';
+import { area } from '../words';
 
 /** The signed-in person's own count and earnings today. */
 export function TodayCard() {
@@ -44,21 +45,23 @@ export function TodayCard() {
 
 /** This week's and this pay period's count and earnings, as the pay period will pay them. */
 function WeekAndPeriod() {
+  const { t } = useTranslation();
   const { data } = useQuery(floorQueries.summary());
   if (!data) return null;
   const rows = [
-    { label: 'This week', sub: `since ${data.week.fromDay}`, f: data.week, id: 'week' },
-    { label: 'This pay period', sub: `not yet approved, since ${data.payPeriod.fromDay}`, f: data.payPeriod, id: 'period' },
+    { label: t(`${area}.week.week`), sub: t(`${area}.week.since`, { day: formatDate(data.week.fromDay) }), f: data.week, id: 'week' },
+    { label: t(`${area}.week.period`), sub: t(`${area}.week.periodSince`, { day: formatDate(data.payPeriod.fromDay) }), f: data.payPeriod, id: 'period' },
   ];
   return (
-    <dl className="mt-3 space-y-1 text-sm" aria-label="Week and pay period">
+    <dl className="mt-3 space-y-1 text-sm" aria-label={t(`${area}.week.label`)}>
       {rows.map((r) => (
         <div key={r.id} className="flex items-baseline justify-between gap-2 rounded-lg bg-calico-50 px-2 py-1.5">
           <dt>
             <span className="font-semibold text-thread-800">{r.label}</span> <span className="text-xs text-ink-600">{r.sub}</span>
           </dt>
           <dd className="whitespace-nowrap" data-testid={`${r.id}-figures`}>
-            {r.f.pieces} pcs · {r.f.bundleOps} ops · <strong>{formatMoney(r.f.earningsMinor, data.currency)}</strong>
+            {t(`${area}.week.figures`, { pieces: t(`${area}.pcs`, { count: r.f.pieces }), ops: t(`${area}.week.ops`, { count: r.f.bundleOps }) })}
+            <strong>{formatMoney(r.f.earningsMinor, data.currency)}</strong>
           </dd>
         </div>
       ))}

@@ -1,5 +1,6 @@
 import { idempotencyKeyAuthor, type LogWorkInput, type LogWorkResult } from '@shared/schemas/floor';
 import { api, ApiError } from '@/lib/api-client';
+import { i18n } from '@/lib/i18n';
 
 /**
  * Logs waiting on this device for the network, oldest first. Kept in localStorage so a reload loses none.
@@ -113,5 +114,5 @@ export function flushOutbox(userId: number) {
 export function outboxSignOutWarning(userId: number): string | null {
   const n = waitingFor(userId).length;
   if (!n) return null;
-  return `${n} log${n > 1 ? 's' : ''} you made ${n > 1 ? 'are' : 'is'} still waiting for the network. ${n > 1 ? 'They stay' : 'It stays'} on this phone and ${n > 1 ? 'are' : 'is'} sent under your name when you sign in here again, never under anyone else's.`;
+  return i18n.t('floor.signOutWaiting', { count: n });
 }

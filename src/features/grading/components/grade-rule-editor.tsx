@@ -22,9 +22,9 @@ export function GradeRuleEditor({ styleId, piece, sizes, selectedPoint, onSelect
 }) {
   const { t } = useTranslation();
   const names = usePatternNames();
-  const { small, system, cellUnitWord } = useLength();
+  const { small, system, cellUnitWord, decimal } = useLength();
   const unit = system === 'metric' ? 'mm' : 'in';
-  const shown = (v: number) => (system === 'metric' ? String(Number(v.toFixed(2))) : small(v).replace('"', ''));
+  const shown = (v: number) => (system === 'metric' ? decimal(String(Number(v.toFixed(2)))) : small(v).replace('"', ''));
   const read = (text: string) => (text.trim() === '' ? null : parseLength(`${text} ${unit}`, 'metric'));
   const rules = piece.rules;
   const rule = rules.find((r) => r.target.kind === 'vertex' && r.target.index === selectedPoint) ?? rules[0];

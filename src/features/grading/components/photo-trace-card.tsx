@@ -44,10 +44,16 @@ function nearestOnRing(ring: Point[], q: Point): { at: Point; edge: number } {
 export function PhotoTraceCard({ styleId }: { styleId: number }) {
   const { t } = useTranslation();
   const { len, area: areaOf, small, system, cellUnitWord } = useLength();
-  /** A fine length (the trace's tolerance): millimetres, or thousandths of an inch in an imperial studio. */
+  /** A fine length (the trace's tolerance): millimetres, or inches to the nearest 1/64 in an imperial studio. */
   const fine = (mm: number, digits?: number) => {
-    const n = (v: number, d: number) => (digits === undefined ? fmt().number(v, d) : new Intl.NumberFormat(fmt().locale, { minimumFractionDigits: d, maximumFractionDigits: d }).format(v));
-    return system === 'metric' ? `${n(mm, digits ?? 2)} mm` : `${n(mm / 25.4, (digits ?? 2) + 1)} ${cellUnitWord}`;
+    if (system === 'metric') {
+      const n = digits === undefined ? fmt().number(mm, 2) : new Intl.NumberFormat(fmt().locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(mm);
+      return `${n} mm`;
+    }
+    let num = Math.round((mm / 25.4) * 64), den = 64;
+    if (num === 0) return '< 1/64"';
+    while (num % 2 === 0 && den > 1) { num /= 2; den /= 2; }
+    return den === 1 ? `${num}"` : `${Math.floor(num / den) ? `${Math.floor(num / den)} ` : ''}${num % den}/${den}"`;
   };
   /** A seam allowance as shown and typed: millimetres, or inches with fractions (`3/8`). */
   const seamMm = (text: string) => (system === 'metric' ? Number(text.replace(',', '.')) : (parseLength(`${text} in`, 'imperial') ?? NaN));

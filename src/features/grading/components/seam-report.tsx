@@ -1,4 +1,4 @@
-import type { GradingDto } from '@shared/schemas/grading';
+import type { GradingDto, GradingErrorDto } from '@shared/schemas/grading';
 import { Badge } from '@/components/ui/page';
 import { useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
@@ -7,15 +7,28 @@ import { area } from '../words';
 
 /** Seams sewn together, per size: both lengths, the difference against the intended ease, pass or error. */
 export function SeamReport({ grading }: { grading: GradingDto }) {
-  const { t } = useTranslation();
+  const { t, i18n } = useTranslation();
   const pn = usePatternNames();
   const { small, len } = useLength();
   const names = [...new Set(grading.seams.map((s) => s.seam))];
+  /** A problem the check found, in the person's language and units where its kind is known (else as the server said it). */
+  const sentence = (e: GradingErrorDto): string => {
+    if (i18n.language === 'en') return e.message;
+    if (e.code === 'seam_mismatch') {
+      const c = grading.seams.find((x) => x.size === e.size && !x.ok && e.message.startsWith(`${x.seam}, size `));
+      if (c) return t(`${area}.seamReport.mismatch`, { seam: pn.seam(c.seam), size: c.size, off: small(c.differenceMm - c.expectedMm), allowed: small(c.toleranceMm) });
+    }
+    if ((e.code === 'winding_flipped' || e.code === 'self_intersection') && e.pieceId && e.size) {
+      const piece = grading.pieces.find((p) => p.id === e.pieceId);
+      return t(`${area}.seamReport.${e.code === 'winding_flipped' ? 'flipped' : 'crosses'}`, { piece: pn.piece(piece?.name ?? e.pieceId), size: e.size });
+    }
+    return e.message;
+  };
   return (
     <div className="space-y-3">
       {grading.errors.length ? (
         <ul role="alert" className="space-y-1 rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
-          {grading.errors.map((e, i) => <li key={i}>{e.message}</li>)}
+          {grading.errors.map((e, i) => <li key={i}>{sentence(e)}</li>)}
         </ul>
       ) : grading.pieces.length === 0 ? (
         <p className="text-sm text-ink-600">{t(`${area}.seamReport.nothing`)}</p>

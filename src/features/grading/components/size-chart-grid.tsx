@@ -7,13 +7,20 @@ import { i18n, useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
 import { area } from '../words';
 
+/** An EN 13402-3 bust interval (`82–86`, in cm as the standard writes it) in the studio's unit: unchanged in cm. */
+export function enInterval(label: string, system: 'metric' | 'imperial', len: (mm: number) => string): string {
+  if (system === 'metric') return label;
+  const m = /^(\d+(?:\.\d+)?)\s*[–-]\s*(\d+(?:\.\d+)?)$/.exec(label.trim());
+  return m ? `${len(Number(m[1]) * 10)}–${len(Number(m[2]) * 10)}` : label;
+}
+
 /** A point of measure's name in the studio's language (a key the chart does not know reads as plain words). */
 const label = (pom: string) => i18n.t(`${area}.pom.${pom}`, { defaultValue: pom.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase()) });
 
 /** The body chart as an editable grid (studio units), the grade between neighbouring sizes, import and export. */
 export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; grading: GradingDto; canEdit: boolean }) {
   const { t } = useTranslation();
-  const { cell, parseCell, cellUnit, cellUnitWord, small } = useLength();
+  const { cell, parseCell, cellUnit, cellUnitWord, small, len, system } = useLength();
   const chart = grading.chart;
   const [cells, setCells] = useState<string[][]>([]);
   const [cellErrors, setCellErrors] = useState<Record<string, string>>({});
@@ -79,7 +86,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
               <th className="py-1 pr-2 text-ink-600">{t(`${area}.chart.body`, { unit: cellUnitWord })}</th>
               {chart.sizes.map((s, j) => (
                 <th key={s} className="px-1 text-center" colSpan={j < chart.sizes.length - 1 ? 2 : 1}>
-                  {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">{t(`${area}.chart.designation`, { designation: grading.designations[s] })}</span> : null}
+                  {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">{t(`${area}.chart.designation`, { designation: enInterval(grading.designations[s], system, len) })}</span> : null}
                 </th>
               ))}
             </tr>
@@ -104,7 +111,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
           </tbody>
         </table>
       </div>
-      <p className="text-xs text-ink-600">{t(`${area}.chart.note`)}</p>
+      <p className="text-xs text-ink-600">{t(`${area}.chart.${system === 'metric' ? 'note' : 'noteImperial'}`)}</p>
     </div>
   );
 }

@@ -8,11 +8,12 @@ import { useTranslation } from '@/lib/i18n';
 import { Trans } from 'react-i18next';
 import { useLength } from '../hooks/use-length';
 import { area } from '../words';
+import { enInterval } from './size-chart-grid';
 
 /** Upload customers' bust girths (CSV), see how they fall into the run and split a batch of N over the sizes. */
 export function SizeMixTool({ styleId }: { styleId: number }) {
   const { t } = useTranslation();
-  const { len } = useLength();
+  const { len, system } = useLength();
   const [file, setFile] = useState<File | null>(null);
   const [total, setTotal] = useState('40');
   const [min, setMin] = useState('2');
@@ -49,8 +50,8 @@ export function SizeMixTool({ styleId }: { styleId: number }) {
             </table>
           </div>
           <details className="text-sm">
-            <summary className="cursor-pointer text-thread-700">{t(`${area}.mix.en13402`)}</summary>
-            <div className="mt-2 flex flex-wrap gap-2">{r.en13402.map((b) => <span key={b.label} className="rounded border border-calico-200 px-2 py-1 text-xs">{b.label}: <b>{b.count}</b></span>)}</div>
+            <summary className="cursor-pointer text-thread-700">{t(`${area}.mix.${system === 'metric' ? 'en13402' : 'en13402Imperial'}`)}</summary>
+            <div className="mt-2 flex flex-wrap gap-2">{r.en13402.map((b) => <span key={b.label} className="rounded border border-calico-200 px-2 py-1 text-xs">{enInterval(b.label, system, len)}: <b>{b.count}</b></span>)}</div>
           </details>
         </div>
       ) : null}

@@ -5,7 +5,10 @@ import { useFormat } from '@/lib/format';
 export function useLength() {
   const f = useFormat();
   const system: UnitSystem = f.settings.unitSystem;
+  /** A plain decimal as the language writes it in a field (`82,5` in French); fields read both marks back. */
+  const decimal = (text: string) => (f.settings.language === 'fr' ? text.replace('.', ',') : text);
   return {
+    decimal,
     system,
     /** A length for reading (cm or fractional inches). */
     len: f.length,
@@ -14,7 +17,7 @@ export function useLength() {
     /** An area in cm²/m² or in²/yd². */
     area: f.area,
     /** A grid cell's text for a mm value, and back. */
-    cell: (v: number) => (system === 'metric' ? String(Number(v.toFixed(1))) : f.length(v).replace('"', '')),
+    cell: (v: number) => (system === 'metric' ? decimal(String(Number(v.toFixed(1)))) : f.length(v).replace('"', '')),
     parseCell: (text: string) => parseLength(system === 'metric' ? `${text} mm` : `${text} in`, 'metric'),
     cellUnit: system === 'metric' ? 'mm' : 'in',
     /** The unit word of a grid cell as the studio's language writes it (`mm`, `in`, `po`). */

@@ -4,18 +4,22 @@ import { useSearchParams } from 'react-router';
 import { Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { downloadFile } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
-import { formatMoney } from '@/lib/format';
+import { fmt, formatDate, formatMoney } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { batchQueries, styleQueries } from '@/lib/queries';
 import { operationQueries, useCopyOperations, useImportOperations } from '../api/line-queries';
 import { LinePlanPanel } from './line-plan-panel';
 import { OperationsEditor } from './operations-editor';
+import { fixed } from './fixed';
 import { rateToMajorText } from './rate-text';
 import { TimeStudyForm } from './time-study-form';
 import { WorkingCalendarCard } from './working-calendar-card';
-
+import { machineTypeLabel } from '../hooks/machine-type';
+import { area } from '../words';
 
 /** Line plan: pick a batch, see its style's operations and the balanced line with its schedule. */
 export function LinePage() {
+  const { t } = useTranslation();
   const [params, setParams] = useSearchParams();
   const batches = useQuery(batchQueries.list());
   if (!batches.data) return <Spinner />;
@@ -23,13 +27,17 @@ export function LinePage() {
   const batch = open.find((b) => b.id === Number(params.get('batch'))) ?? open[0];
   return (
     <>
-      <PageHeader title="Line plan" subtitle="Operations, line balance, capacity and the batch schedule" />
+      <PageHeader title={t(`${area}.page.title`)} subtitle={t(`${area}.page.subtitle`)} />
       {batch ? (
         <>
           <div className="mb-4 max-w-sm">
-            <label className="field-label" htmlFor="line-batch">Batch</label>
+            <label className="field-label" htmlFor="line-batch">{t(`${area}.page.batch`)}</label>
             <select id="line-batch" className="field-input" value={batch.id} onChange={(e) => setParams({ batch: e.target.value })}>
-              {open.map((b) => <option key={b.id} value={b.id}>{b.code} · {b.styleName} · {b.total} due {b.dueDate}</option>)}
+              {open.map((b) => (
+                <option key={b.id} value={b.id}>
+                  {t(`${area}.page.batchOption`, { code: b.code, style: b.styleName, total: b.total, due: formatDate(b.dueDate) })}
+                </option>
+              ))}
             </select>
           </div>
           <div className="space-y-5">
@@ -38,12 +46,13 @@ export function LinePage() {
             <WorkingCalendarCard />
           </div>
         </>
-      ) : <Card><p className="text-sm text-ink-600">No open batches.</p></Card>}
+      ) : <Card><p className="text-sm text-ink-600">{t(`${area}.page.noOpen`)}</p></Card>}
     </>
   );
 }
 
 function OperationsCard({ styleId }: { styleId: number }) {
+  const { t } = useTranslation();
   const ops = useQuery(operationQueries.list(styleId));
   const styles = useQuery(styleQueries.list());
   const currency = useMe().data?.currency ?? 'KES';
@@ -58,39 +67,47 @@ function OperationsCard({ styleId }: { styleId: number }) {
   const withRates = rows.some((r) => r.pieceRateMinor !== undefined);
   if (editing) {
     return (
-      <Card title="Edit operations">
+      <Card title={t(`${area}.ops.edit`)}>
         <OperationsEditor styleId={styleId} rows={rows} currency={currency} withRates={withRates} onDone={() => setEditing(false)} />
       </Card>
     );
   }
   return (
-    <Card title="Operations and standard minutes (SAM)">
+    <Card title={t(`${area}.ops.title`)}>
       <div className="mb-3 flex flex-wrap items-end gap-2">
-        <button type="button" className="btn-primary" disabled={!ops.data} onClick={() => setEditing(true)}>Edit operations</button>
-        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/operations/export`, 'operations.xlsx')}>Export XLSX</button>
-        <button type="button" className="btn-quiet" onClick={() => fileRef.current?.click()}>Import XLSX</button>
-        <input ref={fileRef} type="file" accept=".xlsx" className="hidden" aria-label="Operations file" onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
-        <select aria-label="Copy from style" className="field-input w-auto" value={from} onChange={(e) => setFrom(e.target.value)}>
-          <option value="">Copy from style…</option>
+        <button type="button" className="btn-primary" disabled={!ops.data} onClick={() => setEditing(true)}>{t(`${area}.ops.edit`)}</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/operations/export`, 'operations.xlsx')}>{t(`${area}.ops.export`)}</button>
+        <button type="button" className="btn-quiet" onClick={() => fileRef.current?.click()}>{t(`${area}.ops.import`)}</button>
+        <input ref={fileRef} type="file" accept=".xlsx" className="hidden" aria-label={t(`${area}.ops.file`)} onChange={(e) => { const f = e.target.files?.[0]; if (f) imp.mutate(f); e.target.value = ''; }} />
+        <select aria-label={t(`${area}.ops.copyFrom`)} className="field-input w-auto" value={from} onChange={(e) => setFrom(e.target.value)}>
+          <option value="">{t(`${area}.ops.copyFromOption`)}</option>
           {(styles.data ?? []).filter((s) => s.id !== styleId).map((s) => <option key={s.id} value={s.id}>{s.code} · {s.name}</option>)}
         </select>
-        <button type="button" className="btn-quiet" disabled={!from || copy.isPending} onClick={() => copy.mutate(Number(from))}>Copy</button>
+        <button type="button" className="btn-quiet" disabled={!from || copy.isPending} onClick={() => copy.mutate(Number(from))}>{t(`${area}.ops.copy`)}</button>
       </div>
       <ErrorNote error={imp.error ?? copy.error ?? ops.error} />
-      <div role="region" aria-label="Operations of the style" tabIndex={0} className="overflow-x-auto">
+      <div role="region" aria-label={t(`${area}.ops.ofStyle`)} tabIndex={0} className="overflow-x-auto">
         <table className="w-full min-w-[640px] text-sm" data-testid="operations">
-          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">Code</th><th>Operation</th><th>Machine</th><th className="text-right">SAM</th><th className="pl-4">After</th>{rows.some((r) => r.pieceRateMinor !== undefined) ? <th className="text-right">Piece rate</th> : null}<th /></tr></thead>
+          <thead><tr className="border-b border-calico-200 text-left text-ink-600"><th className="py-1">{t(`${area}.ops.cols.code`)}</th>
+              <th>{t(`${area}.ops.cols.operation`)}</th>
+              <th>{t(`${area}.ops.cols.machine`)}</th>
+              <th className="text-right">{t(`${area}.ops.cols.sam`)}</th>
+              <th className="pl-4">{t(`${area}.ops.cols.after`)}</th>
+              {withRates ? <th className="text-right">{t(`${area}.ops.cols.rate`)}</th> : null}
+              <th />
+            </tr>
+          </thead>
           {sections.map((sec) => (
             <tbody key={sec}>
-              <tr><th colSpan={7} className="pt-3 text-left text-xs uppercase tracking-wide text-thread-700">{sec}</th></tr>
+              <tr><th colSpan={7} className="pt-3 text-left text-xs uppercase tracking-wide text-thread-700">{t(`${area}.sections.${sec}`)}</th></tr>
               {rows.filter((r) => r.section === sec).flatMap((r) => [
                 <tr key={r.id} className="border-b border-calico-100">
-                  <td className="py-1 font-mono">{r.code}</td><td>{r.name}</td><td>{r.machineType}</td>
-                  <td className="text-right tabular-nums">{r.sam.toFixed(r.timeStudy ? 3 : 1)}</td><td className="pl-4 font-mono text-xs">{r.predecessors.join(' ')}</td>
-                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : Number.isInteger(r.pieceRateMinor) ? formatMoney(r.pieceRateMinor, currency) : `${currency} ${rateToMajorText(r.pieceRateMinor, currency)}`}</td> : null}
+                  <td className="py-1 font-mono">{r.code}</td><td>{r.name}</td><td>{machineTypeLabel(r.machineType)}</td>
+                  <td className="text-right tabular-nums">{fixed(r.sam, r.timeStudy ? 3 : 1)}</td><td className="pl-4 font-mono text-xs">{r.predecessors.join(' ')}</td>
+                  {r.pieceRateMinor !== undefined ? <td className="text-right tabular-nums">{r.pieceRateMinor == null ? '—' : Number.isInteger(r.pieceRateMinor) ? formatMoney(r.pieceRateMinor, currency) : `${currency} ${rateToMajorText(r.pieceRateMinor, currency).replace('.', fmt().number(1.5).charAt(1))}`}</td> : null}
                   <td className="pl-3 text-right">
-                    <button type="button" className="text-sm underline" aria-label={`Time study, ${r.code}`} onClick={() => setStudying(studying === r.id ? null : r.id)}>
-                      {r.timeStudy ? 'Time study ✓' : 'Time study'}
+                    <button type="button" className="text-sm underline" aria-label={t(`${area}.ops.studyOf`, { code: r.code })} onClick={() => setStudying(studying === r.id ? null : r.id)}>
+                      {r.timeStudy ? t(`${area}.ops.studyDone`) : t(`${area}.ops.study`)}
                     </button>
                   </td>
                 </tr>,

@@ -2,7 +2,10 @@ import { useState } from 'react';
 import { LINE_SECTIONS, MACHINE_TYPES, putOperationsInput, type OperationDto } from '@shared/schemas/line';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
+import { useTranslation } from '@/lib/i18n';
 import { useSaveOperations } from '../api/line-queries';
+import { machineTypeLabel } from '../hooks/machine-type';
+import { area } from '../words';
 import { parseRateMajor, rateToMajorText } from './rate-text';
 
 /** One row as typed: text fields, so a half-typed number is kept until it is checked. */
@@ -16,6 +19,15 @@ interface DraftRow {
   after: string;
   rate: string;
 }
+
+/** Each typed cell's width and type style. */
+const CELL = {
+  code: 'w-20 font-mono',
+  machine: 'w-28',
+  sam: 'w-16 text-right tabular-nums',
+  after: 'w-28 font-mono text-xs',
+  rate: 'w-20 text-right tabular-nums',
+};
 
 const toDraft = (o: OperationDto, key: number, currency: string): DraftRow => ({
   key,
@@ -34,6 +46,8 @@ const toDraft = (o: OperationDto, key: number, currency: string): DraftRow => ({
  * roles that see pay (the server keeps the stored rates otherwise).
  */
 export function OperationsEditor({ styleId, rows, currency, withRates, onDone }: { styleId: number; rows: OperationDto[]; currency: string; withRates: boolean; onDone: () => void }) {
+  const { t } = useTranslation();
+  const w = (key: string, values?: Record<string, unknown>) => t(`${area}.ops.${key}`, values);
   const [draft, setDraft] = useState<DraftRow[]>(() => rows.map((r, i) => toDraft(r, i, currency)));
   const [nextKey, setNextKey] = useState(rows.length);
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -45,7 +59,7 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
     const operations = draft.map((r, i) => {
       const sam = r.sam.trim() === '' ? Number.NaN : Number(r.sam);
       const rate = r.rate.trim() === '' ? null : parseRateMajor(r.rate, currency);
-      if (r.rate.trim() !== '' && rate === null) found[`operations.${i}.pieceRateMinor`] = 'Give an amount, e.g. 12.50 (up to 6 more decimals for a fraction of a cent)';
+      if (r.rate.trim() !== '' && rate === null) found[`operations.${i}.pieceRateMinor`] = w('rateNeeded', { example: '12.50' });
       return {
         code: r.code,
         name: r.name,
@@ -73,7 +87,7 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
     const e = err(i, field);
     return (
       <td className="py-1 pr-1 align-top">
-        <input aria-label={`${label}, row ${i + 1}`} className={`w-full rounded border px-1.5 py-1 ${e ? 'border-madder-500' : 'border-calico-300'} ${className}`} value={value} list={list} onChange={(ev) => onChange(ev.target.value)} aria-invalid={Boolean(e)} />
+        <input aria-label={w('rowLabel', { label, row: i + 1 })} className={`w-full rounded border px-1.5 py-1 ${e ? 'border-madder-500' : 'border-calico-300'} ${className}`} value={value} list={list} onChange={(ev) => onChange(ev.target.value)} aria-invalid={Boolean(e)} />
         {e ? <p className="field-error">{e}</p> : null}
       </td>
     );
@@ -81,30 +95,37 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
 
   return (
     <div>
-      <datalist id="machine-types">{MACHINE_TYPES.map((m) => <option key={m} value={m} />)}</datalist>
-      <div role="region" aria-label="Operations" tabIndex={0} className="overflow-x-auto">
-        <table className="w-full min-w-[860px] text-sm" aria-label="Edit operations">
+      <datalist id="machine-types">{MACHINE_TYPES.map((m) => <option key={m} value={m} label={machineTypeLabel(m)} />)}</datalist>
+      <div role="region" aria-label={w('table')} tabIndex={0} className="overflow-x-auto">
+        <table className="w-full min-w-[860px] text-sm" aria-label={w('edit')}>
           <thead>
             <tr className="border-b border-calico-200 text-left text-ink-600">
-              <th className="py-1">Code</th><th>Operation</th><th>Section</th><th>Machine</th><th>SAM (min)</th><th>After</th>{withRates ? <th>Piece rate</th> : null}<th />
+              <th className="py-1">{w('cols.code')}</th>
+              <th>{w('cols.operation')}</th>
+              <th>{w('cols.section')}</th>
+              <th>{w('cols.machine')}</th>
+              <th>{w('cols.samMin')}</th>
+              <th>{w('cols.after')}</th>
+              {withRates ? <th>{w('cols.rate')}</th> : null}
+              <th />
             </tr>
           </thead>
           <tbody>
             {draft.map((r, i) => (
               <tr key={r.key} className="border-b border-calico-100">
-                {cell(i, 'code', 'Code', r.code, (v) => set(r.key, { code: v }), 'w-20 font-mono')}
-                {cell(i, 'name', 'Operation', r.name, (v) => set(r.key, { name: v }))}
+                {cell(i, 'code', w('cols.code'), r.code, (v) => set(r.key, { code: v }), CELL.code)}
+                {cell(i, 'name', w('cols.operation'), r.name, (v) => set(r.key, { name: v }))}
                 <td className="py-1 pr-1 align-top">
-                  <select aria-label={`Section, row ${i + 1}`} className="rounded border border-calico-300 bg-white px-1.5 py-1" value={r.section} onChange={(e) => set(r.key, { section: e.target.value as DraftRow['section'] })}>
-                    {LINE_SECTIONS.map((s) => <option key={s} value={s}>{s}</option>)}
+                  <select aria-label={w('rowLabel', { label: w('cols.section'), row: i + 1 })} className="rounded border border-calico-300 bg-white px-1.5 py-1" value={r.section} onChange={(e) => set(r.key, { section: e.target.value as DraftRow['section'] })}>
+                    {LINE_SECTIONS.map((s) => <option key={s} value={s}>{t(`${area}.sections.${s}`)}</option>)}
                   </select>
                 </td>
-                {cell(i, 'machineType', 'Machine', r.machineType, (v) => set(r.key, { machineType: v }), 'w-28', 'machine-types')}
-                {cell(i, 'sam', 'SAM', r.sam, (v) => set(r.key, { sam: v }), 'w-16 text-right tabular-nums')}
-                {cell(i, 'predecessors', 'After', r.after, (v) => set(r.key, { after: v }), 'w-28 font-mono text-xs')}
-                {withRates ? cell(i, 'pieceRateMinor', 'Piece rate', r.rate, (v) => set(r.key, { rate: v }), 'w-20 text-right tabular-nums') : null}
+                {cell(i, 'machineType', w('cols.machine'), r.machineType, (v) => set(r.key, { machineType: v }), CELL.machine, 'machine-types')}
+                {cell(i, 'sam', w('cols.sam'), r.sam, (v) => set(r.key, { sam: v }), CELL.sam)}
+                {cell(i, 'predecessors', w('cols.after'), r.after, (v) => set(r.key, { after: v }), CELL.after)}
+                {withRates ? cell(i, 'pieceRateMinor', w('cols.rate'), r.rate, (v) => set(r.key, { rate: v }), CELL.rate) : null}
                 <td className="py-1 align-top">
-                  <button type="button" className="text-sm underline" onClick={() => setDraft((d) => d.filter((x) => x.key !== r.key))}>Remove</button>
+                  <button type="button" className="text-sm underline" onClick={() => setDraft((d) => d.filter((x) => x.key !== r.key))}>{w('remove')}</button>
                 </td>
               </tr>
             ))}
@@ -122,10 +143,10 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
             setNextKey((k) => k + 1);
           }}
         >
-          Add operation
+          {w('add')}
         </button>
-        <button type="button" className="btn-primary" disabled={save.isPending} onClick={handleSave}>{save.isPending ? 'Saving…' : 'Save operations'}</button>
-        <button type="button" className="btn-quiet" onClick={onDone}>Cancel</button>
+        <button type="button" className="btn-primary" disabled={save.isPending} onClick={handleSave}>{save.isPending ? w('saving') : w('save')}</button>
+        <button type="button" className="btn-quiet" onClick={onDone}>{w('cancel')}</button>
       </div>
     </div>
   );

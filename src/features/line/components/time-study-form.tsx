@@ -3,7 +3,11 @@ import { studyStandardMinutes } from '@planning';
 import { timeStudyInput, type OperationDto } from '@shared/schemas/line';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
+import { Trans } from 'react-i18next';
+import { useTranslation } from '@/lib/i18n';
 import { useTimeStudy } from '../api/line-queries';
+import { area } from '../words';
+import { fixed } from './fixed';
 
 /** One element as typed: times and ratings as lists of numbers separated by spaces. */
 interface DraftElement {
@@ -31,6 +35,8 @@ const fromStudy = (op: OperationDto): DraftElement[] =>
  * and the allowances. Shows basic and standard minutes as you type; saving sets the operation's SAM.
  */
 export function TimeStudyForm({ styleId, operation, onDone }: { styleId: number; operation: OperationDto; onDone: () => void }) {
+  const { t } = useTranslation();
+  const w = (key: string, values?: Record<string, unknown>) => t(`${area}.study.${key}`, values);
   const [elements, setElements] = useState<DraftElement[]>(() => fromStudy(operation));
   const [relaxation, setRelaxation] = useState(String(operation.timeStudy?.relaxationPercent ?? 15));
   const [contingency, setContingency] = useState(String(operation.timeStudy?.contingencyPercent ?? 0));
@@ -82,41 +88,49 @@ export function TimeStudyForm({ styleId, operation, onDone }: { styleId: number;
   return (
     <div className="rounded-lg border border-calico-200 p-3" data-testid="time-study-form">
       <p className="mb-2 text-sm text-ink-700">
-        Time study for <strong>{operation.code} {operation.name}</strong>. Time each element over several cycles and rate the pace at each
-        (100 = standard pace of a trained person working steadily; 80 = slower, 120 = faster). Basic time = time × rating ÷ 100;
-        standard minutes = basic time × (1 + allowances).
+        <Trans i18nKey={`${area}.study.intro`} values={{ op: `${operation.code} ${operation.name}` }} components={{ b: <strong /> }} />
       </p>
-      <table className="w-full text-sm" aria-label="Time-study elements">
+      <table className="w-full text-sm" aria-label={w('elements')}>
         <thead>
-          <tr className="text-left text-ink-600"><th>Element</th><th>Times (seconds)</th><th>Ratings</th><th>Per garment</th><th /></tr>
+          <tr className="text-left text-ink-600">
+            <th>{w('cols.element')}</th>
+            <th>{w('cols.times')}</th>
+            <th>{w('cols.ratings')}</th>
+            <th>{w('cols.perGarment')}</th>
+            <th />
+          </tr>
         </thead>
         <tbody>
           {elements.map((e, i) => (
             <tr key={e.key} className="align-top">
-              <td className="pr-1"><input aria-label={`Element ${i + 1}`} className="field-input" value={e.name} onChange={(ev) => set(e.key, { name: ev.target.value })} /></td>
-              <td className="pr-1"><input aria-label={`Times in seconds, element ${i + 1}`} className="field-input" placeholder="36 34 38" value={e.seconds} onChange={(ev) => set(e.key, { seconds: ev.target.value })} /></td>
-              <td className="pr-1"><input aria-label={`Ratings, element ${i + 1}`} className="field-input" placeholder="100" value={e.ratings} onChange={(ev) => set(e.key, { ratings: ev.target.value })} /></td>
-              <td className="pr-1"><input aria-label={`Times per garment, element ${i + 1}`} className="field-input w-20" value={e.frequency} onChange={(ev) => set(e.key, { frequency: ev.target.value })} /></td>
-              <td><button type="button" className="text-sm underline" onClick={() => setElements((d) => d.filter((x) => x.key !== e.key))}>Remove</button></td>
+              <td className="pr-1"><input aria-label={w('element', { n: i + 1 })} className="field-input" value={e.name} onChange={(ev) => set(e.key, { name: ev.target.value })} /></td>
+              <td className="pr-1"><input aria-label={w('timesOf', { n: i + 1 })} className="field-input" placeholder="36 34 38" value={e.seconds} onChange={(ev) => set(e.key, { seconds: ev.target.value })} /></td>
+              <td className="pr-1"><input aria-label={w('ratingsOf', { n: i + 1 })} className="field-input" placeholder="100" value={e.ratings} onChange={(ev) => set(e.key, { ratings: ev.target.value })} /></td>
+              <td className="pr-1"><input aria-label={w('perGarmentOf', { n: i + 1 })} className="field-input w-20" value={e.frequency} onChange={(ev) => set(e.key, { frequency: ev.target.value })} /></td>
+              <td><button type="button" className="text-sm underline" onClick={() => setElements((d) => d.filter((x) => x.key !== e.key))}>{w('remove')}</button></td>
             </tr>
           ))}
-          {elements.map((e, i) => (errorOf(i) ? <tr key={`err-${e.key}`}><td colSpan={5} className="field-error">Element {i + 1}: {errorOf(i)}</td></tr> : null))}
+          {elements.map((e, i) => (errorOf(i) ? <tr key={`err-${e.key}`}><td colSpan={5} className="field-error">{w('elementError', { n: i + 1, error: errorOf(i) })}</td></tr> : null))}
         </tbody>
       </table>
-      <p className="mt-1 text-xs text-ink-600">Give one rating for all cycles, or one per time. For an element done once per bundle of 10, enter 0.1 per garment.</p>
+      <p className="mt-1 text-xs text-ink-600">{w('hint', { tenth: '0.1' })}</p>
       <div className="mt-2 flex flex-wrap items-end gap-3">
-        <button type="button" className="btn-quiet" onClick={() => setElements((d) => [...d, { key: Math.max(0, ...d.map((x) => x.key)) + 1, name: '', seconds: '', ratings: '100', frequency: '1' }])}>Add element</button>
-        <label className="text-sm">Relaxation allowance %<input aria-label="Relaxation allowance %" className="field-input w-20" value={relaxation} onChange={(e) => setRelaxation(e.target.value)} /></label>
-        <label className="text-sm">Contingency allowance %<input aria-label="Contingency allowance %" className="field-input w-20" value={contingency} onChange={(e) => setContingency(e.target.value)} /></label>
+        <button type="button" className="btn-quiet" onClick={() => setElements((d) => [...d, { key: Math.max(0, ...d.map((x) => x.key)) + 1, name: '', seconds: '', ratings: '100', frequency: '1' }])}>{w('add')}</button>
+        <label className="text-sm">{w('relaxation')}<input aria-label={w('relaxation')} className="field-input w-20" value={relaxation} onChange={(e) => setRelaxation(e.target.value)} /></label>
+        <label className="text-sm">{w('contingency')}<input aria-label={w('contingency')} className="field-input w-20" value={contingency} onChange={(e) => setContingency(e.target.value)} /></label>
       </div>
       {errors.relaxationPercent || errors.contingencyPercent || errors.elements ? <p className="field-error">{errors.relaxationPercent ?? errors.contingencyPercent ?? errors.elements}</p> : null}
       <p className="mt-2 text-sm" aria-live="polite" data-testid="time-study-result">
-        {preview ? <>Basic {preview.basic.toFixed(3)} min · <strong>standard {preview.standard.toFixed(3)} min</strong> a garment</> : 'Fill in the times to see the standard minutes.'}
+        {preview ? (
+          <Trans i18nKey={`${area}.study.result`} values={{ basic: fixed(preview.basic, 3), standard: fixed(preview.standard, 3) }} components={{ b: <strong /> }} />
+        ) : (
+          w('fill')
+        )}
       </p>
       <ErrorNote error={save.error && !(save.error instanceof ApiError && Object.keys(save.error.fields).length) ? save.error : null} />
       <div className="mt-2 flex gap-2">
-        <button type="button" className="btn-primary" disabled={save.isPending} onClick={handleSave}>{save.isPending ? 'Saving…' : 'Set standard minutes'}</button>
-        <button type="button" className="btn-quiet" onClick={onDone}>Cancel</button>
+        <button type="button" className="btn-primary" disabled={save.isPending} onClick={handleSave}>{save.isPending ? w('saving') : w('save')}</button>
+        <button type="button" className="btn-quiet" onClick={onDone}>{w('cancel')}</button>
       </div>
     </div>
   );

@@ -3,18 +3,25 @@ import { useState } from 'react';
 import { workingCalendarInput, type WorkingCalendarDto } from '@shared/schemas/line';
 import { Caution, Card, ErrorNote, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
+import { formatDate } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { calendarQueries, useSaveCalendar } from '../api/line-queries';
+import { area } from '../words';
 
-const DAYS = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'];
+/** Days of the week as the calendar stores them: 0 is Sunday. */
+const DAYS = [0, 1, 2, 3, 4, 5, 6] as const;
 
 /** The studio's working calendar: time zone, working days (Saturday work), shift, break, holidays, overtime limit. */
 export function WorkingCalendarCard() {
+  const { t } = useTranslation();
   const q = useQuery(calendarQueries.detail());
-  if (!q.data) return <Card title="Working calendar">{q.error ? <ErrorNote error={q.error} /> : <Spinner />}</Card>;
+  if (!q.data) return <Card title={t(`${area}.calendar.title`)}>{q.error ? <ErrorNote error={q.error} /> : <Spinner />}</Card>;
   return <CalendarForm key={JSON.stringify(q.data)} cal={q.data} />;
 }
 
 function CalendarForm({ cal }: { cal: WorkingCalendarDto }) {
+  const { t } = useTranslation();
+  const w = (key: string, values?: Record<string, unknown>) => t(`${area}.calendar.${key}`, values);
   const [timeZone, setTimeZone] = useState(cal.timeZone);
   const [workdays, setWorkdays] = useState<number[]>(cal.workdays);
   const [shiftStart, setShiftStart] = useState(cal.shiftStart);
@@ -50,34 +57,35 @@ function CalendarForm({ cal }: { cal: WorkingCalendarDto }) {
   const err = (k: string) => (errors[k] ? <span className="field-error block">{errors[k]}</span> : null);
 
   return (
-    <Card title="Working calendar">
+    <Card title={w('title')}>
       <p className="mb-3 text-sm text-ink-600">
-        {cal.entered ? 'The schedule and pay use this calendar.' : 'Not entered yet: the schedule takes Monday to Friday and the studio’s working day, in UTC.'} Today here is {cal.today}; {cal.hoursPerWeek} h a week.
+        {cal.entered ? w('entered') : w('notEntered')}
+        {w('today', { today: formatDate(cal.today), hours: cal.hoursPerWeek })}
       </p>
       <div className="grid gap-3 sm:grid-cols-2">
-        <label className="text-sm">Time zone (e.g. Africa/Nairobi)<input aria-label="Time zone" className="field-input" value={timeZone} onChange={(e) => setTimeZone(e.target.value)} />{err('timeZone')}</label>
+        <label className="text-sm">{w('timeZone')}<input aria-label={w('timeZoneLabel')} className="field-input" value={timeZone} onChange={(e) => setTimeZone(e.target.value)} />{err('timeZone')}</label>
         <fieldset className="text-sm">
-          <legend>Working days</legend>
+          <legend>{w('workingDays')}</legend>
           <div className="flex flex-wrap gap-2">
             {DAYS.map((d, i) => (
               <label key={d} className="flex items-center gap-1">
                 <input type="checkbox" checked={workdays.includes(i)} onChange={(e) => setWorkdays((w) => (e.target.checked ? [...w, i].sort() : w.filter((x) => x !== i)))} />
-                {d}
+                {w(`days.${d}`)}
               </label>
             ))}
           </div>
           {err('workdays')}
         </fieldset>
-        <label className="text-sm">Shift starts<input aria-label="Shift starts" className="field-input" value={shiftStart} onChange={(e) => setShiftStart(e.target.value)} />{err('shiftStart')}</label>
-        <label className="text-sm">Shift ends<input aria-label="Shift ends" className="field-input" value={shiftEnd} onChange={(e) => setShiftEnd(e.target.value)} />{err('shiftEnd')}</label>
-        <label className="text-sm">Unpaid break (minutes)<input aria-label="Unpaid break (minutes)" className="field-input" value={breakMinutes} onChange={(e) => setBreakMinutes(e.target.value)} />{err('breakMinutes')}</label>
-        <label className="text-sm">Overtime limit (hours a week, blank for none)<input aria-label="Overtime limit (hours a week)" className="field-input" value={limit} onChange={(e) => setLimit(e.target.value)} />{err('overtimeLimitHoursPerWeek')}</label>
-        <label className="text-sm sm:col-span-2">Holidays (dates, e.g. 2026-12-25 2026-12-26)<input aria-label="Holidays" className="field-input" value={holidays} onChange={(e) => setHolidays(e.target.value)} />{err('holidays')}</label>
+        <label className="text-sm">{w('shiftStarts')}<input aria-label={w('shiftStarts')} className="field-input" value={shiftStart} onChange={(e) => setShiftStart(e.target.value)} />{err('shiftStart')}</label>
+        <label className="text-sm">{w('shiftEnds')}<input aria-label={w('shiftEnds')} className="field-input" value={shiftEnd} onChange={(e) => setShiftEnd(e.target.value)} />{err('shiftEnd')}</label>
+        <label className="text-sm">{w('breakMinutes')}<input aria-label={w('breakMinutes')} className="field-input" value={breakMinutes} onChange={(e) => setBreakMinutes(e.target.value)} />{err('breakMinutes')}</label>
+        <label className="text-sm">{w('overtimeLimit')}<input aria-label={w('overtimeLimitLabel')} className="field-input" value={limit} onChange={(e) => setLimit(e.target.value)} />{err('overtimeLimitHoursPerWeek')}</label>
+        <label className="text-sm sm:col-span-2">{w('holidays')}<input aria-label={w('holidaysLabel')} className="field-input" value={holidays} onChange={(e) => setHolidays(e.target.value)} />{err('holidays')}</label>
       </div>
       <ErrorNote error={save.error && !(save.error instanceof ApiError && Object.keys(save.error.fields).length) ? save.error : null} />
-      <button type="button" className="btn-primary mt-3" disabled={save.isPending} onClick={handleSave}>{save.isPending ? 'Saving…' : 'Save calendar'}</button>
+      <button type="button" className="btn-primary mt-3" disabled={save.isPending} onClick={handleSave}>{save.isPending ? w('saving') : w('save')}</button>
       <div className="mt-3">
-        <Caution title={cal.exceedsIlo ? 'These hours are above the ILO figures' : 'Working hours'} items={[cal.caution]} source="ILO Hours of Work (Industry) Convention, 1919 (No. 1)." />
+        <Caution title={cal.exceedsIlo ? w('aboveIlo') : w('hours')} items={[cal.caution]} source={w('iloSource')} />
       </div>
     </Card>
   );

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { fmt } from '@/lib/format';
-import { useEffect, useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import type { BatchDto } from '@shared/schemas/batches';
 import type { FabricDto } from '@shared/schemas/cutting';
 import type { CutPlanDto } from '@shared/schemas/cutting';
@@ -10,7 +10,12 @@ import { api, ApiError, downloadFile } from '@/lib/api-client';
 import { useCan } from '@/lib/auth';
 import { batchQueries, fabricQueries } from '@/lib/queries';
 import { markerQueries, useCancelMarker, useStartMarker } from '../api/marker-queries';
+import { useTranslation } from '@/lib/i18n';
 import { MarkerDrawing } from './marker-drawing';
+import { area } from '../words';
+
+// recharts loads with the first run that has points to draw, not with the page.
+const MarkerProgressChart = lazy(async () => ({ default: (await import('./marker-progress-chart')).MarkerProgressChart }));
 
 const m = (mm: number | null) => (mm === null ? '—' : fmt().fabricLength(mm));
 const tone = { queued: 'grey', running: 'blue', done: 'teal', failed: 'red', cancelled: 'gold' } as const;
@@ -19,6 +24,7 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
   const { data: marker } = useQuery(markerQueries.detail(id));
   const cancel = useCancelMarker();
   const canWrite = useCan('markers:write');
+  const { t } = useTranslation();
   if (!marker) return <Spinner />;
   const isLive = marker.status === 'queued' || marker.status === 'running';
   const pct = marker.budgetSeconds ? Math.min(100, (marker.elapsedMs / (marker.budgetSeconds * 1000)) * 100) : 0;
@@ -27,7 +33,7 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
       <div className="flex flex-wrap items-center gap-3 text-sm">
         <Badge tone={tone[marker.status]}>{marker.status}</Badge>
         <span>Best length <b data-testid="marker-length">{m(marker.lengthMm)}</b></span>
-        <span>Elapsed <b>{(marker.elapsedMs / 1000).toFixed(1)} s</b> of {marker.budgetSeconds} s</span>
+        <span>Elapsed <b>{(marker.elapsedMs / 1000).toFixed(1)} s</b> of {marker.budgetSeconds} s{marker.cores > 0 ? ` ${t(`${area}.cores`, { count: marker.cores })}` : ''}</span>
         {marker.utilisation !== null && !isLive ? <span>Utilisation <b data-testid="marker-utilisation">{(marker.utilisation * 100).toFixed(1)} %</b></span> : null}
         {marker.lengthPerGarmentMm ? <span>{m(marker.lengthPerGarmentMm)} per garment</span> : null}
         <span>{marker.pieceCount} pieces · width {Math.round(marker.widthMm / 10)} cm</span>
@@ -40,6 +46,13 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
           <p className="mt-1 text-xs text-ink-600">{marker.status === 'queued' ? 'Waiting for the nesting queue…' : 'Nesting: the strip is shortened while pieces are moved apart.'}</p>
           {canWrite ? <button type="button" className="btn-quiet mt-2" onClick={() => cancel.mutate(marker.id)}>Stop</button> : null}
         </div>
+      ) : null}
+      {marker.progress.length > 0 ? (
+        <Suspense fallback={<div className="mt-3 h-48" />}>
+          <MarkerProgressChart points={marker.progress} />
+        </Suspense>
+      ) : isLive && marker.status === 'running' ? (
+        <p className="mt-2 text-xs text-ink-600">{t(`${area}.noPointsYet`)}</p>
       ) : null}
       {marker.error ? <p className={`mt-2 text-sm ${marker.status === 'failed' ? 'text-madder-700' : 'text-ink-600'}`}>{marker.error}</p> : null}
       {marker.drawing && marker.lengthMm ? (

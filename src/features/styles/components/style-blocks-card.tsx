@@ -118,11 +118,11 @@ function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: numb
 
 function OptionField({ index, block, field: f, spec, canEdit, onChange }: { index: number; block: BlockName; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
   const { t } = useTranslation();
-  const { len, system, lengthUnitWord } = useLength();
+  const { len, system, lengthUnitWord, decimal } = useLength();
   const unit = system === 'metric' ? 'cm' : 'in';
   const label = t(`${area}.fields.${block}.${f.path.replace(/\./g, '_')}`);
   const choice = (c: string) => t(`${area}.choices.${c}`, { defaultValue: c });
-  const cell = (v: number) => (system === 'metric' ? String(Number((v / 10).toFixed(2))) : formatLength(v, system).replace('"', ''));
+  const cell = (v: number) => (system === 'metric' ? decimal(String(Number((v / 10).toFixed(2)))) : formatLength(v, system).replace('"', ''));
   const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
   const value = getAt(spec, f.path);
   const id = `b${index}-${f.path}`;
@@ -153,11 +153,11 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
       <span className="field-label">{label}{f.kind === 'length' ? ` (${lengthUnitWord})` : ''}</span>
       <input
         id={id} className="field-input" disabled={!canEdit} placeholder={t(`${area}.blocks.defaultValue`, { value: shown })}
-        defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : String(value)}
+        defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : decimal(String(value))}
         onBlur={(e) => {
           const t = e.target.value.trim();
           if (!t) return set(undefined);
-          const v = f.kind === 'length' ? parseCell(t) : Number(t);
+          const v = f.kind === 'length' ? parseCell(t) : Number(t.replace(',', '.'));
           if (v !== null && Number.isFinite(v)) set(v);
         }}
       />
