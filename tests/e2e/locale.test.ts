@@ -53,11 +53,8 @@ const PAGES: { path: string; permission?: Permission }[] = [
  */
 const PAGES_STILL_MOVING = new Set<string>([
   paths.batch.getHref(1),
-  paths.people.getHref(),
   paths.markers.getHref(),
   paths.line.getHref(1),
-  paths.floor.getHref(1),
-  paths.pay.getHref(),
   paths.batchCosting.getHref(1),
   paths.purchasing.getHref(),
 ]);
