@@ -12,6 +12,7 @@ import { queryClient } from '@/lib/query-client';
 import { purchasingQueries } from '@/features/purchasing/api/purchasing-queries';
 import { area } from '../words';
 import { MM_PER_YARD } from './cutting-format';
+import { FieldError } from '@/components/ui/form';
 
 interface Draft {
   name: string;
@@ -153,7 +154,7 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
           <option value="">{t(`${area}.form.notSet`)}</option>
           {(suppliers.data ?? []).map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
         </select>
-        {errors.supplierId ? <p className="field-error">{errors.supplierId}</p> : null}
+        {errors.supplierId ? <FieldError>{errors.supplierId}</FieldError> : null}
       </div>
       <label className="flex items-center gap-2 pt-6 text-sm">
         <input type="checkbox" checked={d.isDirectional} onChange={(e) => setD({ ...d, isDirectional: e.target.checked })} />
