@@ -1,5 +1,5 @@
 import type { ErrorCode } from '../shared/types/api';
-import { english, render, translate, type Said, type Speaker } from './i18n/speak';
+import { english, render, translate, type Said, type Speaker } from '../shared/i18n/speak';
 
 /** What an error says to a person: the sentence and, for a form, one per field. */
 export interface Spoken {

@@ -1,6 +1,6 @@
 import type { Request, RequestHandler } from 'express';
 import { LANGUAGES, type FormatSettings, type Language } from '../../shared/format/studio-format';
-import { speaker, type Speaker } from './speak';
+import { speaker, type Speaker } from '../../shared/i18n/speak';
 
 /**
  * Who an answer speaks to: the signed-in person in their own language, else their studio's, with the studio's

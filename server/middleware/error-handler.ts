@@ -1,7 +1,7 @@
 import type { ErrorRequestHandler, Request, RequestHandler } from 'express';
 import { isUniqueViolation } from '../db/data-source';
 import { AppError } from '../errors';
-import { speaker, type Speaker } from '../i18n/speak';
+import { speaker, type Speaker } from '../../shared/i18n/speak';
 import { logger } from '../observability/logger';
 
 /** The request id pino-http gave this request, quoted in every error answer so a studio can report it. */

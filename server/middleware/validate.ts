@@ -1,7 +1,7 @@
 import type { Request, RequestHandler, Response } from 'express';
 import type { z, ZodType } from 'zod';
 import { AppError, type Spoken } from '../errors';
-import { fieldLabel, issueMessage, lowerFirst, type Speaker } from '../i18n/speak';
+import { fieldLabel, issueMessage, lowerFirst, type Speaker } from '../../shared/i18n/speak';
 
 type Schemas = { body?: ZodType; query?: ZodType; params?: ZodType };
 

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { en } from '@/locales/en';
 import { fr } from '@/locales/fr';
 import { auditChanges, auditSentence } from '@/features/audit/lib/audit-sentence';
-import { i18n, loadLanguage, type AreaWords, type Words } from './i18n';
+import { i18n, loadLanguage, localSentence, type AreaWords, type Words } from './i18n';
 
 /** Every area's own words (`src/features/<area>/words.ts`), registered as their modules load. */
 const AREAS = import.meta.glob<{ words: AreaWords<Words>; area: string }>('/src/features/*/words.ts', { eager: true });
@@ -90,5 +90,20 @@ describe('the audit trail as sentences', () => {
 
   it('names an action the dictionary does not know in plain words', () => {
     expect(auditSentence({ ...entry, action: 'mark_ready', entity: 'cut_order_line', entityId: 2 }, i18n.getFixedT('en'))).toBe('Zawadi Kerubo mark ready cut order line #2');
+  });
+});
+
+describe('form checks of the shared schemas in the language on screen', () => {
+  const settings = { unitSystem: 'metric', currency: 'EUR', language: 'fr', timeZone: 'UTC' } as const;
+
+  it('says a schema sentence in French once French is on screen, and leaves English as written', async () => {
+    await loadLanguage('fr');
+    await i18n.changeLanguage('fr');
+    expect(localSentence('At least 10 characters', settings)).toBe('Au moins 10 caractères');
+    expect(localSentence('Code is required', settings)).toBe('À remplir');
+    // A sentence the server already wrote in French, or one nobody catalogued, is shown as it is.
+    expect(localSentence('Déjà en français.', settings)).toBe('Déjà en français.');
+    await i18n.changeLanguage('en');
+    expect(localSentence('At least 10 characters', { ...settings, language: 'en' })).toBe('At least 10 characters');
   });
 });

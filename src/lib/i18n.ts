@@ -1,6 +1,6 @@
 import i18n from 'i18next';
 import { initReactI18next, useTranslation } from 'react-i18next';
-import { LANGUAGES, type Language } from '@shared/format/studio-format';
+import { LANGUAGES, type FormatSettings, type Language } from '@shared/format/studio-format';
 import { en } from '@/locales/en';
 
 const STORED = 'seamrun.language';
@@ -15,9 +15,19 @@ function deviceLanguage(): Language {
 
 // English ships in the entry (it is every screen's fallback); other languages are chunks of their own, fetched
 // once and kept by the service worker with the rest of the app, so a phone offline still has its words.
-const LOADERS: Record<Exclude<Language, 'en'>, () => Promise<typeof en>> = {
-  fr: async () => (await import('@/locales/fr')).fr,
+/** A language's words, and how it says a sentence of the shared schemas (which are written in English). */
+interface LanguagePack {
+  words: typeof en;
+  sentence: (english: string, settings: FormatSettings) => string | null;
+}
+
+const LOADERS: Record<Exclude<Language, 'en'>, () => Promise<LanguagePack>> = {
+  fr: async () => {
+    const { fr, sayInFrench } = await import('@/locales/fr');
+    return { words: fr, sentence: sayInFrench };
+  },
 };
+const sentences = new Map<Language, LanguagePack['sentence']>();
 
 void i18n.use(initReactI18next).init({
   resources: { en: { translation: structuredClone(en) } }, // i18next merges areas into its bundle: keep en.ts as written
@@ -34,8 +44,20 @@ const loaded = new Set<Language>(['en']);
 /** Makes a language's words available (a no-op for English and for one already loaded). */
 export async function loadLanguage(language: Language): Promise<void> {
   if (language === 'en' || loaded.has(language)) return;
-  i18n.addResourceBundle(language, 'translation', structuredClone(await LOADERS[language]()), true, true);
+  const pack = await LOADERS[language]();
+  i18n.addResourceBundle(language, 'translation', structuredClone(pack.words), true, true);
+  sentences.set(language, pack.sentence);
   loaded.add(language);
+}
+
+/**
+ * A refusal in the language on screen: a form check of the shared schemas says it in English (the schemas serve
+ * the server too), so it is looked up in the server's own catalogue of sentences; a sentence the server already
+ * wrote in the person's language, or one the catalogue does not know, is shown as it is.
+ */
+export function localSentence(text: string, settings: FormatSettings): string {
+  const say = sentences.get(i18n.language as Language);
+  return (say && say(text, settings)) ?? text;
 }
 
 /** A nested dictionary of words: every leaf a string. */

@@ -1,4 +1,9 @@
+import type { FormatSettings } from '@shared/format/studio-format';
+import { speaker, translate } from '@shared/i18n/speak';
 import type { Dictionary } from './en';
+
+/** A sentence of the shared schemas (or of the server) in French, with the studio's units; null when unknown. */
+export const sayInFrench = (english: string, settings: FormatSettings) => translate(english, speaker({ ...settings, language: 'fr' }));
 
 /**
  * Les mots du client en français, clé pour clé comme en.ts. Pluriels selon les règles du français (CLDR :

@@ -1,4 +1,4 @@
-import { translate } from '../../i18n/speak';
+import { translate } from '../../../shared/i18n/speak';
 import { createHash, randomBytes } from 'node:crypto';
 import { Router, type Request, type Response } from 'express';
 import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';

@@ -6,7 +6,7 @@ import { sendDownload } from '../../middleware/download';
 import { validated } from '../../middleware/validate';
 import type { BatchDocument, CuttingService, LayDocument } from './cutting.service';
 import { materialTicketQuery } from './material-cut-ticket';
-import { translate } from '../../i18n/speak';
+import { translate } from '../../../shared/i18n/speak';
 
 const BATCH_DOCUMENTS: BatchDocument[] = ['marker-list.xlsx', 'marker-list.pdf', 'bundle-register.xlsx', 'bundle-tickets.pdf'];
 const LAY_DOCUMENTS: LayDocument[] = ['cut-ticket.pdf', 'marker-list.xlsx', 'marker-list.pdf', 'bundle-tickets.pdf'];

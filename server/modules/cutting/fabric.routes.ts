@@ -6,7 +6,7 @@ import { createFabricInput, createRollsInput, updateFabricInput, type RollInput 
 import { idParam } from '../../../shared/schemas/common';
 import { actorOf, requirePermission, type Actor } from '../../auth/require';
 import { badRequest, conflict, forbidden, notFound } from '../../errors';
-import { translate } from '../../i18n/speak';
+import { translate } from '../../../shared/i18n/speak';
 import { validate } from '../../middleware/validate';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { FabricRepository } from './fabric.repository';

@@ -4,7 +4,7 @@ import type { CorrectLayInput, RecordLayInput } from '../../../shared/schemas/cu
 import type { RollEntity } from '../../entities';
 import type { LayCorrection, LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
-import { said, type Said } from '../../i18n/speak';
+import { said, type Said } from '../../../shared/i18n/speak';
 import { batchCode } from '../batches/batch.presenter';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';

@@ -4,14 +4,24 @@ import type { ImportRowError, RollInput } from '../../../shared/schemas/cutting'
 import { AppError } from '../../errors';
 import { checkSheetSize, checkWorkbookArchive, parseCsvWithinLimits, TABLE_LIMITS } from '../uploads/table-limits';
 
-/** Column aliases of a supplier packing list (header row, case and spacing ignored) with their unit factor to mm. */
-const LENGTH_COLUMNS: Record<string, number> = { 'length m': 1000, 'length mm': 1, 'length yd': 914.4, 'metres': 1000, 'meters': 1000, 'yards': 914.4 };
-const WIDTH_COLUMNS: Record<string, number> = { 'width cm': 10, 'width mm': 1, 'width in': 25.4 };
-const LABEL_COLUMNS = ['roll', 'roll no', 'roll number', 'label', 'roll label'];
-const LOT_COLUMNS = ['shade lot', 'lot', 'shade', 'dye lot'];
-const DATE_COLUMNS = ['received', 'received date', 'date'];
+/**
+ * Column titles of a supplier packing list (header row; case, accents, spacing and punctuation ignored), in English
+ * and French, with the length unit's factor to mm. "vg" is the French abbreviation of verge (yard), "po" of pouce.
+ */
+const LENGTH_COLUMNS: Record<string, number> = {
+  'length m': 1000, 'length mm': 1, 'length yd': 914.4, 'metres': 1000, 'meters': 1000, 'yards': 914.4,
+  'longueur m': 1000, 'longueur mm': 1, 'longueur yd': 914.4, 'longueur vg': 914.4, 'metrage': 1000, 'metrage m': 1000, 'verges': 914.4,
+};
+const WIDTH_COLUMNS: Record<string, number> = {
+  'width cm': 10, 'width mm': 1, 'width in': 25.4,
+  'laize cm': 10, 'laize mm': 1, 'laize po': 25.4, 'laize in': 25.4, 'largeur cm': 10, 'largeur mm': 1, 'largeur po': 25.4,
+};
+const LABEL_COLUMNS = ['roll', 'roll no', 'roll number', 'label', 'roll label', 'rouleau', 'no rouleau', 'n° rouleau', 'numero de rouleau', 'numero rouleau', 'etiquette'];
+const LOT_COLUMNS = ['shade lot', 'lot', 'shade', 'dye lot', 'bain', 'bain de teinture', 'lot de teinture', 'nuance'];
+const DATE_COLUMNS = ['received', 'received date', 'date', 'recu', 'reception', 'date de reception'];
 
-const norm = (h: string) => h.toLowerCase().replace(/[_\-.()]/g, ' ').replace(/\s+/g, ' ').trim();
+const norm = (h: string) =>
+  h.normalize('NFD').replace(/[\u0300-\u036f]/g, '').toLowerCase().replace(/[_\-.()]/g, ' ').replace(/\s+/g, ' ').trim();
 
 export interface PackingListResult {
   rolls: RollInput[];

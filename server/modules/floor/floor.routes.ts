@@ -1,4 +1,4 @@
-import { translate } from '../../i18n/speak';
+import { translate } from '../../../shared/i18n/speak';
 import { Router } from 'express';
 import { attendanceQuery, batchIdParam, bundleLookupQuery, bundleMatchesQuery, logWorkInput, putAttendanceInput } from '../../../shared/schemas/floor';
 import { idParam } from '../../../shared/schemas/common';

@@ -5,7 +5,7 @@ import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/fl
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
-import { said } from '../../i18n/speak';
+import { said } from '../../../shared/i18n/speak';
 import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';

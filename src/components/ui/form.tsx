@@ -1,5 +1,18 @@
 import type { InputHTMLAttributes, ReactNode } from 'react';
 import { forwardRef } from 'react';
+import { useFormat } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
+
+/** Why a value is refused, in the language on screen (a shared schema's English sentence is looked up). */
+export function FieldError({ children, id, className = '' }: { children: string; id?: string; className?: string }) {
+  useTranslation(); // shown again when the language changes
+  const settings = useFormat().settings;
+  return (
+    <p id={id} className={`field-error ${className}`.trim()}>
+      {localSentence(children, settings)}
+    </p>
+  );
+}
 
 export const Field = forwardRef<
   HTMLInputElement,
@@ -13,7 +26,7 @@ export const Field = forwardRef<
       </label>
       <input ref={ref} id={inputId} className="field-input" aria-invalid={Boolean(error)} {...rest} />
       {hint && !error ? <p className="mt-1 text-xs text-ink-600">{hint}</p> : null}
-      {error ? <p className="field-error">{error}</p> : null}
+      {error ? <FieldError>{error}</FieldError> : null}
     </div>
   );
 });

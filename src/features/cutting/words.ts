@@ -160,7 +160,7 @@ export const words: AreaWords<typeof en> = {
       width: 'Laize ({{unit}})',
       add: 'Ajouter le rouleau',
       importHelp:
-        'Liste de colisage du fournisseur en CSV ou XLSX. Les titres de colonnes sont lus en anglais, majuscules ou non : <b>roll</b> (rouleau), <b>length yd</b>, <b>length m</b> ou <b>length mm</b> (longueur), <b>width in</b> ou <b>width cm</b> (laize), <b>lot</b> (bain), <b>received</b> (date de réception, AAAA-MM-JJ). Rien n’est enregistré tant que chaque ligne n’est pas juste.',
+        'Liste de colisage du fournisseur en CSV ou XLSX, avec les colonnes <b>Rouleau</b>, <b>Longueur vg</b> (ou Longueur m / Longueur mm), <b>Laize po</b> (ou Laize cm), <b>Bain</b>, <b>Date de réception</b> (AAAA-MM-JJ) ; les titres anglais sont lus aussi. Rien n’est enregistré tant que chaque ligne n’est pas juste.',
       importFile: 'Fichier de la liste de colisage',
       import: 'Importer la liste de colisage',
       imported_one: '{{count}} rouleau importé.',

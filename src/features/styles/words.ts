@@ -58,12 +58,19 @@ const en = {
   presets: {
     'shirt-dress': {
       name: 'Shirt dress',
-      description: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
+      description: {
+        metric: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
+        imperial: 'A-line shirt dress, short set-in sleeves, button front with collar band, patch pockets and a self belt.',
+      },
     },
     'lined-fitted-dress': {
       name: 'Lined fitted dress',
-      description:
-        'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
+      description: {
+        metric:
+          'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
+        imperial:
+          'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
+      },
     },
   },
   blocks: {
@@ -112,8 +119,6 @@ const en = {
       neckline_shape: 'Front neckline',
       neckline_depthMm: 'Neckline depth',
       backNeckline: 'Back neckline',
-      shoulderPads: 'Shoulder pads (+1 in at the shoulder)',
-      centreBackOpening: 'Centre-back zip opening (1½ in allowance)',
       seamMm: 'Seam allowance',
     },
     skirt: {
@@ -122,7 +127,6 @@ const en = {
       waistEaseMm: 'Waist ease',
       hipEaseMm: 'Hip ease',
       fraction: 'Circle fraction (circle)',
-      centreBackOpening: 'Centre-back zip opening (1½ in allowance)',
       hemMm: 'Hem allowance',
     },
     sleeve: { length: 'Length', lengthMm: 'Sleeve length', hemMm: 'Hem allowance' },
@@ -157,15 +161,39 @@ const en = {
     },
     belt: { widthMm: 'Finished width', extraMm: 'Length past the waist', waistEaseMm: 'Waist ease' },
   },
-  /** Defaults that come from the body or depend on another option, as words. */
+  /**
+   * Option labels that name a length, by the studio's unit system (English names the block's own figures in both).
+   */
+  fieldsByUnit: {
+    metric: {
+      bodice: { shoulderPads: 'Shoulder pads (+1 in at the shoulder)', centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
+      skirt: { centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
+    },
+    imperial: {
+      bodice: { shoulderPads: 'Shoulder pads (+1 in at the shoulder)', centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
+      skirt: { centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
+    },
+  },
+  /** Defaults that come from the body or depend on another option, as words, by the studio's unit system. */
   defaults: {
-    bustMinusWaist: 'from bust − waist',
-    neckDepth: 'round 3 in, V 7 in',
-    waistToKnee: 'waist to knee',
-    skirtHem: 'straight 2 in, circle ⅜ in',
-    fromArm: 'from the arm',
-    sleeveHem: 'long 2 in, else 1 in',
-    pocketTop: 'patch 90 mm, in-seam 1 in',
+    metric: {
+      bustMinusWaist: 'from bust − waist',
+      neckDepth: 'round 3 in, V 7 in',
+      waistToKnee: 'waist to knee',
+      skirtHem: 'straight 2 in, circle ⅜ in',
+      fromArm: 'from the arm',
+      sleeveHem: 'long 2 in, else 1 in',
+      pocketTop: 'patch 90 mm, in-seam 1 in',
+    },
+    imperial: {
+      bustMinusWaist: 'from bust − waist',
+      neckDepth: 'round 3 in, V 7 in',
+      waistToKnee: 'waist to knee',
+      skirtHem: 'straight 2 in, circle ⅜ in',
+      fromArm: 'from the arm',
+      sleeveHem: 'long 2 in, else 1 in',
+      pocketTop: 'patch 90 mm, in-seam 1 in',
+    },
   },
   choices: {
     round: 'round', v: 'v', square: 'square', boat: 'boat', standard: 'standard', high: 'high',
@@ -259,12 +287,19 @@ export const words: AreaWords<typeof en> = {
     presets: {
       'shirt-dress': {
         name: 'Robe chemise',
-        description: 'Robe chemise trapèze, manches montées courtes, boutonnage devant avec pied de col, poches plaquées et ceinture dans le tissu.',
+        description: {
+          metric: 'Robe chemise trapèze, manches montées courtes, boutonnage devant avec pied de col, poches plaquées et ceinture dans le tissu.',
+          imperial: 'Robe chemise trapèze, manches montées courtes, boutonnage devant avec pied de col, poches plaquées et ceinture dans le tissu.',
+        },
       },
       'lined-fitted-dress': {
         name: 'Robe ajustée doublée',
-        description:
-          'Corsage ajusté à pinces de taille, encolure en V de 7 po et fermeture à glissière au milieu dos, manches longues avec épaulettes, basque cloche froncée en tissu contrasté, jupe droite doublée, parementures d’encolure et doublure.',
+        description: {
+          metric:
+            'Corsage ajusté à pinces de taille, encolure en V de 18 cm et fermeture à glissière au milieu dos, manches longues avec épaulettes, basque cloche froncée en tissu contrasté, jupe droite doublée, parementures d’encolure et doublure.',
+          imperial:
+            'Corsage ajusté à pinces de taille, encolure en V de 7 po et fermeture à glissière au milieu dos, manches longues avec épaulettes, basque cloche froncée en tissu contrasté, jupe droite doublée, parementures d’encolure et doublure.',
+        },
       },
     },
     blocks: {
@@ -313,8 +348,6 @@ export const words: AreaWords<typeof en> = {
         neckline_shape: 'Encolure devant',
         neckline_depthMm: 'Profondeur d’encolure',
         backNeckline: 'Encolure dos',
-        shoulderPads: 'Épaulettes (+1 po à l’épaule)',
-        centreBackOpening: 'Ouverture à glissière milieu dos (valeur 1½ po)',
         seamMm: 'Marge de couture',
       },
       skirt: {
@@ -323,7 +356,6 @@ export const words: AreaWords<typeof en> = {
         waistEaseMm: 'Aisance de taille',
         hipEaseMm: 'Aisance de hanches',
         fraction: 'Fraction de cercle (cloche)',
-        centreBackOpening: 'Ouverture à glissière milieu dos (valeur 1½ po)',
         hemMm: 'Valeur d’ourlet',
       },
       sleeve: { length: 'Longueur', lengthMm: 'Longueur de manche', hemMm: 'Valeur d’ourlet' },
@@ -358,14 +390,35 @@ export const words: AreaWords<typeof en> = {
       },
       belt: { widthMm: 'Largeur finie', extraMm: 'Longueur au-delà de la taille', waistEaseMm: 'Aisance de taille' },
     },
+    fieldsByUnit: {
+      metric: {
+        bodice: { shoulderPads: 'Épaulettes (+2,5 cm à l’épaule)', centreBackOpening: 'Ouverture à glissière milieu dos (valeur 3,8 cm)' },
+        skirt: { centreBackOpening: 'Ouverture à glissière milieu dos (valeur 3,8 cm)' },
+      },
+      imperial: {
+        bodice: { shoulderPads: 'Épaulettes (+1 po à l’épaule)', centreBackOpening: 'Ouverture à glissière milieu dos (valeur 1½ po)' },
+        skirt: { centreBackOpening: 'Ouverture à glissière milieu dos (valeur 1½ po)' },
+      },
+    },
     defaults: {
-      bustMinusWaist: 'poitrine − taille',
-      neckDepth: 'ronde 3 po, en V 7 po',
-      waistToKnee: 'de la taille au genou',
-      skirtHem: 'droite 2 po, cloche ⅜ po',
-      fromArm: 'd’après le bras',
-      sleeveHem: 'longue 2 po, sinon 1 po',
-      pocketTop: 'plaquée 90 mm, dans la couture 1 po',
+      metric: {
+        bustMinusWaist: 'poitrine − taille',
+        neckDepth: 'ronde 7,6 cm, en V 17,8 cm',
+        waistToKnee: 'de la taille au genou',
+        skirtHem: 'droite 5,1 cm, cloche 1 cm',
+        fromArm: 'd’après le bras',
+        sleeveHem: 'longue 5,1 cm, sinon 2,5 cm',
+        pocketTop: 'plaquée 9 cm, dans la couture 2,5 cm',
+      },
+      imperial: {
+        bustMinusWaist: 'poitrine − taille',
+        neckDepth: 'ronde 3 po, en V 7 po',
+        waistToKnee: 'de la taille au genou',
+        skirtHem: 'droite 2 po, cloche ⅜ po',
+        fromArm: 'd’après le bras',
+        sleeveHem: 'longue 2 po, sinon 1 po',
+        pocketTop: 'plaquée 3 1/2 po, dans la couture 1 po',
+      },
     },
     choices: {
       round: 'ronde', v: 'en V', square: 'carrée', boat: 'bateau', standard: 'standard', high: 'montante',

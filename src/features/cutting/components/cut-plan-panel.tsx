@@ -10,6 +10,7 @@ import { batchStyleQueries, cutPlanQueries, fabricQueries, usePlanCut } from '..
 import { area } from '../words';
 import { metres, MM_PER_YARD, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { paths } from '@/config/paths';
+import { FieldError } from '@/components/ui/form';
 
 /** The batch page's cut plan: plan settings, lays with rolls, fabric used against the lower bound. */
 export function CutPlanPanel({ batch }: { batch: BatchDto }) {
@@ -36,7 +37,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
     <div>
       <label className="field-label" htmlFor={`cp-${key}`}>{label}</label>
       <input id={`cp-${key}`} className="field-input" type="number" step="any" value={form[key]} onChange={(e) => setForm({ ...form, [key]: e.target.value })} aria-invalid={Boolean(err)} />
-      {err ? <p className="field-error">{err}</p> : null}
+      {err ? <FieldError>{err}</FieldError> : null}
     </div>
   );
   return (

@@ -12,6 +12,7 @@ import { queryClient } from '@/lib/query-client';
 import { purchasingQueries } from '@/features/purchasing/api/purchasing-queries';
 import { area } from '../words';
 import { MM_PER_YARD } from './cutting-format';
+import { FieldError } from '@/components/ui/form';
 
 interface Draft {
   name: string;
@@ -31,6 +32,7 @@ const decimalText = (text: string, french: boolean) => (french ? text.replace(/[
 
 function draftOf(f: FabricDto | null, imperial: boolean, currency: string, french = false): Draft {
   if (!f) return { name: '', composition: '', width: '', shrinkageLength: '0', shrinkageWidth: '0', isDirectional: false, price: '', priceUnit: imperial ? 'yard' : 'metre', supplierId: '', maxPlies: '40' };
+  const inLanguage = (text: string) => (french ? text.replace('.', ',') : text);
   // The price as the supplier quoted it; older fabrics only have a rate per metre. An imperial studio prices by
   // the yard: a quote per metre is shown per yard there (and saved so once the form is saved).
   const asQuoted = f.price ?? (f.pricePerMetreMinor === undefined ? undefined : { amountMinor: f.pricePerMetreMinor, per: 'metre' as const });
@@ -40,8 +42,8 @@ function draftOf(f: FabricDto | null, imperial: boolean, currency: string, frenc
     composition: f.composition,
     // Inches with fractions to 1/8 (`57 1/2`), as the studio writes them.
     width: imperial ? fmt().fabricWidth(f.widthMm).replace('"', '') : String(f.widthMm / 10),
-    shrinkageLength: String(f.shrinkageLengthPercent ?? f.shrinkagePercent),
-    shrinkageWidth: String(f.shrinkageWidthPercent ?? f.shrinkagePercent),
+    shrinkageLength: inLanguage(String(f.shrinkageLengthPercent ?? f.shrinkagePercent)),
+    shrinkageWidth: inLanguage(String(f.shrinkageWidthPercent ?? f.shrinkagePercent)),
     isDirectional: f.isDirectional,
     price: quoted ? (french ? toMajorText(quoted.amountMinor, currency).replace('.', ',') : toMajorText(quoted.amountMinor, currency)) : '',
     priceUnit: quoted?.per ?? (imperial ? 'yard' : 'metre'),
@@ -152,7 +154,7 @@ export function FabricForm({ fabric, onDone }: { fabric: FabricDto | null; onDon
           <option value="">{t(`${area}.form.notSet`)}</option>
           {(suppliers.data ?? []).map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
         </select>
-        {errors.supplierId ? <p className="field-error">{errors.supplierId}</p> : null}
+        {errors.supplierId ? <FieldError>{errors.supplierId}</FieldError> : null}
       </div>
       <label className="flex items-center gap-2 pt-6 text-sm">
         <input type="checkbox" checked={d.isDirectional} onChange={(e) => setD({ ...d, isDirectional: e.target.checked })} />

@@ -13,6 +13,7 @@ import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queri
 import { area } from '../words';
 import { fabricUnits, MM_PER_YARD } from './cutting-format';
 import { FabricForm } from './fabric-form';
+import { FieldError } from '@/components/ui/form';
 
 function RollTable({ rolls }: { rolls: RollDto[] }) {
   const { t } = useTranslation();
@@ -55,7 +56,7 @@ function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number 
     <div>
       <label className="field-label" htmlFor={`roll-${key}`}>{label}</label>
       <input id={`roll-${key}`} className="field-input" type={type} step="any" value={f[key]} onChange={(e) => setF({ ...f, [key]: e.target.value })} aria-invalid={Boolean(err)} />
-      {err ? <p className="field-error">{err}</p> : null}
+      {err ? <FieldError>{err}</FieldError> : null}
     </div>
   );
   return (

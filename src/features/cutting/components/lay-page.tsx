@@ -11,6 +11,7 @@ import { area } from '../words';
 import { CuttingCautions } from './cutting-cautions';
 import { metres, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { ConfirmButton } from '@/components/ui/confirm-button';
+import { FieldError } from '@/components/ui/form';
 
 type Actual = { actualPlies: string; actualRemnantM: string; note: string };
 
@@ -149,7 +150,7 @@ export function LayPage() {
             <div className="mt-3 space-y-2">
               <label className="field-label" htmlFor="lay-correction-reason">{t(`${area}.lay.why`)}</label>
               <textarea id="lay-correction-reason" className="field-input" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} aria-invalid={Boolean(fields.reason)} />
-              {fields.reason ? <p className="field-error">{fields.reason}</p> : null}
+              {fields.reason ? <FieldError>{fields.reason}</FieldError> : null}
               <div className="flex flex-wrap gap-2">
                 <button type="button" className="btn-primary" disabled={correct.isPending} onClick={handleCorrect}>{t(`${area}.lay.saveCorrection`)}</button>
                 <button type="button" className="btn-quiet" onClick={() => { setCorrecting(false); setLocal({}); }}>{t('common.cancel')}</button>

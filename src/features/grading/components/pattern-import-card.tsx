@@ -7,6 +7,7 @@ import { parseLength } from '@shared/units/length-format';
 import { useTranslation } from '@/lib/i18n';
 import { useLength } from '../hooks/use-length';
 import { area } from '../words';
+import { FieldError } from '@/components/ui/form';
 
 type Cut = 'cut1' | 'pair' | 'fold';
 interface Settings { use: boolean; cut: Cut; copies: string; material: string; seam: string }
@@ -64,7 +65,7 @@ export function PatternImportCard({ styleId }: { styleId: number }) {
         <div>
           <label className="field-label" htmlFor="pattern-file">{t(`${area}.pattern.file`)}</label>
           <input id="pattern-file" type="file" accept=".dxf,.svg" className="field-input" onChange={(e) => { setFile(e.target.files?.[0] ?? null); preview.reset(); }} />
-          {fields.file ? <p className="field-error">{fields.file}</p> : null}
+          {fields.file ? <FieldError>{fields.file}</FieldError> : null}
         </div>
         <div>
           <label className="field-label" htmlFor="pattern-outline">{t(`${area}.pattern.outlineIs`)}</label>
@@ -73,14 +74,14 @@ export function PatternImportCard({ styleId }: { styleId: number }) {
             <option value="sewing">{t(`${area}.pattern.sewing`)}</option>
             <option value="cutting">{t(`${area}.pattern.cutting`)}</option>
           </select>
-          {fields.outlineIs ? <p className="field-error">{fields.outlineIs}</p> : null}
+          {fields.outlineIs ? <FieldError>{fields.outlineIs}</FieldError> : null}
         </div>
         <div>
           <label className="field-label" htmlFor="pattern-units">{t(`${area}.pattern.units`)}</label>
           <select id="pattern-units" className="field-input" value={units} onChange={(e) => setUnits(e.target.value)}>
             <option value="">{t(`${area}.pattern.fromFile`)}</option><option value="mm">{t(`${area}.pattern.mm`)}</option><option value="cm">{t(`${area}.pattern.cm`)}</option><option value="in">{t(`${area}.pattern.inches`)}</option>
           </select>
-          {fields.units ? <p className="field-error">{fields.units}</p> : null}
+          {fields.units ? <FieldError>{fields.units}</FieldError> : null}
         </div>
       </div>
       <button type="button" className="btn-quiet" disabled={!file || !outlineIs || preview.isPending} onClick={read}>{preview.isPending ? t(`${area}.pattern.reading`) : t(`${area}.pattern.preview`)}</button>

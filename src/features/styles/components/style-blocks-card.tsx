@@ -26,7 +26,9 @@ const MATERIAL_CHOICES = ['self', 'lining', 'contrast', 'interfacing'];
 export function StyleBlocksCard({ style }: { style: StyleDto }) {
   const { t } = useTranslation();
   const material = (m: string) => t(`${area}.materials.${m}`, { defaultValue: m });
-  const preset = (id: string, part: 'name' | 'description', text: string) => t(`${area}.presets.${id}.${part}`, { defaultValue: text });
+  const system = fmt().settings.unitSystem;
+  const preset = (id: string, part: 'name' | 'description', text: string) =>
+    t(`${area}.presets.${id}.${part === 'name' ? 'name' : `description.${system}`}`, { defaultValue: text });
   const canEdit = useCan('styles:write');
   const [comp, setComp] = useState<StyleComposition>(style.composition ?? { preset: null, blocks: [] });
   const [links, setLinks] = useState<Record<string, number>>(style.materialFabrics);
@@ -120,7 +122,8 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
   const { t } = useTranslation();
   const { len, system, lengthUnitWord, decimal } = useLength();
   const unit = system === 'metric' ? 'cm' : 'in';
-  const label = t(`${area}.fields.${block}.${f.path.replace(/\./g, '_')}`);
+  const key = `${block}.${f.path.replace(/\./g, '_')}`;
+  const label = t(`${area}.fieldsByUnit.${system}.${key}`, { defaultValue: '' }) || t(`${area}.fields.${key}`);
   const choice = (c: string) => t(`${area}.choices.${c}`, { defaultValue: c });
   const cell = (v: number) => (system === 'metric' ? decimal(String(Number((v / 10).toFixed(2)))) : formatLength(v, system).replace('"', ''));
   const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
@@ -147,7 +150,7 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
       </label>
     );
   }
-  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : fmt().number(f.default, 3)) : t(`${area}.defaults.${f.default}`);
+  const shown = typeof f.default === 'number' ? (f.kind === 'length' ? len(f.default) : fmt().number(f.default, 3)) : t(`${area}.defaults.${system}.${f.default}`);
   return (
     <label className="text-sm" htmlFor={id}>
       <span className="field-label">{label}{f.kind === 'length' ? ` (${lengthUnitWord})` : ''}</span>

@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { frenchTypography } from '../../shared/format/french-typography';
-import { studioFormat, type FormatSettings, type Language, type StudioFormat } from '../../shared/format/studio-format';
+import { frenchTypography } from '../format/french-typography';
+import { studioFormat, type FormatSettings, type Language, type StudioFormat } from '../format/studio-format';
 import { MESSAGES_EN, MESSAGES_FR, NOT_FOUND_FR, VALUES_FR, type MessageKey } from './messages';
 import { FIELD_LABELS_FR, SCHEMA_MESSAGES_FR } from './validation-words';
 
