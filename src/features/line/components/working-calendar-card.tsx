@@ -3,8 +3,8 @@ import { useState } from 'react';
 import { workingCalendarInput, type WorkingCalendarDto } from '@shared/schemas/line';
 import { Caution, Card, ErrorNote, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
-import { formatDate } from '@/lib/format';
-import { useTranslation } from '@/lib/i18n';
+import { fmt, formatDate } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { calendarQueries, useSaveCalendar } from '../api/line-queries';
 import { area } from '../words';
 import { workingHoursCaution } from '../hooks/working-hours-caution';
@@ -45,7 +45,7 @@ function CalendarForm({ cal }: { cal: WorkingCalendarDto }) {
     });
     if (!parsed.success) {
       const found: Record<string, string> = {};
-      for (const i of parsed.error.issues) found[String(i.path[0] ?? 'form')] ??= i.message;
+      for (const i of parsed.error.issues) found[String(i.path[0] ?? 'form')] ??= localSentence(i.message, fmt().settings);
       return setErrors(found);
     }
     setErrors({});
