@@ -97,7 +97,6 @@ export default tseslint.config(
     // Stricter, where an area has been checked for it: also the words in labels, hints, placeholders, titles,
     // alternative text and column headers, and strings chosen inside markup (`{done ? 'Cut' : 'Planned'}`).
     files: ['src/**/*.tsx'],
-    ignores: ['src/features/{auth,markers,purchasing}/**'],
     plugins: { i18next },
     rules: {
       'i18next/no-literal-string': [

@@ -21,7 +21,7 @@ export function DataTable<T>({
   onRowClick,
   empty,
   urlKey,
-  label = 'Table',
+  label,
 }: {
   data: T[];
   columns: ColumnDef<T, any>[];
@@ -75,7 +75,7 @@ export function DataTable<T>({
         value={q}
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
-      <div role="region" aria-label={label} tabIndex={0} className="overflow-x-auto rounded-card border border-calico-200 bg-white">
+      <div role="region" aria-label={label ?? t('common.table')} tabIndex={0} className="overflow-x-auto rounded-card border border-calico-200 bg-white">
         <table className="min-w-full text-sm">
           <thead className="bg-thread-700 text-left text-calico-50">
             {table.getHeaderGroups().map((hg) => (

@@ -18,6 +18,8 @@ const en = {
   sections: { cutting: 'cutting', sewing: 'sewing', finishing: 'finishing' },
   efficiency: 'Standard minutes earned ÷ minutes worked',
   minutes: '{{value}} min',
+  workingHoursCaution:
+    'Usual cautions; follow local codes. ILO Hours of Work (Industry) Convention, 1919 (No. 1): working hours should not exceed 8 a day and 48 a week, with limited exceptions (e.g. averaging over up to three weeks). Overtime pay is at least 1.25 times the regular rate (C1 Art. 6(2)).',
   page: {
     title: 'Line plan',
     subtitle: 'Operations, line balance, capacity and the batch schedule',
@@ -201,6 +203,8 @@ export const words: AreaWords<typeof en> = {
     sections: { cutting: 'coupe', sewing: 'montage', finishing: 'finition' },
     efficiency: 'Minutes standard gagnées ÷ minutes travaillées',
     minutes: '{{value}} min',
+    workingHoursCaution:
+      'Précautions d’usage ; suivez la réglementation locale. Convention (n° 1) de l’OIT sur la durée du travail (industrie), 1919 : la durée du travail ne devrait pas dépasser 8 heures par jour et 48 heures par semaine, sauf exceptions limitées (p. ex. une moyenne sur trois semaines au plus). Les heures supplémentaires sont payées au moins 1,25 fois le taux normal (C1, art. 6(2)).',
     page: {
       title: 'Plan de chaîne',
       subtitle: 'Opérations, équilibrage de la chaîne, capacité et planning de la série',

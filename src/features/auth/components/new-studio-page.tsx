@@ -9,8 +9,19 @@ import { ErrorNote } from '@/components/ui/page';
 import { paths } from '@/config/paths';
 import { api } from '@/lib/api-client';
 import { afterSignIn } from '@/lib/auth';
+import { i18n, useTranslation } from '@/lib/i18n';
+import { LANGUAGES, isTimeZone, type Language } from '@shared/format/studio-format';
+import { area } from '../words';
+
+/** The browser's time zone, so a new studio's dates are in its own time from the first day (UTC when unknown). */
+function browserTimeZone(): string | undefined {
+  const zone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  return zone && isTimeZone(zone) ? zone : undefined;
+}
 
 export function NewStudioPage() {
+  const { t } = useTranslation();
+  const w = (key: string) => t(`${area}.${key}`);
   const navigate = useNavigate();
   const create = useMutation({
     mutationFn: (v: CreateStudioInput) => api.post<{ user: UserDto }>('/auth/studios', v),
@@ -18,7 +29,16 @@ export function NewStudioPage() {
   });
   const form = useForm<CreateStudioInput>({
     resolver: zodResolver(createStudioInput),
-    defaultValues: { studioName: '', currency: 'KES', unitSystem: 'metric', ownerName: '', email: '', password: '' },
+    defaultValues: {
+      studioName: '',
+      currency: 'KES',
+      unitSystem: 'metric',
+      language: (LANGUAGES as readonly string[]).includes(i18n.language) ? (i18n.language as Language) : 'en',
+      timeZone: browserTimeZone(),
+      ownerName: '',
+      email: '',
+      password: '',
+    },
   });
   const e = form.formState.errors;
   const onSubmit = form.handleSubmit(async (v) => {
@@ -30,25 +50,31 @@ export function NewStudioPage() {
       <div className="w-full max-w-md">
         <div className="mb-6 flex justify-center rounded-card bg-calico-50 py-3"><Logo size={36} /></div>
         <form onSubmit={onSubmit} className="card space-y-4 p-6" noValidate>
-          <h1 className="text-xl font-bold">Open a new studio</h1>
-          <p className="text-sm text-ink-600">You become the studio's owner and can add your cutter and floor staff.</p>
-          <Field label="Studio name" {...form.register('studioName')} error={e.studioName?.message} />
+          <h1 className="text-xl font-bold">{w('title')}</h1>
+          <p className="text-sm text-ink-600">{w('intro')}</p>
+          <Field label={w('studioName')} {...form.register('studioName')} error={e.studioName?.message} />
           <div className="grid grid-cols-2 gap-3">
-            <Field label="Currency (ISO 4217)" maxLength={3} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} error={e.currency?.message} />
+            <Field label={w('currency')} maxLength={3} {...form.register('currency', { setValueAs: (v: string) => v.toUpperCase() })} error={e.currency?.message} />
             <div>
-              <label className="field-label" htmlFor="unitSystem">Units</label>
+              <label className="field-label" htmlFor="unitSystem">{w('units')}</label>
               <select id="unitSystem" className="field-input" {...form.register('unitSystem')}>
-                <option value="metric">Metric (cm, m)</option>
-                <option value="imperial">Imperial (in, yd)</option>
+                <option value="metric">{w('metric')}</option>
+                <option value="imperial">{w('imperial')}</option>
               </select>
             </div>
           </div>
-          <Field label="Your name" {...form.register('ownerName')} error={e.ownerName?.message} />
-          <Field label="Email" type="email" {...form.register('email')} error={e.email?.message} />
-          <Field label="Password" type="password" autoComplete="new-password" {...form.register('password')} error={e.password?.message} hint="At least 10 characters" />
+          <div>
+            <label className="field-label" htmlFor="language">{w('language')}</label>
+            <select id="language" className="field-input" {...form.register('language')}>
+              {LANGUAGES.map((l) => <option key={l} value={l}>{t(`languages.${l}`)}</option>)}
+            </select>
+          </div>
+          <Field label={w('yourName')} {...form.register('ownerName')} error={e.ownerName?.message} />
+          <Field label={w('email')} type="email" {...form.register('email')} error={e.email?.message} />
+          <Field label={w('password')} type="password" autoComplete="new-password" {...form.register('password')} error={e.password?.message} hint={w('passwordHint')} />
           <ErrorNote error={create.error} />
-          <button type="submit" className="btn-primary w-full" disabled={create.isPending}>Create studio</button>
-          <p className="text-center text-sm"><Link className="underline" to={paths.signIn.getHref()}>Back to sign in</Link></p>
+          <button type="submit" className="btn-primary w-full" disabled={create.isPending}>{w('create')}</button>
+          <p className="text-center text-sm"><Link className="underline" to={paths.signIn.getHref()}>{w('back')}</Link></p>
         </form>
       </div>
     </div>

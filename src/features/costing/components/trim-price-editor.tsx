@@ -8,16 +8,26 @@ import { fmt as formats, formatMoney as money } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { area } from '../words';
 
+/** Lines measured in metres (fabric, and trims such as tape or elastic sold by the metre). */
+const inMetres = (l: CostingLineDto) => l.unit === 'm';
+/** A yard's price from a metre's, for an imperial studio (1 yd = 0.9144 m, NIST SP 811). */
+const perYard = (perMetreMinor: number) => Math.round((perMetreMinor * MM_PER_YARD) / 1000);
+
 function PriceInput({ line, sheet }: { line: CostingLineDto; sheet: CostingSheetDto }) {
   const { t } = useTranslation();
   const update = useUpdateTrim();
-  const [text, setText] = useState(toMajorText(line.priceMinor ?? 0, sheet.currency));
+  // A trim sold by the metre is priced by the yard in an imperial studio, and saved back per metre.
+  const byYard = inMetres(line) && formats().settings.unitSystem === 'imperial';
+  const [shown] = useState(() => toMajorText(byYard ? perYard(line.priceMinor ?? 0) : (line.priceMinor ?? 0), sheet.currency));
+  const [text, setText] = useState(shown);
   const [error, setError] = useState('');
   const save = () => {
     const value = parseMajor(text, sheet.currency);
     if (value === null) return setError(t(`${area}.priceNeeded`, { example: '5.50' }));
     setError('');
-    if (value !== line.priceMinor) update.mutate({ id: line.refId!, unitPriceMinor: value });
+    if (byYard && text === shown) return;
+    const perMetre = byYard ? Math.round((value * 1000) / MM_PER_YARD) : value;
+    if (perMetre !== line.priceMinor) update.mutate({ id: line.refId!, unitPriceMinor: perMetre });
   };
   return (
     <div>
@@ -43,16 +53,16 @@ export function TrimPriceEditor({ sheet, canEdit }: { sheet: CostingSheetDto; ca
   const fmt = (v: number) => money(v, sheet.currency);
   const f = formats();
   const imperial = f.settings.unitSystem === 'imperial';
-  // Fabric lines come in metres (quantity) and per metre (price): shown in the studio's fabric length, a yard's price in yards.
-  const isMetres = (l: CostingLineDto) => l.kind === 'fabric' && l.unit === 'm';
+  // Lines in metres come as metres (quantity) and per metre (price): shown in the studio's fabric length, priced by the yard in yards.
+  const isMetres = inMetres;
   const quantity = (l: CostingLineDto) => {
     const q = l.quantities[base] ?? 0;
     if (l.percent !== null) return `${f.number(l.percent)} %`;
-    if (isMetres(l)) return f.fabricLength(q * 1000);
+    if (isMetres(l) && (l.kind === 'fabric' || imperial)) return f.fabricLength(q * 1000);
     return `${f.number(q, 3)} ${t(`${area}.units.${l.unit}`, { defaultValue: l.unit })}`;
   };
   const price = (l: CostingLineDto) =>
-    l.priceMinor === null ? '—' : fmt(isMetres(l) && imperial ? Math.round((l.priceMinor * MM_PER_YARD) / 1000) : l.priceMinor);
+    l.priceMinor === null ? '—' : fmt(isMetres(l) && imperial ? perYard(l.priceMinor) : l.priceMinor);
   return (
     <div className="divide-y divide-calico-200 rounded-card border border-calico-200 bg-white text-sm">
       <div className="hidden grid-cols-[1fr_7rem_8rem_8rem] gap-3 bg-thread-700 px-3 py-2 font-medium text-calico-50 sm:grid">

@@ -95,7 +95,7 @@ export function FloorHome({ name }: { name: string }) {
     const input = { bundleNumber: bundle.data.number, batchId: bundle.data.batchId, idempotencyKey: newIdempotencyKey(me.id), ...choice };
     const op = bundle.data.operations.find((o) => o.id === choice.operationId);
     try {
-      const r = await sendLog(input, `Bundle ${bundle.data.number} · ${op?.code ?? ''}`, { id: me.id, name: me.name });
+      const r = await sendLog(input, t('floor.todayLog', { number: bundle.data.number, op: op?.code ?? '' }), { id: me.id, name: me.name });
       if (r.kind === 'sent') setResult(r.result);
       else setQueued(t('floor.queued', { number: bundle.data.number, op: `${op?.code} ${op?.name}` }));
       await queryClient.invalidateQueries({ queryKey: floorQueries.all().queryKey });

@@ -41,7 +41,7 @@ export function othersWaiting(userId: number): { key: string; name: string; coun
   const byAuthor = new Map<string, { key: string; name: string; count: number }>();
   for (const q of waitingForOthers(userId)) {
     const key = String(authorOf(q) ?? q.authorName ?? '');
-    const entry = byAuthor.get(key) ?? { key, name: q.authorName ?? 'someone else', count: 0 };
+    const entry = byAuthor.get(key) ?? { key, name: q.authorName ?? i18n.t('floor.someoneElse'), count: 0 };
     entry.count += 1;
     byAuthor.set(key, entry);
   }

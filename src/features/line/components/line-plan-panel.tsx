@@ -5,6 +5,7 @@ import { Badge, Card, Caution, ErrorNote, Spinner } from '@/components/ui/page';
 import { fmt, formatDate } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { machineTypeLabel } from '../hooks/machine-type';
+import { workingHoursCaution } from '../hooks/working-hours-caution';
 import { area } from '../words';
 import { fixed } from './fixed';
 import { actualOutputQueries, linePlanQueries, type PlanParams } from '../api/line-queries';
@@ -136,7 +137,7 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
             <Caution
               title={w('plan.cautionTitle')}
               items={[w('plan.cautionHours', { day: fixed(p.schedule.hoursPerDay, 1), week: fixed(p.schedule.hoursPerWeek, 1) }), w('plan.cautionMove')]}
-              source={p.schedule.caution}
+              source={workingHoursCaution(p.schedule.caution)}
             />
           ) : null}
           <div>

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { LINE_SECTIONS, MACHINE_TYPES, putOperationsInput, type OperationDto } from '@shared/schemas/line';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
-import { useTranslation } from '@/lib/i18n';
+import { fmt } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { useSaveOperations } from '../api/line-queries';
 import { machineTypeLabel } from '../hooks/machine-type';
 import { area } from '../words';
@@ -71,7 +72,7 @@ export function OperationsEditor({ styleId, rows, currency, withRates, onDone }:
       };
     });
     const parsed = putOperationsInput.safeParse({ operations });
-    if (!parsed.success) for (const issue of parsed.error.issues) found[issue.path.join('.')] ??= issue.message;
+    if (!parsed.success) for (const issue of parsed.error.issues) found[issue.path.join('.')] ??= localSentence(issue.message, fmt().settings);
     setErrors(found);
     if (Object.keys(found).length) return;
     try {

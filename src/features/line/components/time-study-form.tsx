@@ -4,7 +4,8 @@ import { timeStudyInput, type OperationDto } from '@shared/schemas/line';
 import { ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { Trans } from 'react-i18next';
-import { useTranslation } from '@/lib/i18n';
+import { fmt } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { useTimeStudy } from '../api/line-queries';
 import { area } from '../words';
 import { fixed } from './fixed';
@@ -71,7 +72,7 @@ export function TimeStudyForm({ styleId, operation, onDone }: { styleId: number;
   const handleSave = async () => {
     if (!parsed.success) {
       const found: Record<string, string> = {};
-      for (const i of parsed.error.issues) found[i.path.join('.')] ??= i.message;
+      for (const i of parsed.error.issues) found[i.path.join('.')] ??= localSentence(i.message, fmt().settings);
       setErrors(found);
       return;
     }

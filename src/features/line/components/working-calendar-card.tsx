@@ -3,10 +3,11 @@ import { useState } from 'react';
 import { workingCalendarInput, type WorkingCalendarDto } from '@shared/schemas/line';
 import { Caution, Card, ErrorNote, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
-import { formatDate } from '@/lib/format';
-import { useTranslation } from '@/lib/i18n';
+import { fmt, formatDate } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { calendarQueries, useSaveCalendar } from '../api/line-queries';
 import { area } from '../words';
+import { workingHoursCaution } from '../hooks/working-hours-caution';
 
 /** Days of the week as the calendar stores them: 0 is Sunday. */
 const DAYS = [0, 1, 2, 3, 4, 5, 6] as const;
@@ -44,7 +45,7 @@ function CalendarForm({ cal }: { cal: WorkingCalendarDto }) {
     });
     if (!parsed.success) {
       const found: Record<string, string> = {};
-      for (const i of parsed.error.issues) found[String(i.path[0] ?? 'form')] ??= i.message;
+      for (const i of parsed.error.issues) found[String(i.path[0] ?? 'form')] ??= localSentence(i.message, fmt().settings);
       return setErrors(found);
     }
     setErrors({});
@@ -85,7 +86,7 @@ function CalendarForm({ cal }: { cal: WorkingCalendarDto }) {
       <ErrorNote error={save.error && !(save.error instanceof ApiError && Object.keys(save.error.fields).length) ? save.error : null} />
       <button type="button" className="btn-primary mt-3" disabled={save.isPending} onClick={handleSave}>{save.isPending ? w('saving') : w('save')}</button>
       <div className="mt-3">
-        <Caution title={cal.exceedsIlo ? w('aboveIlo') : w('hours')} items={[cal.caution]} source={w('iloSource')} />
+        <Caution title={cal.exceedsIlo ? w('aboveIlo') : w('hours')} items={[workingHoursCaution(cal.caution)]} source={w('iloSource')} />
       </div>
     </Card>
   );

@@ -1,4 +1,7 @@
 import type { MarkerDrawingDto } from '@shared/schemas/markers';
+import { fmt } from '@/lib/format';
+import { i18n } from '@/lib/i18n';
+import { area } from '../words';
 
 /** Seamrun palette per size, in run order (thread teal, madder, saffron, indigo, umber…). */
 export const SIZE_COLOURS = ['#0F766E', '#B4413C', '#C98A16', '#3F51A3', '#6B5B45', '#2F855A', '#8E3B7A', '#4A5568'];
@@ -16,8 +19,8 @@ const place = (ring: P[], mirrored: boolean, rotation: number, dx: number, dy: n
 /** The marker drawn to scale: the fabric strip and every piece, coloured by size and labelled. */
 export function MarkerDrawing({ drawing, lengthMm, widthMm, sizes }: { drawing: MarkerDrawingDto; lengthMm: number; widthMm: number; sizes: string[] }) {
   return (
-    <div role="region" aria-label="Marker drawing" tabIndex={0} className="overflow-x-auto rounded-lg border border-calico-200 bg-calico-50 p-2">
-      <svg role="img" aria-label={`Marker ${Math.round(lengthMm)} mm long`} viewBox={`0 0 ${lengthMm} ${widthMm}`} className="h-auto min-w-[640px] w-full">
+    <div role="region" aria-label={i18n.t(`${area}.view.drawing`)} tabIndex={0} className="overflow-x-auto rounded-lg border border-calico-200 bg-calico-50 p-2">
+      <svg role="img" aria-label={i18n.t(`${area}.view.drawingOf`, { length: fmt().fabricLength(lengthMm) })} viewBox={`0 0 ${lengthMm} ${widthMm}`} className="h-auto min-w-[640px] w-full">
         <rect x={0} y={0} width={lengthMm} height={widthMm} fill="#FBF8F2" stroke="#1A1A1A" strokeWidth={2} />
         <g transform={`matrix(1 0 0 -1 0 ${widthMm})`}>
           {drawing.placements.map((p) => {

@@ -12,6 +12,8 @@ import { batchQueries, fabricQueries } from '@/lib/queries';
 import { markerQueries, useCancelMarker, useStartMarker } from '../api/marker-queries';
 import { useTranslation } from '@/lib/i18n';
 import { MarkerDrawing } from './marker-drawing';
+import { Trans } from 'react-i18next';
+import { i18n } from '@/lib/i18n';
 import { area } from '../words';
 
 // recharts loads with the first run that has points to draw, not with the page.
@@ -19,6 +21,8 @@ const MarkerProgressChart = lazy(async () => ({ default: (await import('./marker
 
 const m = (mm: number | null) => (mm === null ? '—' : fmt().fabricLength(mm));
 const tone = { queued: 'grey', running: 'blue', done: 'teal', failed: 'red', cancelled: 'gold' } as const;
+const w = (key: string, values?: Record<string, unknown>) => i18n.t(`${area}.${key}`, values);
+const b = { b: <b /> };
 
 function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
   const { data: marker } = useQuery(markerQueries.detail(id));
@@ -29,22 +33,22 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
   const isLive = marker.status === 'queued' || marker.status === 'running';
   const pct = marker.budgetSeconds ? Math.min(100, (marker.elapsedMs / (marker.budgetSeconds * 1000)) * 100) : 0;
   return (
-    <Card title={`Marker ${ratioText(marker.ratio, sizes)}`}>
+    <Card title={w('view.title', { ratio: ratioText(marker.ratio, sizes) })}>
       <div className="flex flex-wrap items-center gap-3 text-sm">
-        <Badge tone={tone[marker.status]}>{marker.status}</Badge>
-        <span>Best length <b data-testid="marker-length">{m(marker.lengthMm)}</b></span>
-        <span>Elapsed <b>{(marker.elapsedMs / 1000).toFixed(1)} s</b> of {marker.budgetSeconds} s{marker.cores > 0 ? ` ${t(`${area}.cores`, { count: marker.cores })}` : ''}</span>
-        {marker.utilisation !== null && !isLive ? <span>Utilisation <b data-testid="marker-utilisation">{(marker.utilisation * 100).toFixed(1)} %</b></span> : null}
-        {marker.lengthPerGarmentMm ? <span>{m(marker.lengthPerGarmentMm)} per garment</span> : null}
-        <span>{marker.pieceCount} pieces · width {Math.round(marker.widthMm / 10)} cm</span>
+        <Badge tone={tone[marker.status]}>{w(`status.${marker.status}`)}</Badge>
+        <span><Trans i18nKey={`${area}.view.best`} values={{ length: m(marker.lengthMm) }} components={{ b: <b data-testid="marker-length" /> }} /></span>
+        <span><Trans i18nKey={`${area}.view.elapsed`} values={{ elapsed: fmt().number(marker.elapsedMs / 1000, 1), budget: fmt().number(marker.budgetSeconds) }} components={b} />{marker.cores > 0 ? ` ${t(`${area}.cores`, { count: marker.cores })}` : ''}</span>
+        {marker.utilisation !== null && !isLive ? <span><Trans i18nKey={`${area}.view.utilisation`} values={{ percent: fmt().percent(marker.utilisation * 100) }} components={{ b: <b data-testid="marker-utilisation" /> }} /></span> : null}
+        {marker.lengthPerGarmentMm ? <span>{w('view.perGarment', { length: m(marker.lengthPerGarmentMm) })}</span> : null}
+        <span>{w('view.facts', { count: marker.pieceCount, width: fmt().fabricWidth(marker.widthMm) })}</span>
       </div>
       {isLive ? (
         <div className="mt-3">
-          <div role="progressbar" aria-label="Marker progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(pct)} className="h-3 w-full overflow-hidden rounded-full bg-calico-200">
+          <div role="progressbar" aria-label={w('view.progress')} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(pct)} className="h-3 w-full overflow-hidden rounded-full bg-calico-200">
             <div className="h-full bg-thread-700 transition-all" style={{ width: `${marker.status === 'queued' ? 2 : Math.max(4, pct)}%` }} />
           </div>
-          <p className="mt-1 text-xs text-ink-600">{marker.status === 'queued' ? 'Waiting for the nesting queue…' : 'Nesting: the strip is shortened while pieces are moved apart.'}</p>
-          {canWrite ? <button type="button" className="btn-quiet mt-2" onClick={() => cancel.mutate(marker.id)}>Stop</button> : null}
+          <p className="mt-1 text-xs text-ink-600">{marker.status === 'queued' ? w('view.waiting') : w('view.nesting')}</p>
+          {canWrite ? <button type="button" className="btn-quiet mt-2" onClick={() => cancel.mutate(marker.id)}>{w('view.stop')}</button> : null}
         </div>
       ) : null}
       {marker.progress.length > 0 ? (
@@ -59,9 +63,9 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
         <div className="mt-3 space-y-2">
           <MarkerDrawing drawing={marker.drawing} lengthMm={marker.lengthMm} widthMm={marker.widthMm} sizes={sizes} />
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `${markerFileName(marker)}.svg`)}>Download SVG</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `${markerFileName(marker)}.dxf`)}>Plotter file (DXF, 1:1)</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/plot.pdf`, `${markerFileName(marker)}.pdf`)}>Plotter PDF (1:1, marker width)</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `${markerFileName(marker)}.svg`)}>{w('view.svg')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `${markerFileName(marker)}.dxf`)}>{w('view.dxf')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/plot.pdf`, `${markerFileName(marker)}.pdf`)}>{w('view.pdf')}</button>
           </div>
         </div>
       ) : null}
@@ -70,18 +74,19 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
 }
 
 function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto; fabrics: FabricDto[]; plan: CutPlanDto | null; sizes: string[]; onStarted: (m: MarkerDto) => void }) {
+  useTranslation();
   const start = useStartMarker();
   const [ratio, setRatio] = useState<Record<string, number>>(() => Object.fromEntries(sizes.map((s) => [s, 0])));
   const [fabricId, setFabricId] = useState<number | undefined>(fabrics[0]?.id);
   const [seconds, setSeconds] = useState('');
   const fields = start.error instanceof ApiError ? start.error.fields : {};
   return (
-    <Card title={`New marker for ${batch.code}`}>
+    <Card title={w('start.title', { batch: batch.code })}>
       {plan ? (
         <div className="mb-3 flex flex-wrap gap-2 text-sm">
-          <span className="text-ink-600">Ratios of the cut plan:</span>
+          <span className="text-ink-600">{w('start.ratios')}</span>
           {plan.lays.map((l) => (
-            <button type="button" key={l.id} className="btn-quiet" onClick={() => setRatio({ ...Object.fromEntries(sizes.map((s) => [s, 0])), ...l.ratio })}>Lay {l.seq}: {ratioText(l.ratio, sizes)}</button>
+            <button type="button" key={l.id} className="btn-quiet" onClick={() => setRatio({ ...Object.fromEntries(sizes.map((s) => [s, 0])), ...l.ratio })}>{w('start.lay', { seq: l.seq, ratio: ratioText(l.ratio, sizes) })}</button>
           ))}
         </div>
       ) : null}
@@ -89,18 +94,18 @@ function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto
         {sizes.map((s) => (
           <div key={s}>
             <label className="field-label" htmlFor={`ratio-${s}`}>{s}</label>
-            <input id={`ratio-${s}`} aria-label={`Garments of size ${s}`} className="field-input" type="number" min={0} value={ratio[s] ?? 0} onChange={(e) => setRatio({ ...ratio, [s]: Number(e.target.value) })} />
+            <input id={`ratio-${s}`} aria-label={w('start.garmentsOf', { size: s })} className="field-input" type="number" min={0} value={ratio[s] ?? 0} onChange={(e) => setRatio({ ...ratio, [s]: Number(e.target.value) })} />
           </div>
         ))}
         <div className="col-span-2">
-          <label className="field-label" htmlFor="marker-fabric">Fabric</label>
+          <label className="field-label" htmlFor="marker-fabric">{w('start.fabric')}</label>
           <select id="marker-fabric" className="field-input" value={fabricId} onChange={(e) => setFabricId(Number(e.target.value))}>
-            {fabrics.map((f) => <option key={f.id} value={f.id}>{f.name} ({Math.round(f.widthMm / 10)} cm{f.isDirectional ? ', one way' : ''})</option>)}
+            {fabrics.map((f) => <option key={f.id} value={f.id}>{w(f.isDirectional ? 'start.fabricOptionOneWay' : 'start.fabricOption', { name: f.name, width: fmt().fabricWidth(f.widthMm) })}</option>)}
           </select>
         </div>
         <div>
-          <label className="field-label" htmlFor="marker-seconds">Seconds</label>
-          <input id="marker-seconds" className="field-input" type="number" placeholder="server default" value={seconds} onChange={(e) => setSeconds(e.target.value)} />
+          <label className="field-label" htmlFor="marker-seconds">{w('start.seconds')}</label>
+          <input id="marker-seconds" className="field-input" type="number" placeholder={w('start.serverDefault')} value={seconds} onChange={(e) => setSeconds(e.target.value)} />
         </div>
       </div>
       {fields.ratio ? <p className="field-error">{fields.ratio}</p> : null}
@@ -111,13 +116,14 @@ function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto
         disabled={start.isPending || !fabricId}
         onClick={() => start.mutate({ styleId: batch.styleId, batchId: batch.id, fabricId: fabricId!, ratio, seconds: seconds ? Number(seconds) : undefined }, { onSuccess: (r) => onStarted(r.marker) })}
       >
-        Start marker
+        {w('start.start')}
       </button>
     </Card>
   );
 }
 
 export function MarkersPage() {
+  useTranslation();
   const { data: batches } = useQuery(batchQueries.list());
   const { data: fabrics } = useQuery(fabricQueries.list());
   const [batchId, setBatchId] = useState<number | undefined>();
@@ -128,14 +134,14 @@ export function MarkersPage() {
   useEffect(() => setOpenId(null), [batch?.id]);
   const canWrite = useCan('markers:write');
   if (!batches || !fabrics) return <Spinner />;
-  if (!batch) return <PageHeader title="Markers" subtitle="No batch yet." />;
+  if (!batch) return <PageHeader title={w('title')} subtitle={w('noBatch')} />;
   const sizes = Object.keys(batch.quantities);
   const shown = openId ?? markers[0]?.id ?? null;
   return (
     <>
-      <PageHeader title="Markers" subtitle="Graded pieces packed across the fabric width; shorter markers use less fabric." />
+      <PageHeader title={w('title')} subtitle={w('subtitle')} />
       <div className="mb-4 max-w-xs">
-        <label className="field-label" htmlFor="marker-batch">Batch</label>
+        <label className="field-label" htmlFor="marker-batch">{w('batch')}</label>
         <select id="marker-batch" className="field-input" value={batch.id} onChange={(e) => setBatchId(Number(e.target.value))}>
           {batches.map((b) => <option key={b.id} value={b.id}>{b.code} · {b.styleName} ({b.total})</option>)}
         </select>
@@ -143,15 +149,15 @@ export function MarkersPage() {
       <div className="space-y-5">
         {canWrite ? <StartForm key={batch.id} batch={batch} fabrics={fabrics} plan={plan} sizes={sizes} onStarted={(mk) => setOpenId(mk.id)} /> : null}
         {shown !== null ? <MarkerView id={shown} sizes={sizes} /> : null}
-        <Card title="Markers of this batch">
-          {markers.length === 0 ? <p className="text-sm text-ink-600">None yet.</p> : null}
+        <Card title={w('ofBatch')}>
+          {markers.length === 0 ? <p className="text-sm text-ink-600">{w('none')}</p> : null}
           <ul className="divide-y divide-calico-200 text-sm">
             {markers.map((mk) => (
               <li key={mk.id} className="flex flex-wrap items-center gap-3 py-2">
                 <button type="button" className="underline" onClick={() => setOpenId(mk.id)}>{ratioText(mk.ratio, sizes)}</button>
-                <Badge tone={tone[mk.status]}>{mk.status}</Badge>
+                <Badge tone={tone[mk.status]}>{w(`status.${mk.status}`)}</Badge>
                 <span>{m(mk.lengthMm)}</span>
-                {mk.utilisation !== null ? <span>{(mk.utilisation * 100).toFixed(1)} %</span> : null}
+                {mk.utilisation !== null ? <span>{fmt().percent(mk.utilisation * 100)}</span> : null}
               </li>
             ))}
           </ul>

@@ -9,7 +9,8 @@ import { Field } from '@/components/ui/form';
 import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
-import { i18n, useTranslation } from '@/lib/i18n';
+import { fmt } from '@/lib/format';
+import { i18n, localSentence, useTranslation } from '@/lib/i18n';
 import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
 import { AttendanceCard } from './attendance-card';
 import { FloorTabletCard } from './floor-tablet-card';
@@ -59,7 +60,7 @@ function PayoutAccountCell({ person }: { person: PersonDto }) {
   const save = async (e: React.FormEvent) => {
     e.preventDefault();
     const parsed = payoutAccountField.safeParse(value);
-    if (!parsed.success) return setError(parsed.error.issues[0].message);
+    if (!parsed.success) return setError(localSentence(parsed.error.issues[0].message, fmt().settings));
     setError('');
     try {
       await update.mutateAsync({ id: person.id, payoutAccount: parsed.data });

@@ -5,7 +5,7 @@ import { skillsField, type PersonDto } from '@shared/schemas/people';
 import { Badge, Card, ErrorNote } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { fmt } from '@/lib/format';
-import { useTranslation } from '@/lib/i18n';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { machineTypeLabel } from '@/features/line/hooks/machine-type';
 import { useUpdatePerson } from '../api/people-queries';
 import { area } from '../words';
@@ -63,7 +63,7 @@ export function SkillsEditor({ person }: { person: PersonDto }) {
       if (r.pace.trim() === '' || !Number.isFinite(pace) || pace < 0.1 || pace > 2) found[`${i}.pace`] = t(`${area}.skills.paceRange`, { min: fmt().number(0.1), max: fmt().number(2) });
     });
     const parsed = skillsField.safeParse(Object.fromEntries(rows.map((r) => [r.type.trim(), Number(r.pace)])));
-    if (!parsed.success && !Object.keys(found).length) found.skills = parsed.error.issues[0].message;
+    if (!parsed.success && !Object.keys(found).length) found.skills = localSentence(parsed.error.issues[0].message, fmt().settings);
     setErrors(found);
     if (Object.keys(found).length === 0 && parsed.success) void save(parsed.data);
   };

@@ -1,10 +1,16 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ErrorNote } from '@/components/ui/page';
+import { fmt } from '@/lib/format';
+import { useTranslation } from '@/lib/i18n';
 import { purchasingQueries, useCreateOrder } from '../api/purchasing-queries';
+import { area } from '../words';
+import { readFabricInput, trimByYard, unitText } from './quantity-text';
 
 /** A draft order by hand: a supplier, one fabric or trim, how much, and the batch it is for. */
 export function NewOrderForm() {
+  const { t } = useTranslation();
+  const w = (key: string, values?: Record<string, unknown>) => t(`${area}.newOrder.${key}`, values);
   const { data: suppliers } = useSuspenseQuery(purchasingQueries.suppliers());
   const { data: items } = useSuspenseQuery(purchasingQueries.items());
   const { data: batches } = useSuspenseQuery(purchasingQueries.batches());
@@ -15,7 +21,8 @@ export function NewOrderForm() {
   const [quantity, setQuantity] = useState('');
   const [batchId, setBatchId] = useState<number>(0);
   const [error, setError] = useState('');
-  const unit = item?.kind === 'fabric' ? 'm' : item?.unit ?? '';
+  const byYard = item?.kind === 'trim' && trimByYard(item.unit);
+  const unit = item?.kind === 'fabric' || byYard ? fmt().fabricLengthUnit : unitText(item?.unit ?? '');
   const handleItem = (key: string) => {
     setItemKey(key);
     const next = items.find((i) => `${i.kind}-${i.refId}` === key);
@@ -23,40 +30,41 @@ export function NewOrderForm() {
   };
   const handleSubmit = async (e: React.FormEvent) => {
     e.preventDefault();
-    const q = Number(quantity);
-    if (!item || !(q > 0)) return setError('Enter how much to order');
+    const mm = item?.kind === 'fabric' || byYard ? readFabricInput(quantity) : null;
+    const q = item?.kind === 'fabric' ? mm : byYard ? (mm === null ? null : mm / 1000) : Number(quantity.replace(',', '.'));
+    if (!item || q === null || !(q > 0)) return setError(w('howMuch'));
     setError('');
-    await create.mutateAsync({ supplierId, batchId: batchId || null, lines: [{ kind: item.kind, refId: item.refId, quantity: item.kind === 'fabric' ? Math.round(q * 1000) : q }] });
+    await create.mutateAsync({ supplierId, batchId: batchId || null, lines: [{ kind: item.kind, refId: item.refId, quantity: q }] });
     setQuantity('');
   };
   return (
-    <form onSubmit={handleSubmit} className="grid gap-3 sm:grid-cols-5 sm:items-end" aria-label="New purchase order" noValidate>
+    <form onSubmit={handleSubmit} className="grid gap-3 sm:grid-cols-5 sm:items-end" aria-label={w('label')} noValidate>
       <label className="text-sm">
-        <span className="field-label">Item</span>
-        <select aria-label="Item" className="field-input" value={itemKey} onChange={(e) => handleItem(e.target.value)}>
-          {items.map((i) => <option key={`${i.kind}-${i.refId}`} value={`${i.kind}-${i.refId}`}>{i.kind === 'fabric' ? 'Fabric: ' : ''}{i.item}</option>)}
+        <span className="field-label">{w('item')}</span>
+        <select aria-label={w('item')} className="field-input" value={itemKey} onChange={(e) => handleItem(e.target.value)}>
+          {items.map((i) => <option key={`${i.kind}-${i.refId}`} value={`${i.kind}-${i.refId}`}>{i.kind === 'fabric' ? w('fabric', { item: i.item }) : i.item}</option>)}
         </select>
       </label>
       <label className="text-sm">
-        <span className="field-label">Supplier</span>
-        <select aria-label="Supplier" className="field-input" value={supplierId} onChange={(e) => setSupplierId(Number(e.target.value))}>
+        <span className="field-label">{w('supplier')}</span>
+        <select aria-label={w('supplier')} className="field-input" value={supplierId} onChange={(e) => setSupplierId(Number(e.target.value))}>
           {suppliers.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
         </select>
       </label>
       <label className="text-sm">
-        <span className="field-label">Quantity ({unit})</span>
-        <input aria-label="Quantity to order" className="field-input" inputMode="decimal" value={quantity} onChange={(e) => setQuantity(e.target.value)} />
+        <span className="field-label">{w('quantity', { unit })}</span>
+        <input aria-label={w('quantityLabel')} className="field-input" inputMode="decimal" value={quantity} onChange={(e) => setQuantity(e.target.value)} />
         {error ? <span className="field-error">{error}</span> : null}
       </label>
       <label className="text-sm">
-        <span className="field-label">For batch</span>
-        <select aria-label="For batch" className="field-input" value={batchId} onChange={(e) => setBatchId(Number(e.target.value))}>
-          <option value={0}>No batch (stock)</option>
+        <span className="field-label">{w('forBatch')}</span>
+        <select aria-label={w('forBatch')} className="field-input" value={batchId} onChange={(e) => setBatchId(Number(e.target.value))}>
+          <option value={0}>{w('noBatch')}</option>
           {batches.map((b) => <option key={b.id} value={b.id}>{b.code} · {b.styleName}</option>)}
         </select>
       </label>
       <div>
-        <button className="btn-quiet" type="submit" disabled={create.isPending}>Make draft order</button>
+        <button className="btn-quiet" type="submit" disabled={create.isPending}>{w('make')}</button>
         <ErrorNote error={create.error} />
       </div>
     </form>

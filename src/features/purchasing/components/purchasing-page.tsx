@@ -9,8 +9,11 @@ import { purchasingQueries, useAddSupplier, useConfirmOrder, useSendOrder } from
 import { orderColumns } from './order-columns';
 import { NewOrderForm } from './new-order-form';
 import { ReceiveForm } from './receive-form';
+import { useTranslation } from '@/lib/i18n';
+import { area } from '../words';
 
 function AddSupplier() {
+  const { t } = useTranslation();
   const add = useAddSupplier();
   const [v, setV] = useState({ name: '', contact: '', email: '', leadTimeDays: '7' });
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -31,16 +34,17 @@ function AddSupplier() {
   );
   return (
     <form onSubmit={handleSubmit} className="grid gap-3 sm:grid-cols-5 sm:items-end" noValidate>
-      {f('name', 'Supplier name')}
-      {f('contact', 'Contact')}
-      {f('email', 'E-mail', 'email')}
-      {f('leadTimeDays', 'Lead time (days)')}
-      <button className="btn-quiet" type="submit" disabled={add.isPending}>Add supplier</button>
+      {f('name', t(`${area}.supplier.name`))}
+      {f('contact', t(`${area}.supplier.contact`))}
+      {f('email', t(`${area}.supplier.email`), 'email')}
+      {f('leadTimeDays', t(`${area}.supplier.leadTime`))}
+      <button className="btn-quiet" type="submit" disabled={add.isPending}>{t(`${area}.supplier.add`)}</button>
     </form>
   );
 }
 
 export function PurchasingPage() {
+  const { t } = useTranslation();
   const { data: suppliers } = useSuspenseQuery(purchasingQueries.suppliers());
   const { data: orders } = useSuspenseQuery(purchasingQueries.orders());
   const { data: studio } = useSuspenseQuery(purchasingQueries.studio());
@@ -49,40 +53,46 @@ export function PurchasingPage() {
   const [receiving, setReceiving] = useState<PurchaseOrderDto | null>(null);
   // The table re-derives its rows whenever `data` changes identity: keep it stable between renders.
   const rows = useMemo(() => orders.map((o) => ({ ...o, currency: studio.currency, actions: actions(o) })),
-    [orders, studio.currency, send.isPending]);
+    [orders, studio.currency, send.isPending, t]);
   function actions(o: PurchaseOrderDto) {
     return (
     <div className="flex flex-wrap gap-1">
       {o.status !== 'received' ? (
-        <button type="button" className="btn-primary px-2 py-1 text-xs" aria-label={`${o.status === 'draft' ? 'Send' : 'Send again'} ${o.number} to ${o.supplierName}`} disabled={send.isPending} onClick={() => send.mutate(o.id)}>
-          {o.status === 'draft' ? 'Send' : 'Send again'}
+        <button
+          type="button"
+          className="btn-primary px-2 py-1 text-xs"
+          aria-label={t(`${area}.sendLabel`, { action: t(`${area}.${o.status === 'draft' ? 'send' : 'sendAgain'}`), number: o.number, supplier: o.supplierName })}
+          disabled={send.isPending}
+          onClick={() => send.mutate(o.id)}
+        >
+          {t(`${area}.${o.status === 'draft' ? 'send' : 'sendAgain'}`)}
         </button>
       ) : null}
-      {o.status === 'sent' ? <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => confirm.mutate(o.id)}>Confirmed</button> : null}
-      {o.status === 'sent' || o.status === 'confirmed' ? <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setReceiving(o)}>Receive</button> : null}
-      <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => downloadFile(`/purchasing/orders/${o.id}/xlsx`, `${o.number}.xlsx`)}>XLSX</button>
+      {o.status === 'sent' ? <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => confirm.mutate(o.id)}>{t(`${area}.confirmed`)}</button> : null}
+      {o.status === 'sent' || o.status === 'confirmed' ? <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setReceiving(o)}>{t(`${area}.receive`)}</button> : null}
+      <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => downloadFile(`/purchasing/orders/${o.id}/xlsx`, `${o.number}.xlsx`)}>{t(`${area}.xlsx`)}</button>
     </div>
     );
   }
   return (
     <>
-      <PageHeader title="Suppliers and orders" subtitle="Who you buy from, what is on order, and receiving it into stock." />
+      <PageHeader title={t(`${area}.title`)} subtitle={t(`${area}.subtitle`)} />
       <div className="space-y-5">
-        <Card title="Purchase orders">
+        <Card title={t(`${area}.orders`)}>
           <ErrorNote error={send.error ?? confirm.error} />
-          {send.isSuccess ? <p role="status" className="mb-2 text-sm text-thread-800">Sent {send.data.order.number} to {send.data.order.supplierEmail}; it is in the outbox.</p> : null}
-          <DataTable data={rows} columns={orderColumns} filterPlaceholder="Filter orders…" empty="No purchase orders yet: make them from a batch's materials panel." />
+          {send.isSuccess ? <p role="status" className="mb-2 text-sm text-thread-800">{t(`${area}.sent`, { number: send.data.order.number, email: send.data.order.supplierEmail })}</p> : null}
+          <DataTable data={rows} columns={orderColumns} filterPlaceholder={t(`${area}.filter`)} empty={t(`${area}.empty`)} />
           {receiving ? <ReceiveForm key={receiving.id} order={receiving} onDone={() => setReceiving(null)} /> : null}
         </Card>
-        <Card title="Order by hand">
+        <Card title={t(`${area}.byHand`)}>
           <NewOrderForm />
         </Card>
-        <Card title="Suppliers">
+        <Card title={t(`${area}.suppliers`)}>
           <ul className="mb-4 grid gap-2 sm:grid-cols-2">
             {suppliers.map((s) => (
               <li key={s.id} className="rounded-lg border border-calico-200 bg-white px-3 py-2 text-sm">
                 <p className="font-medium text-thread-800">{s.name}</p>
-                <p className="text-ink-600">{s.contact ? `${s.contact} · ` : ''}{s.email} · {s.leadTimeDays} days lead time</p>
+                <p className="text-ink-600">{s.contact ? `${s.contact} · ` : ''}{s.email} · {t(`${area}.leadTime`, { count: s.leadTimeDays })}</p>
               </li>
             ))}
           </ul>
