@@ -139,3 +139,11 @@ describe('a French answer', () => {
     expect(schema.safeParse(empty).error!.issues.map((i) => issueMessage(i, empty, fr))).toEqual(['À remplir', 'Doit être un nombre entier']);
   });
 });
+
+describe('the costing sheet notes', () => {
+  it('says the server\'s costing notes in French, with the figures they carry', () => {
+    const fr = speaker({ language: 'fr' });
+    expect(translate('No operation list yet: labour uses an estimated 45 standard minutes.', fr)).toBe('Pas encore de gamme d’opérations\u202f: la main-d’œuvre compte 45 minutes standard estimées.');
+    expect(translate('Enter a labour cost per minute in the settings.', fr)).toBe('Saisissez un coût de la minute de main-d’œuvre dans les réglages.');
+  });
+});

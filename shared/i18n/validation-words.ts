@@ -218,6 +218,18 @@ export const SCHEMA_MESSAGES_FR: Record<string, string> = {
   'Whole percent only': 'Pourcentages entiers seulement',
   'Whole plies': 'Plis entiers',
   '{what} is required': 'À remplir',
+  // Notes of the costing sheet (server/modules/costing/costing.service.ts), said by the client in the language on screen.
+  '{fabrics}: estimated from the cut area of the pieces of {materials} at {n} % utilisation until they have their own marker.':
+    '{fabrics} : estimé d’après la surface des pièces de {materials} à {n|num} % d’efficience, en attendant leur propre placement.',
+  'No fabric is recorded for this studio yet, so the sheet has no fabric line.': 'Aucun tissu n’est encore enregistré dans l’atelier : la fiche n’a pas de ligne de tissu.',
+  'Fabric is an estimate until a marker or cut plan exists for this batch.': 'Le tissu est une estimation tant que la série n’a ni placement ni plan de coupe.',
+  'Fabric comes from the latest finished marker; the cut plan will replace it.': 'Le tissu vient du dernier placement terminé ; le plan de coupe le remplacera.',
+  'Fabric is what the cutter recorded: the lengths spread and the remnants measured.': 'Le tissu est ce que le coupeur a relevé : les longueurs matelassées et les restes mesurés.',
+  'Fabric of the cut lays is what the cutter recorded (spreads and remnants); the lays still to cut count their plan.':
+    'Le tissu des matelas coupés est ce que le coupeur a relevé (matelassage et restes) ; les matelas à couper comptent leur plan.',
+  'No operation list yet: labour uses an estimated {n} standard minutes.': 'Pas encore de gamme d’opérations : la main-d’œuvre compte {n|num} minutes standard estimées.',
+  'The operations carry no piece rates, so labour is costed by standard minutes.': 'Les opérations n’ont pas de tarif aux pièces : la main-d’œuvre est chiffrée en minutes standard.',
+  'Enter a labour cost per minute in the settings.': 'Saisissez un coût de la minute de main-d’œuvre dans les réglages.',
   '{what} is too large: at most {n} mm (1 km)': 'Trop grand : au plus {n|length}',
   'Longer than any roll': 'Plus long que tout rouleau',
   'Bundle numbers start at 1': 'Les numéros de paquet commencent à 1',

@@ -13,7 +13,7 @@ import { fmt, fmt as formats, formatMoney as money } from '@/lib/format';
 import { TrimPriceEditor } from './trim-price-editor';
 import { AddTrimForm } from './add-trim-form';
 import { paths } from '@/config/paths';
-import { useTranslation } from '@/lib/i18n';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { MM_PER_YARD } from '@shared/units/units';
 import { area } from '../words';
 
@@ -92,7 +92,7 @@ export function CostingPage() {
       </div>
       {sheet.notes.length ? (
         <ul className="mb-5 space-y-1 rounded-card border border-saffron-500/40 bg-saffron-100 px-4 py-3 text-sm text-ink-800">
-          {sheet.notes.map((n) => <li key={n}>{n}</li>)}
+          {sheet.notes.map((n) => <li key={n}>{localSentence(n, formats().settings)}</li>)}
         </ul>
       ) : null}
       <div className="space-y-5">
