@@ -147,3 +147,9 @@ describe('the costing sheet notes', () => {
     expect(translate('Enter a labour cost per minute in the settings.', fr)).toBe('Saisissez un coût de la minute de main-d’œuvre dans les réglages.');
   });
 });
+
+describe('the pay page notes', () => {
+  it('says the test-payments note in French', () => {
+    expect(translate('Test payments: no money moves.', speaker({ language: 'fr' }))).toBe('Paiements d’essai\u202f: aucun argent ne circule.');
+  });
+});

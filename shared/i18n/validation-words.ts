@@ -230,6 +230,10 @@ export const SCHEMA_MESSAGES_FR: Record<string, string> = {
   'No operation list yet: labour uses an estimated {n} standard minutes.': 'Pas encore de gamme d’opérations : la main-d’œuvre compte {n|num} minutes standard estimées.',
   'The operations carry no piece rates, so labour is costed by standard minutes.': 'Les opérations n’ont pas de tarif aux pièces : la main-d’œuvre est chiffrée en minutes standard.',
   'Enter a labour cost per minute in the settings.': 'Saisissez un coût de la minute de main-d’œuvre dans les réglages.',
+  // Pay: the payments mode and the pay-rules caution (server/modules/pay, shared/schemas/pay.ts).
+  'Test payments: no money moves.': 'Paiements d’essai : aucun argent ne circule.',
+  'Seamrun works with the figures you enter; it does not know the law where you work. Minimum wages, overtime premiums, the hours that count and how often you must pay are set by local law and agreements: check them with your labour office or an adviser, and follow them first.':
+    'Seamrun calcule avec les chiffres que vous saisissez ; il ne connaît pas le droit du lieu où vous travaillez. Salaires minimums, majorations des heures supplémentaires, heures qui comptent et fréquence des paies sont fixés par la loi et les accords locaux : vérifiez-les auprès de l’inspection du travail ou d’un conseiller, et suivez-les d’abord.',
   '{what} is too large: at most {n} mm (1 km)': 'Trop grand : au plus {n|length}',
   'Longer than any roll': 'Plus long que tout rouleau',
   'Bundle numbers start at 1': 'Les numéros de paquet commencent à 1',

@@ -6,8 +6,8 @@ import type { PayoutDto, PayPeriodDto } from '@shared/schemas/pay';
 import { ConfirmButton } from '@/components/ui/confirm-button';
 import { Badge, Card, ErrorNote, PageHeader, Spinner } from '@/components/ui/page';
 import { downloadFile } from '@/lib/api-client';
-import { formatDate, formatEfficiency, formatMoney, useFormat } from '@/lib/format';
-import { useTranslation } from '@/lib/i18n';
+import { fmt, formatDate, formatEfficiency, formatMoney, useFormat } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { area } from '../words';
 import { PayRulesCard } from './pay-rules-card';
 import { payQueries, useApprovePayPeriod, usePayPerson } from '../api/pay-queries';
@@ -84,7 +84,7 @@ export function PayPage() {
   return (
     <>
       <PageHeader title={t(`${area}.pay.title`)} subtitle={t(`${area}.pay.subtitle`, { efficiency: t(`${area}.efficiencyLower`) })} />
-      {mode.testMode ? <p role="note" className="mb-4 rounded-lg bg-indigo-100 px-3 py-2 text-sm font-medium text-indigo-700">{mode.message}</p> : null}
+      {mode.testMode ? <p role="note" className="mb-4 rounded-lg bg-indigo-100 px-3 py-2 text-sm font-medium text-indigo-700">{localSentence(mode.message, fmt().settings)}</p> : null}
       <div className="space-y-5">
         <Card title={t(`${area}.pay.period`)}>
           <div className="flex flex-wrap items-end gap-3">

@@ -4,7 +4,8 @@ import type { PayRulesDto } from '@shared/schemas/pay';
 import { parseMajor, toMajorText } from '@shared/units/money';
 import { Card, ErrorNote, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
-import { useTranslation } from '@/lib/i18n';
+import { fmt } from '@/lib/format';
+import { localSentence, useTranslation } from '@/lib/i18n';
 import { payQueries, useSavePayRules } from '../api/pay-queries';
 import { area } from '../words';
 
@@ -40,7 +41,7 @@ function PayRulesForm({ rules }: { rules: PayRulesDto }) {
 
   return (
     <Card title={t(`${area}.rules.title`)}>
-      <p role="note" className="mb-3 rounded-lg bg-saffron-100 px-3 py-2 text-sm text-ink-800">{rules.caution}</p>
+      <p role="note" className="mb-3 rounded-lg bg-saffron-100 px-3 py-2 text-sm text-ink-800">{localSentence(rules.caution, fmt().settings)}</p>
       <div className="flex flex-wrap items-end gap-4">
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" checked={on} onChange={(e) => setOn(e.target.checked)} />
