@@ -117,15 +117,17 @@ async function documentPaths(api: APIRequestContext): Promise<Record<string, str
   let order = (await get('/api/purchasing/orders')).orders[0];
   if (!order) {
     const { items } = await get('/api/purchasing/items');
-    const supplier = (await get('/api/purchasing/suppliers')).suppliers[0];
-    const lines = ['fabric', 'trim'].map((kind) => items.find((i: { kind: string }) => i.kind === kind)).filter(Boolean)
-      .map((i: { kind: string; refId: number }) => ({ kind: i.kind, refId: i.refId, quantity: i.kind === 'fabric' ? 29_950 : 40 }));
-    order = (await post('/api/purchasing/orders', { supplierId: supplier.id, batchId: 1, lines })).order;
+    // The fabric from its own supplier, as the owner would order it: other journeys may then find this order as theirs.
+    const fabric = items.find((i: { kind: string }) => i.kind === 'fabric') as { kind: string; refId: number; supplierId: number | null };
+    const supplierId = fabric.supplierId ?? (await get('/api/purchasing/suppliers')).suppliers[0].id;
+    const lines = [{ kind: fabric.kind, refId: fabric.refId, quantity: 29_950 }];
+    order = (await post('/api/purchasing/orders', { supplierId, batchId: 1, lines })).order;
   }
   let period = (await get('/api/pay/periods')).periods[0];
   if (!period) {
     const day = (d: number) => new Date(Date.now() - d * 86_400_000).toISOString().slice(0, 10);
-    period = (await post('/api/pay/periods', { fromDay: day(14), toDay: day(1) })).period;
+    // Approved a year back, so no other journey's pay preview of the last days overlaps it.
+    period = (await post('/api/pay/periods', { fromDay: day(400), toDay: day(390) })).period;
   }
   const grading = (await get('/api/styles/1/grading')).grading;
   records.push(...(grading.pieces as { name: string }[]).map((p) => p.name));
