@@ -228,6 +228,18 @@ export const MESSAGES_EN = {
   lotEmpty: 'Shade lot is empty',
   lengthNotPositive: 'Length "{value}" is not a positive number',
   widthNotPositive: 'Width "{value}" is not a positive number',
+  // A size chart or operations sheet read from a file (grading/size-charts/size-chart-table.ts, server/modules/line/operations-sheet.ts).
+  headerNoSizes: 'header names no sizes',
+  emptySizeName: 'empty size name',
+  duplicateSizeNamed: 'duplicate size "{size}"',
+  noMeasurementRows: 'no measurement rows',
+  unknownPointOfMeasureNamed: 'unknown point of measure "{name}"',
+  duplicatePointOfMeasure: 'duplicate point of measure "{name}"',
+  unitMustBeGot: 'unit must be mm, cm or in, got "{unit}"',
+  expectedValuesGot: 'expected {expected} values, got {got}',
+  notALength: 'not a length: "{cell}"',
+  valueMustBePositive: 'value must be positive',
+  expectedHeader: 'expected header "{header}"',
   dateNotDate: 'Date "{value}" is not a date as YYYY-MM-DD',
 } as const;
 
@@ -440,6 +452,17 @@ export const MESSAGES_FR: Record<MessageKey, string> = {
   lotEmpty: 'Le bain est vide',
   lengthNotPositive: 'La longueur « {value} » n’est pas un nombre positif',
   widthNotPositive: 'La laize « {value} » n’est pas un nombre positif',
+  headerNoSizes: 'L’en-tête ne nomme aucune taille',
+  emptySizeName: 'Nom de taille vide',
+  duplicateSizeNamed: 'La taille « {size} » figure deux fois',
+  noMeasurementRows: 'Aucune ligne de mesures',
+  unknownPointOfMeasureNamed: 'Point de mesure inconnu : « {name} »',
+  duplicatePointOfMeasure: 'Le point de mesure « {name} » figure deux fois',
+  unitMustBeGot: 'L’unité doit être mm, cm ou in ; le fichier donne « {unit} »',
+  expectedValuesGot: '{expected|num} valeurs attendues, {got|num} trouvées',
+  notALength: 'Pas une longueur : « {cell} »',
+  valueMustBePositive: 'La valeur doit être positive',
+  expectedHeader: 'En-tête attendu : « {header} »',
   dateNotDate: 'La date « {value} » n’est pas une date AAAA-MM-JJ',
 };
 

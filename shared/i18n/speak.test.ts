@@ -153,3 +153,28 @@ describe('the pay page notes', () => {
     expect(translate('Test payments: no money moves.', speaker({ language: 'fr' }))).toBe('Paiements d’essai\u202f: aucun argent ne circule.');
   });
 });
+
+describe('the problems found reading an imported table', () => {
+  const TABLE_READERS = ['grading/size-charts/size-chart-table.ts', 'server/modules/line/operations-sheet.ts', 'server/modules/cutting/packing-list.ts'];
+
+  it('knows every problem the size-chart, operations-sheet and packing-list readers report', () => {
+    const unknown: string[] = [];
+    for (const file of TABLE_READERS) {
+      const literals = [...readFileSync(file, 'utf8').matchAll(/(?:message: |bad\([^,]+, )('[^']*'|`[^`]*`)/g)].map((m) => m[1].slice(1, -1));
+      expect(literals.length, file).toBeGreaterThan(0);
+      for (const literal of literals) {
+        // A reader's own library error (`${(err as Error).message}`) is not ours to word.
+        if (/\$\{\(err/.test(literal)) continue;
+        if (translate(sample(literal), fr) === null) unknown.push(`${file}: ${literal}`);
+      }
+    }
+    expect(unknown).toEqual([]);
+  });
+
+  it('says a bad cell of a size chart in French, inside the sentence that refuses the file', () => {
+    const text = 'row 4, column 3: not a length: "abc" (2 problems; nothing imported)';
+    expect(translate(text, fr)).toBe('ligne 4, colonne 3\u202f: pas une longueur\u202f: «\u202fabc\u202f» (2 problèmes\u202f; rien n’est importé)');
+    expect(translate('expected 5 values, got 3', fr)).toBe('5 valeurs attendues, 3 trouvées');
+    expect(translate(text, en)).toBe(text);
+  });
+});
