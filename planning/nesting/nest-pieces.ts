@@ -16,7 +16,7 @@ const DEFAULT_MAX_ITERATIONS = 2000;
  * after each failure until it reaches `EXPLORE_MIN_SHRINK` (0.1 % as in Gardeyn et al. 2025); only there
  * does the pool and its disruption start, and after `EXPLORE_FAILURES` failures the next try starts
  * afresh from the best marker. (Halving after every failure rather than after six: on shirts, 60 s, seed 1,
- * the six-failure ladder spent 2.6–24 s without a shorter marker; halving at once found 10 in that time.)
+ * the six-failure ladder spent 2.6–24 s without a shorter marker; halving at once found 9 in that time.)
  */
 const INITIAL_SHRINK = 0.02;
 const EXPLORE_MIN_SHRINK = 0.001;
