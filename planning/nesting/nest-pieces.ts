@@ -164,17 +164,15 @@ export function nestPieces(input: NestingInput, options: NestingOptions): Nestin
       pool = [];
       failures = 0;
     } else if (!budget.exhausted()) {
-      const overlap = layout.totalOverlap();
-      const at = pool.findIndex((p) => p.overlap > overlap);
-      pool.splice(at < 0 ? pool.length : at, 0, { snap: layout.snapshot(), overlap });
-      if (shrink > EXPLORE_MIN_SHRINK) {
+      if (shrink > EXPLORE_MIN_SHRINK || ++failures >= EXPLORE_FAILURES) {
+        // A smaller step (or, at the smallest, a fresh start from the best marker): the pool is not needed.
         shrink = Math.max(EXPLORE_MIN_SHRINK, shrink / 2);
         pool = [];
         failures = 0;
-      } else if (++failures >= EXPLORE_FAILURES) {
-        shrink = Math.max(EXPLORE_MIN_SHRINK, shrink / 2);
-        pool = [];
-        failures = 0;
+      } else {
+        const overlap = layout.totalOverlap();
+        const at = pool.findIndex((p) => p.overlap > overlap);
+        pool.splice(at < 0 ? pool.length : at, 0, { snap: layout.snapshot(), overlap });
       }
     }
     progress();
