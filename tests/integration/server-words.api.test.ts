@@ -148,3 +148,20 @@ describe('a studio in French and inches', () => {
     expect((await request(app).post('/api/auth/login').send(wrong)).body.error.message).toBe('Email or password is wrong');
   });
 });
+
+describe('a size chart refused on import, in a French studio', () => {
+  beforeAll(async () => {
+    expect((await owner.patch('/api/studio').send({ language: 'fr', unitSystem: 'imperial', currency: 'CAD', timeZone: 'America/Toronto' })).status).toBe(200);
+  });
+
+  it('names the bad cell and what is wrong with it in French, and imports nothing', async () => {
+    const style = (await owner.get('/api/styles')).body.styles[0];
+    const before = (await owner.get(`/api/styles/${style.id}/grading`)).body.grading.chart;
+    const bad = ['measurement,unit,S,M', 'bust,in,31,x'].join('\n');
+    const res = await owner.post(`/api/styles/${style.id}/grading/chart/import`).set('X-Seamrun-Csrf', '1').attach('file', Buffer.from(bad), 'bad.csv');
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toMatch(new RegExp(`^ligne 2, colonne 4${NNBSP}: pas une longueur${NNBSP}: «${NNBSP}x${NNBSP}»`));
+    expect(res.body.error.fields['row 2, column 4']).toBe(`Pas une longueur${NNBSP}: «${NNBSP}x${NNBSP}»`);
+    expect((await owner.get(`/api/styles/${style.id}/grading`)).body.grading.chart).toEqual(before);
+  });
+});
