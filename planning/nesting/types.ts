@@ -1,3 +1,4 @@
+import type { MarkerBoard } from './marker-board';
 import type { Polygon } from '@shared/geometry/types';
 import type { Millimetres } from '@shared/units/units';
 
@@ -63,6 +64,12 @@ export interface NestingOptions {
    * Default `defaultSimplifyTolerance(stripWidth)` = min(1 mm, 1e-3 × stripWidth); 0 disables.
    */
   simplifyTolerance?: number;
+  /**
+   * Shared with the other lanes of the same search (`sharedMarkerBoard`): every shorter marker is posted
+   * there, and a shorter marker posted by another lane replaces this lane's own best. Lanes then interact,
+   * so a run with a board is not reproducible from its seed alone.
+   */
+  board?: MarkerBoard;
 }
 
 /**

@@ -25,6 +25,8 @@ export interface NestingRunOptions {
   onProgress?: (p: { bestLength: number; elapsedMs: number; iteration: number }) => void;
   /** Worker entry override (tests use a crashing or hanging worker). */
   entry?: string;
+  /** The search's shared marker board (`markerBoardBuffer`), when this run is one lane of several. */
+  board?: SharedArrayBuffer;
 }
 
 /**
@@ -36,7 +38,7 @@ export interface NestingRunOptions {
 export function runNestingWorker(input: NestingInput, opts: NestingRunOptions): NestingRunHandle {
   const start = workerEntry('nesting', opts.entry);
   const worker = new Worker(start.file, {
-    workerData: start.data({ input, options: { seed: opts.seed, timeBudgetMs: opts.timeBudgetMs } }),
+    workerData: start.data({ input, board: opts.board, options: { seed: opts.seed, timeBudgetMs: opts.timeBudgetMs } }),
   });
   let settled = false;
   let cancelled = false;

@@ -1,4 +1,4 @@
-import type { NestingInput, NestingResult } from '@planning';
+import { markerBoardBuffer, markerItemCount, type NestingInput, type NestingResult } from '@planning';
 import { runNestingWorker, type NestingOutcome, type NestingRunHandle } from './nesting-runner';
 
 /** Combined progress of a search: the best length of any lane, iterations summed over lanes. */
@@ -36,8 +36,8 @@ export interface NestingSearchHandle extends NestingRunHandle {
 const MIN_LANE_BUDGET_MS = 1500;
 
 /**
- * One marker search on several worker threads: independent seeded searches of the same input (seeds
- * seed, seed + 1, …), the shortest marker kept. Lanes can be given up to another job or taken back while
+ * One marker search on several worker threads: seeded searches of the same input (seeds seed, seed + 1,
+ * …) that share their shortest marker through a board in shared memory, the shortest marker kept. Lanes can be given up to another job or taken back while
  * the search runs (`setLanes`), so concurrent jobs share the cores. Resolves once every lane has ended:
  * a result (the shortest; `cancelled` when the whole search was cancelled), else `cancelled`, else the
  * first failure. Never rejects.
@@ -48,6 +48,8 @@ export function runNestingSearch(input: NestingInput, opts: NestingSearchOptions
   const lanes: { handle: NestingRunHandle; stopped: boolean; best: number; iteration: number }[] = [];
   const outcomes: Promise<{ outcome: NestingOutcome; released: boolean }>[] = [];
   let nextSeed = opts.seed;
+  // One board for all lanes: a lane that falls behind, or starts late, carries on from the shortest marker.
+  const board = markerBoardBuffer(markerItemCount(input));
   let cancelled = false;
   let settled = false;
   let finish!: (o: NestingOutcome) => void;
@@ -73,6 +75,7 @@ export function runNestingSearch(input: NestingInput, opts: NestingSearchOptions
       timeBudgetMs: Math.max(1, left),
       overrunMs: opts.overrunMs,
       entry: opts.entry,
+      board,
       onProgress: (p) => {
         lane.best = Math.min(lane.best, p.bestLength);
         lane.iteration = p.iteration;

@@ -9,11 +9,13 @@
  * is polled between moves (through the clock) and the run returns its best marker, complete: false.
  */
 import { parentPort, receiveMessageOnPort, workerData } from 'node:worker_threads';
-import { nestPieces, type NestingInput, type NestingOptions } from '../../planning/nesting/index';
+import { markerItemCount, nestPieces, sharedMarkerBoard, type NestingInput, type NestingOptions } from '../../planning/nesting/index';
 
 export interface NestingJob {
   input: NestingInput;
   options: Pick<NestingOptions, 'seed' | 'maxIterations' | 'timeBudgetMs'>;
+  /** The search's shared marker board (`markerBoardBuffer`), when the run is one lane of several. */
+  board?: SharedArrayBuffer;
 }
 
 export type NestingWorkerMessage =
@@ -40,6 +42,7 @@ function run(job: NestingJob): void {
   try {
     const result = nestPieces(job.input, {
       ...job.options,
+      board: job.board ? sharedMarkerBoard(job.board, markerItemCount(job.input)) : undefined,
       now,
       signal: controller.signal,
       onProgress: (p) => port.postMessage({ type: 'progress', ...p } satisfies NestingWorkerMessage),

@@ -22,7 +22,7 @@ import { readdirSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { checkLayout, type NestingInput, type NestingResult } from '../../planning/nesting';
+import { checkLayout, markerBoardBuffer, markerItemCount, type NestingInput, type NestingResult } from '../../planning/nesting';
 import { demoMarkers } from './nesting/demo-markers';
 import { datasetDir, instanceToInput, readJsonInstance } from './nesting/json-instance';
 
@@ -70,10 +70,10 @@ function parseArgs(argv: string[]): Args {
   return a;
 }
 
-function runWorker(input: NestingInput, seed: number, seconds: number): Promise<NestingResult> {
+function runWorker(input: NestingInput, seed: number, seconds: number, board?: SharedArrayBuffer): Promise<NestingResult> {
   const entry = new URL('../../server/workers/nesting.worker.ts', import.meta.url).href;
   const worker = new Worker(new URL('./nesting/ts-worker.mjs', import.meta.url), {
-    workerData: { entry, input, options: { seed, timeBudgetMs: seconds * 1000 } },
+    workerData: { entry, input, board, options: { seed, timeBudgetMs: seconds * 1000 } },
   });
   return new Promise((resolve, reject) => {
     worker.on('message', (m: { type: string; result?: NestingResult; message?: string }) => {
@@ -89,7 +89,8 @@ function runWorker(input: NestingInput, seed: number, seconds: number): Promise<
 async function bestOfTwo(input: NestingInput, seconds: number, seed: number) {
   // Start-up and the final check come out of the allowance, so the wall clock stays near N s.
   const budget = Math.max(0.5, seconds - 1.5);
-  const results = await Promise.all([runWorker(input, seed, budget), runWorker(input, seed + 1, budget)]);
+  const board = process.env.NEST_NO_BOARD ? undefined : markerBoardBuffer(markerItemCount(input));
+  const results = await Promise.all([runWorker(input, seed, budget, board), runWorker(input, seed + 1, budget, board)]);
   const scored = results.map((r) => ({ r, check: checkLayout(input, r) }));
   scored.sort((a, b) => Number(b.check.valid) - Number(a.check.valid) || a.r.length - b.r.length);
   return scored[0];

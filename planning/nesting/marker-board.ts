@@ -1,0 +1,72 @@
+import type { LayoutSnapshot } from './layout-state';
+import type { NestingInput } from './types';
+
+/**
+ * Where the parallel lanes of one marker search share their shortest marker, so that a lane that has
+ * fallen behind carries on from the best marker found by any lane instead of its own.
+ */
+export interface MarkerBoard {
+  /** Post a feasible marker; it replaces the one held only when it is shorter. */
+  offer(snap: LayoutSnapshot, length: number): void;
+  /** A marker shorter than `length` posted since this lane last looked, else undefined. */
+  take(length: number): { snap: LayoutSnapshot; length: number } | undefined;
+}
+
+/** Copies of pieces in a marker (the engine's items): a mirrored piece gives a pair per quantity. */
+export function markerItemCount(input: NestingInput): number {
+  return input.pieces.reduce((s, p) => s + (p.mirrored ? 2 : 1) * p.quantity, 0);
+}
+
+const HEADER_BYTES = 24;
+
+/** Memory for a board of `n` items, to hand to every lane's worker (workerData shares it, not copies). */
+export function markerBoardBuffer(n: number): SharedArrayBuffer {
+  const buffer = new SharedArrayBuffer(HEADER_BYTES + 16 * n + 4 * n);
+  const head = new Int32Array(buffer, 0, 4);
+  head[2] = n;
+  new Float64Array(buffer, 16, 1)[0] = Infinity;
+  return buffer;
+}
+
+/**
+ * A board in shared memory (one per search, one view per lane). Layout: Int32 lock, version, n; Float64
+ * length; Float64 x[n], y[n]; Int32 v[n]. The lock is held only while n positions are copied, so a lane
+ * spins for at most a few microseconds. A lane's own posts never come back to it.
+ */
+export function sharedMarkerBoard(buffer: SharedArrayBuffer, n: number): MarkerBoard {
+  const head = new Int32Array(buffer, 0, 4);
+  if (head[2] !== n) throw new RangeError(`marker board holds ${head[2]} pieces, this marker has ${n}`);
+  const len = new Float64Array(buffer, 16, 1);
+  const xs = new Float64Array(buffer, HEADER_BYTES, n);
+  const ys = new Float64Array(buffer, HEADER_BYTES + 8 * n, n);
+  const vs = new Int32Array(buffer, HEADER_BYTES + 16 * n, n);
+  let seen = 0;
+  const lock = () => {
+    while (Atomics.compareExchange(head, 0, 0, 1) !== 0) {
+      /* another lane is copying n numbers */
+    }
+  };
+  const unlock = () => Atomics.store(head, 0, 0);
+  return {
+    offer(snap, length) {
+      lock();
+      if (length < len[0]) {
+        xs.set(snap.x);
+        ys.set(snap.y);
+        vs.set(snap.v);
+        len[0] = length;
+        seen = Atomics.add(head, 1, 1) + 1;
+      }
+      unlock();
+    },
+    take(length) {
+      if (Atomics.load(head, 1) === seen) return undefined;
+      lock();
+      seen = Atomics.load(head, 1);
+      const held = len[0];
+      const got = held < length ? { snap: { x: xs.slice(), y: ys.slice(), v: vs.slice() }, length: held } : undefined;
+      unlock();
+      return got;
+    },
+  };
+}
