@@ -252,6 +252,7 @@ export const en = {
     title: 'Costing · {{batch}}', pricesIn: 'prices in {{currency}}', back: 'Back to batch',
     average: 'Average cost per garment', wholesale: 'Wholesale ({{margin}} % margin)', retail: 'Suggested retail (× {{multiplier}})', batchCost: 'Batch cost',
     bySize: 'Cost per garment by size', filterSizes: 'Filter sizes…',
+    cols: { size: 'Size', cost: 'Cost a garment', wholesale: 'Wholesale', retail: 'Retail' },
     fabricNoteMetre: 'Fabric: {{name}} at {{price}} a metre, {{basis}}, {{wastage}} % wastage included; {{length}} for the batch.',
     fabricNoteYard: 'Fabric: {{name}} at {{price}} a yard, {{basis}}, {{wastage}} % wastage included; {{length}} for the batch.',
     basis: { 'cut-plan': 'from the cut plan', marker: 'from the marker', estimate: 'estimated' },

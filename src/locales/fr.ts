@@ -259,6 +259,7 @@ export const fr: Dictionary = {
     title: 'Prix de revient · {{batch}}', pricesIn: 'prix en {{currency}}', back: 'Retour à la série',
     average: 'Coût moyen par vêtement', wholesale: 'Prix de gros (marge {{margin}} %)', retail: 'Prix de détail conseillé (× {{multiplier}})', batchCost: 'Coût de la série',
     bySize: 'Coût par vêtement et par taille', filterSizes: 'Filtrer les tailles…',
+    cols: { size: 'Taille', cost: 'Coût par vêtement', wholesale: 'Prix de gros', retail: 'Prix de détail' },
     fabricNoteMetre: 'Tissu : {{name}} à {{price}} le mètre, {{basis}}, {{wastage}} % de perte compris ; {{length}} pour la série.',
     fabricNoteYard: 'Tissu : {{name}} à {{price}} la verge, {{basis}}, {{wastage}} % de perte compris ; {{length}} pour la série.',
     basis: { 'cut-plan': 'd’après le plan de coupe', marker: 'd’après le placement', estimate: 'estimé' },
