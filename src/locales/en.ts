@@ -268,7 +268,7 @@ export const en = {
   },
   newBatch: {
     subtitle: 'Pick a style, enter how many of each size to make, and when it must ship.',
-    quantity: 'Quantity {{size}}', totalGarments: 'Total garments', dueDate: 'Due date', notes: 'Notes', create: 'Create batch',
+    quantity: 'Quantity {{size}}', wholeNumber: 'Enter a whole number of garments', totalGarments: 'Total garments', dueDate: 'Due date', notes: 'Notes', create: 'Create batch',
   },
   outbox: {
     title: 'Outbox', subtitle: 'Purchase orders and invitations the studio has e-mailed.', filter: 'Filter messages…', empty: 'Nothing sent yet.',

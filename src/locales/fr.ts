@@ -275,7 +275,7 @@ export const fr: Dictionary = {
   },
   newBatch: {
     subtitle: 'Choisissez un modèle, indiquez combien en faire dans chaque taille et quand il doit partir.',
-    quantity: 'Quantité {{size}}', totalGarments: 'Total des vêtements', dueDate: 'Date de livraison', notes: 'Notes', create: 'Créer la série',
+    quantity: 'Quantité {{size}}', wholeNumber: 'Indiquez un nombre entier de vêtements', totalGarments: 'Total des vêtements', dueDate: 'Date de livraison', notes: 'Notes', create: 'Créer la série',
   },
   outbox: {
     title: 'Envois', subtitle: 'Bons de commande et invitations envoyés par courriel par l’atelier.', filter: 'Filtrer les messages…', empty: 'Rien d’envoyé pour l’instant.',
