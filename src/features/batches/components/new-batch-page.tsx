@@ -2,7 +2,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { addDays } from 'date-fns';
 import { dayInZone } from '@shared/format/studio-format';
 import { useMemo, useState } from 'react';
-import { useNavigate } from 'react-router';
+import { Link, useNavigate } from 'react-router';
 import { createBatchInput } from '@shared/schemas/batches';
 import { Field } from '@/components/ui/form';
 import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
@@ -49,6 +49,11 @@ export function NewBatchPage() {
     <>
       <PageHeader title={t('lists.newBatch')} subtitle={t('newBatch.subtitle')} />
       <Card>
+        {styles.length === 0 ? (
+          <p className="mb-4 text-sm text-ink-600">
+            {t('newBatch.noStyles')} <Link className="underline" to={paths.newStyle.getHref()}>{t('home.toNewStyle')}</Link>
+          </p>
+        ) : null}
         <form onSubmit={handleSubmit} className="max-w-2xl space-y-5" noValidate>
           <div>
             <label className="field-label" htmlFor="styleId">{t('lists.style')}</label>
