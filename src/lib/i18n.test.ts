@@ -88,6 +88,13 @@ describe('the keys the screens ask for', () => {
     expect(t('linePlan.plan.onlyMachinists', { count: 1 })).toBe('only 1 machinist');
   });
 
+  it('gives an imperial studio its figures in inches, never in millimetres or centimetres', () => {
+    const metricInImperial = Object.values(AREAS).flatMap(({ area, words: w }) =>
+      [...leaves(w.en), ...leaves(w.fr)].filter(([k, v]) => k.split('.').includes('imperial') && /\d\s*(mm|cm)\b/.test(v)).map(([k, v]) => `${area}.${k}: ${v}`),
+    );
+    expect(metricInImperial).toEqual([]);
+  });
+
   it('names the costing table columns in words, not keys', () => {
     for (const lng of ['en', 'fr']) {
       for (const col of ['size', 'cost', 'wholesale', 'retail']) expect(i18n.getFixedT(lng)(`costingPage.cols.${col}`)).not.toContain('costingPage');

@@ -193,11 +193,11 @@ const en = {
       skirtHem: 'straight 2 in, circle ⅜ in',
       fromArm: 'from the arm',
       sleeveHem: 'long 2 in, else 1 in',
-      pocketTop: 'patch 90 mm, in-seam 1 in',
+      pocketTop: 'patch 3 1/2 in, in-seam 1 in',
     },
   },
   choices: {
-    round: 'round', v: 'v', square: 'square', boat: 'boat', standard: 'standard', high: 'high',
+    round: 'round', v: 'V', square: 'square', boat: 'boat', standard: 'standard', high: 'high',
     straight: 'straight', pencil: 'pencil', 'a-line': 'a-line', gathered: 'gathered', circle: 'circle',
     short: 'short', 'three-quarter': 'three-quarter', long: 'long',
     ring: 'ring', halves: 'halves', quarters: 'quarters',
