@@ -83,6 +83,9 @@ export interface MarkerDto {
   drawing?: MarkerDrawingDto;
 }
 
-/** Size ratio as a short text, sizes in the given order: "XS 1 · S 2". */
+/**
+ * Size ratio as a short text, sizes in the given order: "XS×1 · S×2", as the printed marker lists and cut tickets
+ * write it. The × keeps a numeric size run readable: "10×1 · 12×2", never "10 1 · 12 2".
+ */
 export const ratioText = (ratio: Record<string, number>, sizes: string[] = Object.keys(ratio)) =>
-  sizes.filter((s) => (ratio[s] ?? 0) > 0).map((s) => `${s} ${ratio[s]}`).join(' · ');
+  sizes.filter((s) => (ratio[s] ?? 0) > 0).map((s) => `${s}×${ratio[s]}`).join(' · ');

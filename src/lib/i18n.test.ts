@@ -53,6 +53,55 @@ describe("the areas' own words", () => {
   });
 });
 
+/** The client's source, read as text, to find the dictionary keys it names literally. */
+const SOURCES = import.meta.glob<string>(['/src/**/*.{ts,tsx}', '!/src/**/*.test.{ts,tsx}'], { query: '?raw', import: 'default', eager: true });
+
+describe('the keys the screens ask for', () => {
+  const has = (dict: object, key: string) => {
+    const parts = key.split('.');
+    const last = parts.pop()!;
+    const parent = parts.reduce<Record<string, unknown> | undefined>((o, p) => o?.[p] as Record<string, unknown> | undefined, dict as Record<string, unknown>);
+    // A counted word is kept as word_one / word_other (i18next plurals).
+    return parent !== undefined && (last in parent || `${last}_one` in parent);
+  };
+
+  it('finds every literal key of the main dictionary in English and French', () => {
+    const missing: string[] = [];
+    for (const [file, text] of Object.entries(SOURCES)) {
+      for (const [, key] of text.matchAll(/\bt\(\s*'([a-zA-Z][\w]*\.[\w.]+)'/g)) {
+        if (!(key.split('.')[0] in en)) continue; // an area's words, or a key built at run time
+        if (!has(en, key) || !has(fr, key)) missing.push(`${file}: ${key}`);
+      }
+    }
+    expect(missing).toEqual([]);
+  });
+
+  it('says one of a counted thing in the singular in English', () => {
+    const words = [...leaves(en), ...Object.values(AREAS).flatMap(({ area, words: w }) => leaves(w.en).map(([k, v]) => [`${area}.${k}`, v] as [string, string]))];
+    const all = new Map(words);
+    // "pcs" is the trade's abbreviation for one piece or many; "1 in on 4 Dec" reads the same for one person.
+    const alike = new Set(['people.attendance.present_one']);
+    const same = words.filter(([k, v]) => k.endsWith('_one') && all.get(k.replace(/_one$/, '_other')) === v && !/\bpcs\b/.test(v) && !alike.has(k)).map(([k]) => k);
+    expect(same).toEqual([]);
+    const t = i18n.getFixedT('en');
+    expect(t('purchasing.needs.made', { count: 1 })).toBe('1 draft purchase order made.');
+    expect(t('linePlan.plan.onlyMachinists', { count: 1 })).toBe('only 1 machinist');
+  });
+
+  it('gives an imperial studio its figures in inches, never in millimetres or centimetres', () => {
+    const metricInImperial = Object.values(AREAS).flatMap(({ area, words: w }) =>
+      [...leaves(w.en), ...leaves(w.fr)].filter(([k, v]) => k.split('.').includes('imperial') && /\d\s*(mm|cm)\b/.test(v)).map(([k, v]) => `${area}.${k}: ${v}`),
+    );
+    expect(metricInImperial).toEqual([]);
+  });
+
+  it('names the costing table columns in words, not keys', () => {
+    for (const lng of ['en', 'fr']) {
+      for (const col of ['size', 'cost', 'wholesale', 'retail']) expect(i18n.getFixedT(lng)(`costingPage.cols.${col}`)).not.toContain('costingPage');
+    }
+  });
+});
+
 describe('plural rules of each language', () => {
   // CLDR plural rules (Unicode CLDR, Language Plural Rules): English "one" is exactly 1; French "one" is 0 and 1.
   it('says 0 pieces and 1 piece in English', () => {

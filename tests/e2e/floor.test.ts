@@ -153,7 +153,7 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await expect.poll(() => owner.getByRole('table', { name: 'Pay preview' }).textContent()).toContain('Achieng Mwende');
     // Approve and Pay each ask first, with the amount, and act only on "Yes".
     await owner.getByRole('button', { name: 'Approve pay period' }).click();
-    await expect.poll(() => owner.getByRole('group', { name: 'Confirm: Approve pay period' }).textContent()).toMatch(/Approve \d+ people, Ksh/);
+    await expect.poll(() => owner.getByRole('group', { name: 'Confirm: Approve pay period' }).textContent()).toMatch(/Approve \d+ (person|people), Ksh/);
     await owner.getByRole('button', { name: 'Yes, approve' }).click();
     const payout = owner.getByRole('listitem', { name: 'Payout Achieng Mwende' });
     await expect.poll(() => payout.isVisible()).toBe(true);

@@ -32,7 +32,7 @@ const en = {
     to: 'To',
     approve: 'Approve pay period',
     approveQuestion_one:
-      'Approve {{count}} people, {{total}}, for {{from}} to {{to}}? These days close: work logged on them later is paid in the next period.',
+      'Approve {{count}} person, {{total}}, for {{from}} to {{to}}? These days close: work logged on them later is paid in the next period.',
     approveQuestion_other:
       'Approve {{count}} people, {{total}}, for {{from}} to {{to}}? These days close: work logged on them later is paid in the next period.',
     approveYes: 'Yes, approve',
@@ -118,7 +118,7 @@ const en = {
     period: 'This pay period',
     periodSince: 'not yet approved, since {{day}}',
     figures: '{{pieces}} · {{ops}} · ',
-    ops_one: '{{count}} ops',
+    ops_one: '{{count}} op',
     ops_other: '{{count}} ops',
   },
   pcs_one: '{{count}} pcs',

@@ -25,7 +25,7 @@ const en = {
     elapsed: 'Elapsed <b>{{elapsed}} s</b> of {{budget}} s',
     utilisation: 'Utilisation <b>{{percent}}</b>',
     perGarment: '{{length}} per garment',
-    facts_one: '{{count}} pieces · width {{width}}',
+    facts_one: '{{count}} piece · width {{width}}',
     facts_other: '{{count}} pieces · width {{width}}',
     progress: 'Marker progress',
     waiting: 'Waiting for the nesting queue…',

@@ -2,7 +2,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { addDays } from 'date-fns';
 import { dayInZone } from '@shared/format/studio-format';
 import { useMemo, useState } from 'react';
-import { useNavigate } from 'react-router';
+import { Link, useNavigate } from 'react-router';
 import { createBatchInput } from '@shared/schemas/batches';
 import { Field } from '@/components/ui/form';
 import { Card, ErrorNote, PageHeader } from '@/components/ui/page';
@@ -12,6 +12,7 @@ import { styleQueries } from '@/features/styles/api/style-queries';
 import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { useCreateBatch } from '../api/batch-queries';
+import { readSizeQuantities } from './size-quantities';
 
 export function NewBatchPage() {
   const { t } = useTranslation();
@@ -25,17 +26,14 @@ export function NewBatchPage() {
   const [notes, setNotes] = useState('');
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
 
-  const quantities = useMemo(
-    () => Object.fromEntries((style?.sizeRun ?? []).map((s) => [s, qty[s] === undefined || qty[s] === '' ? 0 : Number(qty[s])])),
-    [style, qty],
-  );
-  const total = Object.values(quantities).reduce((a, b) => a + (Number.isFinite(b) ? b : 0), 0);
+  const { quantities, unreadable, total } = useMemo(() => readSizeQuantities(style?.sizeRun ?? [], qty), [style, qty]);
 
   const handleSubmit = async (e: React.FormEvent) => {
     e.preventDefault();
     const parsed = createBatchInput.safeParse({ styleId, quantities, dueDate, notes });
-    if (!parsed.success) {
-      setFieldErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.') || 'form', i.message])));
+    const typing = Object.fromEntries(unreadable.map((s) => [`quantities.${s}`, t('newBatch.wholeNumber')]));
+    if (!parsed.success || unreadable.length) {
+      setFieldErrors({ ...Object.fromEntries((parsed.error?.issues ?? []).map((i) => [i.path.join('.') || 'form', i.message])), ...typing });
       return;
     }
     setFieldErrors({});
@@ -51,6 +49,11 @@ export function NewBatchPage() {
     <>
       <PageHeader title={t('lists.newBatch')} subtitle={t('newBatch.subtitle')} />
       <Card>
+        {styles.length === 0 ? (
+          <p className="mb-4 text-sm text-ink-600">
+            {t('newBatch.noStyles')} <Link className="underline" to={paths.newStyle.getHref()}>{t('home.toNewStyle')}</Link>
+          </p>
+        ) : null}
         <form onSubmit={handleSubmit} className="max-w-2xl space-y-5" noValidate>
           <div>
             <label className="field-label" htmlFor="styleId">{t('lists.style')}</label>
@@ -71,7 +74,7 @@ export function NewBatchPage() {
                     className="field-input text-center"
                     value={qty[s] ?? ''}
                     placeholder="0"
-                    onChange={(e) => setQty({ ...qty, [s]: e.target.value.replace(/[^\d]/g, '') })}
+                    onChange={(e) => setQty({ ...qty, [s]: e.target.value })}
                   />
                   {fieldErrors[`quantities.${s}`] ? <p className="field-error">{fieldErrors[`quantities.${s}`]}</p> : null}
                 </div>

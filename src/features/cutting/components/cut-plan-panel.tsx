@@ -8,7 +8,7 @@ import { fmt, formatMoney } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { batchStyleQueries, cutPlanQueries, fabricQueries, usePlanCut } from '../api/cutting-queries';
 import { area } from '../words';
-import { metres, MM_PER_YARD, ratioLabel, SPREADING_LABELS } from './cutting-format';
+import { cutPlanFabricId, metres, MM_PER_YARD, ratioLabel, SPREADING_LABELS } from './cutting-format';
 import { paths } from '@/config/paths';
 import { FieldError } from '@/components/ui/form';
 
@@ -25,11 +25,12 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const materials = [...new Set(['self', ...Object.keys(style?.materialFabrics ?? {})])];
   const planCut = usePlanCut(batch.id);
   const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: imperial ? '6.5' : '6', overcutPercent: '0' });
+  const fabricId = form.fabricId || String(cutPlanFabricId(plan?.fabricId, style?.materialFabrics?.self, fabrics.map((x) => x.id)) ?? '');
   const fields = planCut.error instanceof ApiError ? planCut.error.fields : {};
   const handleSubmit = (e: FormEvent) => {
     e.preventDefault();
     planCut.mutate({
-      fabricId: Number(form.fabricId || fabrics[0]?.id), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
+      fabricId: Number(fabricId), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
       maxMarkerLengthMm: form.maxMarkerLengthM ? Math.round(Number(form.maxMarkerLengthM.replace(',', '.')) * mmPerTable) : undefined, overcutPercent: Number(form.overcutPercent || 0),
     });
   };
@@ -45,7 +46,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
       <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
         <div>
           <label className="field-label" htmlFor="cp-fabric">{t(`${area}.plan.fabric`)}</label>
-          <select id="cp-fabric" className="field-input" value={form.fabricId || String(fabrics[0]?.id ?? '')} onChange={(e) => setForm({ ...form, fabricId: e.target.value })}>
+          <select id="cp-fabric" className="field-input" value={fabricId} onChange={(e) => setForm({ ...form, fabricId: e.target.value })}>
             {fabrics.map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
           </select>
         </div>

@@ -23,3 +23,14 @@ export const SPREADING_LABELS: Record<string, string> = {
   'face-to-face-one-way': 'Face to face, one way',
   'face-to-face-zigzag': 'Face to face, zigzag',
 };
+
+/**
+ * The fabric the cut plan form shows before the owner picks one: the fabric of the plan on screen, else the
+ * style's self fabric, else the first fabric. A batch holds one cut plan, so a form that opened on another
+ * fabric (the alphabetical first, often the lining) would replace the self fabric's plan at one press.
+ */
+export function cutPlanFabricId(planFabricId: number | undefined, selfFabricId: number | undefined, fabricIds: readonly number[]): number | undefined {
+  if (planFabricId !== undefined && fabricIds.includes(planFabricId)) return planFabricId;
+  if (selfFabricId !== undefined && fabricIds.includes(selfFabricId)) return selfFabricId;
+  return fabricIds[0];
+}

@@ -64,6 +64,10 @@ export function LayPage() {
       flaws,
     };
   };
+  // The errors on screen are the last request's: a save refused earlier is not shown once the lay is cut.
+  const only = (keep: { reset: () => void }) => {
+    for (const m of [record, cut, correct]) if (m !== keep) m.reset();
+  };
   const failure = record.error ?? cut.error ?? correct.error;
   const server = failure instanceof ApiError ? failure.fields ?? {} : {};
   const fields: Record<string, string> = { ...server, ...local };
@@ -78,6 +82,7 @@ export function LayPage() {
       setLocal({ reason: t(`${area}.lay.sayWhy`) });
       return;
     }
+    only(correct);
     correct.mutate({ ...b, reason }, { onSuccess: () => { setCorrecting(false); setReason(''); } });
   };
   const spreadPlies = lay.rolls.reduce((a, r) => a + (Number(actual[r.rollId]?.actualPlies) || 0), 0);
@@ -115,11 +120,11 @@ export function LayPage() {
         <Card title={t('lay.perRoll')}>
           <div role="region" aria-label={t(`${area}.lay.rolls`)} tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
-              <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('lay.pliesToSpread')}</th><th>{t('lay.expectedRemnant')}</th><th>{t('lay.pliesSpread')}</th><th>{imperial ? t('lay.remnantLeftIn') : t('lay.remnantLeftM')}</th><th>{t('lay.note')}</th></tr></thead>
+              <thead className="text-left text-xs text-ink-600"><tr><th className="py-1 pr-3">{t('fabric.roll')}</th><th className="pr-3">{t('fabric.shadeLot')}</th><th className="pr-3">{t('lay.pliesToSpread')}</th><th className="pr-3">{t('lay.expectedRemnant')}</th><th>{t('lay.pliesSpread')}</th><th>{imperial ? t('lay.remnantLeftIn') : t('lay.remnantLeftM')}</th><th>{t('lay.note')}</th></tr></thead>
               <tbody>
                 {lay.rolls.map((r, i) => (
                   <tr key={r.rollId} className="border-t border-calico-200">
-                    <td className="py-1 font-semibold">{r.label}</td><td>{r.shadeLot}</td><td>{r.plies}</td><td className="whitespace-nowrap">{metres(r.expectedRemnantMm)}</td>
+                    <td className="whitespace-nowrap py-1 pr-3 font-semibold">{r.label}</td><td className="whitespace-nowrap pr-3">{r.shadeLot}</td><td className="pr-3 tabular-nums">{r.plies}</td><td className="whitespace-nowrap pr-3">{metres(r.expectedRemnantMm)}</td>
                     <td><input aria-label={t('lay.pliesFrom', { roll: r.label })} className="field-input w-20" type="number" disabled={readOnly} value={actual[r.rollId]?.actualPlies ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualPlies: e.target.value } })} />
                       {fields[`rolls.${i}.actualPlies`] ? <p className="field-error">{fields[`rolls.${i}.actualPlies`]}</p> : null}</td>
                     <td><input aria-label={t('lay.remnantOn', { roll: r.label })} className="field-input w-24" type={imperial ? 'text' : 'number'} step="0.01" disabled={readOnly} value={actual[r.rollId]?.actualRemnantM ?? ''} onChange={(e) => setActual({ ...actual, [r.rollId]: { ...actual[r.rollId], actualRemnantM: e.target.value } })} />
@@ -137,13 +142,13 @@ export function LayPage() {
           </div>
           {!readOnly ? (
             <div className="mt-3 flex flex-wrap gap-2">
-              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) record.mutate(b); }}>{t('lay.save')}</button>
+              <button type="button" className="btn-quiet" disabled={record.isPending} onClick={() => { const b = body(false); if (b) { only(record); record.mutate(b); } }}>{t('lay.save')}</button>
               <ConfirmButton
                 label={t('lay.markCut')}
                 question={t('lay.markCutQuestion', { seq: lay.seq })}
                 confirmLabel={t('lay.markCutYes')}
                 disabled={cut.isPending}
-                onConfirm={() => { const b = body(true); if (b) cut.mutate(b); }}
+                onConfirm={() => { const b = body(true); if (b) { only(cut); cut.mutate(b); } }}
               />
             </div>
           ) : retired ? null : correcting ? (

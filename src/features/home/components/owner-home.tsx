@@ -23,6 +23,14 @@ export function OwnerHome({ name }: { name: string }) {
       <div className="grid gap-5 lg:grid-cols-3">
         <Card title={t('home.inProgress')} className="lg:col-span-2">
           {open.length === 0 ? <p className="text-sm text-ink-600">{t('home.noOpen')}</p> : null}
+          {batches.length === 0 ? (
+            <p className="mt-2 text-sm text-ink-600">
+              {t('home.firstSteps')}{' '}
+              <Link className="underline" to={paths.fabrics.getHref()}>{t('home.toFabric')}</Link>
+              {' · '}
+              <Link className="underline" to={paths.newStyle.getHref()}>{t('home.toNewStyle')}</Link>
+            </p>
+          ) : null}
           <ul className="divide-y divide-calico-200">
             {open.map((b) => (
               <li key={b.id} className="flex flex-wrap items-center justify-between gap-2 py-3">

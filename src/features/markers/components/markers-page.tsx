@@ -15,6 +15,7 @@ import { MarkerDrawing } from './marker-drawing';
 import { Trans } from 'react-i18next';
 import { i18n } from '@/lib/i18n';
 import { area } from '../words';
+import { markerFabricId } from './marker-defaults';
 
 // recharts loads with the first run that has points to draw, not with the page.
 const MarkerProgressChart = lazy(async () => ({ default: (await import('./marker-progress-chart')).MarkerProgressChart }));
@@ -77,7 +78,9 @@ function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto
   useTranslation();
   const start = useStartMarker();
   const [ratio, setRatio] = useState<Record<string, number>>(() => Object.fromEntries(sizes.map((s) => [s, 0])));
-  const [fabricId, setFabricId] = useState<number | undefined>(fabrics[0]?.id);
+  const [picked, setFabricId] = useState<number | undefined>();
+  // Until the owner picks one, the plan's fabric (the plan may arrive after the form).
+  const fabricId = picked ?? markerFabricId(plan?.fabricId, fabrics.map((f) => f.id));
   const [seconds, setSeconds] = useState('');
   const fields = start.error instanceof ApiError ? start.error.fields : {};
   return (
@@ -86,7 +89,7 @@ function StartForm({ batch, fabrics, plan, sizes, onStarted }: { batch: BatchDto
         <div className="mb-3 flex flex-wrap gap-2 text-sm">
           <span className="text-ink-600">{w('start.ratios')}</span>
           {plan.lays.map((l) => (
-            <button type="button" key={l.id} className="btn-quiet" onClick={() => setRatio({ ...Object.fromEntries(sizes.map((s) => [s, 0])), ...l.ratio })}>{w('start.lay', { seq: l.seq, ratio: ratioText(l.ratio, sizes) })}</button>
+            <button type="button" key={l.id} className="btn-quiet" onClick={() => { setRatio({ ...Object.fromEntries(sizes.map((s) => [s, 0])), ...l.ratio }); setFabricId(markerFabricId(plan.fabricId, fabrics.map((f) => f.id))); }}>{w('start.lay', { seq: l.seq, ratio: ratioText(l.ratio, sizes) })}</button>
           ))}
         </div>
       ) : null}

@@ -9,7 +9,14 @@ export const peopleQueries = {
   list: () => queryOptions({ queryKey: ['people', 'list'], queryFn: async () => (await api.get<{ users: PersonDto[] }>('/users')).users }),
 };
 
-const invalidate = () => queryClient.invalidateQueries({ queryKey: peopleQueries.all().queryKey });
+// Attendance lists the active floor staff and the line plan balances them, so a person added, changed or
+// deactivated shows there at once, not after a reload.
+const invalidate = () =>
+  Promise.all([
+    queryClient.invalidateQueries({ queryKey: peopleQueries.all().queryKey }),
+    queryClient.invalidateQueries({ queryKey: attendanceQueries.all().queryKey }),
+    queryClient.invalidateQueries({ queryKey: ['line-plan'] }),
+  ]);
 
 export const useAddPerson = () =>
   useMutation({ mutationFn: (v: CreatePersonInput) => api.post<{ user: PersonDto }>('/users', v), onSuccess: invalidate });

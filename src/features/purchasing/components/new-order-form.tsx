@@ -52,7 +52,7 @@ export function NewOrderForm() {
         </select>
       </label>
       <label className="text-sm">
-        <span className="field-label">{w('quantity', { unit })}</span>
+        <span className="field-label">{unit ? w('quantity', { unit }) : w('quantityLabel')}</span>
         <input aria-label={w('quantityLabel')} className="field-input" inputMode="decimal" value={quantity} onChange={(e) => setQuantity(e.target.value)} />
         {error ? <span className="field-error">{error}</span> : null}
       </label>

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router';
 import { cuttingOutline, draftStyle, type BlockSpec, type BodyMeasurements, type DraftedPiece } from '@grading';
-import { formatLength, parseLength } from '@shared/units/length-format';
+import { formatLength } from '@shared/units/length-format';
 import { presetComposition, STYLE_PRESETS, type BlockSpecInput, type StyleComposition } from '@shared/schemas/style-composition';
 import type { StyleDto } from '@shared/schemas/styles';
 import { ErrorNote } from '@/components/ui/page';
@@ -16,6 +16,7 @@ import { useTranslation } from '@/lib/i18n';
 import { useSaveComposition } from '../api/style-queries';
 import { area } from '../words';
 import { BLOCK_FIELDS, BLOCK_NAMES, getAt, materialsOf, setAt, type BlockField, type BlockName } from './block-fields';
+import { blockOptionField, readBlockOption } from './block-option-text';
 
 const MATERIAL_CHOICES = ['self', 'lining', 'contrast', 'interfacing'];
 
@@ -56,7 +57,7 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
       ) : (
         <ol className="grid gap-3">
           {comp.blocks.map((b, i) => (
-            <BlockEditor key={i} index={i} spec={b} canEdit={canEdit} onChange={(s) => setBlock(i, s)} onRemove={() => setComp({ ...comp, blocks: comp.blocks.filter((_, k) => k !== i) })} />
+            <BlockEditor key={i} index={i} spec={b} canEdit={canEdit} errors={save.error && 'fields' in save.error ? (save.error.fields as Record<string, string>) : {}} onChange={(s) => setBlock(i, s)} onRemove={() => setComp({ ...comp, blocks: comp.blocks.filter((_, k) => k !== i) })} />
           ))}
         </ol>
       )}
@@ -97,7 +98,7 @@ export function StyleBlocksCard({ style }: { style: StyleDto }) {
   );
 }
 
-function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: number; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void; onRemove: () => void }) {
+function BlockEditor({ index, spec, canEdit, errors, onChange, onRemove }: { index: number; spec: BlockSpecInput; canEdit: boolean; errors: Record<string, string>; onChange: (s: BlockSpecInput) => void; onRemove: () => void }) {
   const { t } = useTranslation();
   return (
     <li className="rounded-lg border border-calico-200 p-3" data-testid={`block-${index}`}>
@@ -112,21 +113,20 @@ function BlockEditor({ index, spec, canEdit, onChange, onRemove }: { index: numb
         {canEdit ? <button type="button" className="btn-quiet ml-auto" onClick={onRemove}>{t(`${area}.blocks.remove`)}</button> : null}
       </div>
       <div className="grid gap-2 sm:grid-cols-3">
-        {BLOCK_FIELDS[spec.block].map((f) => <OptionField key={f.path} index={index} block={spec.block} field={f} spec={spec} canEdit={canEdit} onChange={onChange} />)}
+        {BLOCK_FIELDS[spec.block].map((f) => <OptionField key={f.path} index={index} block={spec.block} field={f} spec={spec} canEdit={canEdit} error={errors[blockOptionField(index, f.path)]} onChange={onChange} />)}
       </div>
     </li>
   );
 }
 
-function OptionField({ index, block, field: f, spec, canEdit, onChange }: { index: number; block: BlockName; field: BlockField; spec: BlockSpecInput; canEdit: boolean; onChange: (s: BlockSpecInput) => void }) {
+function OptionField({ index, block, field: f, spec, canEdit, error, onChange }: { index: number; block: BlockName; field: BlockField; spec: BlockSpecInput; canEdit: boolean; error?: string; onChange: (s: BlockSpecInput) => void }) {
   const { t } = useTranslation();
+  const [isBad, setIsBad] = useState(false);
   const { len, system, lengthUnitWord, decimal } = useLength();
-  const unit = system === 'metric' ? 'cm' : 'in';
   const key = `${block}.${f.path.replace(/\./g, '_')}`;
   const label = t(`${area}.fieldsByUnit.${system}.${key}`, { defaultValue: '' }) || t(`${area}.fields.${key}`);
   const choice = (c: string) => t(`${area}.choices.${c}`, { defaultValue: c });
   const cell = (v: number) => (system === 'metric' ? decimal(String(Number((v / 10).toFixed(2)))) : formatLength(v, system).replace('"', ''));
-  const parseCell = (t: string) => parseLength(/[a-z"]/i.test(t) ? t : `${t} ${unit}`, system);
   const value = getAt(spec, f.path);
   const id = `b${index}-${f.path}`;
   const set = (v: unknown) => onChange(setAt(spec, f.path, v));
@@ -157,13 +157,14 @@ function OptionField({ index, block, field: f, spec, canEdit, onChange }: { inde
       <input
         id={id} className="field-input" disabled={!canEdit} placeholder={t(`${area}.blocks.defaultValue`, { value: shown })}
         defaultValue={value === undefined ? '' : f.kind === 'length' ? cell(value as number) : decimal(String(value))}
+        aria-invalid={isBad || Boolean(error)}
         onBlur={(e) => {
-          const t = e.target.value.trim();
-          if (!t) return set(undefined);
-          const v = f.kind === 'length' ? parseCell(t) : Number(t.replace(',', '.'));
-          if (v !== null && Number.isFinite(v)) set(v);
+          const read = readBlockOption(e.target.value, f.kind, system);
+          setIsBad(read.isBad);
+          if (!read.isBad) set(read.value);
         }}
       />
+      {isBad || error ? <span className="field-error">{isBad ? t(`${area}.blocks.notANumber`) : error}</span> : null}
     </label>
   );
 }
