@@ -45,7 +45,7 @@ export const FIELD_LABELS_FR: Record<string, string> = {
   priceMinor: 'Prix', pricePerMetreMinor: 'Prix au mètre', priceUnit: 'Unité de prix', q: 'Recherche',
   quantities: 'Quantités', quantity: 'Quantité', quantityPerGarment: 'Quantité par vêtement', rating: 'Allure',
   ratio: 'Répartition des tailles', reason: 'Motif', receivedDate: 'Date de réception', refId: 'Article',
-  relaxationPercent: 'Temps de repos', retailMultiplier: 'Coefficient de vente au détail', reworkOperationId: 'Opération à reprendre',
+  relaxationPercent: 'Temps de repos', replacePlan: 'Remplacer le plan', retailMultiplier: 'Coefficient de vente au détail', reworkOperationId: 'Opération à reprendre',
   role: 'Rôle', rollId: 'Rouleau', rollIds: 'Rouleaux', rolls: 'Rouleaux', rows: 'Lignes', sam: 'Minutes standard',
   seamAllowanceMm: 'Valeur de couture', seamMm: 'Couture', seams: 'Coutures', seconds: 'Secondes', section: 'Section',
   shadeLot: 'Bain de teinture', shape: 'Forme', shiftEnd: 'Fin du poste', shiftStart: 'Début du poste',

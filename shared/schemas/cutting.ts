@@ -97,6 +97,8 @@ export const createCutPlanInput = z.object({
   overcutPercent: z.number().min(0, 'Cannot be negative').max(50, 'At most 50 %').optional(),
   endAllowanceMm: z.number().min(0, 'Cannot be negative').max(500, 'At most 500 mm').optional(),
   rollIds: z.array(z.number().int().positive()).max(MAX_ROLLS_AT_ONCE, `At most ${MAX_ROLLS_AT_ONCE} rolls`).optional(),
+  /** A batch has one cut plan: planning another fabric than the plan's replaces it only when this is true. */
+  replacePlan: z.boolean().optional(),
 });
 export type CreateCutPlanInput = z.input<typeof createCutPlanInput>;
 

@@ -83,6 +83,11 @@ describe('the demo cut plan and the cutter', () => {
     const bad = await owner.post('/api/batches/1/cut-plan').send({ fabricId: 0, maxPlies: 0, maxGarmentsPerMarker: 2.5 });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(['fabricId', 'maxPlies', 'maxGarmentsPerMarker']));
+    // Lay 1 is cut from fabric 1: another fabric cannot take over the batch's plan, even when asked to.
+    const otherFabric = ((await owner.get('/api/fabrics')).body.fabrics as { id: number; name: string }[]).find((f) => f.id !== 1)!;
+    const refused = await owner.post('/api/batches/1/cut-plan').send({ fabricId: otherFabric.id, maxPlies: 6, maxGarmentsPerMarker: 4, replacePlan: true });
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(new RegExp(`^Lays of this batch are already cut from .+: its cut plan stays on .+; cut ${otherFabric.name} from its material cut ticket$`));
     // Re-planning keeps the cut lay and plans only what is left to cut.
     const again = await owner.post('/api/batches/1/cut-plan').send({ fabricId: 1, maxPlies: 6, maxGarmentsPerMarker: 4 });
     expect(again.status).toBe(201);

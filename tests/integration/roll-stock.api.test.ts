@@ -61,6 +61,28 @@ describe('roll reservations across batches', () => {
     expect(spreadFrom(again.body.cutPlan.lays, rollId)).toBeCloseTo(spreadFrom(first.body.cutPlan.lays, rollId), -1);
   });
 
+  it('never drops a batch\'s plan on one fabric because another fabric was planned, unless the owner confirms', async () => {
+    const self = await fabricWithRoll(40_000);
+    const lining = await fabricWithRoll(40_000);
+    const batchId = await newBatch();
+    const first = await plan(batchId, self.fabricId);
+    expect(first.status).toBe(201);
+    const held = (await roll(self.fabricId, self.rollId)).reservedMm;
+    expect(held).toBeGreaterThan(20_000);
+    const refused = await plan(batchId, lining.fabricId);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.fields.fabricId).toMatch(/^The batch is planned on Stock test twill \d+$/);
+    expect(refused.body.error.message).toMatch(/replaces that plan and releases the rolls it holds/);
+    // Nothing changed: the first plan and its holds stand, the other roll holds nothing.
+    expect((await roll(self.fabricId, self.rollId)).reservedMm).toBeCloseTo(held, 3);
+    expect((await roll(lining.fabricId, lining.rollId)).reservedMm).toBe(0);
+    expect((await owner.get(`/api/batches/${batchId}/cut-plan`)).body.cutPlan.id).toBe(first.body.cutPlan.id);
+    const replaced = await owner.post(`/api/batches/${batchId}/cut-plan`).send({ fabricId: lining.fabricId, ...PLAN, replacePlan: true });
+    expect(replaced.status).toBe(201);
+    expect((await roll(self.fabricId, self.rollId)).reservedMm).toBe(0);
+    expect((await roll(lining.fabricId, lining.rollId)).reservedMm).toBeGreaterThan(20_000);
+  });
+
   it('gives a cancelled batch\'s hold back to the next batch planned on the roll', async () => {
     const { fabricId, rollId } = await fabricWithRoll(40_000);
     const gone = await newBatch();

@@ -4,6 +4,7 @@ import type { CreateCutPlanInput } from '../../../shared/schemas/cutting';
 import type { CutPlanEntity, FabricEntity, LayEntity, RollEntity, RollReservationEntity } from '../../entities';
 import type { LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
+import { said } from '../../../shared/i18n/speak';
 import type { JobRunner } from '../../jobs/job-runner';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
@@ -107,6 +108,13 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   const pieces = piecesOnFabric(all, batch.style.materialFabrics, fabric);
   const live = await plans.livePlans(studioId, batchId);
   const cutLays = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'cut');
+  // One cut plan per batch (its lays make the sewing bundles): another fabric's plan is never dropped unasked.
+  const other = live.find((p) => p.fabricId !== fabric.id);
+  if (other) {
+    const names = { other: (await fabrics.get(studioId, other.fabricId))?.name ?? `#${other.fabricId}`, fabric: fabric.name };
+    if (cutLays.length) throw conflict(said('planOnOtherFabricCut', names), { fabricId: said('planOnOtherFabricField', names) });
+    if (!input.replacePlan) throw conflict(said('planOnOtherFabric', names), { fabricId: said('planOnOtherFabricField', names) });
+  }
   const remaining = remainingQuantities(batch.quantities, cutLays);
   if (Object.values(remaining).every((q) => q === 0)) throw conflict('Every garment of this batch is already cut');
 

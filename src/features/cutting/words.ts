@@ -7,6 +7,7 @@ const en = {
   materials: { self: 'self', lining: 'lining', contrast: 'contrast', interfacing: 'interfacing' },
   plan: {
     title: 'Cut plan',
+    replace: 'Replace the plan',
     fabric: 'Fabric',
     maxPlies: 'Most plies',
     garmentsPerMarker: 'Garments per marker',
@@ -114,6 +115,7 @@ export const words: AreaWords<typeof en> = {
     materials: { self: 'tissu principal', lining: 'doublure', contrast: 'contraste', interfacing: 'entoilage' },
     plan: {
       title: 'Plan de coupe',
+      replace: 'Remplacer le plan',
       fabric: 'Tissu',
       maxPlies: 'Plis au maximum',
       garmentsPerMarker: 'Vêtements par placement',

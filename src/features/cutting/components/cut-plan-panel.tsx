@@ -27,12 +27,18 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: imperial ? '6.5' : '6', overcutPercent: '0' });
   const fabricId = form.fabricId || String(cutPlanFabricId(plan?.fabricId, style?.materialFabrics?.self, fabrics.map((x) => x.id)) ?? '');
   const fields = planCut.error instanceof ApiError ? planCut.error.fields : {};
-  const handleSubmit = (e: FormEvent) => {
-    e.preventDefault();
+  // The server refuses to drop another fabric's plan unasked (409 on fabricId); replacing it is a second, explicit press.
+  const canReplace = planCut.error instanceof ApiError && planCut.error.status === 409 && Boolean(fields.fabricId) && !plan?.lays.some((l) => l.status === 'cut');
+  const submit = (replacePlan: boolean) => {
     planCut.mutate({
+      ...(replacePlan ? { replacePlan } : {}),
       fabricId: Number(fabricId), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
       maxMarkerLengthMm: form.maxMarkerLengthM ? Math.round(Number(form.maxMarkerLengthM.replace(',', '.')) * mmPerTable) : undefined, overcutPercent: Number(form.overcutPercent || 0),
     });
+  };
+  const handleSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    submit(false);
   };
   const num = (key: keyof typeof form, label: string, err?: string) => (
     <div>
@@ -49,6 +55,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
           <select id="cp-fabric" className="field-input" value={fabricId} onChange={(e) => setForm({ ...form, fabricId: e.target.value })}>
             {fabrics.map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
           </select>
+          {fields.fabricId ? <FieldError>{fields.fabricId}</FieldError> : null}
         </div>
         {num('maxPlies', t(`${area}.plan.maxPlies`), fields.maxPlies)}
         {num('maxGarmentsPerMarker', t(`${area}.plan.garmentsPerMarker`), fields.maxGarmentsPerMarker)}
@@ -56,7 +63,10 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
         {num('overcutPercent', t(`${area}.plan.overcut`), fields.overcutPercent)}
         <button type="submit" className="btn-primary" disabled={planCut.isPending}>{planCut.isPending ? t(`${area}.plan.planning`) : t(`${area}.plan.plan`)}</button>
       </form>
-      {planCut.error && !Object.keys(fields).length ? <div className="mt-3"><ErrorNote error={planCut.error} /></div> : null}
+      {planCut.error && (!Object.keys(fields).length || fields.fabricId) ? <div className="mt-3"><ErrorNote error={planCut.error} /></div> : null}
+      {canReplace ? (
+        <button type="button" className="btn-quiet mt-2" disabled={planCut.isPending} onClick={() => submit(true)}>{t(`${area}.plan.replace`)}</button>
+      ) : null}
       {plan?.lays.some((l) => l.status === 'cut') ? (
         <p className="mt-3 rounded-lg bg-calico-50 px-3 py-2 text-sm">
           {t(`${area}.plan.alreadyCut`)}
