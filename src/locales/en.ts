@@ -139,6 +139,7 @@ export const en = {
     logging: 'Logging…',
     logFail: 'Log failed check and send back',
     logDone: 'Log done',
+    pickOperation: 'Pick the operation you did',
     logged: '✓ Logged',
     loggedWhat: 'Bundle <b>{{number}}</b> · {{op}}',
     pays: '<b>{{pieces}}</b> · pays <b>{{pay}}</b>',

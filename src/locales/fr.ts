@@ -146,6 +146,7 @@ export const fr: Dictionary = {
     logging: 'Enregistrement…',
     logFail: 'Noter le contrôle non conforme et renvoyer',
     logDone: 'Noter comme faite',
+    pickOperation: 'Choisissez l’opération faite',
     logged: '✓ Noté',
     loggedWhat: 'Paquet <b>{{number}}</b> · {{op}}',
     pays: '<b>{{pieces}}</b> · rapporte <b>{{pay}}</b>',

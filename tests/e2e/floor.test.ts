@@ -75,6 +75,9 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await page.getByLabel('Bundle number').fill('3');
     await page.getByRole('button', { name: 'Find bundle' }).click();
     await expect.poll(() => page.getByText('Bundle 3 · size').isVisible()).toBe(true);
+    // With two or more of her operations open, nothing is chosen for her: the button asks her to pick.
+    await expect.poll(() => page.getByRole('button', { name: 'Pick the operation you did' }).isDisabled()).toBe(true);
+    await page.locator('input[name="operation"]').first().check();
     const picked = page.locator('input[name="operation"]:checked');
     const opLabel = (await picked.getAttribute('aria-label'))!;
     await shot(page, 'floor-phone-typed-bundle');
@@ -98,6 +101,7 @@ describe('journey: a machinist logs a bundle from a phone and the owner sees it 
     await page.getByRole('button', { name: 'Scan the ticket’s QR code' }).click();
     await expect.poll(() => page.getByText('Bundle 2 · size').isVisible(), { timeout: 20_000 }).toBe(true);
     await shot(page, 'floor-phone-scanned-bundle');
+    await page.locator('input[name="operation"]').first().check();
     await page.getByRole('button', { name: 'Log done' }).click();
     await expect.poll(() => page.getByRole('status', { name: 'Logged' }).textContent()).toContain('Bundle 2');
     await shot(page, 'floor-phone-scanned-logged');

@@ -3,6 +3,7 @@ import type { BundleDto, FloorOperationDto, LogWorkInput } from '@shared/schemas
 import { Caution } from '@/components/ui/page';
 import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
+import { onlyOpenOfMine } from '../lib/operation-choice';
 import { area } from '../words';
 
 export type LogChoice = Pick<LogWorkInput, 'operationId' | 'outcome' | 'defect' | 'reworkOperationId'>;
@@ -28,8 +29,9 @@ function OperationOption({ op, state, selected, onSelect }: { op: FloorOperation
 export function BundleLogPanel({ bundle, busy, onLog }: { bundle: BundleDto; busy: boolean; onLog: (c: LogChoice) => void }) {
   const { t } = useTranslation();
   const stateOf = (id: number) => bundle.states.find((s) => s.operationId === id);
-  const firstOpen = bundle.operations.find((o) => o.isMine && !stateOf(o.id)?.done);
-  const [opId, setOpId] = useState<number | undefined>(firstOpen?.id);
+  // Pay follows the operation logged: nothing is chosen for the machinist unless exactly one of their own
+  // operations is still open on this bundle, and an operation once logged does not stay chosen.
+  const [opId, setOpId] = useState<number | undefined>(() => onlyOpenOfMine(bundle));
   const [outcome, setOutcome] = useState<'pass' | 'fail'>('pass');
   const [defect, setDefect] = useState('');
   const [rework, setRework] = useState<number | undefined>();
@@ -43,6 +45,7 @@ export function BundleLogPanel({ bundle, busy, onLog }: { bundle: BundleDto; bus
   const handleLog = () => {
     if (!op) return;
     onLog(op.isCheck ? { operationId: op.id, outcome, ...(outcome === 'fail' ? { defect: defect.trim(), reworkOperationId: rework } : {}) } : { operationId: op.id });
+    setOpId(undefined);
   };
 
   return (
@@ -99,7 +102,7 @@ export function BundleLogPanel({ bundle, busy, onLog }: { bundle: BundleDto; bus
         </div>
       ) : null}
       <button type="button" className="btn-primary w-full py-3 text-base" disabled={!canLog || busy} onClick={handleLog}>
-        {busy ? t('floor.logging') : op?.isCheck && outcome === 'fail' ? t('floor.logFail') : t('floor.logDone')}
+        {busy ? t('floor.logging') : !op ? t('floor.pickOperation') : op.isCheck && outcome === 'fail' ? t('floor.logFail') : t('floor.logDone')}
       </button>
     </div>
   );
