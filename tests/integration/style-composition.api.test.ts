@@ -243,6 +243,14 @@ describe('materials of a style', () => {
       expect(pdf.headers['content-disposition']).toContain(`cut-ticket-${batch.code}-${material}.pdf`);
       expect(String(pdf.body.subarray(0, 5))).toBe('%PDF-');
     }
+    // The cutter's lay page offers the same tickets: its lay lists the style's materials.
+    const style = (await owner.get(`/api/styles/${lined.id}`)).body.style as { materialFabrics: Record<string, number> };
+    const planned = await owner.post(`/api/batches/${batch.id}/cut-plan`).send({ fabricId: style.materialFabrics.self, maxPlies: 10, maxGarmentsPerMarker: 3 });
+    expect(planned.status).toBe(201);
+    const layView = await cutter.get(`/api/lays/${planned.body.cutPlan.lays[0].id}`);
+    expect(layView.status).toBe(200);
+    expect(layView.body.materials).toEqual(['self', ...Object.keys(style.materialFabrics).filter((m) => m !== 'self')]);
+    expect(layView.body.materials).toEqual(expect.arrayContaining(['lining', 'contrast', 'interfacing']));
     const bad = await owner.get(`/api/batches/${batch.id}/material-cut-ticket.pdf?material=mesh`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.message).toMatch(/cuts no pieces from "mesh" \(it uses self, .*lining/);

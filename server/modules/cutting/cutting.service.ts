@@ -127,10 +127,13 @@ export function createCuttingService(deps: CuttingServiceDeps) {
       const plan = await plans.getPlan(studioId, lay.cutPlanId);
       const fabric = plan ? await fabrics.get(studioId, plan.fabricId) : null;
       const bundles = await plans.bundlesOfLay(studioId, lay.id);
+      const batch = await deps.batches.get(studioId, lay.batchId);
       return {
         lay: presentLay(lay, bundles.length, (await shortagesOf(studioId, [lay])).get(lay.id) ?? null),
         fabric: fabric ? presentLayFabric(fabric) : null,
         bundles: bundles.map(presentBundle),
+        // The style's materials, each with its own cut ticket (lining, contrast… are cut from those, not from lays).
+        materials: [...new Set(['self', ...Object.keys(batch?.style?.materialFabrics ?? {})])],
       };
     },
     async recordLay(actor: Actor, id: number, input: RecordLayInput) {

@@ -9,6 +9,8 @@ export interface LayDetail {
   lay: LayDto;
   fabric: { id: number; name: string; composition: string; widthMm: number; isDirectional: boolean; maxPlies: number } | null;
   bundles: BundleDto[];
+  /** The style's materials (self first); each has a cut ticket of its own. */
+  materials: string[];
 }
 
 export { fabricQueries };

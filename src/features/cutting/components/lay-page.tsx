@@ -200,6 +200,16 @@ export function LayPage() {
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/lays/${id}/bundle-tickets.pdf`, `bundle-tickets-${lay.batchCode}-lay-${lay.seq}.pdf`)}>{t('lay.docTickets')}</button> : null}
             {bundles.length ? <button type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/bundle-register.xlsx`, `bundle-register-${lay.batchCode}.xlsx`)}>{t('lay.docRegister')}</button> : null}
           </div>
+          {data.materials.length ? (
+            <div className="mt-3 flex flex-wrap items-center gap-2" data-testid="lay-material-tickets">
+              <span className="text-sm text-ink-600">{t(`${area}.plan.ticketsPerMaterial`)}</span>
+              {data.materials.map((m) => (
+                <button key={m} type="button" className="btn-quiet" onClick={file(`/batches/${lay.batchId}/material-cut-ticket.pdf?material=${encodeURIComponent(m)}`, `cut-ticket-${lay.batchCode}-${m}.pdf`)}>
+                  {t(`${area}.plan.materialPdf`, { material: t(`${area}.materials.${m}`, { defaultValue: m }) })}
+                </button>
+              ))}
+            </div>
+          ) : null}
         </Card>}
         <CuttingCautions />
       </div>
