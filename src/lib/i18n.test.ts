@@ -95,6 +95,13 @@ describe('the keys the screens ask for', () => {
     expect(metricInImperial).toEqual([]);
   });
 
+  it('gives a metric studio its figures in centimetres, never in inches', () => {
+    const inchesInMetric = Object.values(AREAS).flatMap(({ area, words: w }) =>
+      [...leaves(w.en), ...leaves(w.fr)].filter(([k, v]) => k.split('.').includes('metric') && /\d\s*(in|po|″|")(\b|$)/.test(v)).map(([k, v]) => `${area}.${k}: ${v}`),
+    );
+    expect(inchesInMetric).toEqual([]);
+  });
+
   it('names the costing table columns in words, not keys', () => {
     for (const lng of ['en', 'fr']) {
       for (const col of ['size', 'cost', 'wholesale', 'retail']) expect(i18n.getFixedT(lng)(`costingPage.cols.${col}`)).not.toContain('costingPage');

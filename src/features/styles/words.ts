@@ -67,7 +67,7 @@ const en = {
       name: 'Lined fitted dress',
       description: {
         metric:
-          'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
+          'Fitted bodice with waist darts, 18 cm V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
         imperial:
           'Fitted bodice with waist darts, 7 in V-neck and centre-back zip, long sleeves with shoulder pads, gathered circle peplum in a contrast fabric, straight lined skirt, neck facings and lining.',
       },
@@ -163,12 +163,13 @@ const en = {
     belt: { widthMm: 'Finished width', extraMm: 'Length past the waist', waistEaseMm: 'Waist ease' },
   },
   /**
-   * Option labels that name a length, by the studio's unit system (English names the block's own figures in both).
+   * Option labels that name a length, by the studio's unit system: centimetres in a metric studio, the block's own
+   * inch figures in an imperial one.
    */
   fieldsByUnit: {
     metric: {
-      bodice: { shoulderPads: 'Shoulder pads (+1 in at the shoulder)', centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
-      skirt: { centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
+      bodice: { shoulderPads: 'Shoulder pads (+2.5 cm at the shoulder)', centreBackOpening: 'Centre-back zip opening (3.8 cm allowance)' },
+      skirt: { centreBackOpening: 'Centre-back zip opening (3.8 cm allowance)' },
     },
     imperial: {
       bodice: { shoulderPads: 'Shoulder pads (+1 in at the shoulder)', centreBackOpening: 'Centre-back zip opening (1½ in allowance)' },
@@ -179,12 +180,12 @@ const en = {
   defaults: {
     metric: {
       bustMinusWaist: 'from bust − waist',
-      neckDepth: 'round 3 in, V 7 in',
+      neckDepth: 'round 7.6 cm, V 17.8 cm',
       waistToKnee: 'waist to knee',
-      skirtHem: 'straight 2 in, circle ⅜ in',
+      skirtHem: 'straight 5.1 cm, circle 1 cm',
       fromArm: 'from the arm',
-      sleeveHem: 'long 2 in, else 1 in',
-      pocketTop: 'patch 90 mm, in-seam 1 in',
+      sleeveHem: 'long 5.1 cm, else 2.5 cm',
+      pocketTop: 'patch 9 cm, in-seam 2.5 cm',
     },
     imperial: {
       bustMinusWaist: 'from bust − waist',
