@@ -17,7 +17,7 @@ describe('buildMaterialCutTicketPdf', () => {
     expect(pdfPageCount(await buildMaterialCutTicketPdf(input(), { compress: false }))).toBe(1);
     for (const s of ['Cut ticket by material: lining', 'SR-202 — Lined fitted dress', 'B-0007', 'Usiku viscose lining, width 140 cm', '30 (S 10, M 20)']) expect(text).toContain(s);
     // Bodice back lining: 2 per garment → S 20, M 40, total 60; all pieces 3 per garment → 30, 60, 90.
-    expect(text).toMatch(/Bodice back lining \(pairs\)\s*2\s*20\s*40\s*60/);
+    expect(text).toMatch(/Bodice back lining \(L \+ R\)\s*2\s*20\s*40\s*60/);
     expect(text).toMatch(/All pieces\s*3\s*30\s*60\s*90/);
     expect(text).not.toMatch(/\bL\b\s*Total/);
   });

@@ -53,11 +53,12 @@ export async function buildMaterialCutTicketPdf(input: MaterialCutTicketInput, o
     doc.font(BOLD_FONT).fontSize(10).text(t('material.piecesToCut'));
     doc.moveDown(0.3);
     const width = contentWidth(doc);
-    const fixed = 170 + 60 + 55;
-    const sizeWidth = Math.max(30, Math.min(60, (width - fixed) / Math.max(1, sizes.length)));
+    // Sizes take 30–40 pt each; the piece name (with "left + right") takes what is left.
+    const fixed = 150 + 90 + 55;
+    const sizeWidth = Math.max(30, Math.min(40, (width - fixed) / Math.max(1, sizes.length)));
     const columns = [
-      { header: t('material.piece'), width: 170 },
-      { header: t('material.perGarment'), width: 60 },
+      { header: t('material.piece'), width: Math.max(150, width - 90 - 55 - sizeWidth * sizes.length) },
+      { header: t('material.perGarment'), width: 90 },
       ...sizes.map((s) => ({ header: s.size, width: sizeWidth })),
       { header: t('material.total'), width: 55 },
     ];
