@@ -22,7 +22,7 @@ export const operationInput = z.object({
     .number()
     .min(0, 'Cannot be negative')
     .max(100_000_000)
-    .refine((v) => /^\d+(\.\d{1,6})?$/.test(String(v)), 'At most 6 decimals of a minor unit')
+    .refine((v) => /^-?\d+(\.\d{1,6})?$/.test(String(v)), 'At most 6 decimals of a minor unit')
     .nullable()
     .optional(),
 });

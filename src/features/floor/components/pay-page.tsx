@@ -138,7 +138,7 @@ export function PayPage() {
                 </tbody>
               </table>
             </div>
-          ) : <Spinner />}
+          ) : preview.isError ? null : <Spinner />}
         </Card>
         <PayRulesCard />
         {periods.map((p) => <PeriodCard key={p.id} period={p} />)}
