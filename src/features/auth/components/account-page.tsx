@@ -44,9 +44,8 @@ export function AccountPage() {
     onSuccess: (d) => afterSignIn(d.user),
   });
   const form = useForm<ChangePasswordInput>({ resolver: zodResolver(changePasswordInput), defaultValues: { currentPassword: '', newPassword: '' } });
-  const onSubmit = form.handleSubmit(async (v) => {
-    await change.mutateAsync(v);
-    form.reset();
+  const onSubmit = form.handleSubmit((v) => {
+    change.mutate(v, { onSuccess: () => form.reset() });
   });
   return (
     <>

@@ -41,9 +41,8 @@ export function NewStudioPage() {
     },
   });
   const e = form.formState.errors;
-  const onSubmit = form.handleSubmit(async (v) => {
-    await create.mutateAsync(v);
-    navigate(paths.home.getHref());
+  const onSubmit = form.handleSubmit((v) => {
+    create.mutate(v, { onSuccess: () => navigate(paths.home.getHref()) });
   });
   return (
     <div className="flex min-h-screen items-center justify-center bg-thread-700 px-4 py-10">

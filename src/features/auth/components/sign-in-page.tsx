@@ -58,9 +58,9 @@ function PasswordForm() {
   const login = useLogin();
   const navigate = useNavigate();
   const form = useForm<LoginInput>({ resolver: zodResolver(loginInput), defaultValues: { email: '', password: '' } });
-  const onSubmit = form.handleSubmit(async (v) => {
-    await login.mutateAsync(v);
-    navigate(paths.home.getHref());
+  const onSubmit = form.handleSubmit((v) => {
+    // mutate, not mutateAsync: a refused sign-in is shown from login.error, never thrown into the console.
+    login.mutate(v, { onSuccess: () => navigate(paths.home.getHref()) });
   });
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
@@ -80,10 +80,9 @@ function PinForm() {
   const navigate = useNavigate();
   const [email, setEmail] = useState('');
   const [pin, setPin] = useState('');
-  const onSubmit = async (e: React.FormEvent) => {
+  const onSubmit = (e: React.FormEvent) => {
     e.preventDefault();
-    await login.mutateAsync({ email: email.trim(), pin });
-    navigate(paths.home.getHref());
+    login.mutate({ email: email.trim(), pin }, { onSuccess: () => navigate(paths.home.getHref()) });
   };
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
@@ -113,11 +112,10 @@ function FloorListForm({ floor }: { floor: FloorListDto }) {
     login.reset();
   };
   const handleKey = (k: string) => setPin((p) => (k === '⌫' ? p.slice(0, -1) : (p + k).slice(0, 6)));
-  const onSubmit = async (e: React.FormEvent) => {
+  const onSubmit = (e: React.FormEvent) => {
     e.preventDefault();
     if (!userId) return;
-    await login.mutateAsync({ userId, pin });
-    navigate(paths.home.getHref());
+    login.mutate({ userId, pin }, { onSuccess: () => navigate(paths.home.getHref()) });
   };
   return (
     <div className="space-y-4">
