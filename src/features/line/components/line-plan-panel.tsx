@@ -1,7 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
+import { Link } from 'react-router';
 import type { BatchDto } from '@shared/schemas/batches';
 import { Badge, Card, Caution, ErrorNote, Spinner } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
 import { fmt, formatDate } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { machineTypeLabel } from '../hooks/machine-type';
@@ -51,6 +54,9 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
       </form>
       {plan.isLoading ? <Spinner label={w('plan.balancing')} /> : null}
       <ErrorNote error={plan.error} />
+      {plan.error instanceof ApiError && plan.error.fields.operations ? (
+        <Link className="mt-2 inline-block text-sm font-medium underline" to={paths.line.getHref(batch.id)}>{w('plan.editOperations')}</Link>
+      ) : null}
       {plan.error && params.pins?.length ? <button type="button" className="btn-quiet mt-2" onClick={() => setParams({ ...params, pins: [] })}>{w('plan.clearPins')}</button> : null}
       {p ? (
         <div className="space-y-5">
