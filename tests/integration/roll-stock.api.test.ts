@@ -83,6 +83,20 @@ describe('roll reservations across batches', () => {
     expect((await roll(lining.fabricId, lining.rollId)).reservedMm).toBeGreaterThan(20_000);
   });
 
+  // Rolls are served longest marker first (allocateRolls), and the lays are numbered in that order: a cutter
+  // who spreads lay 1, then lay 2, … meets the expected remnants in the order the plan printed them.
+  it('numbers the lays in the order the roll is spread, so its expected remnant falls from lay to lay', async () => {
+    const { fabricId, rollId } = await fabricWithRoll(40_000);
+    const res = await plan(await newBatch(), fabricId);
+    expect(res.status).toBe(201);
+    const lays = [...(res.body.cutPlan.lays as Lay[])].sort((a, b) => a.seq - b.seq);
+    expect(lays.length).toBeGreaterThan(1);
+    const remnants = lays.flatMap((l) => l.rolls.filter((r) => r.rollId === rollId).map((r) => r.expectedRemnantMm));
+    for (let i = 1; i < remnants.length; i++) expect(remnants[i]).toBeLessThan(remnants[i - 1]);
+    const lengths = lays.map((l) => l.markerLengthMm);
+    for (let i = 1; i < lengths.length; i++) expect(lengths[i]).toBeLessThanOrEqual(lengths[i - 1]);
+  });
+
   it('gives a cancelled batch\'s hold back to the next batch planned on the roll', async () => {
     const { fabricId, rollId } = await fabricWithRoll(40_000);
     const gone = await newBatch();

@@ -222,6 +222,11 @@ async function savePlan(
   };
   const byId = new Map(c.rolls.map((r) => [String(r.id), r]));
   const firstSeq = cutLays.reduce((a, l) => Math.max(a, l.seq), 0) + 1;
+  // Lays are numbered in the order the rolls are spread: roll allocation serves the longest marker first
+  // (planning/cut-orders/allocate-rolls.ts), and each lay's expected remnants assume that order, so lay 1
+  // is the first spread and the remnants on a roll fall from lay to lay.
+  const spreadOrder = plan.lays.map((_, i) => i).sort((a, b) => plan.lays[b].markerLength - plan.lays[a].markerLength || a - b);
+  const seqOf = new Map(spreadOrder.map((lay, rank) => [lay, firstSeq + rank]));
   const waiting = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'planned');
   return plans.transaction(async (tx) => {
     await tx.stock.release(studioId, c.replaced, c.now);
@@ -240,19 +245,21 @@ async function savePlan(
         }),
       );
       const lay = tx.newLay({
-        studioId, cutPlanId: saved.id, batchId, seq: firstSeq + i, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
+        studioId, cutPlanId: saved.id, batchId, seq: seqOf.get(i)!, ratio: l.ratio, plies: l.plies, markerLengthMm: Math.round(l.markerLength),
         endAllowanceMm: plan.endAllowance, markerId: lengthSources[i].markerId ?? null, spreadingMode: spreadingModeFor(fabric),
         rolls: lines, status: 'planned', flaws: '', cutAt: null, corrections: null,
       });
       const same = waiting.find((w) => !kept.has(w.id) && sameLay(w, lay, sizes));
       if (same) {
         kept.add(same.id);
-        fresh.push(Object.assign(same, { cutPlanId: saved.id, seq: firstSeq + i }));
+        fresh.push(Object.assign(same, { cutPlanId: saved.id, seq: seqOf.get(i)! }));
       } else fresh.push(lay);
     });
     // A lay that did not change keeps its id (and anything recorded on it); the others are retired, visibly.
     for (const w of waiting) if (!kept.has(w.id)) await tx.updateLay(studioId, w.id, { status: 'retired' });
-    const savedLays = await tx.saveLays(fresh);
+    // Saved in spreading order too, so new lays' ids rise with their numbers; save fills in each entity's id.
+    await tx.saveLays(spreadOrder.map((i) => fresh[i]));
+    const savedLays = fresh;
     // The batch's old holds were released above; every lay of the new plan (kept or new) holds its length again.
     for (const h of lengthsByLayAndRoll(allocation)) {
       if (!(h.lengthMm > 0)) continue;
