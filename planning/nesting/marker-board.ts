@@ -1,16 +1,4 @@
-import type { LayoutSnapshot } from './layout-state';
-import type { NestingInput } from './types';
-
-/**
- * Where the parallel lanes of one marker search share their shortest marker, so that a lane that has
- * fallen behind carries on from the best marker found by any lane instead of its own.
- */
-export interface MarkerBoard {
-  /** Post a feasible marker; it replaces the one held only when it is shorter. */
-  offer(snap: LayoutSnapshot, length: number): void;
-  /** A marker shorter than `length` posted since this lane last looked, else undefined. */
-  take(length: number): { snap: LayoutSnapshot; length: number } | undefined;
-}
+import type { MarkerBoard, NestingInput } from './types';
 
 /** Copies of pieces in a marker (the engine's items): a mirrored piece gives a pair per quantity. */
 export function markerItemCount(input: NestingInput): number {

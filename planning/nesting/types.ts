@@ -1,4 +1,3 @@
-import type { MarkerBoard } from './marker-board';
 import type { Polygon } from '@shared/geometry/types';
 import type { Millimetres } from '@shared/units/units';
 
@@ -102,4 +101,22 @@ export interface NestingResult {
   complete: boolean;
   /** Separation iterations run. */
   iterations: number;
+}
+
+/** Positions of every item of a marker (the engine's layout snapshot), as lanes share them. */
+export interface MarkerSnapshot {
+  v: Int32Array;
+  x: Float64Array;
+  y: Float64Array;
+}
+
+/**
+ * Where the parallel lanes of one marker search share their shortest marker, so that a lane that has
+ * fallen behind carries on from the best marker found by any lane instead of its own (`sharedMarkerBoard`).
+ */
+export interface MarkerBoard {
+  /** Post a feasible marker; it replaces the one held only when it is shorter. */
+  offer(snap: MarkerSnapshot, length: number): void;
+  /** A marker shorter than `length` posted since this lane last looked, else undefined. */
+  take(length: number): { snap: MarkerSnapshot; length: number } | undefined;
 }
