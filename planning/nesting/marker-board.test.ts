@@ -29,6 +29,19 @@ describe('marker board', () => {
     expect(a.take(20)).toBeUndefined();
   });
 
+  it('goes on without the board when a lane stopped while holding its lock', () => {
+    const buffer = markerBoardBuffer(2);
+    const a = sharedMarkerBoard(buffer, 2);
+    const b = sharedMarkerBoard(buffer, 2);
+    a.offer(snap(5), 50);
+    new Int32Array(buffer, 0, 1)[0] = 1; // the lock, left held by a lane that was terminated mid-copy
+    b.offer(snap(1), 10);
+    expect(b.take(60)).toBeUndefined();
+    new Int32Array(buffer, 0, 1)[0] = 0;
+    // Nothing was lost or half written: the board still holds lane a's marker, which b now sees.
+    expect(b.take(60)?.length).toBe(50);
+  });
+
   it('refuses a board made for another marker', () => {
     expect(() => sharedMarkerBoard(markerBoardBuffer(3), 4)).toThrow(/holds 3 pieces, this marker has 4/);
   });

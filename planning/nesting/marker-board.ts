@@ -6,6 +6,8 @@ export function markerItemCount(input: NestingInput): number {
 }
 
 const HEADER_BYTES = 24;
+/** Tries at the lock before a post or a look is skipped (about a millisecond). */
+const LOCK_SPINS = 1 << 20;
 
 /** Memory for a board of `n` items, to hand to every lane's worker (workerData shares it, not copies). */
 export function markerBoardBuffer(n: number): SharedArrayBuffer {
@@ -19,7 +21,7 @@ export function markerBoardBuffer(n: number): SharedArrayBuffer {
 /**
  * A board in shared memory (one per search, one view per lane). Layout: Int32 lock, version, n; Float64
  * length; Float64 x[n], y[n]; Int32 v[n]. The lock is held only while n positions are copied, so a lane
- * spins for at most a few microseconds. A lane's own posts never come back to it.
+ * normally spins for a few microseconds. A lane's own posts never come back to it.
  */
 export function sharedMarkerBoard(buffer: SharedArrayBuffer, n: number): MarkerBoard {
   const head = new Int32Array(buffer, 0, 4);
@@ -29,15 +31,17 @@ export function sharedMarkerBoard(buffer: SharedArrayBuffer, n: number): MarkerB
   const ys = new Float64Array(buffer, HEADER_BYTES + 8 * n, n);
   const vs = new Int32Array(buffer, HEADER_BYTES + 16 * n, n);
   let seen = 0;
+  // Another lane holds the lock only while it copies n numbers. A lane stopped inside that copy (a worker
+  // terminated after its cancel grace) would leave it held for good, so the wait is bounded: past it, this
+  // post or look is skipped and the lane goes on with its own marker.
   const lock = () => {
-    while (Atomics.compareExchange(head, 0, 0, 1) !== 0) {
-      /* another lane is copying n numbers */
-    }
+    for (let k = 0; k < LOCK_SPINS; k++) if (Atomics.compareExchange(head, 0, 0, 1) === 0) return true;
+    return false;
   };
   const unlock = () => Atomics.store(head, 0, 0);
   return {
     offer(snap, length) {
-      lock();
+      if (!lock()) return;
       if (length < len[0]) {
         xs.set(snap.x);
         ys.set(snap.y);
@@ -48,8 +52,7 @@ export function sharedMarkerBoard(buffer: SharedArrayBuffer, n: number): MarkerB
       unlock();
     },
     take(length) {
-      if (Atomics.load(head, 1) === seen) return undefined;
-      lock();
+      if (Atomics.load(head, 1) === seen || !lock()) return undefined;
       seen = Atomics.load(head, 1);
       const held = len[0];
       const got = held < length ? { snap: { x: xs.slice(), y: ys.slice(), v: vs.slice() }, length: held } : undefined;

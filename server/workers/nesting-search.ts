@@ -37,8 +37,9 @@ const MIN_LANE_BUDGET_MS = 1500;
 
 /**
  * One marker search on several worker threads: seeded searches of the same input (seeds seed, seed + 1,
- * …) that share their shortest marker through a board in shared memory, the shortest marker kept. Lanes can be given up to another job or taken back while
- * the search runs (`setLanes`), so concurrent jobs share the cores. Resolves once every lane has ended:
+ * …) that share their shortest marker through a board in shared memory, the shortest marker kept. Lanes
+ * can be given up to another job or taken back while the search runs (`setLanes`), so concurrent jobs
+ * share the cores. Resolves once every lane has ended:
  * a result (the shortest; `cancelled` when the whole search was cancelled), else `cancelled`, else the
  * first failure. Never rejects.
  */

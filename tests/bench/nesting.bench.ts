@@ -14,8 +14,9 @@
  *     material, 2, 4 and 6 garments in the demo batch's sizes (tests/bench/nesting/demo-markers.ts);
  *     prints density and length (mm) per marker.
  *
- * Each run uses both cores: two workers (server/workers/nesting.worker.ts) with seeds S and S + 1,
- * the better marker wins. "valid" is the independent checker (planning/nesting/checker.ts).
+ * Each run uses both cores: two workers (server/workers/nesting.worker.ts) with seeds S and S + 1 that
+ * share their best marker in compression, as the app's jobs do (planning/nesting/marker-board.ts; set
+ * NEST_NO_BOARD=1 to compare with independent lanes); the better marker wins. "valid" is the independent checker (planning/nesting/checker.ts).
  * Not a timed test; it never runs inside npm test.
  */
 import { readdirSync } from 'node:fs';
