@@ -48,6 +48,11 @@ export class LayoutState {
   private readonly itemR0: Int32Array;
   private readonly itemR1: Int32Array;
   private readonly query: Int32Array;
+  /** Cells `query` was gathered over, and `cellVersion` then (see `gather`). */
+  private queryKey = -1;
+  private queryVersion = -1;
+  /** Bumped whenever an item is registered in or removed from the cells. */
+  private cellVersion = 0;
   /** Per item: √area (the size factor of the overlap cost) and ε = 1 % of the packed shape's diameter. */
   private readonly size: Float64Array;
   private readonly eps: Float64Array;
@@ -105,12 +110,20 @@ export class LayoutState {
     return r < 0 ? 0 : r >= this.rows ? this.rows - 1 : r;
   }
 
-  /** Fill `query` with the items whose cells meet [x0, x1] × [y0, y1]. */
+  /**
+   * Fill `query` with the items whose cells meet [x0, x1] × [y0, y1]. A query over the same cells as the
+   * last one, with no item registered or removed since, keeps `query` as it is: a descent's trial
+   * positions mostly stay within the same cells.
+   */
   private gather(x0: number, x1: number, y0: number, y1: number): void {
+    const c0 = this.col(x0), c1 = this.col(x1), r0 = this.row(y0), r1 = this.row(y1);
+    const key = ((c0 * this.cols + c1) * this.rows + r0) * this.rows + r1;
+    if (key === this.queryKey && this.queryVersion === this.cellVersion) return;
+    this.queryKey = key;
+    this.queryVersion = this.cellVersion;
     const W = this.words, q = this.query, bits = this.cellBits, R = this.rows;
     q.fill(0);
-    const c1 = this.col(x1), r0 = this.row(y0), r1 = this.row(y1);
-    for (let c = this.col(x0); c <= c1; c++) {
+    for (let c = c0; c <= c1; c++) {
       for (let r = r0; r <= r1; r++) {
         const o = (c * R + r) * W;
         for (let w = 0; w < W; w++) q[w] |= bits[o + w];
@@ -119,6 +132,7 @@ export class LayoutState {
   }
 
   private register(i: number, on: boolean): void {
+    this.cellVersion++;
     const W = this.words, R = this.rows, word = i >>> 5, bit = 1 << (i & 31);
     const r0 = this.itemR0[i], r1 = this.itemR1[i];
     for (let c = this.itemC0[i]; c >= 0 && c <= this.itemC1[i]; c++) {
@@ -278,6 +292,7 @@ export class LayoutState {
     this.ovSum.fill(0);
     this.ovCount.fill(0);
     this.cellBits.fill(0);
+    this.cellVersion++;
     this.itemC0.fill(-1);
     this.itemC1.fill(-1);
     for (let i = 0; i < this.n; i++) this.place(i, s.v[i], s.x[i], s.y[i]);
