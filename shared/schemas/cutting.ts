@@ -181,6 +181,8 @@ export interface CutPlanDto {
   /** How each lay's marker length was found: stored marker or estimate. */
   lengthSources: { ratio: Record<string, number>; source: 'marker' | 'estimate'; markerId?: number }[];
   assumedUtilisation: number;
+  /** Finished markers of the style on this fabric the assumed utilisation comes from; 0 = the default assumption. */
+  utilisationFromMarkers: number;
   /** Every marker length in the plan is measured (stored markers) or every one is an estimate, never mixed. */
   markerLengths: 'measured' | 'estimated';
   /** Why the plan uses estimates although measured markers exist. */

@@ -21,10 +21,10 @@ const garmentsCut = (lays: Lay[]) => {
   for (const l of lays) for (const [s, n] of Object.entries(l.ratio)) cut[s] = (cut[s] ?? 0) + n * l.plies;
   return cut;
 };
-const doneMarker = (ratio: Record<string, number>, lengthMm: number) =>
+const doneMarker = (ratio: Record<string, number>, lengthMm: number, fabricId = 1) =>
   ds.getRepository(MarkerEntity).save({
-    studioId: 1, styleId: 1, batchId: null, fabricId: 1, ratio, widthMm: 1450, inputHash: `test-${JSON.stringify(ratio)}`.padEnd(64, '0').slice(0, 64),
-    status: 'done' as const, lengthMm, utilisation: 0.8, elapsedMs: 0, input: null, result: null, error: '',
+    studioId: 1, styleId: 1, batchId: null, fabricId, ratio, widthMm: 1450, inputHash: `test-${fabricId}-${JSON.stringify(ratio)}`.padEnd(64, '0').slice(0, 64),
+    status: 'done' as const, lengthMm, utilisation: fabricId === 1 ? 0.8 : 0.3, elapsedMs: 0, input: null, result: null, error: '',
   });
 
 describe('the batch cut plan, solved at the studio’s rates', () => {
@@ -72,6 +72,20 @@ describe('marker lengths of a plan come from one source', () => {
     expect(p.lengthSources.every((s: { source: string }) => s.source === 'marker')).toBe(true);
     expect((p.lays as Lay[]).every((l) => l.markerId !== null)).toBe(true);
     expect(garmentsCut(p.lays)).toEqual({ XS: 2, S: 4, M: 6, L: 5, XL: 3 });
+  });
+});
+
+describe('the markers a plan learns from are those of its own fabric', () => {
+  it('never takes another fabric’s marker of the same width and ratio, and estimates at its own markers’ utilisation', async () => {
+    const batchId = await newBatch({ XS: 1, S: 1, M: 1, L: 1, XL: 1 });
+    // A lining marker (fabric 2) at the shell's width, absurdly short: a plan that took it would spread it.
+    const lining = await doneMarker({ XS: 1, S: 1, M: 1, L: 1, XL: 1 }, 10, 2);
+    const p = (await plan(batchId, { maxGarmentsPerMarker: 5 })).body.cutPlan;
+    expect((p.lays as Lay[]).some((l) => l.markerId === lining.id)).toBe(false);
+    expect((p.lays as Lay[]).every((l) => l.markerLengthMm > 100)).toBe(true);
+    // The shell markers stored above all report 80 % (the lining's 30 % is not counted).
+    expect(p.assumedUtilisation).toBeCloseTo(0.8, 6);
+    expect(p.utilisationFromMarkers).toBeGreaterThan(0);
   });
 });
 

@@ -44,6 +44,7 @@ export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEn
     cut: r.plan.cut,
     lengthSources: r.lengthSources,
     assumedUtilisation: r.assumedUtilisation,
+    utilisationFromMarkers: r.utilisationFromMarkers ?? 0,
     markerLengths: r.markerLengths ?? (r.lengthSources.some((s) => s.source === 'estimate') ? 'estimated' : 'measured'),
     markerLengthsNote: r.markerLengthsNote ?? null,
     objective: r.plan.cost === undefined ? 'fabric' : 'cost',

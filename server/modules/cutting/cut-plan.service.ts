@@ -8,7 +8,7 @@ import { said } from '../../../shared/i18n/speak';
 import type { JobRunner } from '../../jobs/job-runner';
 import type { BatchRepository } from '../batches/batch.repository';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
-import { ASSUMED_UTILISATION, fabricShrinkage, garmentAreas, piecesOnFabric, type MarkerJobInput } from '../markers/marker-input';
+import { fabricShrinkage, utilisationForEstimates, garmentAreas, piecesOnFabric, type MarkerJobInput } from '../markers/marker-input';
 import { storedMarkerSpliceZones } from '../markers/marker-plot';
 import type { MarkerRepository } from '../markers/marker.repository';
 import type { CutPlanRepository } from './cut-plan.repository';
@@ -47,6 +47,8 @@ export interface StoredCutPlanResult {
   allocation: ReturnType<typeof allocateRolls>;
   lengthSources: { ratio: SizeRatio; source: 'marker' | 'estimate'; markerId?: number }[];
   assumedUtilisation: number;
+  /** How many of the style's finished markers on this fabric the assumed utilisation was learnt from (0: the default; older plans: absent). */
+  utilisationFromMarkers?: number;
   /** Every marker length of the plan is measured, or every one is an estimate (older plans: absent). */
   markerLengths?: 'measured' | 'estimated';
   /** Why measured markers were not used although some exist. */
@@ -122,7 +124,9 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   const shrink = shrinkageAreaFactor(fabricShrinkage(fabric));
   const areas = Object.fromEntries(Object.entries(garmentAreas(pieces)).map(([size, a]) => [size, a * shrink]));
   const stored = new Map<string, { id: number; length: number; ratio: SizeRatio; zones: { near: number; far: number }[] }>();
-  for (const m of await deps.markers.doneForStyle(studioId, batch.styleId, fabric.widthMm)) {
+  const done = await deps.markers.doneForStyle(studioId, batch.styleId, fabric.id, fabric.widthMm);
+  const estimateAt = utilisationForEstimates(done);
+  for (const m of done) {
     const k = ratioKey(m.ratio, sizes);
     const prev = stored.get(k);
     if (m.lengthMm && (!prev || m.lengthMm < prev.length)) {
@@ -147,13 +151,13 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
       measured: [...stored.values()].map((v) => ({ ratio: v.ratio, lengthMm: v.length, spliceZones: v.zones })),
       garmentAreasMm2: areas,
       widthMm: fabric.widthMm,
-      assumedUtilisation: ASSUMED_UTILISATION,
+      assumedUtilisation: estimateAt.utilisation,
       rolls: rolls.filter((r) => (free.get(r.id) ?? 0) > 0).map((r) => ({ id: String(r.id), label: r.label, lengthMm: free.get(r.id)!, shadeLot: r.shadeLot, widthMm: r.widthMm })),
       ...(rates ? { costs: { layCost: rates.layCostMinor, plyCost: rates.plyCostMinor, fabricCostPerMetre: rates.fabricCostPerMetreMinor } } : {}),
     });
     if ('rangeError' in solved) throw badRequest(`maxMarkerLengthMm: ${solved.rangeError}`, { maxMarkerLengthMm: solved.rangeError });
     try {
-      return await withStockLock(studioId, () => savePlan(plans, { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rolls, replaced, now, rates }, solved));
+      return await withStockLock(studioId, () => savePlan(plans, { studioId, batchId, fabric, input, live, cutLays, stored, sizes, rolls, replaced, now, rates, estimateAt }, solved));
     } catch (err) {
       if (!(err instanceof StockMoved)) throw err;
       if (attempt >= PLAN_ATTEMPTS) throw conflict('Roll stock kept changing while this plan was made; plan again');
@@ -190,6 +194,7 @@ interface PlanContext {
   replaced: RollReservationEntity[];
   now: Date;
   rates: CutPlanRates | null;
+  estimateAt: { utilisation: number; markers: number };
 }
 
 /** Length each roll gives each lay: the drop in the roll's remaining length over its segment, mm. */
@@ -217,7 +222,7 @@ async function savePlan(
     return hit ? { ratio: l.ratio, source: 'marker' as const, markerId: hit.id } : { ratio: l.ratio, source: 'estimate' as const };
   });
   const result: StoredCutPlanResult = {
-    plan, allocation, lengthSources, assumedUtilisation: ASSUMED_UTILISATION, markerLengths, rates,
+    plan, allocation, lengthSources, assumedUtilisation: c.estimateAt.utilisation, utilisationFromMarkers: c.estimateAt.markers, markerLengths, rates,
     ...(solved.measuredRefused ? { markerLengthsNote: solved.measuredRefused } : {}),
   };
   const byId = new Map(c.rolls.map((r) => [String(r.id), r]));

@@ -16,6 +16,27 @@ export const MARKER_SEED = 1;
  * sees which lays rest on it and can build the real marker.
  */
 export const ASSUMED_UTILISATION = 0.75;
+/** Bounds on a utilisation learnt from stored markers, so one odd marker cannot make estimates absurd. */
+const LEARNT_UTILISATION_RANGE = [0.4, 0.95] as const;
+
+/**
+ * The utilisation marker-length estimates assume: that of the style's own finished markers on this fabric
+ * (their utilisations weighted by length, within 40–95 %), else `ASSUMED_UTILISATION`. A studio's real
+ * markers of one garment are the best guide to its markers not built yet (common practice: a cutting room
+ * estimates new markers from the efficiency of past markers of the same style).
+ */
+export function utilisationForEstimates(markers: readonly { lengthMm: number | null; utilisation: number | null }[]): { utilisation: number; markers: number } {
+  let weight = 0, sum = 0, count = 0;
+  for (const m of markers) {
+    if (!m.lengthMm || !(m.lengthMm > 0) || !m.utilisation || !(m.utilisation > 0)) continue;
+    weight += m.lengthMm;
+    sum += m.utilisation * m.lengthMm;
+    count++;
+  }
+  if (count === 0) return { utilisation: ASSUMED_UTILISATION, markers: 0 };
+  const [lo, hi] = LEARNT_UTILISATION_RANGE;
+  return { utilisation: Math.min(hi, Math.max(lo, sum / weight)), markers: count };
+}
 
 /** What the engine gets and what the marker view needs to draw and label each piece. */
 export interface MarkerJobInput {

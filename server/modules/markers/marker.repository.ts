@@ -20,8 +20,9 @@ export function createMarkerRepository(ds: DataSource) {
     /** A live or finished marker with the same inputs (failed and cancelled runs are not reused). */
     byHash: (studioId: number, inputHash: string) =>
       repo.findOne({ where: { studioId, inputHash, status: In(['queued', 'running', 'done']) }, order: { id: 'DESC' } }),
-    doneForStyle: (studioId: number, styleId: number, widthMm: number) =>
-      repo.find({ where: { studioId, styleId, widthMm, status: 'done' }, order: { id: 'DESC' } }),
+    /** Finished markers of a style on one fabric at its width (a lining's marker is never the shell's). */
+    doneForStyle: (studioId: number, styleId: number, fabricId: number, widthMm: number) =>
+      repo.find({ where: { studioId, styleId, fabricId, widthMm, status: 'done' }, order: { id: 'DESC' } }),
     insert: (m: Partial<MarkerEntity>) => repo.save(repo.create(m)),
     async update(studioId: number, id: number, patch: Partial<MarkerEntity>) {
       await repo.update({ studioId, id }, patch as QueryDeepPartialEntity<MarkerEntity>);

@@ -97,7 +97,9 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
           <p className="text-xs text-ink-600" aria-label={t(`${area}.plan.markerLengths`)}>
             {plan.markerLengths === 'measured'
               ? t(`${area}.plan.measured`)
-              : <>{t(`${area}.plan.estimated`, { utilisation: f.percent(Math.round(plan.assumedUtilisation * 100), 0) })} {plan.markerLengthsNote ?? t(`${area}.plan.buildMarkers`)}</>}
+              : <>{plan.utilisationFromMarkers > 0
+                ? t(`${area}.plan.estimatedLearnt`, { utilisation: f.percent(Math.round(plan.assumedUtilisation * 100), 0), count: plan.utilisationFromMarkers })
+                : t(`${area}.plan.estimated`, { utilisation: f.percent(Math.round(plan.assumedUtilisation * 100), 0) })} {plan.markerLengthsNote ?? t(`${area}.plan.buildMarkers`)}</>}
           </p>
           <div role="region" aria-label={t(`${area}.plan.lays`)} tabIndex={0} className="overflow-x-auto">
             <table className="w-full text-sm">
