@@ -232,7 +232,7 @@ export const en = {
     styles: 'Styles', stylesSubtitle: 'Each style has a size run and a base size; its pattern is graded from the base.', newStyle: 'New style', filterStyles: 'Filter styles…',
     costing: 'Costing', costingSubtitle: 'Open a batch to price it from its marker, bill of materials and operations.',
   },
-  styleStatus: { draft: 'draft', sampling: 'sampling', approved: 'approved', archived: 'archived' },
+  styleStatus: { draft: 'Draft', sampling: 'Sampling', approved: 'Approved', archived: 'Archived' },
   lay: {
     perPly: '{{ratio}} per ply · {{plies}}', print: 'Print',
     retired: "This lay was retired when the batch was planned again: do not spread or cut it. The batch's current cut plan lists the lays to cut.",

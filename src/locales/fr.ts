@@ -239,7 +239,7 @@ export const fr: Dictionary = {
     styles: 'Modèles', stylesSubtitle: 'Chaque modèle a une gamme de tailles et une taille de base ; son patron est gradé à partir de la base.', newStyle: 'Nouveau modèle', filterStyles: 'Filtrer les modèles…',
     costing: 'Prix de revient', costingSubtitle: 'Ouvrez une série pour la chiffrer d’après son placement, sa nomenclature et ses opérations.',
   },
-  styleStatus: { draft: 'brouillon', sampling: 'prototype', approved: 'approuvé', archived: 'archivé' },
+  styleStatus: { draft: 'Brouillon', sampling: 'Prototype', approved: 'Approuvé', archived: 'Archivé' },
   lay: {
     perPly: '{{ratio}} par pli · {{plies}}', print: 'Imprimer',
     retired: 'Ce matelas a été retiré quand la série a été replanifiée : ne l’étendez pas et ne le coupez pas. Le plan de coupe actuel de la série liste les matelas à couper.',
