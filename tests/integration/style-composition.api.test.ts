@@ -3,6 +3,7 @@ import { demoSizeChart } from '@grading';
 import { presetComposition } from '@shared/schemas/style-composition';
 import { polygonArea } from '@shared/geometry/polygon';
 import type { DataSource } from 'typeorm';
+import { MarkerEntity } from '../../server/entities';
 import { createCuttingPieceSource } from '../../server/modules/grading/cutting-pieces.service';
 import { createGradingSetRepository } from '../../server/modules/grading/grading-set.repository';
 import { createStyleRepository } from '../../server/modules/styles/style.repository';
@@ -73,6 +74,31 @@ describe('costing a style of several materials', () => {
     expect(line('lining').quantities.L).toBeGreaterThan(line('lining').quantities.S);
     expect(line('contrast').costMinor.M).toBeGreaterThan(0);
     expect((await owner.get(`/api/batches/${batch.body.batch.id}/costing.xlsx`)).status).toBe(200);
+  });
+});
+
+describe('costing learns from the markers of each fabric', () => {
+  it('keeps the self fabric as the sheet\'s main fabric when a lining marker is newer, and prices the lining at its own markers\' utilisation', async () => {
+    const styles = (await owner.get('/api/styles')).body.styles as { id: number; code: string; materialFabrics: Record<string, number> }[];
+    const lined = styles.find((s) => s.code === 'SR-202')!;
+    const fabrics = (await owner.get('/api/fabrics')).body.fabrics as { id: number; widthMm: number }[];
+    const widthOf = (id: number) => fabrics.find((f) => f.id === id)!.widthMm;
+    const batchId = (await owner.post('/api/batches').send({ styleId: lined.id, quantities: { S: 2, M: 3, L: 2 }, dueDate: '2027-03-01' })).body.batch.id as number;
+    const sheetOf = async () => (await owner.get(`/api/batches/${batchId}/costing`)).body.costing;
+    const liningM = (sheet: { lines: { kind: string; refId: number; quantities: Record<string, number> }[] }) =>
+      sheet.lines.find((l) => l.kind === 'fabric' && l.refId === lined.materialFabrics.lining)!.quantities.M;
+    const before = liningM(await sheetOf());
+    const save = (fabricId: number, lengthMm: number, utilisation: number) => ds.getRepository(MarkerEntity).save({
+      studioId: 1, styleId: lined.id, batchId: null, fabricId, ratio: { M: 1 }, widthMm: widthOf(fabricId), inputHash: `costing-${fabricId}`.padEnd(64, '0'),
+      status: 'done' as const, lengthMm, utilisation, elapsedMs: 0, input: null, result: null, error: '',
+    });
+    await save(lined.materialFabrics.self, 1500, 0.7);
+    await save(lined.materialFabrics.lining, 900, 0.6); // newer than the shell's
+    const sheet = await sheetOf();
+    expect(sheet.fabric.id).toBe(lined.materialFabrics.self);
+    // Lining length ∝ 1 ÷ utilisation: 75 % assumed before, 60 % learnt now, so × 0.75 ÷ 0.60 = × 1.25 (rounding to 0.1 mm).
+    expect(liningM(sheet)).toBeCloseTo(before * 1.25, 0);
+    expect(sheet.notes.join(' ')).toMatch(/60 % utilisation, that of the style's marker on it/);
   });
 });
 

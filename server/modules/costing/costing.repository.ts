@@ -95,6 +95,9 @@ export function createCostingRepository(ds: DataSource, cuttingPieces: CuttingPi
       if (forBatch.length) return forBatch;
       return repo.find({ where: { studioId, styleId, status: 'done' }, order: { id: 'DESC' } });
     },
+    /** Finished markers of a style on one fabric at its width: what that fabric's estimates learn from. */
+    styleMarkersOn: (studioId: number, styleId: number, fabricId: number, widthMm: number) =>
+      ds.getRepository(MarkerEntity).find({ where: { studioId, styleId, fabricId, widthMm, status: 'done' }, select: { id: true, lengthMm: true, utilisation: true } }),
     operations: (studioId: number, styleId: number) =>
       ds.getRepository(OperationEntity).find({ where: { studioId, styleId }, order: { seq: 'ASC' } }),
     async workLogs(studioId: number, batchId: number) {

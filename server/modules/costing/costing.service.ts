@@ -8,7 +8,7 @@ import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '
 import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
 import { batchCode } from '../batches/batch.presenter';
-import { ASSUMED_UTILISATION } from '../markers/marker-input';
+import { utilisationForEstimates } from '../markers/marker-input';
 import {
   consumptionBySize,
   estimateConsumption,
@@ -79,7 +79,9 @@ export function createCostingService(repo: CostingRepository) {
       }
     }
     const markers = await repo.doneMarkers(studioId, batch.styleId, batch.id);
-    const marker = markers.find((m) => m.lengthMm && Object.keys(m.ratio).length);
+    // The main fabric's marker: on the style's self fabric when it links one (a newer lining marker is not the shell's).
+    const self = batch.style?.materialFabrics?.self;
+    const marker = markers.find((m) => m.lengthMm && Object.keys(m.ratio).length && (!self || m.fabricId === self));
     if (marker) {
       const fabric = (marker.fabricId ? await repo.fabric(studioId, marker.fabricId) : null) ?? (await repo.firstFabric(studioId));
       if (fabric) {
@@ -101,8 +103,8 @@ export function createCostingService(repo: CostingRepository) {
 
   /**
    * The style's other materials' fabrics (lining, contrast, interfacing…: every linked fabric but the sheet's main
-   * one), each with a length per garment by size: its pieces' cut area ÷ (width × the cut plan's assumed
-   * utilisation), plus wastage. None when the style links no materials.
+   * one), each with a length per garment by size: its pieces' cut area ÷ (width × the utilisation of the style's
+   * finished markers on that fabric, else the assumed 75 %), plus wastage. None when the style links no materials.
    */
   async function otherMaterialFabrics(studioId: number, style: NonNullable<BatchEntity['style']>, mainFabricId: number | undefined, wastage: number) {
     const links = Object.entries(style.materialFabrics ?? {}).filter(([, id]) => id !== mainFabricId);
@@ -113,13 +115,14 @@ export function createCostingService(repo: CostingRepository) {
       const fabric = await repo.fabric(studioId, id);
       if (!fabric) continue;
       const materials = links.filter(([, f]) => f === id).map(([m]) => m);
+      const at = utilisationForEstimates(await repo.styleMarkersOn(studioId, style.id, id, fabric.widthMm));
       const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
         const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
         // The pieces are cut larger by the fabric's shrinkage, so their area is too.
         const grown = area * shrinkageAreaFactor({ lengthwisePercent: fabric.shrinkageLengthPercent, widthwisePercent: fabric.shrinkageWidthPercent });
-        return [s, mm(round1((grown / (fabric.widthMm * ASSUMED_UTILISATION)) * wastage))];
+        return [s, mm(round1((grown / (fabric.widthMm * at.utilisation)) * wastage))];
       }));
-      out.push({ fabric, materials, perSize });
+      out.push({ fabric, materials, perSize, at });
     }
     return out;
   }
@@ -148,7 +151,10 @@ export function createCostingService(repo: CostingRepository) {
     const fabricMm: Record<string, Millimetres> = {};
     for (const { size } of sizes) fabricMm[size] = mm(round1((fab?.perSize[size] ?? 0) * wastage));
     const others = await otherMaterialFabrics(studioId, style, fab?.fabric.id, wastage);
-    if (others.length) notes.push(`${others.map((o) => o.fabric.name).join(', ')}: estimated from the cut area of the pieces of ${others.map((o) => o.materials.join(' and ')).join(', ')} at ${ASSUMED_UTILISATION * 100} % utilisation until they have their own marker.`);
+    for (const o of others) {
+      const pct = Math.round(o.at.utilisation * 100);
+      notes.push(`${o.fabric.name}: estimated from the cut area of the pieces of ${o.materials.join(' and ')} at ${pct} % utilisation, ${o.at.markers ? `that of the style's ${o.at.markers === 1 ? 'marker' : `${o.at.markers} markers`} on it` : 'until it has its own marker'}.`);
+    }
     if (!fab) notes.push('No fabric is recorded for this studio yet, so the sheet has no fabric line.');
     else if (fab.basis === 'estimate') notes.push('Fabric is an estimate until a marker or cut plan exists for this batch.');
     else if (fab.basis === 'marker') notes.push('Fabric comes from the latest finished marker; the cut plan will replace it.');
