@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { DataSource } from 'typeorm';
-import { MarkerEntity } from '../../server/entities';
+import { LayEntity, MarkerEntity } from '../../server/entities';
+import { createCutPlanRepository } from '../../server/modules/cutting/cut-plan.repository';
 import { buildTestApp, DEMO, signIn } from '../fixtures/test-app';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
@@ -86,6 +87,28 @@ describe('the markers a plan learns from are those of its own fabric', () => {
     // The shell markers stored above all report 80 % (the lining's 30 % is not counted).
     expect(p.assumedUtilisation).toBeCloseTo(0.8, 6);
     expect(p.utilisationFromMarkers).toBeGreaterThan(0);
+  });
+});
+
+describe('a finished marker is drawn on the lays of its own fabric only', () => {
+  it('links a batch marker of the lay’s ratio on the plan’s fabric, never one of another fabric', async () => {
+    const batchId = await newBatch({ XS: 1, S: 2, M: 2, L: 2, XL: 1 });
+    const lays = (await plan(batchId)).body.cutPlan.lays as Lay[];
+    const lay = lays[0];
+    const batchMarker = (fabricId: number) => ds.getRepository(MarkerEntity).save({
+      studioId: 1, styleId: 1, batchId, fabricId, ratio: lay.ratio, widthMm: 1450, inputHash: `link-${batchId}-${fabricId}`.padEnd(64, '0'),
+      status: 'done' as const, lengthMm: 2000, utilisation: 0.7, elapsedMs: 0, input: null, result: null, error: '',
+    });
+    // Stored markers of earlier tests may have given the lay one when it was planned: start it without.
+    await ds.getRepository(LayEntity).update({ id: lay.id }, { markerId: null });
+    const repo = createCutPlanRepository(ds);
+    const markerOfLay = async () => (await repo.getLay(1, lay.id))!.markerId;
+    const lining = await batchMarker(2);
+    await repo.linkMarkerToLays(1, lining.id);
+    expect(await markerOfLay()).toBeNull();
+    const shell = await batchMarker(1);
+    await repo.linkMarkerToLays(1, shell.id);
+    expect(await markerOfLay()).toBe(shell.id);
   });
 });
 

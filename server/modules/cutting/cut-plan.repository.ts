@@ -50,12 +50,16 @@ export function createCutPlanRepository(ds: DataSource) {
     operations: (studioId: number, styleId: number) => ds.getRepository(OperationEntity).find({ where: { studioId, styleId }, order: { seq: 'ASC' } }),
     /**
      * A finished marker of a batch becomes the drawn marker of that batch's planned lays with the same ratio
-     * (lays that already have one keep it). The marker queue calls this through its completion hook.
+     * (lays that already have one keep it), on a plan of the marker's own fabric only: a lining marker of
+     * the shell lay's ratio is not the marker the cutter spreads on the shell. The marker queue calls this
+     * through its completion hook.
      */
     async linkMarkerToLays(studioId: number, markerId: number): Promise<void> {
       const marker = await ds.getRepository(MarkerEntity).findOneBy({ studioId, id: markerId });
-      if (!marker?.batchId) return;
-      const waiting = await lays.find({ where: { studioId, batchId: marker.batchId, status: 'planned' } });
+      if (!marker?.batchId || marker.fabricId === null) return;
+      const onFabric = await plans.find({ where: { studioId, batchId: marker.batchId, fabricId: marker.fabricId, status: Not('superseded') }, select: { id: true } });
+      if (!onFabric.length) return;
+      const waiting = await lays.find({ where: { studioId, batchId: marker.batchId, status: 'planned', cutPlanId: In(onFabric.map((p) => p.id)) } });
       for (const l of waiting) if (l.markerId === null && sameRatio(l.ratio, marker.ratio)) await lays.update({ studioId, id: l.id }, { markerId });
     },
   };
