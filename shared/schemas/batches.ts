@@ -20,7 +20,11 @@ export const updateBatchInput = z.object({
 });
 
 export interface BatchDto {
+  /** For URLs and API calls only; people see `code`. */
   id: number;
+  /** The batch's number in its studio, 1 for the studio's first. */
+  number: number;
+  /** B-0007: what the batch is called on every screen and document. */
   code: string;
   styleId: number;
   styleCode: string;

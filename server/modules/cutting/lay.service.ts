@@ -126,7 +126,7 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     const batch = await tx.batch(studioId, lay.batchId);
     const style = await tx.batchWithStyle(studioId, lay.batchId);
     const sizes = style?.style?.sizeRun ?? Object.keys(lay.ratio);
-    const made = makeBundles({ batch: batchCode(lay.batchId), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
+    const made = makeBundles({ batch: batchCode(batch), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
     await tx.insertBundles(
       made.map((b) => ({
         studioId, batchId: lay.batchId, layId: lay.id, number: b.number, size: b.size, shadeLot: b.shadeLot,

@@ -5,7 +5,8 @@ import { purchaseOrderLineTotalMinor } from '../../../exports/xlsx/purchase-orde
 import type { PurchaseOrderEntity, SupplierEntity } from '../../entities';
 import type { PurchaseOrderLine } from '../../entities/purchase-order.entity';
 
-export const poNumber = (id: number) => `PO-${String(id).padStart(4, '0')}`;
+/** The number an order goes by with its supplier: PO-0007, from its number in its studio (never its id). */
+export const poNumber = (order: { number: number }) => `PO-${String(order.number).padStart(4, '0')}`;
 
 export const presentSupplier = (s: SupplierEntity): SupplierDto => ({
   id: s.id,
@@ -40,7 +41,7 @@ export function presentOrder(o: PurchaseOrderEntity, supplier: SupplierEntity | 
   }));
   return {
     id: o.id,
-    number: poNumber(o.id),
+    number: poNumber(o),
     supplierId: o.supplierId,
     supplierName: supplier?.name ?? '',
     supplierEmail: supplier?.email ?? '',

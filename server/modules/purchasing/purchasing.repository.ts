@@ -24,6 +24,7 @@ export function createPurchasingRepository(ds: DataSource) {
     trim: (studioId: number, id: number) => ds.getRepository(TrimEntity).findOneBy({ studioId, id }),
     batchExists: async (studioId: number, id: number) =>
       ds.getRepository(BatchEntity).exists({ where: { studioId, id } }),
+    batch: (studioId: number, id: number) => ds.getRepository(BatchEntity).findOneBy({ studioId, id }),
     trims: (studioId: number, styleId: number) => ds.getRepository(TrimEntity).find({ where: { studioId, styleId }, order: { id: 'ASC' } }),
     /** Fabric on hand: what is left on every roll of the fabric. */
     async fabricStockMm(studioId: number, fabricId: number) {

@@ -79,7 +79,7 @@ export function purchasingRoutes(repo: PurchasingRepository, service: Purchasing
     const { studioId } = actorOf(req);
     const o = await repo.order(studioId, Number(req.params.id));
     if (!o) throw notFound('Purchase order');
-    sendDownload(res, { body: await service.workbook(studioId, o), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${poNumber(o.id)}.xlsx` });
+    sendDownload(res, { body: await service.workbook(studioId, o), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${poNumber(o)}.xlsx` });
   });
   r.post('/orders/:id/send', validate({ params: idParam }), async (req, res) => {
     const actor = actorOf(req);

@@ -9,6 +9,7 @@ import type { CostingService } from '../costing/costing.service';
 import { documentSettings } from '../studios/document-settings';
 import type { MailService } from '../mail/mail.service';
 import { netFabricNeed } from '../../../planning/index';
+import { batchCode } from '../batches/batch.presenter';
 import { documentLine, poNumber } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 
@@ -126,18 +127,22 @@ export function createPurchasingService(deps: {
   }
 
   async function workbook(studioId: number, order: PurchaseOrderEntity) {
-    const [studio, supplier] = await Promise.all([repo.studio(studioId), repo.supplier(studioId, order.supplierId)]);
+    const [studio, supplier, batch] = await Promise.all([
+      repo.studio(studioId),
+      repo.supplier(studioId, order.supplierId),
+      order.batchId ? repo.batch(studioId, order.batchId) : null,
+    ]);
     return deps.jobs.run('purchase-order.xlsx', {
       studioName: studio.name,
       dateIso: deps.now().toISOString(),
       ...documentSettings(studio),
       currency: studio.currency,
       unitSystem: studio.unitSystem,
-      poNumber: poNumber(order.id),
+      poNumber: poNumber(order),
       supplier: { name: supplier?.name ?? '', contact: supplier?.contact || undefined },
       deliveryDateIso: order.deliveryDate,
       lines: order.lines.map((l) => documentLine(l, studio.unitSystem)),
-      notes: order.batchId ? `For batch B-${String(order.batchId).padStart(4, '0')}` : undefined,
+      notes: batch ? `For batch ${batchCode(batch)}` : undefined,
     });
   }
 
@@ -148,7 +153,7 @@ export function createPurchasingService(deps: {
     const [studio, supplier] = await Promise.all([repo.studio(studioId), repo.supplier(studioId, order.supplierId)]);
     if (!supplier) throw notFound('Supplier');
     const buffer = await workbook(studioId, order);
-    const number = poNumber(order.id);
+    const number = poNumber(order);
     const text = [
       `Dear ${supplier.contact || supplier.name},`,
       '',
