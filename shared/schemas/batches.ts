@@ -37,5 +37,8 @@ export interface BatchDto {
   createdAt: string;
 }
 
+/** The code a batch goes by on every screen and document: B-0007, from its number in its studio (never its id). */
+export const batchCode = (batch: { number: number }) => `B-${String(batch.number).padStart(4, '0')}`;
+
 /** Sum of a size → quantity map. */
 export const batchTotal = (q: Record<string, number>) => Object.values(q).reduce((a, b) => a + b, 0);

@@ -124,6 +124,12 @@ describe('numbers of a studio', () => {
     expect(pdfWords(list.body as Buffer)).toContain('B-0001');
   });
 
+  it("names the studio's batch and order by their codes in the audit trail", async () => {
+    const entries = (await second.owner.get('/api/audit')).body.entries as { action: string; entity: string; entityId: number; record: string | null }[];
+    expect(entries.find((e) => e.entity === 'batch' && e.entityId === batch.id)).toMatchObject({ action: 'create', record: 'B-0001' });
+    expect(entries.find((e) => e.entity === 'purchase_order' && e.entityId === order.id)).toMatchObject({ record: 'PO-0001' });
+  });
+
   it('finds a typed batch code by its number in the searcher\'s own studio', async () => {
     const own = await second.owner.get('/api/search').query({ q: 'B-0001' });
     const hits = (own.body.hits as { kind: string; id: number; title: string }[]).filter((h) => h.kind === 'batch');

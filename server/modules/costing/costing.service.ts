@@ -7,7 +7,7 @@ import { costGarment, planConsumption, priceFromMargin, roundMinor, shrinkageAre
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { utilisationForEstimates } from '../markers/marker-input';
 import {
   consumptionBySize,

@@ -1,7 +1,7 @@
 import type { BundleDto, CutPlanDto, LayDto, LayShortageDto } from '../../../shared/schemas/cutting';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 import type { BundleEntity, CutPlanEntity, FabricEntity, LayEntity } from '../../entities';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { StoredCutPlanResult } from './cut-plan.service';
 
 /** A lay, shown with its batch's code (the batch is the lay's own: `l.batchId`). */

@@ -2,7 +2,7 @@ import type { BundleRegisterInput, LayPlan, MarkerListInput, SpreadingMode } fro
 import { mm } from '@shared/units/units';
 import { rollsInCuttingOrder } from '@planning';
 import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, RollEntity, StudioEntity } from '../../entities';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { documentSettings } from '../studios/document-settings';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 

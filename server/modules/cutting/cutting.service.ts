@@ -7,7 +7,7 @@ import type { LayEntity } from '../../entities';
 import { conflict, notFound } from '../../errors';
 import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { presentBundle, presentCutPlan, presentLay, presentLayFabric } from './cut-plan.presenter';
 import { planBatchCut, type CutPlanDeps } from './cut-plan.service';
 import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';

@@ -5,7 +5,7 @@ import type { RollEntity } from '../../entities';
 import type { LayCorrection, LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import { said, type Said } from '../../../shared/i18n/speak';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';
 

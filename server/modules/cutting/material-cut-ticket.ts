@@ -4,7 +4,7 @@ import type { MaterialCutTicketInput } from '@exports/pdf/material-cut-ticket.pd
 import { piecesPerGarment } from '@grading';
 import type { BatchEntity, StudioEntity } from '../../entities';
 import { badRequest, notFound } from '../../errors';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { GradingSetRepository } from '../grading/grading-set.repository';
 import type { FabricRepository } from './fabric.repository';
 

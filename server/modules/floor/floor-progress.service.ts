@@ -2,7 +2,7 @@ import type { OperationProgress, PersonEfficiency, ProgressDto, SectionProgress 
 import { OPERATION_SECTIONS } from '../../../shared/schemas/floor';
 import type { OperationEntity, WorkLogEntity } from '../../entities';
 import { notFound } from '../../errors';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { computePeriodPay } from '@planning';
 import { efficiencyPercent, logRate } from './floor-math';
 import type { FloorRepository } from './floor.repository';

@@ -10,7 +10,7 @@ import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { FloorRepository } from './floor.repository';
 
 export type FloorService = ReturnType<typeof createFloorService>;

@@ -6,7 +6,7 @@ import { badRequest, conflict, notFound } from '../../errors';
 import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
 import type { StyleRepository } from '../styles/style.repository';
 import { buildMarkerInput, fabricShrinkage, markerInputHash, piecesOnFabric, type MarkerJobInput } from './marker-input';

@@ -1,12 +1,9 @@
-import type { PurchaseOrderDto, SupplierDto } from '../../../shared/schemas/purchasing';
+import { poNumber, type PurchaseOrderDto, type SupplierDto } from '../../../shared/schemas/purchasing';
 import { minor, mm } from '../../../shared/units';
 import type { PurchaseOrderLine as PoLineDoc } from '../../../exports/types';
 import { purchaseOrderLineTotalMinor } from '../../../exports/xlsx/purchase-order.xlsx';
 import type { PurchaseOrderEntity, SupplierEntity } from '../../entities';
 import type { PurchaseOrderLine } from '../../entities/purchase-order.entity';
-
-/** The number an order goes by with its supplier: PO-0007, from its number in its studio (never its id). */
-export const poNumber = (order: { number: number }) => `PO-${String(order.number).padStart(4, '0')}`;
 
 export const presentSupplier = (s: SupplierEntity): SupplierDto => ({
   id: s.id,

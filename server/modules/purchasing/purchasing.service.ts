@@ -9,8 +9,9 @@ import type { CostingService } from '../costing/costing.service';
 import { documentSettings } from '../studios/document-settings';
 import type { MailService } from '../mail/mail.service';
 import { netFabricNeed } from '../../../planning/index';
-import { batchCode } from '../batches/batch.presenter';
-import { documentLine, poNumber } from './purchasing.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
+import { poNumber } from '../../../shared/schemas/purchasing';
+import { documentLine } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 
 /** Fabric is ordered in whole 100 mm steps; counted trims in whole units; others to 0.01. */

@@ -2,7 +2,7 @@ import { can } from '../../../shared/auth/permissions';
 import { parseBundleQr } from '../../../shared/schemas/floor';
 import type { SearchHitDto } from '../../../shared/schemas/search';
 import type { Actor } from '../../auth/require';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { SearchRepository } from './search.repository';
 
 const BATCH_CODE = /^b-?0*(\d{1,9})$/i;
