@@ -1,14 +1,19 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { TIMESTAMP } from './column-types';
 import { StyleEntity } from './style.entity';
 
 @Entity('batches')
+@Index(['studioId', 'number'], { unique: true })
 export class BatchEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
 
   @Column({ type: 'integer' })
   studioId: number;
+
+  /** The batch's number in its studio (B-0007): 1 for a studio's first batch, never reused; the id stays for URLs. */
+  @Column({ type: 'integer' })
+  number: number;
 
   @Column({ type: 'integer' })
   styleId: number;

@@ -1,14 +1,19 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import { TIMESTAMP } from './column-types';
 import type { PayPeriodLine, PayPeriodRules } from '../../shared/schemas/pay';
 
 @Entity('pay_periods')
+@Index(['studioId', 'number'], { unique: true })
 export class PayPeriodEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
 
   @Column({ type: 'integer' })
   studioId: number;
+
+  /** The period's number in its studio: 1 for a studio's first period, never reused; the id stays for URLs. */
+  @Column({ type: 'integer' })
+  number: number;
 
   @Column({ type: 'varchar', length: 10 })
   fromDay: string;

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import { TIMESTAMP } from './column-types';
 
 export interface PurchaseOrderLine {
@@ -12,12 +12,17 @@ export interface PurchaseOrderLine {
 }
 
 @Entity('purchase_orders')
+@Index(['studioId', 'number'], { unique: true })
 export class PurchaseOrderEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
 
   @Column({ type: 'integer' })
   studioId: number;
+
+  /** The order's number in its studio (PO-0007): 1 for a studio's first order, never reused; the id stays for URLs. */
+  @Column({ type: 'integer' })
+  number: number;
 
   @Column({ type: 'integer' })
   supplierId: number;

@@ -77,6 +77,7 @@ export async function seedDemoStudio(ds: DataSource, opts: SeedOptions): Promise
     });
     const batch = await m.getRepository(BatchEntity).save({
       studioId: studio.id,
+      number: 1, // the new studio's first batch: B-0001
       styleId: style.id,
       quantities: DEMO_QUANTITIES,
       dueDate: format(addDays(opts.today, 21), 'yyyy-MM-dd'),

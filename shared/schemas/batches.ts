@@ -20,7 +20,11 @@ export const updateBatchInput = z.object({
 });
 
 export interface BatchDto {
+  /** For URLs and API calls only; people see `code`. */
   id: number;
+  /** The batch's number in its studio, 1 for the studio's first. */
+  number: number;
+  /** B-0007: what the batch is called on every screen and document. */
   code: string;
   styleId: number;
   styleCode: string;
@@ -32,6 +36,9 @@ export interface BatchDto {
   notes: string;
   createdAt: string;
 }
+
+/** The code a batch goes by on every screen and document: B-0007, from its number in its studio (never its id). */
+export const batchCode = (batch: { number: number }) => `B-${String(batch.number).padStart(4, '0')}`;
 
 /** Sum of a size → quantity map. */
 export const batchTotal = (q: Record<string, number>) => Object.values(q).reduce((a, b) => a + b, 0);

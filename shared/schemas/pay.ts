@@ -88,6 +88,8 @@ export interface PayPreviewDto {
   totalMinor: number;
   /** An approved period already covering some of these days. */
   overlapsPeriodId: number | null;
+  /** That period's number in the studio, as people know it. */
+  overlapsPeriodNumber: number | null;
   /** Logs made on already-approved days after their approval, paid in this period instead. */
   carriedLogs: number;
 }
@@ -112,7 +114,10 @@ export interface PayoutDto {
 }
 
 export interface PayPeriodDto {
+  /** For URLs and API calls only. */
   id: number;
+  /** The period's number in its studio, 1 for the studio's first: what people call it. */
+  number: number;
   fromDay: string;
   toDay: string;
   status: 'approved' | 'paid';

@@ -49,6 +49,9 @@ export interface PurchaseOrderLineDto {
   receivedQuantity: number;
 }
 
+/** The number an order goes by with its supplier: PO-0007, from its number in its studio (never its id). */
+export const poNumber = (order: { number: number }) => `PO-${String(order.number).padStart(4, '0')}`;
+
 export interface PurchaseOrderDto {
   id: number;
   number: string;

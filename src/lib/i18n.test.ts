@@ -129,14 +129,15 @@ describe('plural rules of each language', () => {
 
 describe('the audit trail as sentences', () => {
   const entry = {
-    id: 1, userName: 'Zawadi Kerubo', action: 'update', entity: 'studio', entityId: 1, createdAt: '2026-12-02T16:32:57Z',
+    id: 1, userName: 'Zawadi Kerubo', action: 'update', entity: 'studio', entityId: 1, record: null, createdAt: '2026-12-02T16:32:57Z',
     before: JSON.stringify({ name: 'Tamarind', unitSystem: 'metric', workingDayHours: 8 }),
     after: JSON.stringify({ name: 'Tamarind', unitSystem: 'imperial', workingDayHours: 8 }),
   };
 
   it('reads who did what to which record, not raw JSON', () => {
     expect(auditSentence(entry, i18n.getFixedT('en'))).toBe('Zawadi Kerubo changed the studio');
-    expect(auditSentence({ ...entry, action: 'create', entity: 'batch', entityId: 4 }, i18n.getFixedT('fr'))).toBe('Zawadi Kerubo a créé la série #4');
+    // A batch goes by its studio's code (the server sends it), never by its database id.
+    expect(auditSentence({ ...entry, action: 'create', entity: 'batch', entityId: 4, record: 'B-0001' }, i18n.getFixedT('fr'))).toBe('Zawadi Kerubo a créé la série B-0001');
   });
 
   it('lists only the fields that changed, in words', () => {

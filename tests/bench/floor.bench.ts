@@ -56,7 +56,8 @@ async function serve(target: string) {
   );
   const batches: number[] = [];
   for (let l = 0; l < LEVELS.length * MODES.length + 1; l++) {
-    const batch = await ds.getRepository(BatchEntity).save({ studioId: 1, styleId: style.id, quantities: { M: BUNDLES_PER_LEVEL * 10 }, dueDate: '2030-01-01', status: 'sewing', notes: 'bench' });
+    const number = ((await ds.getRepository(BatchEntity).maximum('number', { studioId: 1 })) ?? 0) + 1;
+    const batch = await ds.getRepository(BatchEntity).save({ studioId: 1, number, styleId: style.id, quantities: { M: BUNDLES_PER_LEVEL * 10 }, dueDate: '2030-01-01', status: 'sewing', notes: 'bench' });
     batches.push(batch.id);
     // Each bench batch numbers its bundles from 1 and is always sent with its batch id: scoped to the batch,
     // as bundles cut before numbers were studio-wide are (bundle.entity.ts, numberScope).

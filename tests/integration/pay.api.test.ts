@@ -163,7 +163,7 @@ describe('pay periods are whole calendar days', () => {
 
   it('judges overlap on real dates when a period saved before the check ends on a day that does not exist', async () => {
     // Saved by the old pattern check: 2026-10-32 is 1 November once read as a date, and pay was counted that way.
-    const legacy = await ds.getRepository(PayPeriodEntity).save({ studioId: 1, fromDay: '2026-10-26', toDay: '2026-10-32', status: 'paid', approvedBy: 1, lines: [] });
+    const legacy = await ds.getRepository(PayPeriodEntity).save({ studioId: 1, number: 900, fromDay: '2026-10-26', toDay: '2026-10-32', status: 'paid', approvedBy: 1, lines: [] });
     const preview = (await owner.get('/api/pay/preview?from=2026-11-01&to=2026-11-01')).body.preview;
     expect(preview.overlapsPeriodId).toBe(legacy.id);
     const res = await owner.post('/api/pay/periods').send({ fromDay: '2026-11-01', toDay: '2026-11-02' });

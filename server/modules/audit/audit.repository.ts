@@ -1,11 +1,18 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager, type EntityTarget } from 'typeorm';
 import { createStatements } from '../../db/statements';
-import { AuditEntryEntity } from '../../entities';
+import { AuditEntryEntity, BatchEntity, PayPeriodEntity, PurchaseOrderEntity } from '../../entities';
 import type { Actor } from '../../auth/require';
 
 export type AuditRepository = ReturnType<typeof createAuditRepository>;
 
 const summarise = (v: unknown) => (v === undefined ? '' : JSON.stringify(v).slice(0, 4000));
+
+/** The entries whose record people know by its studio number rather than by name. */
+const NUMBERED: [string, EntityTarget<{ id: number; studioId: number; number: number }>][] = [
+  ['batch', BatchEntity],
+  ['purchase_order', PurchaseOrderEntity],
+  ['pay_period', PayPeriodEntity],
+];
 
 export function createAuditRepository(ds: DataSource) {
   const sql = createStatements(ds);
@@ -33,6 +40,17 @@ export function createAuditRepository(ds: DataSource) {
       // Outside a transaction (every floor log) one constant prepared INSERT; inside one, the transaction's manager.
       if (manager === ds.manager) await sql.insert(AuditEntryEntity, entry);
       else await manager.getRepository(AuditEntryEntity).insert(entry);
+    },
+    /** The studio numbers of the batches, orders and pay periods these entries name, keyed `entity:id`. */
+    async numbersOf(studioId: number, entries: Pick<AuditEntryEntity, 'entity' | 'entityId'>[]) {
+      const out = new Map<string, number>();
+      for (const [entity, target] of NUMBERED) {
+        const ids = [...new Set(entries.filter((e) => e.entity === entity && e.entityId).map((e) => e.entityId!))];
+        if (!ids.length) continue;
+        const rows = await ds.getRepository(target).find({ where: { studioId, id: In(ids) }, select: { id: true, number: true } });
+        for (const r of rows) out.set(`${entity}:${r.id}`, r.number);
+      }
+      return out;
     },
     list(studioId: number, limit = 200) {
       return ds.getRepository(AuditEntryEntity).find({

@@ -5,9 +5,6 @@ import { actorOf, requirePermission } from '../../auth/require';
 import { validated } from '../../middleware/validate';
 import type { BatchService } from './batch.service';
 
-/** Kept for the floor area's import until it takes batchCode from batch.presenter.ts. */
-export { batchCode, presentBatch } from './batch.presenter';
-
 export function batchRoutes(service: BatchService) {
   const r = Router();
   const read = requirePermission('batches:read');

@@ -7,7 +7,7 @@ import { costGarment, planConsumption, priceFromMargin, roundMinor, shrinkageAre
 import type { CostingOverheadLine, CostingSheetInput, CostingLabourLine } from '../../../exports/types';
 import type { BatchEntity, CostingSettingsEntity, FabricEntity, LayEntity } from '../../entities';
 import { notFound } from '../../errors';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { utilisationForEstimates } from '../markers/marker-input';
 import {
   consumptionBySize,
@@ -207,7 +207,7 @@ export function createCostingService(repo: CostingRepository) {
     const retailMinor = roundMinor(wholesaleMinor * settings.retailMultiplier);
     const garments = sheet.batch.quantity;
     const dto: CostingSheetDto = {
-      batch: { id: batch.id, code: batchCode(batch.id), total: garments },
+      batch: { id: batch.id, code: batchCode(batch), total: garments },
       style: { id: style.id, code: style.code, name: style.name },
       studioName: studio.name,
       currency: studio.currency,
@@ -259,7 +259,7 @@ export function createCostingService(repo: CostingRepository) {
       currency: studio.currency,
       unitSystem: studio.unitSystem,
       style: { code: style.code, name: style.name },
-      batch: { code: batchCode(batch.id) },
+      batch: { code: batchCode(batch) },
       sizes,
       fabrics: [
         ...(fab ? [{ description: fab.fabric.name, pricePerLengthMinor: minor(perLength(fab.fabric)), consumptionMmBySize: fabricMm }] : []),

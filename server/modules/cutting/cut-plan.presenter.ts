@@ -1,14 +1,15 @@
 import type { BundleDto, CutPlanDto, LayDto, LayShortageDto } from '../../../shared/schemas/cutting';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 import type { BundleEntity, CutPlanEntity, FabricEntity, LayEntity } from '../../entities';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { StoredCutPlanResult } from './cut-plan.service';
 
-export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageDto | null = null): LayDto => ({
+/** A lay, shown with its batch's code (the batch is the lay's own: `l.batchId`). */
+export const presentLay = (l: LayEntity, batch: { number: number }, bundleCount = 0, shortage: LayShortageDto | null = null): LayDto => ({
   id: l.id,
   cutPlanId: l.cutPlanId,
   batchId: l.batchId,
-  batchCode: batchCode(l.batchId),
+  batchCode: batchCode(batch),
   seq: l.seq,
   ratio: l.ratio,
   garmentsPerPly: Object.values(l.ratio).reduce((a, b) => a + b, 0),
@@ -27,7 +28,7 @@ export const presentLay = (l: LayEntity, bundleCount = 0, shortage: LayShortageD
 });
 
 /** Cut plan → DTO. Rates and cost go only to roles that may read costs (`showCosts`), never to the cutter. */
-export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>(), showCosts = false): CutPlanDto {
+export function presentCutPlan(p: CutPlanEntity, batch: { number: number }, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>(), showCosts = false): CutPlanDto {
   const r = p.result as StoredCutPlanResult;
   return {
     id: p.id,
@@ -55,7 +56,7 @@ export function presentCutPlan(p: CutPlanEntity, fabricName: string, lays: LayEn
     shortfall: r.allocation.shortfall,
     splitLays: r.allocation.splitLays,
     rollRefusals: [...new Set((r.allocation.refusals ?? []).map((x) => x.refusal.message))],
-    lays: lays.map((l) => presentLay(l, counts.get(l.id) ?? 0, shortages.get(l.id) ?? null)),
+    lays: lays.map((l) => presentLay(l, batch, counts.get(l.id) ?? 0, shortages.get(l.id) ?? null)),
     createdAt: new Date(p.createdAt).toISOString(),
   };
 }

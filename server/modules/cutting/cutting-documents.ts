@@ -2,7 +2,7 @@ import type { BundleRegisterInput, LayPlan, MarkerListInput, SpreadingMode } fro
 import { mm } from '@shared/units/units';
 import { rollsInCuttingOrder } from '@planning';
 import type { BatchEntity, BundleEntity, FabricEntity, LayEntity, OperationEntity, RollEntity, StudioEntity } from '../../entities';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { documentSettings } from '../studios/document-settings';
 import { bundleQrText } from '../../../shared/schemas/cutting';
 
@@ -24,7 +24,7 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
   }));
   return {
     studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
-    style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
+    style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch) },
     fabric: { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: mm(fabric.widthMm) },
     lays: plans,
     ...(rolls ? { byRoll: byRoll(lays, rolls) } : {}),
@@ -57,7 +57,7 @@ export function bundleRegisterInput(studio: StudioEntity, batch: BatchEntity, bu
   const seqOf = new Map(lays.map((l) => [l.id, l.seq]));
   return {
     studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio),
-    style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch.id) },
+    style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch) },
     operations: ops.filter((o) => o.section !== 'cutting').map((o) => ({ name: o.name, samMinutes: o.sam })),
     bundles: bundles.map((b) => ({ bundleNo: b.number, size: b.size, shadeLot: b.shadeLot, plyFrom: b.plyFrom, plyTo: b.plyTo, pieces: b.pieces, layNo: seqOf.get(b.layId) ?? 0 })),
   };

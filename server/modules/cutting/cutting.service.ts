@@ -7,7 +7,7 @@ import type { LayEntity } from '../../entities';
 import { conflict, notFound } from '../../errors';
 import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import { presentBundle, presentCutPlan, presentLay, presentLayFabric } from './cut-plan.presenter';
 import { planBatchCut, type CutPlanDeps } from './cut-plan.service';
 import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
@@ -18,7 +18,7 @@ const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
 const PDF = 'application/pdf';
 
 export interface CuttingServiceDeps extends CutPlanDeps {
-  batches: CutPlanDeps['batches'] & { list(studioId: number): Promise<{ id: number; status: string }[]> };
+  batches: CutPlanDeps['batches'] & { list(studioId: number): Promise<{ id: number; number: number; status: string }[]> };
   audit: AuditRepository;
   now: () => Date;
   /** The styles' stored pieces, for a material's cut ticket. */
@@ -41,6 +41,11 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     if (!b) throw notFound('Batch');
     return b;
   };
+  /** The batches of these lays by id, for the batch code each lay is shown with. */
+  const batchesOf = async (studioId: number, list: LayEntity[]) => {
+    const ids = new Set(list.map((l) => l.batchId));
+    return new Map((await deps.batches.list(studioId)).filter((b) => ids.has(b.id)).map((b) => [b.id, b]));
+  };
   const shortagesOf = async (studioId: number, list: LayEntity[]) =>
     layShortages(list, await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]));
   const planDto = async (studioId: number, batchId: number, role: Role) => {
@@ -48,7 +53,7 @@ export function createCuttingService(deps: CuttingServiceDeps) {
     if (!p) return null;
     const list = await plans.laysOf(studioId, p.id);
     const fabric = await fabrics.get(studioId, p.fabricId);
-    return presentCutPlan(p, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
+    return presentCutPlan(p, await loadBatch(studioId, batchId), fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
   };
   const markerListFor = async (studioId: number, batchId: number, only?: number) => {
     const batch = await loadBatch(studioId, batchId);
@@ -113,48 +118,51 @@ export function createCuttingService(deps: CuttingServiceDeps) {
       const list = await plans.liveLays(studioId);
       const counts = await plans.bundleCounts(studioId, list.map((l) => l.id));
       const short = await shortagesOf(studioId, list);
-      return list.map((l) => presentLay(l, counts.get(l.id) ?? 0, short.get(l.id) ?? null));
+      const batches = await batchesOf(studioId, list);
+      return list.map((l) => presentLay(l, batches.get(l.batchId)!, counts.get(l.id) ?? 0, short.get(l.id) ?? null));
     },
     /** Planned lays of open batches that stock cannot cover: the owner's Today and the cutter see them before spreading. */
     async shortages(studioId: number): Promise<ShortageDto[]> {
-      const open = new Set((await deps.batches.list(studioId)).filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => b.id));
+      const open = new Map((await deps.batches.list(studioId)).filter((b) => b.status !== 'shipped' && b.status !== 'cancelled').map((b) => [b.id, b]));
       const list = (await plans.liveLays(studioId)).filter((l) => open.has(l.batchId));
       const short = await shortagesOf(studioId, list);
-      return list.filter((l) => short.has(l.id)).map((l) => ({ layId: l.id, batchId: l.batchId, batchCode: batchCode(l.batchId), seq: l.seq, ...short.get(l.id)! }));
+      return list.filter((l) => short.has(l.id)).map((l) => ({ layId: l.id, batchId: l.batchId, batchCode: batchCode(open.get(l.batchId)!), seq: l.seq, ...short.get(l.id)! }));
     },
     async lay(studioId: number, id: number) {
       const lay = await loadLay(studioId, id);
       const plan = await plans.getPlan(studioId, lay.cutPlanId);
       const fabric = plan ? await fabrics.get(studioId, plan.fabricId) : null;
       const bundles = await plans.bundlesOfLay(studioId, lay.id);
-      const batch = await deps.batches.get(studioId, lay.batchId);
+      const batch = await loadBatch(studioId, lay.batchId);
       return {
-        lay: presentLay(lay, bundles.length, (await shortagesOf(studioId, [lay])).get(lay.id) ?? null),
+        lay: presentLay(lay, batch, bundles.length, (await shortagesOf(studioId, [lay])).get(lay.id) ?? null),
         fabric: fabric ? presentLayFabric(fabric) : null,
         bundles: bundles.map(presentBundle),
         // The style's materials, each with its own cut ticket (lining, contrast… are cut from those, not from lays).
-        materials: [...new Set(['self', ...Object.keys(batch?.style?.materialFabrics ?? {})])],
+        materials: [...new Set(['self', ...Object.keys(batch.style?.materialFabrics ?? {})])],
       };
     },
     async recordLay(actor: Actor, id: number, input: RecordLayInput) {
       const before = await plans.getLay(actor.studioId, id);
       const after = await recordLay(plans, actor.studioId, id, input, await markerWidthOf(actor.studioId, before));
-      await audit.record(actor, 'record', 'lay', after.id, before ? presentLay(before) : undefined, presentLay(after));
-      return presentLay(after);
+      const batch = await loadBatch(actor.studioId, after.batchId);
+      await audit.record(actor, 'record', 'lay', after.id, before ? presentLay(before, batch) : undefined, presentLay(after, batch));
+      return presentLay(after, batch);
     },
     async cutLay(actor: Actor, id: number, body: Partial<RecordLayInput> | undefined) {
       const recorded = body && Array.isArray(body.rolls) ? { rolls: body.rolls, flaws: body.flaws ?? '' } : undefined;
       const markerWidthMm = await markerWidthOf(actor.studioId, await plans.getLay(actor.studioId, id));
       const { lay, bundles } = await markLayCut(plans, actor.studioId, id, recorded, now(), { markerWidthMm });
       await audit.record(actor, 'cut', 'lay', lay.id, { status: 'planned' }, { status: 'cut', bundles });
-      return { lay: presentLay(lay, bundles), bundles: (await plans.bundlesOfLay(actor.studioId, lay.id)).map(presentBundle) };
+      return { lay: presentLay(lay, await loadBatch(actor.studioId, lay.batchId), bundles), bundles: (await plans.bundlesOfLay(actor.studioId, lay.id)).map(presentBundle) };
     },
     /** The audited correction of a cut lay's record: the audit log keeps the figures before and after, and why. */
     async correctLay(actor: Actor, id: number, input: CorrectLayInput) {
       const before = await loadLay(actor.studioId, id);
       const after = await correctLay(plans, actor.studioId, id, input, actor, now());
-      await audit.record(actor, 'correct', 'lay', after.id, presentLay(before), { ...presentLay(after), reason: input.reason });
-      return presentLay(after, (await plans.bundlesOfLay(actor.studioId, id)).length);
+      const batch = await loadBatch(actor.studioId, after.batchId);
+      await audit.record(actor, 'correct', 'lay', after.id, presentLay(before, batch), { ...presentLay(after, batch), reason: input.reason });
+      return presentLay(after, batch, (await plans.bundlesOfLay(actor.studioId, id)).length);
     },
     async layDocument(studioId: number, id: number, doc: LayDocument): Promise<Download> {
       const lay = await loadLay(studioId, id);

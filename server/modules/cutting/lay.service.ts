@@ -5,7 +5,7 @@ import type { RollEntity } from '../../entities';
 import type { LayCorrection, LayRollLine } from '../../entities/lay.entity';
 import { badRequest, conflict, notFound } from '../../errors';
 import { said, type Said } from '../../../shared/i18n/speak';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { CutPlanRepository } from './cut-plan.repository';
 import { withStockLock } from './stock-lock';
 
@@ -126,7 +126,7 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     const batch = await tx.batch(studioId, lay.batchId);
     const style = await tx.batchWithStyle(studioId, lay.batchId);
     const sizes = style?.style?.sizeRun ?? Object.keys(lay.ratio);
-    const made = makeBundles({ batch: batchCode(lay.batchId), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
+    const made = makeBundles({ batch: batchCode(batch), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
     await tx.insertBundles(
       made.map((b) => ({
         studioId, batchId: lay.batchId, layId: lay.id, number: b.number, size: b.size, shadeLot: b.shadeLot,

@@ -4,7 +4,7 @@ import type { MaterialCutTicketInput } from '@exports/pdf/material-cut-ticket.pd
 import { piecesPerGarment } from '@grading';
 import type { BatchEntity, StudioEntity } from '../../entities';
 import { badRequest, notFound } from '../../errors';
-import { batchCode } from '../batches/batch.routes';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { GradingSetRepository } from '../grading/grading-set.repository';
 import type { FabricRepository } from './fabric.repository';
 
@@ -28,7 +28,7 @@ export async function materialCutTicketInput(sets: Pick<GradingSetRepository, 'b
   const fabric = fabricId ? await fabrics.get(studio.id, fabricId) : null;
   return {
     studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
-    style: { code: style.code, name: style.name }, batch: { code: batchCode(batch.id) }, material,
+    style: { code: style.code, name: style.name }, batch: { code: batchCode(batch) }, material,
     fabric: fabric ? { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: fabric.widthMm } : null,
     sizes: style.sizeRun.map((size) => ({ size, quantity: batch.quantities[size] ?? 0 })),
     pieces: set.pieces.filter((p) => materialOf(p) === material).map((p) => ({ name: p.name, copiesPerGarment: piecesPerGarment(p), mirrored: p.cut === 'pair' })),

@@ -2,6 +2,7 @@ import type { OperationProgress, PersonEfficiency, ProgressDto, SectionProgress 
 import { OPERATION_SECTIONS } from '../../../shared/schemas/floor';
 import type { OperationEntity, WorkLogEntity } from '../../entities';
 import { notFound } from '../../errors';
+import { batchCode } from '../../../shared/schemas/batches';
 import { computePeriodPay } from '@planning';
 import { efficiencyPercent, logRate } from './floor-math';
 import type { FloorRepository } from './floor.repository';
@@ -188,7 +189,7 @@ export function createFloorProgressService(deps: { repo: FloorRepository; floor:
       const people = await this.peopleOfBatch(studioId, logs, firstDay, today);
       return {
         batchId,
-        batchCode: `B-${String(batchId).padStart(4, '0')}`,
+        batchCode: batchCode(batch),
         totalPieces,
         bundles: bundles.length,
         operations,

@@ -10,7 +10,7 @@ import type { AuditRepository } from '../audit/audit.repository';
 import { logEarnedMinutes, logPayMinor, logRate, operationRate } from './floor-math';
 import { isCheckOperation, presentLog, presentOperation } from './floor.presenter';
 import { isUniqueViolation } from '../../db/data-source';
-import { batchCode } from '../batches/batch.routes';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { FloorRepository } from './floor.repository';
 
 export type FloorService = ReturnType<typeof createFloorService>;
@@ -78,14 +78,17 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
   async function matches(studioId: number, number: number, batchId?: number): Promise<BundleChoiceDto[]> {
     const found = await repo.bundlesByNumber(studioId, number, batchId);
     const batches = new Map((await repo.batchesByIds(studioId, [...new Set(found.map((b) => b.batchId))])).map((b) => [b.id, b]));
-    return found.map((b) => ({
-      batchId: b.batchId,
-      batchCode: batchCode(b.batchId),
-      number: b.number,
-      size: b.size,
-      styleName: batches.get(b.batchId)?.style?.name ?? '',
-      batchStatus: batches.get(b.batchId)?.status ?? '',
-    }));
+    return found.map((b) => {
+      const batch = batches.get(b.batchId);
+      return {
+        batchId: b.batchId,
+        batchCode: batch ? batchCode(batch) : '',
+        number: b.number,
+        size: b.size,
+        styleName: batch?.style?.name ?? '',
+        batchStatus: batch?.status ?? '',
+      };
+    });
   }
 
   /**
@@ -152,7 +155,9 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
     // Read fresh, not from the batch memo: a batch shipped a moment ago takes no more work.
     const status = await repo.batchStatus(actor.studioId, bundle.batchId);
     if (status === 'shipped' || status === 'cancelled') {
-      throw conflict(`Batch B-${String(bundle.batchId).padStart(4, '0')} is ${status}; nothing more is logged on it`, { bundleNumber: `Batch ${status}` });
+      // The code from the memo is fine here: a batch's number never changes.
+      const batch = await batchOf(actor.studioId, bundle.batchId);
+      throw conflict(`Batch ${batch ? batchCode(batch) : ''} is ${status}; nothing more is logged on it`, { bundleNumber: `Batch ${status}` });
     }
   }
 
@@ -199,7 +204,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
       return {
         id: bundle.id,
         batchId: bundle.batchId,
-        batchCode: batchCode(bundle.batchId),
+        batchCode: batchCode(batch),
         number: bundle.number,
         size: bundle.size,
         shadeLot: bundle.shadeLot,
@@ -350,7 +355,7 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
           out.push({
             bundleNumber: bundle.number,
             batchId: bundle.batchId,
-            batchCode: batchCode(bundle.batchId),
+            batchCode: batchCode(batch),
             operationId: op.id,
             operationCode: op.code,
             operationName: op.name,

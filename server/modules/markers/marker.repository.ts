@@ -1,6 +1,6 @@
 import { In, type DataSource } from 'typeorm';
 import { createStatements } from '../../db/statements';
-import { MarkerEntity, StudioEntity } from '../../entities';
+import { BatchEntity, MarkerEntity, StudioEntity } from '../../entities';
 import type { MarkerStatus } from '../../entities/marker.entity';
 import type { QueryDeepPartialEntity } from 'typeorm';
 
@@ -15,6 +15,8 @@ export function createMarkerRepository(ds: DataSource) {
     /** The studio's name and the language, units and time zone its documents are written in. */
     studio: (studioId: number) => ds.getRepository(StudioEntity).findOneByOrFail({ id: studioId }),
     get: (studioId: number, id: number) => repo.findOne({ where: { studioId, id } }),
+    /** The marker's batch, for the batch code on its files. */
+    batch: (studioId: number, id: number) => ds.getRepository(BatchEntity).findOneBy({ studioId, id }),
     list: (studioId: number, where: { styleId?: number; batchId?: number } = {}) =>
       repo.find({ where: { studioId, ...where }, order: { id: 'DESC' }, take: 100 }),
     /** A live or finished marker with the same inputs (failed and cancelled runs are not reused). */

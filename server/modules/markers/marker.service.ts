@@ -6,7 +6,7 @@ import { badRequest, conflict, notFound } from '../../errors';
 import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
 import type { BatchRepository } from '../batches/batch.repository';
-import { batchCode } from '../batches/batch.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { CuttingPieceSource } from '../grading/graded-pieces';
 import type { StyleRepository } from '../styles/style.repository';
 import { buildMarkerInput, fabricShrinkage, markerInputHash, piecesOnFabric, type MarkerJobInput } from './marker-input';
@@ -98,7 +98,8 @@ export function createMarkerService(deps: MarkerServiceDeps) {
     const sizes = style?.sizeRun ?? Object.keys(dto.ratio);
     const size = `${Math.round(dto.lengthMm)} mm × ${Math.round(dto.widthMm)} mm`;
     // The batch goes in the title and every file name, so a plotter queue shows whose marker it is.
-    const batch = dto.batchId ? batchCode(dto.batchId) : null;
+    const batchRow = dto.batchId ? await markers.batch(studioId, dto.batchId) : null;
+    const batch = batchRow ? batchCode(batchRow) : null;
     const name = `marker-${[batch, style?.code, dto.id].filter(Boolean).join('-')}`;
     if (kind === 'svg') {
       const title = `${[batch, style?.code ?? 'Marker'].filter(Boolean).join(' · ')} ${ratioText(dto.ratio, sizes)} · ${size}`;

@@ -1,3 +1,4 @@
+import { insertWithStudioNumber } from '../../db/studio-number';
 import { updateIfChanged } from '../../db/update-if-changed';
 import type { DataSource } from 'typeorm';
 import { Between, In, IsNull } from 'typeorm';
@@ -34,7 +35,11 @@ export function createPayRepository(ds: DataSource) {
     unsettledPayouts: () => payouts.find({ where: { status: In(['pending', 'to_check']) }, order: { id: 'ASC' } }),
     periods: (studioId: number) => periods.find({ where: { studioId }, order: { fromDay: 'DESC', id: 'DESC' } }),
     period: (studioId: number, id: number) => periods.findOneBy({ studioId, id }),
-    insertPeriod: (p: Partial<PayPeriodEntity>) => periods.save(periods.create(p)),
+    /** A new period takes the studio's next number (1 for its first). */
+    async insertPeriod(p: Omit<Partial<PayPeriodEntity>, 'id' | 'number'> & { studioId: number }) {
+      const id = await insertWithStudioNumber(ds, PayPeriodEntity, p);
+      return periods.findOneByOrFail({ studioId: p.studioId, id });
+    },
     markPeriodPaid: (studioId: number, id: number) => periods.update({ studioId, id }, { status: 'paid' }),
     payouts: (studioId: number, payPeriodId: number) => payouts.find({ where: { studioId, payPeriodId }, order: { id: 'ASC' } }),
     payout: (studioId: number, payPeriodId: number, userId: number) => payouts.findOneBy({ studioId, payPeriodId, userId }),

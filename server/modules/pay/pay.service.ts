@@ -174,6 +174,7 @@ export function createPayService(deps: {
       people: result,
       totalMinor: result.reduce((a, p) => a + p.amountMinor, 0),
       overlapsPeriodId: overlap?.id ?? null,
+      overlapsPeriodNumber: overlap?.number ?? null,
       carriedLogs: carried,
     };
   }
@@ -184,6 +185,7 @@ export function createPayService(deps: {
     const name = (id: number) => p.lines.find((l) => l.userId === id)?.name ?? '';
     return {
       id: p.id,
+      number: p.number,
       fromDay: p.fromDay,
       toDay: p.toDay,
       status: p.status,
@@ -325,7 +327,7 @@ export function createPayService(deps: {
   async function approveNow(actor: Actor, fromDay: string, toDay: string) {
     const periods = await repo.periods(actor.studioId);
     const overlap = periods.find((p) => realDay(p.fromDay) <= toDay && fromDay <= realDay(p.toDay));
-    if (overlap) throw conflict(`These days overlap pay period ${overlap.id}, already approved`, { fromDay: 'Overlaps an approved period' });
+    if (overlap) throw conflict(`These days overlap pay period ${overlap.number}, already approved`, { fromDay: 'Overlaps an approved period' });
     const { logs } = await claimable(actor.studioId, fromDay, toDay, periods);
     if (!logs.some((l) => l.attempt === 0 && l.pieces > 0)) throw badRequest('fromDay: no logged work in these days', { fromDay: 'No logged work in these days' });
     const rules = await currentRules(actor.studioId, fromDay, toDay);

@@ -1,11 +1,9 @@
-import type { PurchaseOrderDto, SupplierDto } from '../../../shared/schemas/purchasing';
+import { poNumber, type PurchaseOrderDto, type SupplierDto } from '../../../shared/schemas/purchasing';
 import { minor, mm } from '../../../shared/units';
 import type { PurchaseOrderLine as PoLineDoc } from '../../../exports/types';
 import { purchaseOrderLineTotalMinor } from '../../../exports/xlsx/purchase-order.xlsx';
 import type { PurchaseOrderEntity, SupplierEntity } from '../../entities';
 import type { PurchaseOrderLine } from '../../entities/purchase-order.entity';
-
-export const poNumber = (id: number) => `PO-${String(id).padStart(4, '0')}`;
 
 export const presentSupplier = (s: SupplierEntity): SupplierDto => ({
   id: s.id,
@@ -40,7 +38,7 @@ export function presentOrder(o: PurchaseOrderEntity, supplier: SupplierEntity | 
   }));
   return {
     id: o.id,
-    number: poNumber(o.id),
+    number: poNumber(o),
     supplierId: o.supplierId,
     supplierName: supplier?.name ?? '',
     supplierEmail: supplier?.email ?? '',

@@ -1,3 +1,4 @@
+import { insertWithStudioNumber } from '../../db/studio-number';
 import { updateIfChanged } from '../../db/update-if-changed';
 import { In, Not, type DataSource } from 'typeorm';
 import { FabricEntity, PurchaseOrderEntity, RollEntity, RollReservationEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
@@ -23,6 +24,7 @@ export function createPurchasingRepository(ds: DataSource) {
     trim: (studioId: number, id: number) => ds.getRepository(TrimEntity).findOneBy({ studioId, id }),
     batchExists: async (studioId: number, id: number) =>
       ds.getRepository(BatchEntity).exists({ where: { studioId, id } }),
+    batch: (studioId: number, id: number) => ds.getRepository(BatchEntity).findOneBy({ studioId, id }),
     trims: (studioId: number, styleId: number) => ds.getRepository(TrimEntity).find({ where: { studioId, styleId }, order: { id: 'ASC' } }),
     /** Fabric on hand: what is left on every roll of the fabric. */
     async fabricStockMm(studioId: number, fabricId: number) {
@@ -40,7 +42,11 @@ export function createPurchasingRepository(ds: DataSource) {
     orders: (studioId: number, batchId?: number) =>
       orders.find({ where: batchId ? { studioId, batchId } : { studioId }, order: { id: 'DESC' } }),
     order: (studioId: number, id: number) => orders.findOneBy({ studioId, id }),
-    insertOrder: (o: Partial<PurchaseOrderEntity>) => orders.save(orders.create(o)),
+    /** A new order takes the studio's next number (PO-0001 for its first). */
+    async insertOrder(o: Omit<Partial<PurchaseOrderEntity>, 'id' | 'number'> & { studioId: number }) {
+      const id = await insertWithStudioNumber(ds, PurchaseOrderEntity, o);
+      return orders.findOneByOrFail({ studioId: o.studioId, id });
+    },
     async setStatus(studioId: number, id: number, status: PurchaseOrderEntity['status']) {
       await orders.update({ studioId, id }, { status });
       return orders.findOneByOrFail({ studioId, id });

@@ -7,7 +7,8 @@ import { actorOf, requirePermission } from '../../auth/require';
 import { conflict, notFound } from '../../errors';
 import { validate } from '../../middleware/validate';
 import type { RouteContext } from '../module';
-import { poNumber, presentOrder, presentSupplier } from './purchasing.presenter';
+import { poNumber } from '../../../shared/schemas/purchasing';
+import { presentOrder, presentSupplier } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 import type { PurchasingService } from './purchasing.service';
 import { sendDownload } from '../../middleware/download';
@@ -79,7 +80,7 @@ export function purchasingRoutes(repo: PurchasingRepository, service: Purchasing
     const { studioId } = actorOf(req);
     const o = await repo.order(studioId, Number(req.params.id));
     if (!o) throw notFound('Purchase order');
-    sendDownload(res, { body: await service.workbook(studioId, o), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${poNumber(o.id)}.xlsx` });
+    sendDownload(res, { body: await service.workbook(studioId, o), type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', filename: `${poNumber(o)}.xlsx` });
   });
   r.post('/orders/:id/send', validate({ params: idParam }), async (req, res) => {
     const actor = actorOf(req);

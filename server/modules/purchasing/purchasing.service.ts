@@ -9,7 +9,9 @@ import type { CostingService } from '../costing/costing.service';
 import { documentSettings } from '../studios/document-settings';
 import type { MailService } from '../mail/mail.service';
 import { netFabricNeed } from '../../../planning/index';
-import { documentLine, poNumber } from './purchasing.presenter';
+import { batchCode } from '../../../shared/schemas/batches';
+import { poNumber } from '../../../shared/schemas/purchasing';
+import { documentLine } from './purchasing.presenter';
 import type { PurchasingRepository } from './purchasing.repository';
 
 /** Fabric is ordered in whole 100 mm steps; counted trims in whole units; others to 0.01. */
@@ -126,18 +128,22 @@ export function createPurchasingService(deps: {
   }
 
   async function workbook(studioId: number, order: PurchaseOrderEntity) {
-    const [studio, supplier] = await Promise.all([repo.studio(studioId), repo.supplier(studioId, order.supplierId)]);
+    const [studio, supplier, batch] = await Promise.all([
+      repo.studio(studioId),
+      repo.supplier(studioId, order.supplierId),
+      order.batchId ? repo.batch(studioId, order.batchId) : null,
+    ]);
     return deps.jobs.run('purchase-order.xlsx', {
       studioName: studio.name,
       dateIso: deps.now().toISOString(),
       ...documentSettings(studio),
       currency: studio.currency,
       unitSystem: studio.unitSystem,
-      poNumber: poNumber(order.id),
+      poNumber: poNumber(order),
       supplier: { name: supplier?.name ?? '', contact: supplier?.contact || undefined },
       deliveryDateIso: order.deliveryDate,
       lines: order.lines.map((l) => documentLine(l, studio.unitSystem)),
-      notes: order.batchId ? `For batch B-${String(order.batchId).padStart(4, '0')}` : undefined,
+      notes: batch ? `For batch ${batchCode(batch)}` : undefined,
     });
   }
 
@@ -148,7 +154,7 @@ export function createPurchasingService(deps: {
     const [studio, supplier] = await Promise.all([repo.studio(studioId), repo.supplier(studioId, order.supplierId)]);
     if (!supplier) throw notFound('Supplier');
     const buffer = await workbook(studioId, order);
-    const number = poNumber(order.id);
+    const number = poNumber(order);
     const text = [
       `Dear ${supplier.contact || supplier.name},`,
       '',

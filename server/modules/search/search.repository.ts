@@ -1,4 +1,4 @@
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import { BatchEntity, BundleEntity, LayEntity, RollEntity, StyleEntity, UserEntity } from '../../entities';
 
 const LIMIT = 5;
@@ -11,7 +11,9 @@ export function createSearchRepository(ds: DataSource) {
   return {
     bundlesByNumber: (studioId: number, number: number, batchId?: number) =>
       ds.getRepository(BundleEntity).find({ where: { studioId, number, ...(batchId ? { batchId } : {}) }, order: { batchId: 'DESC' }, take: LIMIT }),
-    batchById: (studioId: number, id: number) => ds.getRepository(BatchEntity).findOne({ where: { studioId, id }, relations: { style: true } }),
+    /** The batch a typed code (B-0003) means: its number in this studio, never its id. */
+    batchByNumber: (studioId: number, number: number) => ds.getRepository(BatchEntity).findOne({ where: { studioId, number }, relations: { style: true } }),
+    batchesByIds: (studioId: number, ids: number[]) => (ids.length ? ds.getRepository(BatchEntity).find({ where: { studioId, id: In(ids) } }) : Promise.resolve([])),
     stylesByText: (studioId: number, text: string) =>
       ds.getRepository(StyleEntity).createQueryBuilder('s')
         .where('s.studioId = :studioId', { studioId })

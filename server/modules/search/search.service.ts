@@ -2,7 +2,7 @@ import { can } from '../../../shared/auth/permissions';
 import { parseBundleQr } from '../../../shared/schemas/floor';
 import type { SearchHitDto } from '../../../shared/schemas/search';
 import type { Actor } from '../../auth/require';
-import { batchCode } from '../batches/batch.routes';
+import { batchCode } from '../../../shared/schemas/batches';
 import type { SearchRepository } from './search.repository';
 
 const BATCH_CODE = /^b-?0*(\d{1,9})$/i;
@@ -20,16 +20,18 @@ export function createSearchService(repo: SearchRepository) {
       const number = /^\d{1,9}$/.test(q) ? Number(q) : null;
       if (can(actor.role, 'bundles:read') && (qr || number !== null)) {
         const bundles = qr ? await repo.bundlesByNumber(studioId, qr.bundleNumber, qr.batchId) : await repo.bundlesByNumber(studioId, number!);
+        const batches = new Map((await repo.batchesByIds(studioId, [...new Set(bundles.map((b) => b.batchId))])).map((b) => [b.id, b]));
         for (const b of bundles) {
-          hits.push({ kind: 'bundle', id: b.id, title: `${b.number}`, detail: `${batchCode(b.batchId)} · ${b.size} · ${b.pieces}`, layId: b.layId });
+          const batch = batches.get(b.batchId);
+          hits.push({ kind: 'bundle', id: b.id, title: `${b.number}`, detail: `${batch ? batchCode(batch) : ''} · ${b.size} · ${b.pieces}`, layId: b.layId });
         }
       }
-      const batchId = BATCH_CODE.exec(q)?.[1];
-      if (can(actor.role, 'batches:read') && batchId) {
-        const batch = await repo.batchById(studioId, Number(batchId));
+      const batchNumber = BATCH_CODE.exec(q)?.[1];
+      if (can(actor.role, 'batches:read') && batchNumber) {
+        const batch = await repo.batchByNumber(studioId, Number(batchNumber));
         if (batch) {
           const lay = await repo.firstLayOf(studioId, batch.id);
-          hits.push({ kind: 'batch', id: batch.id, title: batchCode(batch.id), detail: batch.style?.name ?? '', ...(lay ? { layId: lay.id } : {}) });
+          hits.push({ kind: 'batch', id: batch.id, title: batchCode(batch), detail: batch.style?.name ?? '', ...(lay ? { layId: lay.id } : {}) });
         }
       }
       if (can(actor.role, 'styles:read')) {

@@ -7,6 +7,8 @@ export interface AuditEntry {
   action: string;
   entity: string;
   entityId: number | null;
+  /** B-0003, PO-0002, 4: what people call a batch, order or pay period (its number in the studio); null otherwise. */
+  record: string | null;
   before: string;
   after: string;
   createdAt: string;
@@ -40,7 +42,7 @@ const words = (key: string) => key.replace(/([a-z])([A-Z])/g, '$1 $2').replace(/
 export function auditSentence(e: AuditEntry, t: TFunction): string {
   const action = t(`audit.actions.${e.action}`, { defaultValue: words(e.action) });
   const entity = t(`audit.entities.${e.entity}`, { defaultValue: words(e.entity) });
-  const record = e.entityId && e.entity !== 'studio' ? `${entity} #${e.entityId}` : entity;
+  const record = e.record ? `${entity} ${e.record}` : e.entityId && e.entity !== 'studio' ? `${entity} #${e.entityId}` : entity;
   return t('audit.sentence', { who: e.userName, action, record });
 }
 

@@ -56,7 +56,7 @@ function PayoutRow({ period, line, payout }: { period: PayPeriodDto; line: PayPe
 function PeriodCard({ period }: { period: PayPeriodDto }) {
   const { t } = useTranslation();
   const [error, setError] = useState<unknown>(null);
-  const title = t(`${area}.pay.periodTitle`, { from: formatDate(period.fromDay), to: formatDate(period.toDay) });
+  const title = t(`${area}.pay.periodTitle`, { number: period.number, from: formatDate(period.fromDay), to: formatDate(period.toDay) });
   return (
     <Card title={<span>{title} <Badge tone={period.status === 'paid' ? 'teal' : 'blue'}>{t(`${area}.pay.periodStatus.${period.status}`)}</Badge></span>}>
       <p className="text-sm text-ink-600">{t(`${area}.pay.approvedBy`, { name: period.approvedBy, total: formatMoney(period.totalMinor, period.currency) })}</p>
@@ -104,7 +104,7 @@ export function PayPage() {
             />
           </div>
           <ErrorNote error={approve.error ?? preview.error} />
-          {preview.data?.overlapsPeriodId ? <p className="mt-2 text-sm text-saffron-700">{t(`${area}.pay.overlaps`, { id: preview.data.overlapsPeriodId })}</p> : null}
+          {preview.data?.overlapsPeriodId ? <p className="mt-2 text-sm text-saffron-700">{t(`${area}.pay.overlaps`, { number: preview.data.overlapsPeriodNumber })}</p> : null}
           {preview.data?.carriedLogs ? (
             <p className="mt-2 text-sm text-ink-600">{t(`${area}.pay.carried`, { count: preview.data.carriedLogs })}</p>
           ) : null}

@@ -25,7 +25,7 @@ const tone = { queued: 'grey', running: 'blue', done: 'teal', failed: 'red', can
 const w = (key: string, values?: Record<string, unknown>) => i18n.t(`${area}.${key}`, values);
 const b = { b: <b /> };
 
-function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
+function MarkerView({ id, sizes, batchCode }: { id: number; sizes: string[]; batchCode: string }) {
   const { data: marker } = useQuery(markerQueries.detail(id));
   const cancel = useCancelMarker();
   const canWrite = useCan('markers:write');
@@ -64,9 +64,9 @@ function MarkerView({ id, sizes }: { id: number; sizes: string[] }) {
         <div className="mt-3 space-y-2">
           <MarkerDrawing drawing={marker.drawing} lengthMm={marker.lengthMm} widthMm={marker.widthMm} sizes={sizes} />
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `${markerFileName(marker)}.svg`)}>{w('view.svg')}</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `${markerFileName(marker)}.dxf`)}>{w('view.dxf')}</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/plot.pdf`, `${markerFileName(marker)}.pdf`)}>{w('view.pdf')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/svg`, `${markerFileName(marker, batchCode)}.svg`)}>{w('view.svg')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/dxf`, `${markerFileName(marker, batchCode)}.dxf`)}>{w('view.dxf')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/markers/${marker.id}/plot.pdf`, `${markerFileName(marker, batchCode)}.pdf`)}>{w('view.pdf')}</button>
           </div>
         </div>
       ) : null}
@@ -151,7 +151,7 @@ export function MarkersPage() {
       </div>
       <div className="space-y-5">
         {canWrite ? <StartForm key={batch.id} batch={batch} fabrics={fabrics} plan={plan} sizes={sizes} onStarted={(mk) => setOpenId(mk.id)} /> : null}
-        {shown !== null ? <MarkerView id={shown} sizes={sizes} /> : null}
+        {shown !== null ? <MarkerView id={shown} sizes={sizes} batchCode={batch.code} /> : null}
         <Card title={w('ofBatch')}>
           {markers.length === 0 ? <p className="text-sm text-ink-600">{w('none')}</p> : null}
           <ul className="divide-y divide-calico-200 text-sm">
@@ -170,5 +170,5 @@ export function MarkersPage() {
   );
 }
 
-/** The batch goes in every marker file name, as the server names them. */
-const markerFileName = (m: { id: number; batchId: number | null }) => `marker-${m.batchId ? `B-${String(m.batchId).padStart(4, '0')}-` : ''}${m.id}`;
+/** The batch goes in every marker file name, as the server names them: its code in the studio (the markers listed are the batch's own). */
+const markerFileName = (m: { id: number; batchId: number | null }, batchCode: string) => `marker-${m.batchId ? `${batchCode}-` : ''}${m.id}`;
