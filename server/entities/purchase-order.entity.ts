@@ -39,6 +39,14 @@ export class PurchaseOrderEntity {
   @Column({ type: 'varchar', length: 10 })
   deliveryDate: string;
 
+  /** Goes up by one with each receipt: a receipt saves only over the revision it read, so two at once never both add stock. */
+  @Column({ type: 'integer', default: 0 })
+  revision: number;
+
+  /** The keys of the receipts already taken in (newest last): a receipt sent again with its key adds nothing twice. */
+  @Column({ type: 'simple-json', nullable: true })
+  receiptKeys: string[] | null;
+
   @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 

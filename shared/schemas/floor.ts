@@ -27,6 +27,24 @@ export function idempotencyKeyAuthor(key: string): number | null {
 export const OPERATION_SECTIONS = ['cutting', 'sewing', 'finishing'] as const;
 export type OperationSection = (typeof OPERATION_SECTIONS)[number];
 
+/** How far back a log that waited offline may be dated: a shift, a night and a weekend. Older ones are dated on arrival. */
+export const OFFLINE_LOG_MAX_AGE_HOURS = 72;
+/** Device clocks run a little ahead; a doneAt up to this far past the server's clock reads as now. */
+export const OFFLINE_LOG_CLOCK_SKEW_MS = 5 * 60_000;
+
+/**
+ * The time a log is dated: the device's doneAt when it is plausible (not older than the offline window, not
+ * ahead of the server by more than the clock skew, never later than now), else the time it arrived.
+ */
+export function logDate(doneAt: string | undefined, arrived: Date): Date {
+  if (!doneAt) return arrived;
+  const t = Date.parse(doneAt);
+  if (!Number.isFinite(t)) return arrived;
+  const now = arrived.getTime();
+  if (t > now + OFFLINE_LOG_CLOCK_SKEW_MS || t < now - OFFLINE_LOG_MAX_AGE_HOURS * 3_600_000) return arrived;
+  return new Date(Math.min(t, now));
+}
+
 /** Log one operation done on one bundle. A quality check also says pass or fail. */
 export const logWorkInput = z
   .object({
@@ -42,6 +60,11 @@ export const logWorkInput = z
     defect: safeText(200).optional(),
     /** On a failed check: the operation to do again (rework). */
     reworkOperationId: z.number().int().positive().optional(),
+    /**
+     * When the work was done, for a log that waited on the device for the network. The server keeps it when it
+     * is in the last OFFLINE_LOG_MAX_AGE_HOURS and not ahead of its own clock; otherwise the log is dated on arrival.
+     */
+    doneAt: z.iso.datetime({ offset: true, error: 'A date and time, e.g. 2026-12-05T09:30:00Z' }).optional(),
   })
   .superRefine((v, ctx) => {
     if (v.outcome === 'fail' && !v.defect) ctx.addIssue({ code: 'custom', path: ['defect'], message: 'Say what the defect is' });

@@ -63,6 +63,8 @@ export interface PurchaseOrderDto {
   deliveryDate: string;
   lines: PurchaseOrderLineDto[];
   totalMinor: number;
+  /** Up by one with each receipt; a receipt form sends the revision it was filled from. */
+  revision: number;
   createdAt: string;
   updatedAt: string;
 }
@@ -109,6 +111,17 @@ const rollInput = z.object({
 });
 
 export const receiveOrderInput = z.object({
+  /**
+   * This receipt's own key, made once by the form (or the caller) and sent again unchanged on a retry: a receipt
+   * whose key the order already holds adds nothing a second time.
+   */
+  receiptKey: z
+    .string({ error: 'Send a key for this receipt' })
+    .min(8, 'Key too short')
+    .max(64, 'Key too long')
+    .regex(/^[A-Za-z0-9_.:-]+$/, 'Letters, digits and - _ . : only'),
+  /** The order's revision the form was filled from: a receipt made from an out-of-date form is refused. */
+  revision: z.number().int().min(0).optional(),
   receivedDate: calendarDate.optional(),
   lines: z
     .array(

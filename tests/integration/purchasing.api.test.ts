@@ -99,12 +99,12 @@ describe('suppliers and purchase orders', () => {
     const po = (await owner.post('/api/purchasing/orders').send({ supplierId: mill.id, batchId: 1, lines: [{ kind: 'fabric', refId: fabric.refId, quantity: 29_950 }] })).body.order;
     expect(po.lines[0]).toMatchObject({ quantity: 30_000, unit: 'mm', unitPriceMinor: fabric.unitPriceMinor });
     expect(po.totalMinor).toBe(30 * fabric.unitPriceMinor);
-    expect((await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ lines: [{ index: 0, rolls: [{ label: 'R', lengthMm: 1, shadeLot: 'A' }] }] })).status).toBe(409);
+    expect((await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ receiptKey: 'test-receipt-004', lines: [{ index: 0, rolls: [{ label: 'R', lengthMm: 1, shadeLot: 'A' }] }] })).status).toBe(409);
     await owner.post(`/api/purchasing/orders/${po.id}/send`);
     const rollsBefore = await ds.getRepository(RollEntity).count();
-    const dup = await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ lines: [{ index: 0, rolls: [{ label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }, { label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }] }] });
+    const dup = await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ receiptKey: 'test-receipt-005', lines: [{ index: 0, rolls: [{ label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }, { label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }] }] });
     expect(dup.status).toBe(400);
-    const got = await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ lines: [{ index: 0, rolls: [{ label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }, { label: 'MV-2', lengthMm: 15000, shadeLot: 'A' }] }] });
+    const got = await owner.post(`/api/purchasing/orders/${po.id}/receive`).send({ receiptKey: 'test-receipt-006', lines: [{ index: 0, rolls: [{ label: 'MV-1', lengthMm: 15000, shadeLot: 'A' }, { label: 'MV-2', lengthMm: 15000, shadeLot: 'A' }] }] });
     expect(got.status).toBe(200);
     expect(got.body.order.status).toBe('received');
     expect(await ds.getRepository(RollEntity).count()).toBe(rollsBefore + 2);
@@ -113,7 +113,7 @@ describe('suppliers and purchase orders', () => {
 
     const trimsPo = (await owner.get('/api/purchasing/orders')).body.orders.find((o: { supplierName: string; status: string }) => o.supplierName === 'Baobab Notions Supply' && o.status === 'sent');
     const buttonsIdx = trimsPo.lines.findIndex((l: { item: string }) => l.item.startsWith('Shirt buttons'));
-    const part = await owner.post(`/api/purchasing/orders/${trimsPo.id}/receive`).send({ lines: [{ index: buttonsIdx, quantity: 250 }] });
+    const part = await owner.post(`/api/purchasing/orders/${trimsPo.id}/receive`).send({ receiptKey: 'test-receipt-007', lines: [{ index: buttonsIdx, quantity: 250 }] });
     expect(part.body.order.status).toBe('confirmed');
     const buttons = await ds.getRepository(TrimEntity).findOneByOrFail({ id: trimsPo.lines[buttonsIdx].refId });
     expect(buttons.inStock).toBe(400);

@@ -31,7 +31,7 @@ describe('upper bounds on receipts, stock, quantities and prices', () => {
   it('refuses a receipt of 1e308 with a 400 naming the quantity, and the stock stays as it was', async () => {
     const orderId = await sentTrimOrder(100);
     const before = await stockOf(trimId);
-    const res = await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ lines: [{ index: 0, quantity: 1e308 }] });
+    const res = await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ receiptKey: 'test-receipt-001', lines: [{ index: 0, quantity: 1e308 }] });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['lines.0.quantity']).toBe('At most 10,000,000 in one receipt');
     expect(await stockOf(trimId)).toBe(before);
@@ -40,13 +40,13 @@ describe('upper bounds on receipts, stock, quantities and prices', () => {
   it('refuses a receipt that would take the stock on hand past ten million, naming the line', async () => {
     expect((await owner.put(`/api/costing/trims/${trimId}`).send({ inStock: 9_999_990 })).status).toBe(200);
     const orderId = await sentTrimOrder(100);
-    const res = await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ lines: [{ index: 0, quantity: 100 }] });
+    const res = await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ receiptKey: 'test-receipt-002', lines: [{ index: 0, quantity: 100 }] });
     expect(res.status).toBe(400);
     expect(res.body.error.fields['lines.0.quantity']).toMatch(/would hold more than 10,000,000 .* in stock$/);
     expect(await stockOf(trimId)).toBe(9_999_990);
     // Within the bound the same receipt goes through.
     expect((await owner.put(`/api/costing/trims/${trimId}`).send({ inStock: 150 })).status).toBe(200);
-    expect((await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ lines: [{ index: 0, quantity: 100 }] })).status).toBe(200);
+    expect((await owner.post(`/api/purchasing/orders/${orderId}/receive`).send({ receiptKey: 'test-receipt-003', lines: [{ index: 0, quantity: 100 }] })).status).toBe(200);
     expect(await stockOf(trimId)).toBe(250);
   });
 

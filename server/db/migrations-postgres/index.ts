@@ -13,6 +13,7 @@ import { PayRules1796373684413 } from './1796373684413-PayRules';
 import { FabricPricesShrinkageAndCorrections1796374281784 } from './1796374281784-FabricPricesShrinkageAndCorrections';
 import { WorkingCalendar1796374772013 } from './1796374772013-WorkingCalendar';
 import { StudioNumbers1796437123459 } from './1796437123459-StudioNumbers';
+import { OrderReceiptKeys1796443579000 } from './1796443579000-OrderReceiptKeys';
 
 /** PostgreSQL migrations, generated from the same entities (`DATABASE_URL=postgres://… npm run db:generate -- Name`). */
-export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816, SkillsAndMachines1796363634850, ManyProcesses1796363770917, CostingLabourBasis1796365596933, StyleComposition1796367105713, StudioLanguageAndTimeZone1796372876444, OperationTimeStudy1796373145103, PayRules1796373684413, FabricPricesShrinkageAndCorrections1796374281784, WorkingCalendar1796374772013, StudioNumbers1796437123459];
+export const postgresMigrations: Function[] = [Initial1796168535359, PayoutAccount1796181395083, FloorSignInAndBundleNumbers1796361960738, PayoutFreezeAndLogPayPeriod1796362059995, RollReservations1796362119816, SkillsAndMachines1796363634850, ManyProcesses1796363770917, CostingLabourBasis1796365596933, StyleComposition1796367105713, StudioLanguageAndTimeZone1796372876444, OperationTimeStudy1796373145103, PayRules1796373684413, FabricPricesShrinkageAndCorrections1796374281784, WorkingCalendar1796374772013, StudioNumbers1796437123459, OrderReceiptKeys1796443579000];

@@ -1,7 +1,7 @@
 import { can, canLogSection, ROLE_LABELS } from '../../../shared/auth/permissions';
 import { computePeriodPay, zonedDay, zonedDayStart } from '@planning';
 import type { BundleChoiceDto, BundleDto, BundleOperationState, LogWorkInput, LogWorkResult, MyFiguresDto, MySummaryDto, ReworkDto, TodayDto } from '../../../shared/schemas/floor';
-import { idempotencyKeyAuthor, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
+import { idempotencyKeyAuthor, logDate, UNDO_WINDOW_MS } from '../../../shared/schemas/floor';
 import type { Actor } from '../../auth/require';
 import type { BatchEntity, BundleEntity, OperationEntity, WorkLogEntity } from '../../entities';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../errors';
@@ -272,7 +272,8 @@ export function createFloorService(deps: { repo: FloorRepository; audit: AuditRe
           idempotencyKey: input.idempotencyKey,
           outcome: input.outcome ?? '',
           defect: input.outcome === 'fail' ? (input.defect ?? '') : '',
-          createdAt: now(),
+          // A log that waited offline keeps the time it was done (within bounds), so it counts on its own day.
+          createdAt: logDate(input.doneAt, now()),
         });
       } catch (e) {
         if (!isUniqueViolation(e)) throw e;

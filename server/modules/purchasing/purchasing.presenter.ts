@@ -47,6 +47,7 @@ export function presentOrder(o: PurchaseOrderEntity, supplier: SupplierEntity | 
     deliveryDate: o.deliveryDate,
     lines,
     totalMinor: lines.reduce((a, l) => a + l.lineTotalMinor, 0),
+    revision: o.revision ?? 0,
     createdAt: new Date(o.createdAt).toISOString(),
     updatedAt: new Date(o.updatedAt).toISOString(),
   };

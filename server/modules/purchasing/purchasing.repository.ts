@@ -1,4 +1,6 @@
+import { isUniqueViolation } from '../../db/data-source';
 import { insertWithStudioNumber } from '../../db/studio-number';
+import { conflict } from '../../errors';
 import { updateIfChanged } from '../../db/update-if-changed';
 import { In, Not, type DataSource } from 'typeorm';
 import { FabricEntity, PurchaseOrderEntity, RollEntity, RollReservationEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
@@ -51,17 +53,41 @@ export function createPurchasingRepository(ds: DataSource) {
       await orders.update({ studioId, id }, { status });
       return orders.findOneByOrFail({ studioId, id });
     },
-    /** Receiving in one transaction: rolls for fabric lines, stock for trims, the order's lines and status. */
+    /** Labels among `labels` that a roll of this studio already has. */
+    async rollLabelsTaken(studioId: number, labels: string[]) {
+      const found = await ds.getRepository(RollEntity).find({ select: { label: true }, where: { studioId, label: In(labels) } });
+      return found.map((r) => r.label);
+    },
+    /**
+     * Receiving in one transaction: the order's lines, status and receipt keys first, saved only over the revision
+     * the receipt was worked out from (so of two receipts at once only one adds stock), then rolls for fabric lines
+     * and stock for trims. Null when another receipt saved first; nothing is written then.
+     */
     receive(
       studioId: number,
       order: PurchaseOrderEntity,
+      readRevision: number,
       rolls: Partial<RollEntity>[],
       trimStock: { trimId: number; add: number }[],
-    ) {
+    ): Promise<PurchaseOrderEntity | null> {
       return ds.transaction(async (m) => {
-        if (rolls.length) await m.getRepository(RollEntity).save(rolls.map((r) => m.getRepository(RollEntity).create({ ...r, studioId })));
+        const claimed = await m
+          .createQueryBuilder()
+          .update(PurchaseOrderEntity)
+          .set({ lines: order.lines, status: order.status, receiptKeys: order.receiptKeys, revision: () => '"revision" + 1' })
+          .where('"studioId" = :studioId AND "id" = :id AND "revision" = :readRevision', { studioId, id: order.id, readRevision })
+          .execute();
+        if (!claimed.affected) return null;
+        if (rolls.length) {
+          try {
+            await m.getRepository(RollEntity).insert(rolls.map((r) => m.getRepository(RollEntity).create({ ...r, studioId })));
+          } catch (e) {
+            // A roll of the same label saved meanwhile: the whole receipt is undone and the caller told why.
+            if (isUniqueViolation(e)) throw conflict('A roll with one of these labels was saved meanwhile: give each roll its own label', { lines: 'Roll label already in stock' });
+            throw e;
+          }
+        }
         for (const t of trimStock) await m.getRepository(TrimEntity).increment({ studioId, id: t.trimId }, 'inStock', t.add);
-        await m.getRepository(PurchaseOrderEntity).update({ studioId, id: order.id }, { lines: order.lines, status: order.status });
         return m.getRepository(PurchaseOrderEntity).findOneByOrFail({ studioId, id: order.id });
       });
     },

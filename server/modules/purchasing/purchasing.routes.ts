@@ -100,9 +100,10 @@ export function purchasingRoutes(repo: PurchasingRepository, service: Purchasing
   });
   r.post('/orders/:id/receive', validate({ params: idParam, body: receiveOrderInput }), async (req, res) => {
     const actor = actorOf(req);
-    const { before, after, rolls } = await service.receive(actor.studioId, Number(req.params.id), req.body);
-    await ctx.audit.record(actor, 'receive', 'purchase_order', after.id, { status: before.status, lines: before.lines }, { status: after.status, lines: after.lines, rolls });
-    res.json({ order: await presentOne(actor.studioId, after), rollsAdded: rolls });
+    const { before, after, rolls, repeated } = await service.receive(actor.studioId, Number(req.params.id), req.body);
+    // A repeated receipt changed nothing: it answers with the order as it stands and leaves no second audit entry.
+    if (!repeated) await ctx.audit.record(actor, 'receive', 'purchase_order', after.id, { status: before.status, lines: before.lines }, { status: after.status, lines: after.lines, rolls, receiptKey: req.body.receiptKey });
+    res.json({ order: await presentOne(actor.studioId, after), rollsAdded: rolls, repeated });
   });
   return r;
 }

@@ -12,6 +12,9 @@ import { netFabricNeed } from '../../../planning/index';
 import { batchCode } from '../../../shared/schemas/batches';
 import { poNumber } from '../../../shared/schemas/purchasing';
 import { documentLine } from './purchasing.presenter';
+
+/** Receipt keys an order keeps: far more receipts than any order has, so a retry is always recognised. */
+const MAX_RECEIPT_KEYS = 200;
 import type { PurchasingRepository } from './purchasing.repository';
 
 /** Fabric is ordered in whole 100 mm steps; counted trims in whole units; others to 0.01. */
@@ -176,11 +179,18 @@ export function createPurchasingService(deps: {
     return { before: order, after, messageId: sent.messageId, mailId: sent.id };
   }
 
-  async function receive(studioId: number, id: number, input: ReceiveOrderInput) {
+  async function receive(studioId: number, id: number, input: ReceiveOrderInput): Promise<{ before: PurchaseOrderEntity; after: PurchaseOrderEntity; rolls: number; repeated: boolean }> {
     const order = await repo.order(studioId, id);
     if (!order) throw notFound('Purchase order');
+    // The same receipt sent again (a retry, a second tap, a reload) answers as the first did and adds nothing.
+    if (order.receiptKeys?.includes(input.receiptKey)) return { before: order, after: order, rolls: 0, repeated: true };
     if (order.status === 'draft') throw conflict('Send the order before receiving it');
     if (order.status === 'received') throw conflict('This order is already received');
+    if (input.revision !== undefined && input.revision !== (order.revision ?? 0)) {
+      throw conflict('This order was received by someone else since this form was opened; look at what is still to come and try again', {
+        revision: 'Out of date',
+      });
+    }
     const before = structuredClone(order);
     const receivedDate = input.receivedDate ?? format(deps.now(), 'yyyy-MM-dd');
     const rolls: Partial<RollEntity>[] = [];
@@ -211,9 +221,16 @@ export function createPurchasingService(deps: {
     if (Object.keys(fields).length) throw badRequest(Object.values(fields)[0], fields);
     const labels = rolls.map((r) => r.label);
     if (new Set(labels).size !== labels.length) throw badRequest('Each roll needs its own label', { lines: 'Each roll needs its own label' });
+    const taken = labels.length ? await repo.rollLabelsTaken(studioId, labels as string[]) : [];
+    if (taken.length) throw conflict(`Roll ${taken[0]} is already in stock: give each roll its own label`, { lines: `Roll ${taken[0]} is already in stock` });
     order.status = order.lines.every((l) => (l.receivedQuantity ?? 0) >= l.quantity) ? 'received' : 'confirmed';
-    const after = await repo.receive(studioId, order, rolls, trimStock);
-    return { before, after, rolls: rolls.length };
+    order.receiptKeys = [...(order.receiptKeys ?? []), input.receiptKey].slice(-MAX_RECEIPT_KEYS);
+    const saved = await repo.receive(studioId, order, before.revision ?? 0, rolls, trimStock);
+    if (saved) return { before, after: saved, rolls: rolls.length, repeated: false };
+    // Another receipt saved first. If it was this one (the same key, sent twice at once), answer as it did.
+    const now = await repo.order(studioId, id);
+    if (now?.receiptKeys?.includes(input.receiptKey)) return { before: now, after: now, rolls: 0, repeated: true };
+    throw conflict('This order was received by someone else at the same moment; look at what is still to come and try again', { revision: 'Out of date' });
   }
 
   return { needs, createOrders, items, createOrder, workbook, send, receive };

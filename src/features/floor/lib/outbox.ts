@@ -74,9 +74,10 @@ export async function sendLog(input: LogWorkInput, label: string, author: { id: 
     return { kind: 'sent', result: await api.post<LogWorkResult>('/floor/logs', input) };
   } catch (e) {
     if (!isRetryable(e)) throw e;
+    const queuedAt = new Date().toISOString();
     writeOutbox([
       ...readOutbox().filter((q) => q.input.idempotencyKey !== input.idempotencyKey),
-      { input, label, authorId: author.id, authorName: author.name, queuedAt: new Date().toISOString() },
+      { input: { ...input, doneAt: input.doneAt ?? queuedAt }, label, authorId: author.id, authorName: author.name, queuedAt },
     ]);
     return { kind: 'queued' };
   }
@@ -94,7 +95,8 @@ export function flushOutbox(userId: number) {
     const refused: string[] = [];
     for (const item of waitingFor(userId)) {
       try {
-        await api.post<LogWorkResult>('/floor/logs', item.input);
+        // Dated when it was done, not when the network came back (logs queued before doneAt use their queue time).
+        await api.post<LogWorkResult>('/floor/logs', { ...item.input, doneAt: item.input.doneAt ?? item.queuedAt });
         sent += 1;
       } catch (e) {
         // Not now (offline), or the session changed hands mid-send: keep it for its author.

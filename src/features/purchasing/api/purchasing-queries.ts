@@ -48,5 +48,6 @@ export const useConfirmOrder = () =>
 export const useReceiveOrder = () =>
   useMutation({
     mutationFn: ({ id, ...body }: ReceiveOrderInput & { id: number }) => api.post<{ order: PurchaseOrderDto }>(`/purchasing/orders/${id}/receive`, body),
-    onSuccess: invalidate,
+    // Refused too: a receipt refused as out of date shows the order as it now stands behind the form.
+    onSettled: invalidate,
   });

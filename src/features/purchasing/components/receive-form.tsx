@@ -12,6 +12,12 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
   const { t } = useTranslation();
   const w = (key: string, values?: Record<string, unknown>) => t(`${area}.receiveForm.${key}`, values);
   const receive = useReceiveOrder();
+  // One key for this form's receipt: a second tap or a retry after a dropped answer sends it again, and the
+  // server adds the goods once. The revision it was filled from makes a form left open while someone else
+  // received the order fail plainly instead of adding the same goods again.
+  // (getRandomValues, not randomUUID: the studio may serve the app over plain http on its own network.)
+  const [revision] = useState(order.revision);
+  const [receiptKey] = useState(() => `rcpt-${order.id}-${Array.from(crypto.getRandomValues(new Uint8Array(12)), (b) => b.toString(16).padStart(2, '0')).join('')}`);
   const [v, setV] = useState(() =>
     order.lines.map((l, i) => ({ label: `${order.number}-R${i + 1}`, metres: fabricInputText(Math.max(0, l.quantity - l.receivedQuantity)), shadeLot: 'A', quantity: trimByYard(l.unit) ? fabricInputText(Math.max(0, l.quantity - l.receivedQuantity) * 1000) : String(Math.max(0, l.quantity - l.receivedQuantity)) })),
   );
@@ -30,7 +36,7 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
         ? { index: i, rolls: [{ label: v[i].label, lengthMm: lengths[i] ?? 0, shadeLot: v[i].shadeLot }] }
         : { index: i, quantity: trimByYard(l.unit) ? (readFabricInput(v[i].quantity) ?? Number.NaN) / 1000 : Number(v[i].quantity) },
     );
-    await receive.mutateAsync({ id: order.id, lines });
+    await receive.mutateAsync({ id: order.id, receiptKey, revision, lines });
     onDone();
   };
   return (
