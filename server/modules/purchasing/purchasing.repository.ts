@@ -1,6 +1,7 @@
 import { isUniqueViolation } from '../../db/data-source';
 import { insertWithStudioNumber } from '../../db/studio-number';
 import { conflict } from '../../errors';
+import { said } from '../../../shared/i18n/speak';
 import { updateIfChanged } from '../../db/update-if-changed';
 import { In, Not, type DataSource } from 'typeorm';
 import { FabricEntity, PurchaseOrderEntity, RollEntity, RollReservationEntity, StudioEntity, SupplierEntity, TrimEntity, BatchEntity } from '../../entities';
@@ -83,7 +84,7 @@ export function createPurchasingRepository(ds: DataSource) {
             await m.getRepository(RollEntity).insert(rolls.map((r) => m.getRepository(RollEntity).create({ ...r, studioId })));
           } catch (e) {
             // A roll of the same label saved meanwhile: the whole receipt is undone and the caller told why.
-            if (isUniqueViolation(e)) throw conflict('A roll with one of these labels was saved meanwhile: give each roll its own label', { lines: 'Roll label already in stock' });
+            if (isUniqueViolation(e)) throw conflict(said('rollSavedMeanwhile'), { lines: said('rollSavedMeanwhile') });
             throw e;
           }
         }

@@ -11,6 +11,7 @@ import type { MailService } from '../mail/mail.service';
 import { netFabricNeed } from '../../../planning/index';
 import { batchCode } from '../../../shared/schemas/batches';
 import { poNumber } from '../../../shared/schemas/purchasing';
+import { said } from '../../../shared/i18n/speak';
 import { documentLine } from './purchasing.presenter';
 
 /** Receipt keys an order keeps: far more receipts than any order has, so a retry is always recognised. */
@@ -187,9 +188,7 @@ export function createPurchasingService(deps: {
     if (order.status === 'draft') throw conflict('Send the order before receiving it');
     if (order.status === 'received') throw conflict('This order is already received');
     if (input.revision !== undefined && input.revision !== (order.revision ?? 0)) {
-      throw conflict('This order was received by someone else since this form was opened; look at what is still to come and try again', {
-        revision: 'Out of date',
-      });
+      throw conflict(said('receiptOutOfDate'), { revision: said('outOfDate') });
     }
     const before = structuredClone(order);
     const receivedDate = input.receivedDate ?? format(deps.now(), 'yyyy-MM-dd');
@@ -222,7 +221,7 @@ export function createPurchasingService(deps: {
     const labels = rolls.map((r) => r.label);
     if (new Set(labels).size !== labels.length) throw badRequest('Each roll needs its own label', { lines: 'Each roll needs its own label' });
     const taken = labels.length ? await repo.rollLabelsTaken(studioId, labels as string[]) : [];
-    if (taken.length) throw conflict(`Roll ${taken[0]} is already in stock: give each roll its own label`, { lines: `Roll ${taken[0]} is already in stock` });
+    if (taken.length) throw conflict(said('rollInStockOwnLabel', { label: taken[0] }), { lines: said('rollInStock', { label: taken[0] }) });
     order.status = order.lines.every((l) => (l.receivedQuantity ?? 0) >= l.quantity) ? 'received' : 'confirmed';
     order.receiptKeys = [...(order.receiptKeys ?? []), input.receiptKey].slice(-MAX_RECEIPT_KEYS);
     const saved = await repo.receive(studioId, order, before.revision ?? 0, rolls, trimStock);
@@ -230,7 +229,7 @@ export function createPurchasingService(deps: {
     // Another receipt saved first. If it was this one (the same key, sent twice at once), answer as it did.
     const now = await repo.order(studioId, id);
     if (now?.receiptKeys?.includes(input.receiptKey)) return { before: now, after: now, rolls: 0, repeated: true };
-    throw conflict('This order was received by someone else at the same moment; look at what is still to come and try again', { revision: 'Out of date' });
+    throw conflict(said('receiptRaced'), { revision: said('outOfDate') });
   }
 
   return { needs, createOrders, items, createOrder, workbook, send, receive };
