@@ -47,6 +47,8 @@ export class AppError extends Error {
 export const badRequest = (message: string | Said, fields?: Record<string, string | Said>) =>
   new AppError(400, 'validation', message, fields);
 export const unauthenticated = (message = 'Sign in first') => new AppError(401, 'unauthenticated', message);
+/** A refused sign-in that says more than the bare refusal (a warning before a lock), with its fields. */
+export const refusedSignIn = (message: Said, fields?: Record<string, string | Said>) => new AppError(401, 'unauthenticated', message, fields);
 export const forbidden = (message = 'Your role cannot do this') => new AppError(403, 'forbidden', message);
 export const notFound = (what = 'Record') => new AppError(404, 'not_found', `${what} not found`);
 export const conflict = (message: string | Said, fields?: Record<string, string | Said>) =>

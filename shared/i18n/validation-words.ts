@@ -24,7 +24,7 @@ export const FIELD_LABELS_FR: Record<string, string> = {
   from: 'Début', fromCentreMm: 'Distance du milieu', fromDay: 'Premier jour', fromStyleId: 'Modèle source',
   fullness: 'Ampleur', grainLine: 'Droit-fil', hasPin: 'Code attribué', heightMm: 'Hauteur', hemFlareMm: 'Évasement du bas',
   hemMm: 'Ourlet', hemTaperMm: 'Resserrement du bas', hemWidthMm: 'Largeur du bas', hipEaseMm: 'Aisance de hanches',
-  holidays: 'Jours fériés', id: 'Identifiant', idempotencyKey: 'Clé d’unicité', doneAt: 'Fait le', receiptKey: 'Clé de réception', revision: 'Version', inStock: 'En stock', index: 'Numéro',
+  holidays: 'Jours fériés', id: 'Identifiant', idempotencyKey: 'Clé d’unicité', pinLockedUntil: 'Code bloqué jusqu’à', passwordLockedUntil: 'Mot de passe bloqué jusqu’à', doneAt: 'Fait le', receiptKey: 'Clé de réception', revision: 'Version', inStock: 'En stock', index: 'Numéro',
   innerEdge: 'Bord intérieur', interfaced: 'Entoilé', isDirectional: 'Sens unique', keepExisting: 'Garder l’existant',
   key: 'Clé', kind: 'Sorte', kinds: 'Sortes', label: 'Étiquette', labourBasis: 'Base de la main-d’œuvre',
   labourCostPerMinuteMinor: 'Coût de la minute de main-d’œuvre', landmark: 'Repère', language: 'Langue',

@@ -1,6 +1,23 @@
 import { z } from 'zod';
 import { ROLES } from '../auth/permissions';
 
+/**
+ * A floor PIN: 4 to 6 digits, and not one of the PINs tried first (one digit repeated, or a straight run up or
+ * down such as 1234 or 9876): NIST SP 800-63B §5.1.1.2 asks that a chosen secret be checked against values
+ * known to be commonly used. The sign-in lock after a few failures does the rest.
+ */
+export const pinField = z
+  .string()
+  .regex(/^\d{4,6}$/, 'PIN is 4 to 6 digits')
+  .refine((pin) => !isObviousPin(pin), 'Too easy to guess: not one digit repeated or a run like 1234');
+
+/** One digit repeated (0000) or each digit one more, or one less, than the last (1234, 6543, 012345). */
+export function isObviousPin(pin: string): boolean {
+  if (!/^\d+$/.test(pin) || pin.length < 2) return false;
+  const steps = new Set([...pin].slice(1).map((c, i) => Number(c) - Number(pin[i])));
+  return steps.size === 1 && [0, 1, -1].includes([...steps][0]);
+}
+
 export const createPersonInput = z
   .object({
     name: z.string().trim().min(1, 'Name is required').max(120),
@@ -13,7 +30,7 @@ export const createPersonInput = z
       .regex(/^[a-z0-9._%+@-]+$/, 'Letters, digits and . _ % + - @ only'),
     role: z.enum(ROLES),
     temporaryPassword: z.string().min(10, 'At least 10 characters').max(200).optional(),
-    pin: z.string().regex(/^\d{4,6}$/, 'PIN is 4 to 6 digits').optional(),
+    pin: pinField.optional(),
   })
   .refine((v) => v.temporaryPassword || v.pin, {
     message: 'Give a temporary password or a PIN',
@@ -68,6 +85,10 @@ export const updatePersonInput = z.object({
 });
 export type UpdatePersonInput = z.infer<typeof updatePersonInput>;
 
+/** The owner gives someone a new floor PIN (a forgotten or locked one). */
+export const setPinInput = z.object({ pin: pinField });
+export type SetPinInput = z.infer<typeof setPinInput>;
+
 export const personSchema = z.object({
   id: z.number(),
   name: z.string(),
@@ -80,5 +101,9 @@ export const personSchema = z.object({
   /** The skills the line plan uses: the person's own, or the defaults for their role when `skillsSet` is false. */
   skills: z.record(z.string(), z.number()),
   skillsSet: z.boolean(),
+  /** Until when PIN sign-in is locked after too many wrong PINs (ISO), or null. */
+  pinLockedUntil: z.string().nullable(),
+  /** Until when password sign-in is locked, or null. */
+  passwordLockedUntil: z.string().nullable(),
 });
 export type PersonDto = z.infer<typeof personSchema>;

@@ -14,7 +14,7 @@ const ROUTES: { method: 'get' | 'post' | 'put' | 'patch'; path: string; permissi
   { method: 'get', path: '/api/studio', permission: null },
   { method: 'patch', path: '/api/studio', permission: 'studio:manage', body: () => ({ workingDayHours: 8 }) },
   { method: 'get', path: '/api/users', permission: 'people:manage' },
-  { method: 'post', path: '/api/users', permission: 'people:manage', body: () => ({ name: 'New Hand', email: `hand${Math.random().toString(36).slice(2)}@tamarind.example`, role: 'machinist', pin: '1234' }) },
+  { method: 'post', path: '/api/users', permission: 'people:manage', body: () => ({ name: 'New Hand', email: `hand${Math.random().toString(36).slice(2)}@tamarind.example`, role: 'machinist', pin: '4831' }) },
   { method: 'patch', path: '/api/users/3', permission: 'people:manage', body: () => ({ name: 'Achieng Mwende' }) },
   { method: 'get', path: '/api/styles', permission: 'styles:read' },
   { method: 'get', path: '/api/styles/1', permission: 'styles:read' },

@@ -1,4 +1,4 @@
-import { translate } from '../../../shared/i18n/speak';
+import { said, translate } from '../../../shared/i18n/speak';
 import { createHash, randomBytes } from 'node:crypto';
 import { Router, type Request, type Response } from 'express';
 import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';
@@ -15,7 +15,7 @@ import {
   type FloorListDto,
 } from '../../../shared/schemas/auth';
 import { actorOf, requireAuth, requirePermission, type Actor } from '../../auth/require';
-import { AppError } from '../../errors';
+import { AppError, refusedSignIn } from '../../errors';
 import { validate } from '../../middleware/validate';
 import { presentMe } from '../users/user.presenter';
 import type { AuthService } from './auth.service';
@@ -24,6 +24,8 @@ import type { FloorDeviceRepository } from './floor-device.repository';
 /** The cookie a studio tablet keeps its floor binding in (httpOnly: page scripts never see the token). */
 export const FLOOR_DEVICE_COOKIE = 'seamrun.floor';
 /** Browsers cap cookie lifetimes at 400 days (RFC 6265bis); the owner binds the tablet again after that. */
+/** From this many wrong PINs left, a floor tablet's refusal says how many remain before the lock. */
+const PIN_WARN_AT = 2;
 const FLOOR_DEVICE_MAX_AGE_MS = 400 * 24 * 60 * 60 * 1000;
 const tokenHash = (token: string) => createHash('sha256').update(token).digest('hex');
 
@@ -144,8 +146,15 @@ export function authRoutes(
   r.post('/floor/pin', ipLimiter, limiter, validate({ body: floorPinLoginInput }), async (req, res) => {
     const device = await boundDevice(req);
     if (!device) throw new AppError(401, 'unauthenticated', 'This device is not a floor tablet; sign in with your e-mail and PIN');
-    const user = await auth.verifyFloorPin(device.studioId, req.body.userId, req.body.pin);
-    if (!user) throw new AppError(401, 'unauthenticated', 'Name or PIN is wrong');
+    const { actor: user, left } = await auth.verifyFloorPin(device.studioId, req.body.userId, req.body.pin);
+    if (!user) {
+      // A warning before the lock: the last tries say how many remain; the one that locks says so.
+      if (left === 0) throw new AppError(429, 'locked', 'Too many failed attempts; try again in 15 minutes');
+      const warning = left !== null && left <= PIN_WARN_AT ? said('wrongNamePinLeft', { n: left }) : null;
+      const fields = { pin: said('triesLeft', { n: left ?? 0 }) };
+      if (warning) throw refusedSignIn(warning, fields);
+      throw new AppError(401, 'unauthenticated', 'Name or PIN is wrong');
+    }
     await logIn(req, user);
     await respondMe(req, res);
   });

@@ -43,20 +43,21 @@ export function createAuthService(deps: {
    * check, in one statement, so parallel guesses cannot all be judged before the lock; a locked account
    * is refused without judging. Password and PIN failures count and lock apart. Never says which part was wrong.
    */
-  async function judge(user: UserEntity | null, secret: string, kind: SecretKind) {
+  async function judgeCounted(user: UserEntity | null, secret: string, kind: SecretKind) {
     if (!user || !user.active) {
       await hashSecret(secret); // similar timing whether or not the account exists
-      return false as const;
+      return { actor: false as const, left: null };
     }
     const at = now();
-    if (!(await users.admitAttempt(user.id, kind, lockAfter, at, new Date(at.getTime() + LOCK_MS)))) {
-      throw new AppError(429, 'locked', 'Too many failed attempts; try again in 15 minutes');
-    }
+    const failures = await users.admitAttempt(user.id, kind, lockAfter, at, new Date(at.getTime() + LOCK_MS));
+    if (failures === null) throw new AppError(429, 'locked', 'Too many failed attempts; try again in 15 minutes');
     const ok = await verifySecret(secret, kind === 'pin' ? user.pinHash : user.passwordHash);
-    if (!ok) return false as const;
+    // The attempt was counted as a failure before the check: `left` wrong tries remain before the lock.
+    if (!ok) return { actor: false as const, left: Math.max(0, lockAfter - failures) };
     await users.clearFailures(user.id, kind);
-    return toActor(user, kind);
+    return { actor: toActor(user, kind), left: null };
   }
+  const judge = async (user: UserEntity | null, secret: string, kind: SecretKind) => (await judgeCounted(user, secret, kind)).actor;
 
   const byEmail = (email: string) => users.findByEmail(normaliseEmail(email));
 
@@ -65,10 +66,14 @@ export function createAuthService(deps: {
     verifyPin: async (email: string, pin: string) => judge(await byEmail(email), pin, 'pin'),
 
     /** PIN sign-in on a studio tablet: the person is picked from that studio's floor list, no e-mail. */
+    /**
+     * On a floor tablet the name is picked from the studio's own list, so saying how many tries are left
+     * tells nothing new: `left` is the wrong PINs still allowed before the 15-minute lock (null on success).
+     */
     async verifyFloorPin(studioId: number, userId: number, pin: string) {
       const user = await users.get(studioId, userId);
       const onFloor = user && (user.role === 'machinist' || user.role === 'finisher') ? user : null;
-      return judge(onFloor, pin, 'pin');
+      return judgeCounted(onFloor, pin, 'pin');
     },
 
     /** Names (never e-mails) of the studio's active machinists and finishers, for a bound tablet. */

@@ -13,6 +13,8 @@ export const presentPerson = (u: UserEntity): PersonDto => ({
   payoutAccount: u.payoutAccount ?? '',
   skills: u.skills ?? defaultSkills(u.role),
   skillsSet: u.skills != null,
+  pinLockedUntil: u.pinLockedUntil ? new Date(u.pinLockedUntil).toISOString() : null,
+  passwordLockedUntil: u.lockedUntil ? new Date(u.lockedUntil).toISOString() : null,
 });
 
 export const presentMe = (u: UserEntity, studio: StudioEntity): UserDto => ({

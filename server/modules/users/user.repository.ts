@@ -45,11 +45,14 @@ export function createUserRepository(ds: DataSource) {
       // An empty patch is a no-op, not an error.
       await updateIfChanged(users, { studioId, id }, patch);
     },
-    /** Count one attempt of `kind` before it is judged; false when the account is locked for that kind. */
-    async admitAttempt(id: number, kind: SecretKind, lockAfter: number, now: Date, lockUntil: Date): Promise<boolean> {
+    /** Count one attempt of `kind` before it is judged: the failures counted with it, or null when the account is locked for that kind. */
+    async admitAttempt(id: number, kind: SecretKind, lockAfter: number, now: Date, lockUntil: Date): Promise<number | null> {
       const counted = await sql.value(admitText[kind], [lockAfter, time(lockUntil), id, time(now)]);
-      return counted !== undefined;
+      return counted === undefined ? null : Number(counted);
     },
+    /** The owner lifts both locks and their counts. */
+    clearAllFailures: (studioId: number, id: number) =>
+      users.update({ studioId, id }, { pinFailures: 0, pinLockedUntil: null, failedLogins: 0, lockedUntil: null }),
     /** A good sign-in of `kind` clears that kind's count and lock only. */
     clearFailures: (id: number, kind: SecretKind) =>
       users.update({ id }, kind === 'pin' ? { pinFailures: 0, pinLockedUntil: null } : { failedLogins: 0, lockedUntil: null }),

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { createPersonInput, updatePersonInput } from '../../../shared/schemas/people';
+import { createPersonInput, setPinInput, updatePersonInput } from '../../../shared/schemas/people';
 import { actorOf, requirePermission } from '../../auth/require';
 import { validate, validated } from '../../middleware/validate';
 import { presentPerson } from './user.presenter';
@@ -17,6 +17,12 @@ export function userRoutes(service: UserService) {
   });
   r.patch('/:id', ...validated({ params: idParam, body: updatePersonInput }, async ({ params, body }, req, res) => {
     res.json({ user: presentPerson(await service.update(actorOf(req), params.id, body)) });
+  }));
+  r.post('/:id/pin', ...validated({ params: idParam, body: setPinInput }, async ({ params, body }, req, res) => {
+    res.json({ user: presentPerson(await service.setPin(actorOf(req), params.id, body)) });
+  }));
+  r.post('/:id/unlock', ...validated({ params: idParam }, async ({ params }, req, res) => {
+    res.json({ user: presentPerson(await service.unlock(actorOf(req), params.id)) });
   }));
   return r;
 }

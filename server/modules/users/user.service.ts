@@ -1,4 +1,4 @@
-import type { CreatePersonInput, UpdatePersonInput } from '../../../shared/schemas/people';
+import type { CreatePersonInput, SetPinInput, UpdatePersonInput } from '../../../shared/schemas/people';
 import { hashSecret } from '../../auth/password';
 import type { Actor } from '../../auth/require';
 import { badRequest, conflict, notFound } from '../../errors';
@@ -49,6 +49,27 @@ export function createUserService(deps: { users: UserRepository; audit: AuditRep
         { role: before.role, active: before.active, payoutAccount: before.payoutAccount, skills: before.skills },
         { role: after.role, active: after.active, payoutAccount: after.payoutAccount, skills: after.skills });
       return after;
+    },
+
+    /**
+     * A new floor PIN from the owner (forgotten, or locked after wrong guesses): it replaces the old one, lifts
+     * the PIN lock and ends the person's sessions, so a phone signed in with the old PIN asks again.
+     */
+    async setPin(actor: Actor, id: number, input: SetPinInput) {
+      const before = await users.get(actor.studioId, id);
+      if (!before) throw notFound('Person');
+      await users.update(actor.studioId, id, { pinHash: await hashSecret(input.pin), pinFailures: 0, pinLockedUntil: null, sessionVersion: before.sessionVersion + 1 });
+      await audit.record(actor, 'set_pin', 'user', id, { hadPin: Boolean(before.pinHash) }, { hasPin: true });
+      return (await users.get(actor.studioId, id))!;
+    },
+
+    /** Lift the sign-in locks (PIN and password) without changing either secret. */
+    async unlock(actor: Actor, id: number) {
+      const before = await users.get(actor.studioId, id);
+      if (!before) throw notFound('Person');
+      await users.clearAllFailures(actor.studioId, id);
+      await audit.record(actor, 'unlock', 'user', id, { pinLockedUntil: before.pinLockedUntil, lockedUntil: before.lockedUntil }, { pinLockedUntil: null, lockedUntil: null });
+      return (await users.get(actor.studioId, id))!;
     },
   };
 }

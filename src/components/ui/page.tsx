@@ -63,7 +63,8 @@ const CODED = ['offline', 'unauthenticated', 'forbidden', 'rate_limited', 'not_f
 export function ErrorNote({ error }: { error: unknown }) {
   const { t, i18n } = useTranslation();
   if (!error) return null;
-  const coded = error instanceof ApiError && i18n.language !== 'en' && (CODED as readonly string[]).includes(error.code);
+  // A refusal that names a field says something of its own (a PIN's tries left): shown as the server said it.
+  const coded = error instanceof ApiError && i18n.language !== 'en' && (CODED as readonly string[]).includes(error.code) && !Object.keys(error.fields ?? {}).length;
   const message = coded ? t(`errors.${(error as ApiError).code}`) : sentenceOf(error instanceof Error ? error.message : String(error));
   return (
     <p role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">

@@ -27,6 +27,14 @@ export const useUpdatePerson = () =>
     onSuccess: invalidate,
   });
 
+/** The owner gives a new floor PIN (a forgotten or locked one); the server checks it is not an obvious one. */
+export const useSetPin = () =>
+  useMutation({ mutationFn: ({ id, pin }: { id: number; pin: string }) => api.post<{ user: PersonDto }>(`/users/${id}/pin`, { pin }), onSuccess: invalidate });
+
+/** The owner lifts a sign-in lock (PIN and password) without changing either secret. */
+export const useUnlockPerson = () =>
+  useMutation({ mutationFn: (id: number) => api.post<{ user: PersonDto }>(`/users/${id}/unlock`, {}), onSuccess: invalidate });
+
 /** Attendance per day (who is in and for how long); the owner records it. */
 export const attendanceQueries = {
   all: () => ({ queryKey: ['attendance'] as const }),

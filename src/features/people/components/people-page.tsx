@@ -3,7 +3,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { ROLES, type Role } from '@shared/auth/permissions';
-import { createPersonInput, payoutAccountField, type PersonDto } from '@shared/schemas/people';
+import { createPersonInput, payoutAccountField, pinField, type PersonDto } from '@shared/schemas/people';
 import { DataTable } from '@/components/ui/data-table';
 import { Field } from '@/components/ui/form';
 import { Badge, Card, ErrorNote, PageHeader } from '@/components/ui/page';
@@ -11,7 +11,7 @@ import { ApiError } from '@/lib/api-client';
 import { useMe } from '@/lib/auth';
 import { fmt } from '@/lib/format';
 import { i18n, localSentence, useTranslation } from '@/lib/i18n';
-import { peopleQueries, useAddPerson, useUpdatePerson } from '../api/people-queries';
+import { peopleQueries, useAddPerson, useSetPin, useUnlockPerson, useUpdatePerson } from '../api/people-queries';
 import { AttendanceCard } from './attendance-card';
 import { FloorTabletCard } from './floor-tablet-card';
 import { area } from '../words';
@@ -84,6 +84,69 @@ function PayoutAccountCell({ person }: { person: PersonDto }) {
   );
 }
 
+/**
+ * The PIN column: whether the person has one, a lock after wrong tries with the way to lift it, and a new PIN
+ * from the owner (a forgotten one, or after a lock).
+ */
+function PinCell({ person }: { person: PersonDto }) {
+  const { t } = useTranslation();
+  const unlock = useUnlockPerson();
+  const setPin = useSetPin();
+  const [open, setOpen] = useState(false);
+  const [pin, setPinText] = useState('');
+  const [error, setError] = useState('');
+  const [done, setDone] = useState(false);
+  const lockedUntil = [person.pinLockedUntil, person.passwordLockedUntil].filter((x): x is string => Boolean(x) && Date.parse(x!) > Date.now()).sort().at(-1);
+  const save = async (e: React.FormEvent) => {
+    e.preventDefault();
+    const parsed = pinField.safeParse(pin);
+    if (!parsed.success) return setError(localSentence(parsed.error.issues[0].message, fmt().settings));
+    setError('');
+    try {
+      await setPin.mutateAsync({ id: person.id, pin: parsed.data });
+      setOpen(false);
+      setPinText('');
+      setDone(true);
+    } catch (err) {
+      setError(err instanceof ApiError ? (err.fields?.pin ?? err.message) : t(`${area}.couldNotSave`));
+    }
+  };
+  return (
+    <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
+      <span>{person.hasPin ? t(`${area}.yes`) : '—'}</span>
+      {lockedUntil ? (
+        <>
+          <span title={t(`${area}.pin.lockedTitle`, { time: fmt().time(lockedUntil) })}><Badge tone="red">{t(`${area}.pin.locked`)}</Badge></span>
+          <button type="button" className="text-sm underline" aria-label={t(`${area}.pin.unlockOf`, { name: person.name })} disabled={unlock.isPending} onClick={() => unlock.mutate(person.id)}>
+            {t(`${area}.pin.unlock`)}
+          </button>
+        </>
+      ) : null}
+      {open ? (
+        <form onSubmit={save} className="flex items-center gap-1">
+          <input
+            aria-label={t(`${area}.pin.newPinOf`, { name: person.name })}
+            className="w-20 rounded border border-calico-300 bg-white px-2 py-1 font-mono text-xs"
+            inputMode="numeric"
+            autoComplete="off"
+            value={pin}
+            onChange={(e) => setPinText(e.target.value.trim())}
+            aria-invalid={Boolean(error)}
+          />
+          <button type="submit" className="text-sm underline" disabled={setPin.isPending}>{t(`${area}.pin.set`)}</button>
+          <button type="button" className="text-sm underline" onClick={() => { setOpen(false); setError(''); }}>{t(`${area}.pin.cancel`)}</button>
+        </form>
+      ) : (
+        <button type="button" className="text-sm underline" aria-label={t(`${area}.pin.newPinOf`, { name: person.name })} onClick={() => { setOpen(true); setDone(false); }}>
+          {t(`${area}.pin.newPin`)}
+        </button>
+      )}
+      {error ? <span role="alert" className="basis-full text-xs text-madder-700">{error}</span> : null}
+      {done ? <span role="status" className="basis-full text-xs text-thread-700">{t(`${area}.pin.done`)}</span> : null}
+    </div>
+  );
+}
+
 const w = (key: string) => () => i18n.t(`${area}.${key}`);
 
 const columns = [
@@ -91,7 +154,7 @@ const columns = [
   c.accessor('email', { header: w('cols.signIn') }),
   c.accessor('role', { header: w('cols.role'), cell: (i) => <RoleCell person={i.row.original} /> }),
   c.accessor('active', { header: w('cols.status'), cell: (i) => (i.getValue() ? <Badge tone="teal">{w('active')()}</Badge> : <Badge tone="red">{w('inactive')()}</Badge>) }),
-  c.accessor('hasPin', { header: w('cols.pin'), cell: (i) => (i.getValue() ? w('yes')() : '—') }),
+  c.accessor('hasPin', { header: w('cols.pin'), cell: (i) => <PinCell person={i.row.original} /> }),
   c.accessor('skills', { header: w('cols.skills'), enableSorting: false, cell: (i) => <SkillsCell person={i.row.original} /> }),
   c.accessor('payoutAccount', { header: w('cols.payout'), enableSorting: false, cell: (i) => <PayoutAccountCell person={i.row.original} /> }),
   c.display({ id: 'actions', header: '', cell: (i) => <ActiveCell person={i.row.original} /> }),
