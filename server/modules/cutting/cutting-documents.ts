@@ -10,6 +10,13 @@ import { bundleQrText } from '../../../shared/schemas/cutting';
 /** Lays → the marker list / cut ticket input of exports/. End allowance is printed per end (half the per-ply value). */
 export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric: FabricEntity, lays: LayEntity[], today: Date, rolls?: RollEntity[]): MarkerListInput {
   const sizes = batch.style?.sizeRun ?? [];
+  const sheets = rolls ? byRoll(lays, rolls) : undefined;
+  // With the rolls known, each lay's roll line gives the roll's length when that lay starts on it and what it
+  // leaves, the same figures as the rolls-in-cutting-order section; without them, the plan's own figures.
+  const atLay = new Map<string, { startMm: number; afterMm: number }>();
+  for (const sheet of sheets ?? []) {
+    for (const u of sheet.uses) atLay.set(`${u.layNo}|${sheet.rollLabel}`, { startMm: Math.round(u.remainingAfterMm + u.lengthMm), afterMm: Math.round(u.remainingAfterMm) });
+  }
   const plans: LayPlan[] = lays.map((l) => ({
     layNo: l.seq,
     ratio: sizes.filter((s) => (l.ratio[s] ?? 0) > 0).map((s) => ({ size: s, count: l.ratio[s] })),
@@ -17,17 +24,21 @@ export function markerListInput(studio: StudioEntity, batch: BatchEntity, fabric
     plies: l.plies,
     spreadingMode: l.spreadingMode as SpreadingMode,
     endAllowanceMm: mm(l.endAllowanceMm / 2),
-    rolls: l.rolls.map((r) => ({
-      rollLabel: r.label, shadeLot: r.shadeLot, lengthMm: mm(r.plies * (l.markerLengthMm + l.endAllowanceMm) + r.expectedRemnantMm),
-      pliesToSpread: r.plies, expectedRemnantMm: mm(r.expectedRemnantMm),
-    })),
+    rolls: l.rolls.map((r) => {
+      const known = atLay.get(`${l.seq}|${r.label}`);
+      return {
+        rollLabel: r.label, shadeLot: r.shadeLot,
+        lengthMm: mm(known?.startMm ?? Math.round(r.plies * (l.markerLengthMm + l.endAllowanceMm) + r.expectedRemnantMm)),
+        pliesToSpread: r.plies, expectedRemnantMm: mm(known?.afterMm ?? Math.round(r.expectedRemnantMm)),
+      };
+    }),
   }));
   return {
     studioName: studio.name, dateIso: today.toISOString(), ...documentSettings(studio), unitSystem: studio.unitSystem,
     style: { code: batch.style?.code ?? '', name: batch.style?.name ?? '' }, batch: { code: batchCode(batch) },
     fabric: { description: `${fabric.name}${fabric.composition ? `, ${fabric.composition}` : ''}`, widthMm: mm(fabric.widthMm) },
     lays: plans,
-    ...(rolls ? { byRoll: byRoll(lays, rolls) } : {}),
+    ...(sheets ? { byRoll: sheets } : {}),
   };
 }
 
