@@ -27,6 +27,7 @@ const en = {
   units: { pcs: 'pcs', pair: 'pair', m: 'm' },
   receiveForm: {
     label: 'Receive {{number}}',
+    refill: 'Fill in again from what is still to come',
     title: 'Receive {{number}} into stock',
     ordered: '{{item}} ({{quantity}} ordered)',
     rollLabel: 'Roll label',
@@ -87,6 +88,7 @@ export const words: AreaWords<typeof en> = {
     kinds: { fabric: 'tissu', trim: 'fourniture' },
     units: { pcs: 'pces', pair: 'paire', m: 'm' },
     receiveForm: {
+      refill: 'Remplir à nouveau avec ce qui reste à venir',
       label: 'Réceptionner {{number}}',
       title: 'Réceptionner {{number}} en stock',
       ordered: '{{item}} ({{quantity}} commandés)',

@@ -82,7 +82,15 @@ export function PurchasingPage() {
           <ErrorNote error={send.error ?? confirm.error} />
           {send.isSuccess ? <p role="status" className="mb-2 text-sm text-thread-800">{t(`${area}.sent`, { number: send.data.order.number, email: send.data.order.supplierEmail })}</p> : null}
           <DataTable data={rows} columns={orderColumns} filterPlaceholder={t(`${area}.filter`)} empty={t(`${area}.empty`)} />
-          {receiving ? <ReceiveForm key={receiving.id} order={receiving} onDone={() => setReceiving(null)} /> : null}
+          {receiving ? (
+            <ReceiveForm
+              key={`${receiving.id}-${receiving.revision}`}
+              order={receiving}
+              onDone={() => setReceiving(null)}
+              // After a refusal as out of date: a fresh form from the order as it now stands (a new receipt).
+              onRefill={() => setReceiving(orders.find((o) => o.id === receiving.id) ?? null)}
+            />
+          ) : null}
         </Card>
         <Card title={t(`${area}.byHand`)}>
           <NewOrderForm />

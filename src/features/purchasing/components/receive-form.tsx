@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { PurchaseOrderDto } from '@shared/schemas/purchasing';
 import { ErrorNote } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
 import { useReceiveOrder } from '../api/purchasing-queries';
 import { fmt } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
@@ -8,7 +9,7 @@ import { area } from '../words';
 import { fabricInputText, quantityText, readFabricInput, trimByYard, unitText } from './quantity-text';
 
 /** Receive an order into stock: one roll per fabric line (label, length, shade lot), counts for trims. */
-export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone: () => void }) {
+export function ReceiveForm({ order, onDone, onRefill }: { order: PurchaseOrderDto; onDone: () => void; onRefill?: () => void }) {
   const { t } = useTranslation();
   const w = (key: string, values?: Record<string, unknown>) => t(`${area}.receiveForm.${key}`, values);
   const receive = useReceiveOrder();
@@ -61,6 +62,9 @@ export function ReceiveForm({ order, onDone }: { order: PurchaseOrderDto; onDone
         </div>
       ))}
       <ErrorNote error={receive.error} />
+      {onRefill && receive.error instanceof ApiError && receive.error.fields.revision ? (
+        <button className="btn-quiet" type="button" onClick={onRefill}>{w('refill')}</button>
+      ) : null}
       <div className="flex gap-2">
         <button className="btn-primary" type="submit" disabled={receive.isPending}>{w('submit')}</button>
         <button className="btn-quiet" type="button" onClick={onDone}>{w('cancel')}</button>
