@@ -89,6 +89,9 @@ export interface ImportRowError {
 
 export const fabricParam = z.object({ id: z.coerce.number().int().positive() });
 
+/** Which of a batch's cut plans: the one on this fabric (a lining's…); without it, the main plan. */
+export const cutPlanQuery = z.object({ fabricId: z.coerce.number().int().positive('Pick a fabric').optional() });
+
 export const createCutPlanInput = z.object({
   fabricId: z.number({ error: 'Pick a fabric' }).int().positive('Pick a fabric'),
   maxPlies: z.number().int('Whole plies').min(1, 'At least 1 ply').max(MAX_PLIES, `At most ${MAX_PLIES} plies`),
@@ -170,6 +173,10 @@ export interface CutPlanDto {
   batchId: number;
   fabricId: number;
   fabricName: string;
+  /** True for a material's plan (lining, contrast…) beside the main plan: its lays make no bundles. */
+  material: boolean;
+  /** Every live plan of the batch, main first: the fabric each is on, to switch between them. */
+  plans: { fabricId: number; fabricName: string; material: boolean }[];
   status: string;
   fabricUsedMm: number;
   lowerBoundMm: number;

@@ -65,12 +65,16 @@ export function createCostingRepository(ds: DataSource, cuttingPieces: CuttingPi
     fabric: (studioId: number, id: number) => ds.getRepository(FabricEntity).findOneBy({ studioId, id }),
     firstFabric: (studioId: number) =>
       ds.getRepository(FabricEntity).findOne({ where: { studioId }, order: { id: 'ASC' } }),
-    /** The batch's current cut plan: released before draft, newest first; superseded plans never. */
-    async cutPlan(studioId: number, batchId: number) {
-      const plans = await ds.getRepository(CutPlanEntity).find({
+    /**
+     * The batch's main cut plan: on the style's self fabric (`main`) when it links one, since a lining's plan is
+     * not the garment's fabric; released before draft, newest first; superseded plans never.
+     */
+    async cutPlan(studioId: number, batchId: number, main?: number | null) {
+      const all = await ds.getRepository(CutPlanEntity).find({
         where: { studioId, batchId, status: Not('superseded') },
         order: { id: 'DESC' },
       });
+      const plans = main ? all.filter((p) => p.fabricId === main) : all;
       return plans.find((p) => p.status === 'released') ?? plans[0] ?? null;
     },
     lays: (studioId: number, cutPlanId: number) =>

@@ -63,7 +63,7 @@ export type CostingService = ReturnType<typeof createCostingService>;
 /** Builds a batch's costing sheet from real numbers where they exist, estimates where they do not. */
 export function createCostingService(repo: CostingRepository) {
   async function fabricFor(studioId: number, batch: BatchEntity) {
-    const plan = await repo.cutPlan(studioId, batch.id);
+    const plan = await repo.cutPlan(studioId, batch.id, batch.style?.materialFabrics?.self);
     const sizeRun = batch.style?.sizeRun ?? Object.keys(batch.quantities);
     if (plan) {
       const lays = await repo.lays(studioId, plan.id);

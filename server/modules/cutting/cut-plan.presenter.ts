@@ -28,7 +28,7 @@ export const presentLay = (l: LayEntity, batch: { number: number }, bundleCount 
 });
 
 /** Cut plan → DTO. Rates and cost go only to roles that may read costs (`showCosts`), never to the cutter. */
-export function presentCutPlan(p: CutPlanEntity, batch: { number: number }, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>(), showCosts = false): CutPlanDto {
+export function presentCutPlan(p: CutPlanEntity, batch: { number: number }, fabricName: string, lays: LayEntity[], counts: Map<number, number>, shortages = new Map<number, LayShortageDto>(), showCosts = false): Omit<CutPlanDto, 'material' | 'plans'> {
   const r = p.result as StoredCutPlanResult;
   return {
     id: p.id,

@@ -25,9 +25,15 @@ export function createCutPlanRepository(ds: DataSource) {
     /** Runs `fn` in one database transaction; the writes it is given go through that transaction. */
     transaction: <T>(fn: (tx: CutPlanWrites) => Promise<T>) => ds.transaction((m) => fn(writesIn(m, stock))),
     getPlan: (studioId: number, id: number) => plans.findOne({ where: { studioId, id } }),
-    /** The batch's current plan: the newest that is not superseded. */
-    currentPlan: (studioId: number, batchId: number) =>
-      plans.findOne({ where: { studioId, batchId, status: Not('superseded') }, order: { id: 'DESC' } }),
+    /**
+     * The batch's current plan on `fabricId`, or without one its main plan: the newest live plan on `main` (the
+     * style's self fabric) when there is one, else the newest live plan.
+     */
+    async currentPlan(studioId: number, batchId: number, pick: { fabricId?: number; main?: number | null } = {}) {
+      const live = await plans.find({ where: { studioId, batchId, status: Not('superseded') }, order: { id: 'DESC' } });
+      if (pick.fabricId !== undefined) return live.find((p) => p.fabricId === pick.fabricId) ?? null;
+      return live.find((p) => p.fabricId === pick.main) ?? live[0] ?? null;
+    },
     livePlans: (studioId: number, batchId: number) => plans.find({ where: { studioId, batchId, status: Not('superseded') } }),
     laysOf: (studioId: number, cutPlanId: number) => lays.find({ where: { studioId, cutPlanId }, order: { seq: 'ASC' } }),
     getLay: (studioId: number, id: number) => lays.findOne({ where: { studioId, id } }),

@@ -85,6 +85,19 @@ export function spreadingModeFor(fabric: Pick<FabricEntity, 'isDirectional'>): s
 
 /** Another plan took roll length between the solve and the save: solve again on what is free now. */
 class StockMoved extends Error {}
+
+/**
+ * A batch has one main cut plan, on the style's self fabric: its lays make the sewing bundles and count the
+ * garments cut. Each other material the style links to its own fabric (lining, contrast, interfacing) may have
+ * a plan of its own beside it, with its own lays, rolls and marker list; those lays make no bundles (their
+ * pieces join the self bundles of the same size at sewing, common practice). Without a self link every fabric
+ * counts as main, so planning another one replaces the plan only when the owner says so.
+ */
+export function isMaterialFabric(materialFabrics: Record<string, number> | null | undefined, fabricId: number): boolean {
+  const self = materialFabrics?.self;
+  if (self === undefined || self === null || fabricId === self) return false;
+  return Object.values(materialFabrics ?? {}).includes(fabricId);
+}
 const PLAN_ATTEMPTS = 3;
 
 /**
@@ -108,9 +121,13 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   const all = await deps.cuttingPieces(studioId, batch.styleId);
   if (!Object.keys(all).length) throw conflict('This style has no graded pieces yet: grade it first');
   const pieces = piecesOnFabric(all, batch.style.materialFabrics, fabric);
-  const live = await plans.livePlans(studioId, batchId);
+  const links = batch.style.materialFabrics;
+  const material = isMaterialFabric(links, fabric.id);
+  // The plans this one replaces: the plan on this fabric, and for a main plan any other main plan (a change of
+  // the self fabric). A material's plan (lining…) stands beside the main plan and never replaces it.
+  const live = (await plans.livePlans(studioId, batchId)).filter((p) => p.fabricId === fabric.id || (!material && !isMaterialFabric(links, p.fabricId)));
   const cutLays = (await Promise.all(live.map((p) => plans.laysOf(studioId, p.id)))).flat().filter((l) => l.status === 'cut');
-  // One cut plan per batch (its lays make the sewing bundles): another fabric's plan is never dropped unasked.
+  // One main cut plan per batch (its lays make the sewing bundles): another fabric's plan is never dropped unasked.
   const other = live.find((p) => p.fabricId !== fabric.id);
   if (other) {
     const names = { other: (await fabrics.get(studioId, other.fabricId))?.name ?? `#${other.fabricId}`, fabric: fabric.name };
@@ -139,7 +156,10 @@ export async function planBatchCut(deps: CutPlanDeps, studioId: number, batchId:
   const rates = cutPlanRates(fabric.pricePerMetreMinor, labour, (await plans.studio(studioId)).currency);
   for (let attempt = 1; ; attempt++) {
     const rolls = await pickRolls(fabrics, studioId, fabric, input.rollIds);
-    const replaced = await plans.stock.releasable(studioId, batchId);
+    // Holds this plan gives back: those of the plans it replaces (and of retired batches), never those of the
+    // batch's plans on other materials, which stand.
+    const replacedIds = new Set(live.map((p) => p.id));
+    const replaced = (await plans.stock.releasable(studioId, batchId)).filter((h) => h.batchId !== batchId || replacedIds.has(h.cutPlanId));
     const free = freeLengths(rolls, replaced);
     // The solve is pure: it runs here, or on a job worker when REDIS_URL is set (server/jobs).
     const solved = await jobs.run('cut-order', {

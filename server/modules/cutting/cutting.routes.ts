@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import { idParam } from '../../../shared/schemas/common';
-import { correctLayInput, createCutPlanInput, cutLayInput, recordLayInput } from '../../../shared/schemas/cutting';
+import { correctLayInput, createCutPlanInput, cutLayInput, cutPlanQuery, recordLayInput } from '../../../shared/schemas/cutting';
 import { actorOf, requirePermission } from '../../auth/require';
 import { sendDownload } from '../../middleware/download';
 import { validated } from '../../middleware/validate';
@@ -26,15 +26,15 @@ export function cuttingRoutes(service: CuttingService) {
   const plannerOrCutter = requirePermission('cutplans:write', 'cutting:work');
   const cutter = requirePermission('cutting:work');
 
-  batches.get('/:id/cut-plan', plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
-    res.json({ cutPlan: await spokenPlan(req, await service.cutPlan(actorOf(req), params.id)) });
+  batches.get('/:id/cut-plan', plannerOrCutter, ...validated({ params: idParam, query: cutPlanQuery }, async ({ params, query }, req, res) => {
+    res.json({ cutPlan: await spokenPlan(req, await service.cutPlan(actorOf(req), params.id, query.fabricId)) });
   }));
   batches.post('/:id/cut-plan', planner, ...validated({ params: idParam, body: createCutPlanInput }, async ({ params, body }, req, res) => {
     res.status(201).json({ cutPlan: await spokenPlan(req, await service.planCut(actorOf(req), params.id, body)) });
   }));
   for (const doc of BATCH_DOCUMENTS) {
-    batches.get(`/:id/${doc}`, plannerOrCutter, ...validated({ params: idParam }, async ({ params }, req, res) => {
-      sendDownload(res, await service.batchDocument(actorOf(req).studioId, params.id, doc));
+    batches.get(`/:id/${doc}`, plannerOrCutter, ...validated({ params: idParam, query: cutPlanQuery }, async ({ params, query }, req, res) => {
+      sendDownload(res, await service.batchDocument(actorOf(req).studioId, params.id, doc, query.fabricId));
     }));
   }
   batches.get('/:id/bundles', requirePermission('bundles:read'), ...validated({ params: idParam }, async ({ params }, req, res) => {

@@ -3,13 +3,13 @@ import { materialCutTicketInput } from './material-cut-ticket';
 import { can, type Role } from '../../../shared/auth/permissions';
 import type { CorrectLayInput, CreateCutPlanInput, RecordLayInput, ShortageDto } from '../../../shared/schemas/cutting';
 import type { Actor } from '../../auth/require';
-import type { LayEntity } from '../../entities';
+import type { BatchEntity, LayEntity } from '../../entities';
 import { conflict, notFound } from '../../errors';
 import type { Download } from '../../middleware/download';
 import type { AuditRepository } from '../audit/audit.repository';
 import { batchCode } from '../../../shared/schemas/batches';
 import { presentBundle, presentCutPlan, presentLay, presentLayFabric } from './cut-plan.presenter';
-import { planBatchCut, type CutPlanDeps } from './cut-plan.service';
+import { isMaterialFabric, planBatchCut, type CutPlanDeps } from './cut-plan.service';
 import { bundleRegisterInput, markerListInput, withQr } from './cutting-documents';
 import { correctLay, markLayCut, recordLay } from './lay.service';
 import { layShortages } from './shortage';
@@ -48,16 +48,25 @@ export function createCuttingService(deps: CuttingServiceDeps) {
   };
   const shortagesOf = async (studioId: number, list: LayEntity[]) =>
     layShortages(list, await plans.stock.rolls(studioId, [...new Set(list.flatMap((l) => l.rolls.map((r) => r.rollId)))]));
-  const planDto = async (studioId: number, batchId: number, role: Role) => {
-    const p = await plans.currentPlan(studioId, batchId);
+  /** The batch's plan on `fabricId`, or its main plan (on the style's self fabric). */
+  const planOf = (batch: BatchEntity, fabricId?: number) => plans.currentPlan(batch.studioId, batch.id, { fabricId, main: batch.style?.materialFabrics?.self ?? null });
+  const planDto = async (studioId: number, batchId: number, role: Role, fabricId?: number) => {
+    const batch = await loadBatch(studioId, batchId);
+    const p = await planOf(batch, fabricId);
     if (!p) return null;
     const list = await plans.laysOf(studioId, p.id);
     const fabric = await fabrics.get(studioId, p.fabricId);
-    return presentCutPlan(p, await loadBatch(studioId, batchId), fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
+    const links = batch.style?.materialFabrics;
+    const live = await plans.livePlans(studioId, batchId);
+    const others = await Promise.all(
+      live.map(async (x) => ({ fabricId: x.fabricId, fabricName: (await fabrics.get(studioId, x.fabricId))?.name ?? '', material: isMaterialFabric(links, x.fabricId) })),
+    );
+    const dto = presentCutPlan(p, batch, fabric?.name ?? '', list, await plans.bundleCounts(studioId, list.map((l) => l.id)), await shortagesOf(studioId, list), can(role, 'costs:read'));
+    return { ...dto, material: isMaterialFabric(links, p.fabricId), plans: others.sort((a, b) => Number(a.material) - Number(b.material) || a.fabricId - b.fabricId) };
   };
-  const markerListFor = async (studioId: number, batchId: number, only?: number) => {
+  const markerListFor = async (studioId: number, batchId: number, only?: number, fabricId?: number) => {
     const batch = await loadBatch(studioId, batchId);
-    const p = await plans.currentPlan(studioId, batchId);
+    const p = await planOf(batch, fabricId);
     if (!p) throw notFound('Cut plan');
     const fabric = await fabrics.get(studioId, p.fabricId);
     if (!fabric) throw notFound('Fabric');
@@ -68,7 +77,7 @@ export function createCuttingService(deps: CuttingServiceDeps) {
   const registerFor = async (studioId: number, batchId: number, layId?: number) => {
     const batch = await loadBatch(studioId, batchId);
     const all = await plans.bundlesOfBatch(studioId, batchId);
-    const p = await plans.currentPlan(studioId, batchId);
+    const p = await planOf(batch);
     const list = p ? await plans.laysOf(studioId, p.id) : [];
     const chosen = layId === undefined ? all : all.filter((b) => b.layId === layId);
     return bundleRegisterInput(await plans.studio(studioId), batch, chosen, list, await plans.operations(studioId, batch.styleId), now());
@@ -85,13 +94,12 @@ export function createCuttingService(deps: CuttingServiceDeps) {
   };
 
   return {
-    async cutPlan(actor: Actor, batchId: number) {
-      await loadBatch(actor.studioId, batchId);
-      return planDto(actor.studioId, batchId, actor.role);
+    async cutPlan(actor: Actor, batchId: number, fabricId?: number) {
+      return planDto(actor.studioId, batchId, actor.role, fabricId);
     },
     async planCut(actor: Actor, batchId: number, input: CreateCutPlanInput) {
       const saved = await planBatchCut(deps, actor.studioId, batchId, input, now());
-      const dto = (await planDto(actor.studioId, batchId, actor.role))!;
+      const dto = (await planDto(actor.studioId, batchId, actor.role, input.fabricId))!;
       await audit.record(actor, 'create', 'cut-plan', saved.id, undefined, { batchId, lays: dto.lays.length, fabricUsedMm: dto.fabricUsedMm, lowerBoundMm: dto.lowerBoundMm });
       return dto;
     },
@@ -99,10 +107,12 @@ export function createCuttingService(deps: CuttingServiceDeps) {
       await loadBatch(studioId, batchId);
       return (await plans.bundlesOfBatch(studioId, batchId)).map(presentBundle);
     },
-    async batchDocument(studioId: number, batchId: number, doc: BatchDocument): Promise<Download> {
+    async batchDocument(studioId: number, batchId: number, doc: BatchDocument, fabricId?: number): Promise<Download> {
       if (doc === 'marker-list.xlsx' || doc === 'marker-list.pdf') {
-        const input = await markerListFor(studioId, batchId);
-        return { body: await jobs.run(doc, input), type: doc.endsWith('.pdf') ? PDF : XLSX, filename: `marker-list-${input.batch.code}.${doc.split('.')[1]}` };
+        const input = await markerListFor(studioId, batchId, undefined, fabricId);
+        // A material's list says which fabric in its name; the main list keeps the name it always had.
+        const which = fabricId === undefined ? '' : `-fabric-${fabricId}`;
+        return { body: await jobs.run(doc, input), type: doc.endsWith('.pdf') ? PDF : XLSX, filename: `marker-list-${input.batch.code}${which}.${doc.split('.')[1]}` };
       }
       const input = await registerFor(studioId, batchId);
       if (doc === 'bundle-register.xlsx') return { body: await jobs.run(doc, input), type: XLSX, filename: `bundle-register-${input.batch.code}.xlsx` };

@@ -1,3 +1,4 @@
+import { isMaterialFabric } from './cut-plan.service';
 import { checkRollWidth, makeBundles } from '@planning';
 import { DEFAULT_REMNANT_STOCK_THRESHOLD_MM } from '@planning';
 import type { CorrectLayInput, RecordLayInput } from '../../../shared/schemas/cutting';
@@ -126,7 +127,10 @@ export async function markLayCut(plans: CutPlanRepository, studioId: number, id:
     const batch = await tx.batch(studioId, lay.batchId);
     const style = await tx.batchWithStyle(studioId, lay.batchId);
     const sizes = style?.style?.sizeRun ?? Object.keys(lay.ratio);
-    const made = makeBundles({ batch: batchCode(batch), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
+    // A material's lay (lining…) makes no bundles: its pieces join the self bundles of their size at sewing.
+    const plan = await plans.getPlan(studioId, lay.cutPlanId);
+    const materialLay = plan ? isMaterialFabric(style?.style?.materialFabrics, plan.fabricId) : false;
+    const made = materialLay ? [] : makeBundles({ batch: batchCode(batch), sizes, lays: [{ ratio: lay.ratio, pliesByLot: byLot }], bundleSize: 10, firstNumber: offset + 1 });
     await tx.insertBundles(
       made.map((b) => ({
         studioId, batchId: lay.batchId, layId: lay.id, number: b.number, size: b.size, shadeLot: b.shadeLot,

@@ -23,8 +23,12 @@ export const batchStyleQueries = {
 
 export const cutPlanQueries = {
   all: () => ({ queryKey: ['cut-plans'] as const }),
-  ofBatch: (batchId: number) =>
-    queryOptions({ queryKey: ['cut-plans', 'batch', batchId], queryFn: async () => (await api.get<{ cutPlan: CutPlanDto | null }>(`/batches/${batchId}/cut-plan`)).cutPlan }),
+  /** The batch's plan on `fabricId` (a lining's…), or without it the main plan. */
+  ofBatch: (batchId: number, fabricId?: number) =>
+    queryOptions({
+      queryKey: ['cut-plans', 'batch', batchId, fabricId ?? 'main'],
+      queryFn: async () => (await api.get<{ cutPlan: CutPlanDto | null }>(`/batches/${batchId}/cut-plan${fabricId ? `?fabricId=${fabricId}` : ''}`)).cutPlan,
+    }),
 };
 
 export const layQueries = {

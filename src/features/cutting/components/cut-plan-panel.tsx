@@ -19,17 +19,28 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const imperial = f.settings.unitSystem === 'imperial';
   /** The table length is typed in metres, or in yards in an imperial studio. */
   const mmPerTable = imperial ? MM_PER_YARD : 1000;
-  const { data: plan } = useQuery(cutPlanQueries.ofBatch(batch.id));
+  // Which fabric's plan is shown: the main plan until a fabric is picked (a lining has a plan of its own).
+  const [shown, setShown] = useState<number | undefined>(undefined);
+  const { data: plan } = useQuery(cutPlanQueries.ofBatch(batch.id, shown));
+  const { data: mainPlan } = useQuery(cutPlanQueries.ofBatch(batch.id));
   const { data: fabrics = [] } = useQuery(fabricQueries.list());
   const { data: style } = useQuery({ ...batchStyleQueries.ofStyle(batch.styleId), retry: false });
   const materials = [...new Set(['self', ...Object.keys(style?.materialFabrics ?? {})])];
   const planCut = usePlanCut(batch.id);
   const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: imperial ? '6.5' : '6', overcutPercent: '0' });
-  const fabricId = form.fabricId || String(cutPlanFabricId(plan?.fabricId, style?.materialFabrics?.self, fabrics.map((x) => x.id)) ?? '');
+  const fabricId = form.fabricId || String(shown ?? cutPlanFabricId(plan?.fabricId, style?.materialFabrics?.self, fabrics.map((x) => x.id)) ?? '');
+  const pickFabric = (id: string) => {
+    setForm({ ...form, fabricId: id });
+    setShown(id ? Number(id) : undefined);
+  };
+  const livePlans = mainPlan?.plans ?? [];
+  const shownFabricName = fabrics.find((x) => x.id === Number(fabricId))?.name ?? '';
+  const fabricQuery = plan?.material ? `?fabricId=${plan.fabricId}` : '';
   const fields = planCut.error instanceof ApiError ? planCut.error.fields : {};
   // The server refuses to drop another fabric's plan unasked (409 on fabricId); replacing it is a second, explicit press.
   const canReplace = planCut.error instanceof ApiError && planCut.error.status === 409 && Boolean(fields.fabricId) && !plan?.lays.some((l) => l.status === 'cut');
   const submit = (replacePlan: boolean) => {
+    setShown(Number(fabricId));
     planCut.mutate({
       ...(replacePlan ? { replacePlan } : {}),
       fabricId: Number(fabricId), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
@@ -52,7 +63,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
       <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
         <div>
           <label className="field-label" htmlFor="cp-fabric">{t(`${area}.plan.fabric`)}</label>
-          <select id="cp-fabric" className="field-input" value={fabricId} onChange={(e) => setForm({ ...form, fabricId: e.target.value })}>
+          <select id="cp-fabric" className="field-input" value={fabricId} onChange={(e) => pickFabric(e.target.value)}>
             {fabrics.map((f) => <option key={f.id} value={f.id}>{f.name}</option>)}
           </select>
           {fields.fabricId ? <FieldError>{fields.fabricId}</FieldError> : null}
@@ -67,6 +78,23 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
       {canReplace ? (
         <button type="button" className="btn-quiet mt-2" disabled={planCut.isPending} onClick={() => submit(true)}>{t(`${area}.plan.replace`)}</button>
       ) : null}
+      {livePlans.length > 1 ? (
+        <nav className="mt-3 flex flex-wrap items-center gap-2 text-sm" aria-label={t(`${area}.plan.plansFor`)}>
+          <span className="text-ink-600">{t(`${area}.plan.plansFor`)}</span>
+          {livePlans.map((p) => (
+            <button
+              key={p.fabricId}
+              type="button"
+              className={p.fabricId === plan?.fabricId ? 'btn-primary px-2 py-1 text-xs' : 'btn-quiet px-2 py-1 text-xs'}
+              aria-current={p.fabricId === plan?.fabricId ? 'true' : undefined}
+              onClick={() => pickFabric(String(p.fabricId))}
+            >
+              {t(`${area}.plan.${p.material ? 'materialPlan' : 'mainPlan'}`, { fabric: p.fabricName })}
+            </button>
+          ))}
+        </nav>
+      ) : null}
+      {plan?.material ? <p className="mt-3 rounded-lg bg-calico-50 px-3 py-2 text-sm">{t(`${area}.plan.materialNote`)}</p> : null}
       {plan?.lays.some((l) => l.status === 'cut') ? (
         <p className="mt-3 rounded-lg bg-calico-50 px-3 py-2 text-sm">
           {t(`${area}.plan.alreadyCut`)}
@@ -125,12 +153,12 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
             </div>
           ) : null}
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.xlsx`, `marker-list-${batch.code}.xlsx`)}>{t('lay.docMarkerXlsx')}</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.pdf`, `marker-list-${batch.code}.pdf`)}>{t('lay.docMarkerPdf')}</button>
-            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/bundle-register.xlsx`, `bundle-register-${batch.code}.xlsx`)}>{t('lay.docRegister')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.xlsx${fabricQuery}`, `marker-list-${batch.code}.xlsx`)}>{t('lay.docMarkerXlsx')}</button>
+            <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/marker-list.pdf${fabricQuery}`, `marker-list-${batch.code}.pdf`)}>{t('lay.docMarkerPdf')}</button>
+            {plan.material ? null : <button type="button" className="btn-quiet" onClick={() => downloadFile(`/batches/${batch.id}/bundle-register.xlsx`, `bundle-register-${batch.code}.xlsx`)}>{t('lay.docRegister')}</button>}
           </div>
         </div>
-      ) : <p className="mt-3 text-sm text-ink-600">{t(`${area}.plan.none`)}</p>}
+      ) : <p className="mt-3 text-sm text-ink-600">{shown !== undefined && mainPlan ? t(`${area}.plan.noneOnFabric`, { fabric: shownFabricName }) : t(`${area}.plan.none`)}</p>}
       <div className="mt-3 flex flex-wrap items-center gap-2" data-testid="material-cut-tickets">
         <span className="text-sm text-ink-600">{t(`${area}.plan.ticketsPerMaterial`)}</span>
         {materials.map((m) => (
