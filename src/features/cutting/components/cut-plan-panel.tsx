@@ -130,8 +130,9 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
                 : t(`${area}.plan.estimated`, { utilisation: f.percent(Math.round(plan.assumedUtilisation * 100), 0) })} {plan.markerLengthsNote ?? t(`${area}.plan.buildMarkers`)}</>}
           </p>
           <div role="region" aria-label={t(`${area}.plan.lays`)} tabIndex={0} className="overflow-x-auto">
-            <table className="w-full text-sm">
-              <thead className="text-left text-xs text-ink-600"><tr>{(['lay', 'sizes', 'plies', 'marker', 'spreading', 'rolls', 'status'] as const).map((c, i) => <th key={c} className={i ? undefined : 'py-1'}>{t(`${area}.plan.cols.${c}`)}</th>)}</tr></thead>
+            {/* On a phone the table keeps its columns apart and scrolls sideways in its region. */}
+            <table className="w-full min-w-[44rem] text-sm">
+              <thead className="text-left text-xs text-ink-600"><tr>{(['lay', 'sizes', 'plies', 'marker', 'spreading', 'rolls', 'status'] as const).map((c, i) => <th key={c} className={i ? 'pr-3' : 'py-1 pr-3'}>{t(`${area}.plan.cols.${c}`)}</th>)}</tr></thead>
               <tbody>
                 {plan.lays.map((l) => (
                   <tr key={l.id} className="border-t border-calico-200 align-top">
