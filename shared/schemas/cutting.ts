@@ -130,6 +130,8 @@ export interface LayDto {
   markerId: number | null;
   spreadingMode: string;
   rolls: LayRollDto[];
+  /** The fabric the lay is spread from (a batch's lining lays are numbered apart from its shell lays). */
+  fabricName?: string;
   /** `retired`: replaced when the batch was planned again; kept for the record, not to be spread or cut. */
   status: 'planned' | 'cut' | 'retired';
   flaws: string;

@@ -72,6 +72,10 @@ describe('a lined style: the lining has a cut plan of its own beside the shell',
     expect((await owner.get(`/api/batches/${batchId}/cut-plan`)).body.cutPlan.id).toBe(shell.body.cutPlan.id);
     expect((await rollOf(self, shellRoll)).reservedMm).toBeCloseTo(shellHeld, 3);
 
+    // The cutter's list of lays names each lay's fabric: the lining's lay 1 is not the shell's lay 1.
+    const fabricsById = new Map(((await owner.get('/api/fabrics')).body.fabrics as { id: number; name: string }[]).map((f) => [f.id, f.name]));
+    const lays = ((await cutter.get('/api/lays')).body.lays as { batchId: number; seq: number; fabricName: string }[]).filter((l) => l.batchId === batchId);
+    expect(new Set(lays.map((l) => l.fabricName))).toEqual(new Set([fabricsById.get(self), fabricsById.get(lining)]));
     // Each fabric's marker list is its own: the lining's names the lining roll, not the shell's.
     const list = await cutter.get(`/api/batches/${batchId}/marker-list.xlsx?fabricId=${lining}`).buffer(true);
     expect(list.status).toBe(200);

@@ -129,7 +129,13 @@ export function createCuttingService(deps: CuttingServiceDeps) {
       const counts = await plans.bundleCounts(studioId, list.map((l) => l.id));
       const short = await shortagesOf(studioId, list);
       const batches = await batchesOf(studioId, list);
-      return list.map((l) => presentLay(l, batches.get(l.batchId)!, counts.get(l.id) ?? 0, short.get(l.id) ?? null));
+      // Each lay names its fabric: a lined batch has shell lays and lining lays, each numbered from 1.
+      const fabricOfPlan = new Map<number, string>();
+      for (const planId of new Set(list.map((l) => l.cutPlanId))) {
+        const p = await plans.getPlan(studioId, planId);
+        fabricOfPlan.set(planId, p ? ((await fabrics.get(studioId, p.fabricId))?.name ?? '') : '');
+      }
+      return list.map((l) => ({ ...presentLay(l, batches.get(l.batchId)!, counts.get(l.id) ?? 0, short.get(l.id) ?? null), fabricName: fabricOfPlan.get(l.cutPlanId) ?? '' }));
     },
     /** Planned lays of open batches that stock cannot cover: the owner's Today and the cutter see them before spreading. */
     async shortages(studioId: number): Promise<ShortageDto[]> {

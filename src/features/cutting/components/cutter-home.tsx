@@ -24,7 +24,7 @@ export function CutterHome({ name }: { name: string }) {
             <li key={l.id}>
               <Link to={paths.lay.getHref(l.id)} className={`block rounded-lg border p-3 ${i === 0 ? 'border-thread-700 bg-thread-700/5' : 'border-calico-200'}`}>
                 <div className="flex flex-wrap items-center justify-between gap-2">
-                  <span className="font-semibold text-thread-800">{t('home.lay', { batch: l.batchCode, seq: l.seq })}</span>
+                  <span className="font-semibold text-thread-800">{t('home.lay', { batch: l.batchCode, seq: l.seq })}{l.fabricName ? <span className="font-normal text-ink-600"> · {l.fabricName}</span> : null}</span>
                   {i === 0 ? <Badge tone="teal">{t('cutter.next')}</Badge> : null}
                 </div>
                 <p className="text-sm">{t('cutter.layLine', { ratio: ratioLabel(l.ratio), plies: t('common.plies', { count: l.plies }), length: metres(l.markerLengthMm) })}</p>
