@@ -151,15 +151,16 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     // The panel may still show the pre-plan estimate for a moment: wait for the need to follow the plan.
     await expect.poll(async () => { const n = await needOf(); return n >= used && n < used * 1.1; }, { timeout: 15_000 }).toBe(true);
     await shot(owner, 'new-studio-cut-plan');
-    // Planning the lining now would drop the crepe's plan and its roll holds: the owner is asked first.
+    // The lining is a material of the style: its plan stands beside the crepe's, which keeps its lays and holds.
     const planBefore = await owner.getByLabel('Plan figures').textContent();
     await owner.getByLabel('Fabric', { exact: true }).selectOption({ label: 'Ivory lining' });
     await owner.getByRole('button', { name: 'Plan the cut' }).click();
-    await expect.poll(() => owner.getByText(/This batch is planned on Navy crepe: planning Ivory lining replaces that plan/).isVisible()).toBe(true);
-    expect(await owner.getByRole('button', { name: 'Replace the plan' }).isVisible()).toBe(true);
-    expect(await owner.getByLabel('Plan figures').textContent()).toBe(planBefore);
-    await shot(owner, 'new-studio-cut-plan-other-fabric');
-    await owner.getByLabel('Fabric', { exact: true }).selectOption({ label: 'Navy crepe' });
+    await expect.poll(() => owner.getByRole('navigation', { name: 'Plans of this batch:' }).isVisible(), { timeout: 60_000 }).toBe(true);
+    await expect.poll(() => owner.getByText(/its lays use their own rolls and make no bundles/).isVisible()).toBe(true);
+    expect(await owner.getByRole('button', { name: 'Replace the plan' }).count()).toBe(0);
+    await shot(owner, 'new-studio-cut-plan-lining');
+    await owner.getByRole('button', { name: 'Navy crepe (main)' }).click();
+    await expect.poll(async () => await owner.getByLabel('Plan figures').textContent()).toBe(planBefore);
 
     // The cutter and a machinist join the studio.
     await owner.getByRole('link', { name: 'People' }).click();
