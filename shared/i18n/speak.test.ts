@@ -178,3 +178,19 @@ describe('the problems found reading an imported table', () => {
     expect(translate(text, en)).toBe(text);
   });
 });
+
+describe('the costing sheet notes on other materials', () => {
+  // The exact sentences server/modules/costing/costing.service.ts writes; each must have its French.
+  it('says each in French', () => {
+    for (const note of [
+      'Usiku viscose lining: estimated from the cut area of the pieces of lining at 75 % utilisation, until it has its own marker.',
+      "Usiku viscose lining: estimated from the cut area of the pieces of lining at 53 % utilisation, that of the style's marker on it.",
+      "Usiku viscose lining: estimated from the cut area of the pieces of lining and facing at 61 % utilisation, that of the style's 3 markers on it.",
+      'Usiku viscose lining: from its own cut plan for this batch, wastage included.',
+    ]) {
+      const said = translate(note, fr);
+      expect(said, note).not.toBeNull();
+      expect(said).toMatch(/^Usiku viscose lining\u202f: /);
+    }
+  });
+});

@@ -223,6 +223,13 @@ export const SCHEMA_MESSAGES_FR: Record<string, string> = {
   // Notes of the costing sheet (server/modules/costing/costing.service.ts), said by the client in the language on screen.
   '{fabrics}: estimated from the cut area of the pieces of {materials} at {n} % utilisation until they have their own marker.':
     '{fabrics} : estimé d’après la surface des pièces de {materials} à {n|num} % d’efficience, en attendant leur propre placement.',
+  '{fabric}: estimated from the cut area of the pieces of {materials} at {n} % utilisation, until it has its own marker.':
+    '{fabric} : estimé d’après la surface des pièces de {materials} à {n|num} % d’efficience, en attendant son propre placement.',
+  '{fabric}: estimated from the cut area of the pieces of {materials} at {n} % utilisation, that of the style\'s marker on it.':
+    '{fabric} : estimé d’après la surface des pièces de {materials} à {n|num} % d’efficience, celle du placement du modèle sur ce tissu.',
+  '{fabric}: estimated from the cut area of the pieces of {materials} at {n} % utilisation, that of the style\'s {count} markers on it.':
+    '{fabric} : estimé d’après la surface des pièces de {materials} à {n|num} % d’efficience, celle des {count|num} placements du modèle sur ce tissu.',
+  '{fabric}: from its own cut plan for this batch, wastage included.': '{fabric} : d’après son propre plan de coupe pour cette série, chute comprise.',
   'No fabric is recorded for this studio yet, so the sheet has no fabric line.': 'Aucun tissu n’est encore enregistré dans l’atelier : la fiche n’a pas de ligne de tissu.',
   'Fabric is an estimate until a marker or cut plan exists for this batch.': 'Le tissu est une estimation tant que la série n’a ni placement ni plan de coupe.',
   'Fabric comes from the latest finished marker; the cut plan will replace it.': 'Le tissu vient du dernier placement terminé ; le plan de coupe le remplacera.',

@@ -66,6 +66,15 @@ describe('a lined style: the lining has a cut plan of its own beside the shell',
     expect(main.id).toBe(shell.body.cutPlan.id);
     expect(main.plans.map((p: { fabricId: number; material: boolean }) => [p.fabricId, p.material])).toEqual([[self, false], [lining, true]]);
     expect((await owner.get(`/api/batches/${batchId}/cut-plan?fabricId=${lining}`)).body.cutPlan.id).toBe(lined.body.cutPlan.id);
+    // The costing sheet prices the lining from its own plan: Σ garments × metres per garment is what the plan
+    // spreads, plus the style's wastage (at most 10 % here).
+    const sheet = (await owner.get(`/api/batches/${batchId}/costing`)).body.costing;
+    const liningName = ((await owner.get('/api/fabrics')).body.fabrics as { id: number; name: string }[]).find((f) => f.id === lining)!.name;
+    const line = sheet.lines.find((l: { kind: string; refId: number }) => l.kind === 'fabric' && l.refId === lining);
+    const total = Object.entries(ORDER).reduce((a, [size, q]) => a + q * line.quantities[size], 0);
+    expect(total).toBeGreaterThanOrEqual(lined.body.cutPlan.fabricUsedMm / 1000 - 0.01);
+    expect(total).toBeLessThanOrEqual((lined.body.cutPlan.fabricUsedMm / 1000) * 1.1);
+    expect(sheet.notes).toContain(`${liningName}: from its own cut plan for this batch, wastage included.`);
     // Planning the lining again replaces only the lining plan.
     const again = await plan(batchId, lining, liningRoll);
     expect(again.status).toBe(201);

@@ -106,7 +106,7 @@ export function createCostingService(repo: CostingRepository) {
    * one), each with a length per garment by size: its pieces' cut area ÷ (width × the utilisation of the style's
    * finished markers on that fabric, else the assumed 75 %), plus wastage. None when the style links no materials.
    */
-  async function otherMaterialFabrics(studioId: number, style: NonNullable<BatchEntity['style']>, mainFabricId: number | undefined, wastage: number) {
+  async function otherMaterialFabrics(studioId: number, batchId: number, style: NonNullable<BatchEntity['style']>, mainFabricId: number | undefined, wastage: number) {
     const links = Object.entries(style.materialFabrics ?? {}).filter(([, id]) => id !== mainFabricId);
     if (!links.length) return [];
     const areas = await repo.materialAreas(studioId, style.id);
@@ -116,13 +116,18 @@ export function createCostingService(repo: CostingRepository) {
       if (!fabric) continue;
       const materials = links.filter(([, f]) => f === id).map(([m]) => m);
       const at = utilisationForEstimates(await repo.styleMarkersOn(studioId, style.id, id, fabric.widthMm));
+      // The material's own cut plan for this batch, when it has one, says what its lays spread per garment.
+      const plan = await repo.cutPlan(studioId, batchId, id);
+      const planned = plan ? plannedLays(await repo.lays(studioId, plan.id), plan.result) : [];
+      const fromPlan: Record<string, number> = planned.length ? consumptionBySize(planned) : {};
       const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
+        if (fromPlan[s] !== undefined) return [s, mm(round1(fromPlan[s] * wastage))];
         const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
         // The pieces are cut larger by the fabric's shrinkage, so their area is too.
         const grown = area * shrinkageAreaFactor({ lengthwisePercent: fabric.shrinkageLengthPercent, widthwisePercent: fabric.shrinkageWidthPercent });
         return [s, mm(round1((grown / (fabric.widthMm * at.utilisation)) * wastage))];
       }));
-      out.push({ fabric, materials, perSize, at });
+      out.push({ fabric, materials, perSize, at, fromPlan: planned.length > 0 });
     }
     return out;
   }
@@ -150,8 +155,12 @@ export function createCostingService(repo: CostingRepository) {
     const wastage = 1 + settings.wastagePercent / 100;
     const fabricMm: Record<string, Millimetres> = {};
     for (const { size } of sizes) fabricMm[size] = mm(round1((fab?.perSize[size] ?? 0) * wastage));
-    const others = await otherMaterialFabrics(studioId, style, fab?.fabric.id, wastage);
+    const others = await otherMaterialFabrics(studioId, batch.id, style, fab?.fabric.id, wastage);
     for (const o of others) {
+      if (o.fromPlan) {
+        notes.push(`${o.fabric.name}: from its own cut plan for this batch, wastage included.`);
+        continue;
+      }
       const pct = Math.round(o.at.utilisation * 100);
       notes.push(`${o.fabric.name}: estimated from the cut area of the pieces of ${o.materials.join(' and ')} at ${pct} % utilisation, ${o.at.markers ? `that of the style's ${o.at.markers === 1 ? 'marker' : `${o.at.markers} markers`} on it` : 'until it has its own marker'}.`);
     }
