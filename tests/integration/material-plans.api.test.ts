@@ -99,21 +99,20 @@ describe('a lined style: the lining has a cut plan of its own beside the shell',
     const liningLays = (await plan(batchId, lining, liningRoll)).body.cutPlan.lays as Lay[];
     const bundles = () => ctx.ds.getRepository(BundleEntity).countBy({ batchId });
 
-    const lay = liningLays.find((l) => l.rolls.some((r) => r.rollId === liningRoll))!;
-    const line = lay.rolls.find((r) => r.rollId === liningRoll)!;
-    const before = await rollOf(lining, liningRoll);
-    const spread = line.plies * (lay.markerLengthMm + lay.endAllowanceMm);
-    const cut = await cutter.post(`/api/lays/${lay.id}/cut`).send({ rolls: [{ rollId: liningRoll, actualPlies: line.plies, actualRemnantMm: before.remainingMm - spread }] });
-    expect(cut.status).toBe(200);
+    /** Cut the first lay on `rollId` as planned, the remnant measured as spread; the roll's length before and the spread. */
+    const cutFirstLay = async (lays: Lay[], fabricId: number, rollId: number) => {
+      const lay = lays.find((l) => l.rolls.some((r) => r.rollId === rollId))!;
+      const line = lay.rolls.find((r) => r.rollId === rollId)!;
+      const before = (await rollOf(fabricId, rollId)).remainingMm;
+      const spread = line.plies * (lay.markerLengthMm + lay.endAllowanceMm);
+      const cut = await cutter.post(`/api/lays/${lay.id}/cut`).send({ rolls: [{ rollId, actualPlies: line.plies, actualRemnantMm: before - spread }] });
+      expect(cut.status).toBe(200);
+      return { before, spread };
+    };
+    const liningCut = await cutFirstLay(liningLays, lining, liningRoll);
     expect(await bundles()).toBe(0);
-    expect((await rollOf(lining, liningRoll)).remainingMm).toBeCloseTo(before.remainingMm - spread, 0);
-
-    const shellLay = shellLays.find((l) => l.rolls.some((r) => r.rollId === shellRoll))!;
-    const shellLine = shellLay.rolls.find((r) => r.rollId === shellRoll)!;
-    const shellBefore = await rollOf(self, shellRoll);
-    const shellSpread = shellLine.plies * (shellLay.markerLengthMm + shellLay.endAllowanceMm);
-    const shellCut = await cutter.post(`/api/lays/${shellLay.id}/cut`).send({ rolls: [{ rollId: shellRoll, actualPlies: shellLine.plies, actualRemnantMm: shellBefore.remainingMm - shellSpread }] });
-    expect(shellCut.status).toBe(200);
+    expect((await rollOf(lining, liningRoll)).remainingMm).toBeCloseTo(liningCut.before - liningCut.spread, 0);
+    await cutFirstLay(shellLays, self, shellRoll);
     expect(await bundles()).toBeGreaterThan(0);
     // The costing sheet's fabric stays the shell's, whichever plan was made last.
     const sheet = (await owner.get(`/api/batches/${batchId}/costing`)).body;
