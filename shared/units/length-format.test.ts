@@ -1,6 +1,6 @@
 import Qty from 'js-quantities';
 import { describe, expect, it } from 'vitest';
-import { formatLength, parseLength } from './length-format';
+import { formatLength, parseLength, parseLongLength } from './length-format';
 import { MM_PER_INCH, MM_PER_YARD, inchesToMm, mmToYards } from './units';
 
 // Outside oracle: js-quantities 1.8 defines <inch> = 0.0254 m and <yard> = 0.9144 m exactly
@@ -23,6 +23,23 @@ describe('exact conversions', () => {
       expect(parseLength(text, 'imperial')).toBeCloseTo(Qty(qtyText).to('mm').scalar, 10);
     }
     expect(mmToYards(1000)).toBeCloseTo(1.0936133, 7);
+  });
+
+  it('reads a fraction typed as one character as the mixed fraction (1 yd = 0.9144 m, NBS Circular 572)', () => {
+    expect(parseLength('40½ yd', 'imperial')).toBeCloseTo(Qty('40.5 yd').to('mm').scalar, 9);
+    expect(parseLength('40 ½ yd', 'imperial')).toBeCloseTo(Qty('40.5 yd').to('mm').scalar, 9);
+    expect(parseLength('¾"', 'imperial')).toBeCloseTo(Qty('0.75 in').to('mm').scalar, 9);
+    expect(parseLength('10⅜ in', 'imperial')).toBeCloseTo(Qty('10.375 in').to('mm').scalar, 9);
+    expect(parseLength('40 1/2 yd', 'imperial')).toBeCloseTo(Qty('40.5 yd').to('mm').scalar, 9);
+  });
+
+  it('reads a typed roll length in the long unit: metres, or yards with fractions (1 yd = 0.9144 m)', () => {
+    expect(parseLongLength('49,8', 'metric')).toBeCloseTo(49_800, 9);
+    expect(parseLongLength('40 1/2', 'imperial')).toBeCloseTo(Qty('40.5 yd').to('mm').scalar, 9);
+    expect(parseLongLength('40½', 'imperial')).toBeCloseTo(Qty('40.5 yd').to('mm').scalar, 9);
+    expect(parseLongLength('90 in', 'imperial')).toBeCloseTo(Qty('90 in').to('mm').scalar, 9);
+    expect(parseLongLength('forty', 'imperial')).toBeNull();
+    expect(parseLongLength('  ', 'metric')).toBeNull();
   });
 
   it('agrees with js-quantities on 88 cm in inches (EN 13402 "88" bust, BSI 2002)', () => {

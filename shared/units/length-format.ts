@@ -62,6 +62,9 @@ const UNIT_MM: Record<string, number> = {
   vg: MM_PER_YARD,
 };
 
+/** The single-character fractions a keyboard or phone may give (Unicode vulgar fractions). */
+const VULGAR_FRACTIONS: Record<string, string> = { '½': '1/2', '¼': '1/4', '¾': '3/4', '⅛': '1/8', '⅜': '3/8', '⅝': '5/8', '⅞': '7/8' };
+
 const NUMBER = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;
 const LENGTH_RE = new RegExp(
   String.raw`^([+-])?\s*(?:(${NUMBER})(?:\s+|-)(\d+)\s*/\s*(\d+)|(\d+)\s*/\s*(\d+)|(${NUMBER}))\s*([a-z"']*)$`,
@@ -75,7 +78,13 @@ const LENGTH_RE = new RegExp(
  * commas are accepted (`25,4 cm`). Returns `null` for empty, malformed or unknown-unit text, or a zero denominator.
  */
 export function parseLength(text: string, system: UnitSystem): Millimetres | null {
-  const cleaned = text.trim().replace(/(\d),(\d)/g, '$1.$2').replace(/″/g, '"').replace(/′/g, "'");
+  const cleaned = text
+    .trim()
+    .replace(/(\d),(\d)/g, '$1.$2')
+    .replace(/″/g, '"')
+    .replace(/′/g, "'")
+    // A fraction typed as one character (40½, 2¾ yd) reads as the mixed fraction it is (40 1/2).
+    .replace(/(\d*)\s*([½¼¾⅛⅜⅝⅞])/g, (_m, whole: string, f: string) => `${whole ? `${whole} ` : ''}${VULGAR_FRACTIONS[f]}`);
   const m = LENGTH_RE.exec(cleaned);
   if (!m) return null;
   const [, sign, mixWhole, mixNum, mixDen, fracNum, fracDen, dec, unitRaw] = m;
@@ -93,4 +102,16 @@ export function parseLength(text: string, system: UnitSystem): Millimetres | nul
   const factor = UNIT_MM[unit];
   if (factor === undefined || !Number.isFinite(value)) return null;
   return mm((sign === '-' ? -1 : 1) * value * factor);
+}
+
+/**
+ * A typed fabric length (a roll, an order line) in millimetres: a bare number, fraction or mixed fraction
+ * (`30`, `12,5`, `40 1/2`, `40½`) is in the studio's long unit, metres or yards; a unit may be given (`2.5 yd`,
+ * `90 in`, `2,5 m`). Null when it is not a length.
+ */
+export function parseLongLength(text: string, system: UnitSystem): Millimetres | null {
+  const t = text.trim();
+  if (!t) return null;
+  const bare = /^[\d.,\s/½¼¾⅛⅜⅝⅞]+$/.test(t);
+  return parseLength(bare ? `${t} ${system === 'imperial' ? 'yd' : 'm'}` : t, system);
 }

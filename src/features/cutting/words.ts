@@ -58,6 +58,7 @@ const en = {
     table: 'Rolls',
     label: 'Roll label',
     length: 'Length ({{unit}})',
+    lengthNeeded: 'Enter the length, e.g. {{example}}',
     width: 'Width ({{unit}})',
     add: 'Add roll',
     importHelp:
@@ -173,6 +174,7 @@ export const words: AreaWords<typeof en> = {
       table: 'Rouleaux',
       label: 'Étiquette du rouleau',
       length: 'Longueur ({{unit}})',
+      lengthNeeded: 'Saisissez la longueur, p. ex. {{example}}',
       width: 'Laize ({{unit}})',
       add: 'Ajouter le rouleau',
       importHelp:

@@ -27,7 +27,9 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const { data: style } = useQuery({ ...batchStyleQueries.ofStyle(batch.styleId), retry: false });
   const materials = [...new Set(['self', ...Object.keys(style?.materialFabrics ?? {})])];
   const planCut = usePlanCut(batch.id);
-  const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: imperial ? '6.5' : '6', overcutPercent: '0' });
+  // Typed as text in the studio's own way of writing numbers (6,5 in French); read back with either mark.
+  const [form, setForm] = useState({ fabricId: '', maxPlies: '6', maxGarmentsPerMarker: '4', maxMarkerLengthM: f.number(imperial ? 6.5 : 6), overcutPercent: '0' });
+  const toNumber = (v: string) => Number(v.trim().replace(/\s/g, '').replace(',', '.'));
   const fabricId = form.fabricId || String(shown ?? cutPlanFabricId(plan?.fabricId, style?.materialFabrics?.self, fabrics.map((x) => x.id)) ?? '');
   const pickFabric = (id: string) => {
     setForm({ ...form, fabricId: id });
@@ -43,8 +45,8 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
     setShown(Number(fabricId));
     planCut.mutate({
       ...(replacePlan ? { replacePlan } : {}),
-      fabricId: Number(fabricId), maxPlies: Number(form.maxPlies), maxGarmentsPerMarker: Number(form.maxGarmentsPerMarker),
-      maxMarkerLengthMm: form.maxMarkerLengthM ? Math.round(Number(form.maxMarkerLengthM.replace(',', '.')) * mmPerTable) : undefined, overcutPercent: Number(form.overcutPercent || 0),
+      fabricId: Number(fabricId), maxPlies: toNumber(form.maxPlies), maxGarmentsPerMarker: toNumber(form.maxGarmentsPerMarker),
+      maxMarkerLengthMm: form.maxMarkerLengthM ? Math.round(toNumber(form.maxMarkerLengthM) * mmPerTable) : undefined, overcutPercent: toNumber(form.overcutPercent || '0'),
     });
   };
   const handleSubmit = (e: FormEvent) => {
@@ -54,7 +56,7 @@ export function CutPlanPanel({ batch }: { batch: BatchDto }) {
   const num = (key: keyof typeof form, label: string, err?: string) => (
     <div>
       <label className="field-label" htmlFor={`cp-${key}`}>{label}</label>
-      <input id={`cp-${key}`} className="field-input" type="number" step="any" value={form[key]} onChange={(e) => setForm({ ...form, [key]: e.target.value })} aria-invalid={Boolean(err)} />
+      <input id={`cp-${key}`} className="field-input" inputMode="decimal" value={form[key]} onChange={(e) => setForm({ ...form, [key]: e.target.value })} aria-invalid={Boolean(err)} />
       {err ? <FieldError>{err}</FieldError> : null}
     </div>
   );

@@ -8,7 +8,7 @@ import { fmt, formatDate, formatMoney } from '@/lib/format';
 import { useTranslation } from '@/lib/i18n';
 import { Trans } from 'react-i18next';
 import { dayInZone } from '@shared/format/studio-format';
-import { parseLength } from '@shared/units/length-format';
+import { parseLength, parseLongLength } from '@shared/units/length-format';
 import { fabricQueries, useAddRolls, useImportRolls } from '../api/cutting-queries';
 import { area } from '../words';
 import { fabricUnits, MM_PER_YARD } from './cutting-format';
@@ -20,7 +20,8 @@ function RollTable({ rolls }: { rolls: RollDto[] }) {
   const u = fabricUnits(useMe().data?.unitSystem === 'imperial');
   return (
     <div role="region" aria-label={t(`${area}.rolls.table`)} tabIndex={0} className="overflow-x-auto">
-      <table className="w-full text-sm">
+      {/* On a phone the columns keep their room and the region scrolls sideways, rather than running the headers together. */}
+      <table className="w-full min-w-[36rem] text-sm [&_td]:pr-3 [&_th]:pr-3">
         <thead className="text-left text-xs text-ink-600"><tr><th className="py-1">{t('fabric.roll')}</th><th>{t('fabric.shadeLot')}</th><th>{t('fabric.length')}</th><th>{t('fabric.left')}</th><th>{t('fabric.held')}</th><th>{t('fabric.width')}</th><th>{t('fabric.received')}</th></tr></thead>
         <tbody>
           {rolls.map((r) => (
@@ -45,10 +46,15 @@ function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number 
   const widthText = (mm: number) => (imperial ? u.width(mm).replace('"', '') : String(Math.round((mm / u.mmPerWidth) * 8) / 8));
   const readWidth = (text: string) => (imperial ? parseLength(`${text} in`, 'imperial') ?? NaN : Number(text) * u.mmPerWidth);
   const [f, setF] = useState({ label: '', lengthM: '', widthCm: widthText(widthMm + 20), shadeLot: '', receivedDate: dayInZone(new Date(), me?.timeZone ?? 'UTC') });
+  const [lengthError, setLengthError] = useState('');
   const fields = add.error instanceof ApiError ? add.error.fields : {};
   const handleSubmit = (e: FormEvent) => {
     e.preventDefault();
-    add.mutate([{ label: f.label, lengthMm: Math.round(Number(f.lengthM) * u.mmPerLength), widthMm: Math.round(readWidth(f.widthCm)), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
+    // The length as the cutter writes it: 50, 49,8, 40 1/2 or 40½ (metres or yards), or with a unit.
+    const lengthMm = parseLongLength(f.lengthM, imperial ? 'imperial' : 'metric');
+    setLengthError(lengthMm === null ? t(`${area}.rolls.lengthNeeded`, { example: imperial ? '40 1/2' : fmt().number(49.8) }) : '');
+    if (lengthMm === null) return;
+    add.mutate([{ label: f.label, lengthMm: Math.round(lengthMm), widthMm: Math.round(readWidth(f.widthCm)), shadeLot: f.shadeLot, receivedDate: f.receivedDate }], {
       onSuccess: () => setF({ ...f, label: '', lengthM: '' }),
     });
   };
@@ -62,7 +68,7 @@ function AddRollForm({ fabricId, widthMm }: { fabricId: number; widthMm: number 
   return (
     <form onSubmit={handleSubmit} className="grid grid-cols-2 gap-3 sm:grid-cols-6 sm:items-end">
       {input('label', t(`${area}.rolls.label`), 'text', fields['rolls.0.label'])}
-      {input('lengthM', t(`${area}.rolls.length`, { unit: u.lengthUnit }), 'number', fields['rolls.0.lengthMm'])}
+      {input('lengthM', t(`${area}.rolls.length`, { unit: u.lengthUnit }), 'text', lengthError || fields['rolls.0.lengthMm'])}
       {input('widthCm', t(`${area}.rolls.width`, { unit: u.widthUnit }), imperial ? 'text' : 'number', fields['rolls.0.widthMm'])}
       {input('shadeLot', t('fabric.shadeLot'), 'text', fields['rolls.0.shadeLot'])}
       {input('receivedDate', t('fabric.received'), 'date', fields['rolls.0.receivedDate'])}

@@ -30,7 +30,8 @@ export function LinePlanPanel({ batch }: { batch: Pick<BatchDto, 'id' | 'code' |
   const apply = () => setParams({ ...params, mode: draft.mode, people: Number(draft.people) || undefined, efficiency: (Number(draft.efficiency) || 70) / 100, maxOps: Number(draft.maxOps) || undefined });
   return (
     <Card title={w('plan.title', { batch: batch.code })}>
-      <form className="mb-4 grid gap-3 sm:grid-cols-5" onSubmit={(e) => { e.preventDefault(); apply(); }}>
+      {/* Inputs line up at the bottom however the labels wrap, and the two widest fields get the room their words need (French runs longer). */}
+      <form className="mb-4 grid gap-3 sm:grid-cols-2 sm:items-end lg:grid-cols-[1.7fr_1.5fr_1fr_0.8fr_auto]" onSubmit={(e) => { e.preventDefault(); apply(); }}>
         <div>
           <label className="field-label" htmlFor="plan-mode">{w('plan.balanceFor')}</label>
           <select id="plan-mode" className="field-input" value={draft.mode} onChange={(e) => setDraft({ ...draft, mode: e.target.value as PlanParams['mode'] })}>

@@ -1,4 +1,4 @@
-import { parseLength } from '@shared/units/length-format';
+import { parseLongLength } from '@shared/units/length-format';
 import { MM_PER_YARD } from '@shared/units/units';
 import { fmt } from '@/lib/format';
 import { i18n } from '@/lib/i18n';
@@ -29,9 +29,6 @@ export const fabricInputText = (mm: number) => (mm / (imperial() ? MM_PER_YARD :
  * (`2.5 yd`, `90 in`, `2,5 m`). Null when it is not a length.
  */
 export function readFabricInput(text: string): number | null {
-  const t = text.trim();
-  if (!t) return null;
-  const bare = /^[\d.,\s]+$/.test(t);
-  const mm = parseLength(bare ? `${t} ${imperial() ? 'yd' : 'm'}` : t, imperial() ? 'imperial' : 'metric');
+  const mm = parseLongLength(text, imperial() ? 'imperial' : 'metric');
   return mm === null ? null : Math.round(mm);
 }
