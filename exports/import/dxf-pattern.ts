@@ -78,8 +78,27 @@ interface Group { blockName?: string; items: Item[] }
  * piece, each INSERT a piece). Units from $INSUNITS (1 in, 4 mm, 5 cm), else the style text `Units: METRIC|ENGLISH`,
  * else `options.units`; if none, no pieces and units 'unknown'. Every entity that could not be read is a problem.
  */
+/**
+ * Why a file is plainly not a DXF drawing, said in the owner's words, or null when it may be one. An ASCII DXF
+ * (AutoCAD DXF Reference, "DXF Format": group code / value line pairs) starts with a group code, normally
+ * `0` then `SECTION`, or `999` for a comment.
+ */
+export function notDxfReason(text: string): string | null {
+  const head = text.slice(0, 64);
+  if (!text.trim()) return 'the file is empty';
+  if (head.includes('PNG') && /^\W{0,4}PNG/.test(head)) return 'this is a PNG picture, not a DXF file (to use a photo, trace the piece from the photo instead)';
+  if (/^\W{0,4}JFIF|^\W{0,4}Exif|^\uFFFD\uFFFD\uFFFD/.test(head) || head.slice(6, 10) === 'JFIF') return 'this is a JPEG picture, not a DXF file (to use a photo, trace the piece from the photo instead)';
+  if (head.startsWith('%PDF')) return 'this is a PDF, not a DXF file (export the pattern as DXF from the program that drew it)';
+  if (head.startsWith('AutoCAD Binary DXF')) return 'this is a binary DXF; save it again as an ASCII (text) DXF';
+  const first = text.split(/\r?\n/).find((l) => l.trim() !== '')?.trim() ?? '';
+  if (!/^\d{1,4}$/.test(first)) return 'this is not a DXF file: a DXF file starts with a group code such as 0 followed by SECTION';
+  return null;
+}
+
 export function readDxfPattern(text: string, options: PatternReadOptions = {}): PatternImportResult {
   const problems: ImportProblem[] = [];
+  const notDxf = notDxfReason(text);
+  if (notDxf) return { pieces: [], problems: [{ entity: 'file', reason: notDxf }], units: 'unknown', unitsFrom: 'none' };
   let parsed: { header?: Record<string, unknown>; entities?: DxfEntity[]; blocks?: Record<string, DxfBlock> } | null;
   // dxf-parser prints a warning line for unknown group codes; keep the caller's output clean.
   const log = console.log;
@@ -87,7 +106,10 @@ export function readDxfPattern(text: string, options: PatternReadOptions = {}): 
     console.log = () => undefined;
     parsed = new DxfParser().parseSync(text) as typeof parsed;
   } catch (e) {
-    return { pieces: [], problems: [{ entity: 'file', reason: `not a readable DXF file (${(e as Error).message.split('\n')[0]})` }], units: 'unknown', unitsFrom: 'none' };
+    // The parser's own words are for developers; a DXF that stops short is the usual cause (a cut-off download or copy).
+    const cutShort = /end of (input|file)|EOF/i.test((e as Error).message);
+    const reason = cutShort ? 'the DXF file stops before its end (EOF) marker: it may be cut short; save or download it again' : `not a readable DXF file (${(e as Error).message.split('\n')[0]})`;
+    return { pieces: [], problems: [{ entity: 'file', reason }], units: 'unknown', unitsFrom: 'none' };
   } finally {
     console.log = log;
   }

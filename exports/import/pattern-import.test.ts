@@ -184,6 +184,20 @@ describe('readDxfPattern', () => {
   });
 });
 
+describe('a file that is not a DXF drawing', () => {
+  // File signatures: PNG (ISO/IEC 15948 §5.2, 89 50 4E 47 0D 0A 1A 0A), PDF (ISO 32000-1 §7.5.2, "%PDF-"),
+  // ASCII DXF group code / value pairs starting "0 / SECTION" (AutoCAD DXF Reference).
+  const reasonOf = (text: string) => readDxfPattern(text, { units: 'mm' }).problems[0]?.reason ?? '';
+  it('names what it is instead of passing on the parser\'s words', () => {
+    expect(reasonOf('')).toBe('the file is empty');
+    expect(reasonOf('\uFFFDPNG\r\n\u001a\n0000IHDR')).toMatch(/^this is a PNG picture, not a DXF file/);
+    expect(reasonOf('%PDF-1.7\n%âãÏÓ')).toMatch(/^this is a PDF, not a DXF file/);
+    expect(reasonOf('hello, this is a note\n')).toBe('this is not a DXF file: a DXF file starts with a group code such as 0 followed by SECTION');
+    expect(reasonOf('0\nSECTION\n2\nENTITIES\n0\nLWPOLYLINE\n')).toMatch(/stops before its end \(EOF\) marker/);
+    expect(readDxfPattern('hello', { units: 'mm' }).pieces).toEqual([]);
+  });
+});
+
 describe('readSvgPattern', () => {
   it('reads two arc commands as an ellipse of area πab (analytic) in millimetres', () => {
     const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="200mm" height="200mm" viewBox="0 0 200 200"><path d="M 100 150 A 80 50 0 1 1 100 50 A 80 50 0 1 1 100 150 Z"/></svg>';

@@ -83,6 +83,17 @@ export async function sendLog(input: LogWorkInput, label: string, author: { id: 
   }
 }
 
+/**
+ * A refused log as one sentence: the server's refusal names the bundle and operation itself ("Bundle 12 · OP04
+ * Join shoulders was already logged by …"), so the log's label is put in front only when the refusal does not
+ * already say it.
+ */
+export function refusalText(label: string, message: string): string {
+  const said = message.toLowerCase();
+  const bundle = /^(\S+\s+\d+)/.exec(label)?.[1]?.toLowerCase();
+  return said.includes(label.toLowerCase()) || (bundle !== undefined && said.includes(bundle)) ? message : `${label}: ${message}`;
+}
+
 let flushing: Promise<{ sent: number; refused: string[] }> | null = null;
 
 /**
@@ -101,7 +112,7 @@ export function flushOutbox(userId: number) {
       } catch (e) {
         // Not now (offline), or the session changed hands mid-send: keep it for its author.
         if (isRetryable(e) || isOtherAuthorsLog(e)) break;
-        refused.push(`${item.label}: ${(e as Error).message}`);
+        refused.push(refusalText(item.label, (e as Error).message));
       }
       writeOutbox(readOutbox().filter((q) => q.input.idempotencyKey !== item.input.idempotencyKey));
     }
