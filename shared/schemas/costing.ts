@@ -86,6 +86,8 @@ export interface CostingLineDto {
   /** Quantity per garment by size (m of fabric, trim units, minutes). */
   quantities: Record<string, number>;
   costMinor: Record<string, number>;
+  /** A material's fabric line with its own cut plan: what that plan's lays still to cut spread, mm. */
+  stillToCutMm?: number;
 }
 
 /** Where the fabric figure comes from: the released cut plan, a finished marker, or an estimate. */

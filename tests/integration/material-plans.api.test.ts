@@ -112,6 +112,11 @@ describe('a lined style: the lining has a cut plan of its own beside the shell',
     const liningCut = await cutFirstLay(liningLays, lining, liningRoll);
     expect(await bundles()).toBe(0);
     expect((await rollOf(lining, liningRoll)).remainingMm).toBeCloseTo(liningCut.before - liningCut.spread, 0);
+    // Materials to order: the lining needs what its lays still to cut spread; what is cut has left the stock.
+    const liningNow = (await owner.get(`/api/batches/${batchId}/cut-plan?fabricId=${lining}`)).body.cutPlan.lays as Lay[];
+    const stillToSpread = liningNow.filter((l) => l.status === 'planned').reduce((a, l) => a + l.plies * (l.markerLengthMm + l.endAllowanceMm), 0);
+    const needs = (await owner.get(`/api/purchasing/batches/${batchId}/needs`)).body.needs as { kind: string; refId: number; required: number }[];
+    expect(needs.find((n) => n.kind === 'fabric' && n.refId === lining)!.required).toBeCloseTo(stillToSpread, -1);
     await cutFirstLay(shellLays, self, shellRoll);
     expect(await bundles()).toBeGreaterThan(0);
     // The costing sheet's fabric stays the shell's, whichever plan was made last.

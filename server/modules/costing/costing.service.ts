@@ -118,8 +118,11 @@ export function createCostingService(repo: CostingRepository) {
       const at = utilisationForEstimates(await repo.styleMarkersOn(studioId, style.id, id, fabric.widthMm));
       // The material's own cut plan for this batch, when it has one, says what its lays spread per garment.
       const plan = await repo.cutPlan(studioId, batchId, id);
-      const planned = plan ? plannedLays(await repo.lays(studioId, plan.id), plan.result) : [];
+      const lays = plan ? await repo.lays(studioId, plan.id) : [];
+      const planned = plan ? plannedLays(lays, plan.result) : [];
       const fromPlan: Record<string, number> = planned.length ? consumptionBySize(planned) : {};
+      // What is left to buy for follows what its lays still have to spread, as for the main fabric.
+      const stillToCutMm = planned.length ? planConsumption(lays.map(layForConsumption)).stillNeededMm : undefined;
       const perSize: Record<string, Millimetres> = Object.fromEntries(style.sizeRun.map((s) => {
         if (fromPlan[s] !== undefined) return [s, mm(round1(fromPlan[s] * wastage))];
         const area = materials.reduce((a, m) => a + (areas[s]?.[m] ?? 0), 0);
@@ -127,7 +130,7 @@ export function createCostingService(repo: CostingRepository) {
         const grown = area * shrinkageAreaFactor({ lengthwisePercent: fabric.shrinkageLengthPercent, widthwisePercent: fabric.shrinkageWidthPercent });
         return [s, mm(round1((grown / (fabric.widthMm * at.utilisation)) * wastage))];
       }));
-      out.push({ fabric, materials, perSize, at, fromPlan: planned.length > 0 });
+      out.push({ fabric, materials, perSize, at, fromPlan: planned.length > 0, stillToCutMm });
     }
     return out;
   }
@@ -202,7 +205,7 @@ export function createCostingService(repo: CostingRepository) {
     });
     const lines: CostingLineDto[] = [];
     if (fab) lines.push({ kind: 'fabric', refId: fab.fabric.id, description: fab.fabric.name, unit: 'm', priceMinor: fab.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, fabricMm[x] / 1000])), costMinor: {} });
-    for (const o of others) lines.push({ kind: 'fabric', refId: o.fabric.id, description: o.fabric.name, unit: 'm', priceMinor: o.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, o.perSize[x] / 1000])), costMinor: {} });
+    for (const o of others) lines.push({ kind: 'fabric', refId: o.fabric.id, description: o.fabric.name, unit: 'm', priceMinor: o.fabric.pricePerMetreMinor, percent: null, quantities: Object.fromEntries(sizeLabels.map((x) => [x, o.perSize[x] / 1000])), costMinor: {}, ...(o.stillToCutMm !== undefined ? { stillToCutMm: round1(o.stillToCutMm) } : {}) });
     for (const t of trims) lines.push({ kind: 'trim', refId: t.id, description: t.name, unit: t.unit, priceMinor: t.unitPriceMinor, percent: null, quantities: perSize(t.quantityPerGarment), costMinor: {} });
     lines.push('pieceRate' in labourLine
       ? { kind: 'labour', refId: null, description: labourLine.name, unit: 'per garment', priceMinor: pieceRateMinor, percent: null, quantities: perSize(1), costMinor: {} }

@@ -60,7 +60,8 @@ export function createPurchasingService(deps: {
     for (const l of dto.lines) {
       if (l.kind !== 'fabric' || l.refId === null || fabricNeeds.has(l.refId)) continue;
       const metres = Object.entries(l.quantities).reduce((a, [size, m]) => a + m * (garmentsOf[size] ?? 0), 0);
-      fabricNeeds.set(l.refId, { name: l.description, priceMinor: l.priceMinor ?? 0, requiredMm: metres * 1000 });
+      // A material with its own cut plan needs what its lays still to cut spread (what is cut already left the stock).
+      fabricNeeds.set(l.refId, { name: l.description, priceMinor: l.priceMinor ?? 0, requiredMm: l.stillToCutMm ?? metres * 1000 });
     }
     for (const [id, f] of fabricNeeds) {
       const fabric = await repo.fabric(studioId, id);
