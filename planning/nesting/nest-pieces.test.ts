@@ -36,7 +36,8 @@ describe('nestPieces', { timeout: 30_000 }, () => {
 
   it.skipIf(!hasDatasets)('recovers the dighe2 optimum L = 100 (Hopper after Dighe & Jakiela 1996, esicup/dighe/dighe2.xml) for seed 1', () => {
     const { input } = parseEsicupXml(readFileSync(esicup('dighe', 'dighe2.xml'), 'utf8'));
-    const r = nestPieces(input, { seed: 1, maxIterations: 3000 });
+    // 6,000 sweeps: seeds 1–6 all reach L = 100 there; at 3,000, seeds 2–6 do.
+    const r = nestPieces(input, { seed: 1, maxIterations: 6000 });
     expect(checkLayout(input, r).errors).toEqual([]);
     expect(r.length).toBeLessThan(100 + 1e-6);
   });

@@ -4,7 +4,7 @@ import { LayoutState, type LayoutSnapshot } from './layout-state';
 import { buildNestModel, type NestModel } from './nest-model';
 import { createRng, rngInt, type Rng } from './random';
 import { RunBudget } from './run-budget';
-import { COMPRESS_CONFIG, EXPLORE_CONFIG, separate } from './separator';
+import { COARSE_CONFIG, COMPRESS_CONFIG, EXPLORE_CONFIG, separate } from './separator';
 import type { NestingInput, NestingOptions, NestingResult } from './types';
 
 const DEFAULT_MAX_ITERATIONS = 2000;
@@ -62,26 +62,97 @@ function gaussian(rng: Rng): number {
   return Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
 }
 
-/** Disruption after a failed separation: swap two large items (Gardeyn et al. 2025, exploration move). */
-function swapLargeItems(layout: LayoutState, rng: Rng): void {
-  const items = layout.model.items;
-  const areas = items.map((it) => it.area).sort((a, b) => a - b);
-  const cut = areas[Math.floor(0.75 * (areas.length - 1))];
-  const large = items.map((_, i) => i).filter((i) => items[i].area >= cut);
-  if (large.length < 2) return;
+/** A point strictly inside a polygon: the middle of the widest span on the scanline through its mean y. */
+function innerPoint(shape: { x: number; y: number }[]): { x: number; y: number } {
+  let my = 0;
+  for (const p of shape) my += p.y;
+  my /= shape.length;
+  const xs: number[] = [];
+  for (let k = 0, j = shape.length - 1; k < shape.length; j = k++) {
+    const a = shape[j], b = shape[k];
+    if (a.y > my !== b.y > my) xs.push(a.x + ((my - a.y) * (b.x - a.x)) / (b.y - a.y));
+  }
+  xs.sort((p, q) => p - q);
+  let best = { x: shape[0].x, y: shape[0].y }, span = -1;
+  for (let k = 0; k + 1 < xs.length; k += 2) {
+    if (xs[k + 1] - xs[k] > span) {
+      span = xs[k + 1] - xs[k];
+      best = { x: 0.5 * (xs[k] + xs[k + 1]), y: my };
+    }
+  }
+  return best;
+}
+
+function insidePolygon(shape: { x: number; y: number }[], px: number, py: number): boolean {
+  let inside = false;
+  for (let k = 0, j = shape.length - 1; k < shape.length; j = k++) {
+    const a = shape[j], b = shape[k];
+    if (a.y > py !== b.y > py && px < ((b.x - a.x) * (py - a.y)) / (b.y - a.y) + a.x) inside = !inside;
+  }
+  return inside;
+}
+
+/**
+ * Disruption after a failed separation (Gardeyn et al. 2025, exploration move): swap two large items of
+ * different shapes. "Large": the biggest items that together make up `LARGE_SHARE` of the total area.
+ * Each goes where the other was (box centre on box centre, taking the other's orientation when it may), and
+ * the items that then sit mostly inside it (their inner point covered) move into the room it left.
+ */
+const LARGE_SHARE = 0.75;
+export function swapLargeItems(layout: LayoutState, rng: Rng): void {
+  const { items, variants } = layout.model;
+  const byArea = items.map((_, i) => i).sort((a, b) => items[b].area - items[a].area);
+  const total = items.reduce((t, it) => t + it.area, 0);
+  let cum = 0, cut = 0;
+  for (const i of byArea) {
+    cum += items[i].area;
+    if (cum > LARGE_SHARE * total) {
+      cut = items[i].area;
+      break;
+    }
+  }
+  const large = byArea.filter((i) => items[i].area >= cut);
+  if (large.length < 1 || items.length < 2) return;
   const a = large[rngInt(rng, large.length)];
-  const others = large.filter((i) => i !== a && items[i].piece !== items[a].piece);
-  const pool = others.length ? others : large.filter((i) => i !== a);
+  const differs = large.filter((i) => Math.abs(items[i].area - items[a].area) > 0.01 * items[a].area);
+  const pool = differs.length ? differs : items.map((_, i) => i).filter((i) => i !== a);
   const b = pool[rngInt(rng, pool.length)];
-  const pa = { x: layout.x[a], y: layout.y[a] };
-  const moveTo = (i: number, x: number, y: number) => {
-    const v = layout.v[i];
+  const centre = (i: number, v = layout.v[i]) => {
+    const s = variants[v];
+    return { x: layout.x[i] + 0.5 * (s.minX + s.maxX), y: layout.y[i] + 0.5 * (s.minY + s.maxY) };
+  };
+  const moveTo = (i: number, v: number, cx: number, cy: number) => {
+    const s = variants[v];
     const [x0, x1] = layout.xRange(v);
     const [y0, y1] = layout.yRange(v);
-    layout.place(i, v, Math.min(Math.max(x, x0), x1), Math.min(Math.max(y, y0), y1));
+    const x = cx - 0.5 * (s.minX + s.maxX), y = cy - 0.5 * (s.minY + s.maxY);
+    layout.place(i, v, Math.min(Math.max(x, x0), Math.max(x0, x1)), Math.min(Math.max(y, y0), Math.max(y0, y1)));
   };
-  moveTo(a, layout.x[b], layout.y[b]);
-  moveTo(b, pa.x, pa.y);
+  /** The variant of item i closest to variant w's orientation. */
+  const like = (i: number, w: number) => {
+    const t = variants[w];
+    return items[i].variants.find((v) => variants[v].rotation === t.rotation && variants[v].mirrored === t.mirrored) ?? layout.v[i];
+  };
+  const ca = centre(a), cb = centre(b);
+  const va = layout.v[a], vb = layout.v[b];
+  moveTo(a, like(a, vb), cb.x, cb.y);
+  moveTo(b, like(b, va), ca.x, ca.y);
+  for (const [m, other, from] of [[a, b, ca], [b, a, cb]] as const) {
+    const to = centre(m);
+    const shape = variants[layout.v[m]].shape;
+    const dx = from.x - to.x, dy = from.y - to.y;
+    const mx = layout.x[m], my = layout.y[m];
+    const s = variants[layout.v[m]];
+    for (let j = 0; j < layout.n; j++) {
+      if (j === m || j === other) continue;
+      const t = variants[layout.v[j]];
+      if (layout.x[j] + t.sMaxX <= mx + s.sMinX || layout.x[j] + t.sMinX >= mx + s.sMaxX || layout.y[j] + t.sMaxY <= my + s.sMinY || layout.y[j] + t.sMinY >= my + s.sMaxY) continue;
+      const p = innerPoint(t.shape);
+      if (!insidePolygon(shape, layout.x[j] + p.x - mx, layout.y[j] + p.y - my)) continue;
+      const c = centre(j);
+      moveTo(j, layout.v[j], c.x + dx, c.y + dy);
+    }
+  }
 }
 
 function minimumLength(model: NestModel): number {
@@ -184,7 +255,9 @@ export function nestPieces(input: NestingInput, options: NestingOptions): Nestin
       layout.restore(pool[pick].snap);
       swapLargeItems(layout, rng);
     }
-    if (separate(layout, rng, budget, EXPLORE_CONFIG)) {
+    // A coarse step gets one short round (fails fast); the 0.1 % steps get the full separator.
+    const ok = separate(layout, rng, budget, shrink > EXPLORE_MIN_SHRINK ? COARSE_CONFIG : EXPLORE_CONFIG);
+    if (ok) {
       accept();
       pool = [];
       failures = 0;
