@@ -6,6 +6,7 @@
  * the wall clock on a shared machine), itersPerSecond, length,
  * density, valid}; "valid" is the independent checker.
  */
+import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { checkLayout, nestPieces, type NestingOptions } from '../../../planning/nesting';
 import { datasetDir, instanceToInput, readJsonInstance } from './json-instance';
@@ -22,5 +23,6 @@ const ms = performance.now() - t0;
 const cpu = process.cpuUsage(cpu0);
 const cpuMs = Math.round((cpu.user + cpu.system) / 1000);
 const check = checkLayout(input, r);
-const out = { instance: name, seed: Number(seed), iterations: r.iterations, ms: Math.round(ms), cpuMs, itersPerSecond: Math.round((r.iterations * 1000) / ms), length: r.length, density: r.utilisation, valid: check.valid };
+const out = { instance: name, seed: Number(seed), iterations: r.iterations, ms: Math.round(ms), cpuMs, itersPerSecond: Math.round((r.iterations * 1000) / ms), length: r.length, density: r.utilisation, valid: check.valid, maxOverlapRatio: check.maxOverlapRatio };
 process.stdout.write(JSON.stringify(out) + '\n');
+if (!check.valid) { process.stderr.write(check.errors.slice(0, 8).join('\n') + '\n'); if (process.env.DUMP) writeFileSync(process.env.DUMP, JSON.stringify(r)); }
