@@ -7,11 +7,11 @@ import { mm } from '@shared/units/units';
 
 // What counts as "touching" must agree with the independent checker (polygon-clipping): a long thin piece
 // pushed into its neighbour by a tiny depth overlaps by that depth × its length, hand-worked below.
-const strip = (w: number, h: number, x0 = 0) => [
-  { x: x0, y: 0 },
-  { x: x0 + w, y: 0 },
-  { x: x0 + w, y: h },
-  { x: x0, y: h },
+const strip = (w: number, h: number) => [
+  { x: 0, y: 0 },
+  { x: w, y: 0 },
+  { x: w, y: h },
+  { x: 0, y: h },
 ];
 
 describe('touching and overlapping on thin pieces', () => {

@@ -4,7 +4,8 @@
  * With iters:N the run is deterministic (same marker for the same seed), so two engine versions can be
  * timed on the same work. Prints one JSON line {instance, seed, iterations, ms, cpuMs (this process's CPU time: steadier than
  * the wall clock on a shared machine), itersPerSecond, length,
- * density, valid}; "valid" is the independent checker.
+ * density, valid, maxOverlapRatio}; "valid" is the independent checker, maxOverlapRatio its largest pairwise overlap
+ * ÷ the smaller piece's area. An invalid marker prints the checker's errors on stderr and, with DUMP=FILE, is written there.
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -25,4 +26,7 @@ const cpuMs = Math.round((cpu.user + cpu.system) / 1000);
 const check = checkLayout(input, r);
 const out = { instance: name, seed: Number(seed), iterations: r.iterations, ms: Math.round(ms), cpuMs, itersPerSecond: Math.round((r.iterations * 1000) / ms), length: r.length, density: r.utilisation, valid: check.valid, maxOverlapRatio: check.maxOverlapRatio };
 process.stdout.write(JSON.stringify(out) + '\n');
-if (!check.valid) { process.stderr.write(check.errors.slice(0, 8).join('\n') + '\n'); if (process.env.DUMP) writeFileSync(process.env.DUMP, JSON.stringify(r)); }
+if (!check.valid) {
+  process.stderr.write(check.errors.slice(0, 8).join('\n') + '\n');
+  if (process.env.DUMP) writeFileSync(process.env.DUMP, JSON.stringify(r));
+}
