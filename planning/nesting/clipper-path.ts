@@ -80,6 +80,15 @@ const TREE_UNION_FROM = 256;
 const SPECK = 4;
 const TREE_MARGIN = 4;
 
+/** Union of closed integer paths, all wound alike (non-zero rule), by one Clipper pass. */
+function unite(paths: Paths): Paths {
+  const c = new ClipperLib.Clipper();
+  c.AddPaths(paths, ClipperLib.PolyType.ptSubject, true);
+  const out: Paths = [];
+  c.Execute(ClipperLib.ClipType.ctUnion, out, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
+  return out;
+}
+
 /**
  * No-fit polygon NFP(A, B) = A ⊕ (−B): the reference positions of B (A fixed at the origin) where
  * the interiors overlap. Returned as rings in caller units; holes (pockets where B fits inside a
@@ -94,40 +103,27 @@ export function polygonNoFitRings(a: Polygon, b: Polygon, scale: number, byTree 
   const quads = ClipperLib.Clipper.Minkowski(negB, pa, true, true);
   const fillA = pa.map((p) => ({ X: p.X + negB[0].X, Y: p.Y + negB[0].Y }));
   const fillB = negB.map((p) => ({ X: p.X + pa[0].X, Y: p.Y + pa[0].Y }));
-  if (byTree && quads.length >= TREE_UNION_FROM) {
-    const union = (paths: Paths): Paths => {
-      const c = new ClipperLib.Clipper();
-      c.AddPaths(paths, ClipperLib.PolyType.ptSubject, true);
-      const out: Paths = [];
-      c.Execute(ClipperLib.ClipType.ctUnion, out, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
-      return out;
-    };
-    const G = UNION_GROUP;
-    let groups: Paths[] = [];
-    for (let k = 0; k < quads.length; k += G) groups.push(union(quads.slice(k, k + G)));
-    groups.push([fillA, fillB]);
-    while (groups.length > 1) {
-      const next: Paths[] = [];
-      for (let k = 0; k < groups.length; k += 2) next.push(k + 1 < groups.length ? union([...groups[k], ...groups[k + 1]]) : groups[k]);
-      groups = next;
-    }
-    // Rounding at the inner levels can leave specks of hole (half a grid cell) inside the NFP; a hole of a few
-    // grid cells is no room for a piece, and dropping it only makes the NFP larger (safe).
-    const rings = groups[0].filter((p) => p.length >= 3);
-    const outer = Math.sign(rings.reduce((m, p) => (Math.abs(ClipperLib.Clipper.Area(p)) > Math.abs(m) ? ClipperLib.Clipper.Area(p) : m), 0));
-    const kept = rings.filter((p) => ClipperLib.Clipper.Area(p) * outer >= 0 || Math.abs(ClipperLib.Clipper.Area(p)) >= SPECK);
-    // Grown by TREE_MARGIN grid steps, so the rounding of the inner levels never cuts into the true NFP.
-    const co = new ClipperLib.ClipperOffset(2, 0.25);
-    for (const p of kept) co.AddPath(p, ClipperLib.JoinType.jtMiter, ClipperLib.EndType.etClosedPolygon);
-    const grown: Paths = [];
-    co.Execute(grown, TREE_MARGIN);
-    return grown.filter((p) => p.length >= 3).map((p) => fromClipperPath(p, scale));
+  // Wound like Clipper's quads (and its outputs), so under the non-zero rule a copy never cancels a quad or
+  // the other copy where they overlap, whatever the winding of the input outlines.
+  for (const fill of [fillA, fillB]) if (!ClipperLib.Clipper.Orientation(fill)) fill.reverse();
+  if (!byTree || quads.length < TREE_UNION_FROM) return unite([...quads, fillA, fillB]).filter((p) => p.length >= 3).map((p) => fromClipperPath(p, scale));
+  let groups: Paths[] = [];
+  for (let k = 0; k < quads.length; k += UNION_GROUP) groups.push(unite(quads.slice(k, k + UNION_GROUP)));
+  groups.push([fillA, fillB]);
+  while (groups.length > 1) {
+    const next: Paths[] = [];
+    for (let k = 0; k < groups.length; k += 2) next.push(k + 1 < groups.length ? unite([...groups[k], ...groups[k + 1]]) : groups[k]);
+    groups = next;
   }
-  const c = new ClipperLib.Clipper();
-  c.AddPaths(quads, ClipperLib.PolyType.ptSubject, true);
-  c.AddPath(fillA, ClipperLib.PolyType.ptClip, true);
-  c.AddPath(fillB, ClipperLib.PolyType.ptClip, true);
-  const out: Paths = [];
-  c.Execute(ClipperLib.ClipType.ctUnion, out, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
-  return out.filter((p) => p.length >= 3).map((p) => fromClipperPath(p, scale));
+  // Rounding at the inner levels can leave specks of hole (half a grid cell) inside the NFP; a hole of a few
+  // grid cells is no room for a piece, and dropping it only makes the NFP larger (safe).
+  const rings = groups[0].filter((p) => p.length >= 3);
+  const outer = Math.sign(rings.reduce((m, p) => (Math.abs(ClipperLib.Clipper.Area(p)) > Math.abs(m) ? ClipperLib.Clipper.Area(p) : m), 0));
+  const kept = rings.filter((p) => ClipperLib.Clipper.Area(p) * outer >= 0 || Math.abs(ClipperLib.Clipper.Area(p)) >= SPECK);
+  // Grown by TREE_MARGIN grid steps, so the rounding of the inner levels never cuts into the true NFP.
+  const co = new ClipperLib.ClipperOffset(2, 0.25);
+  for (const p of kept) co.AddPath(p, ClipperLib.JoinType.jtMiter, ClipperLib.EndType.etClosedPolygon);
+  const grown: Paths = [];
+  co.Execute(grown, TREE_MARGIN);
+  return grown.filter((p) => p.length >= 3).map((p) => fromClipperPath(p, scale));
 }

@@ -72,6 +72,13 @@ describe('no-fit polygons of curved pieces by tree union', () => {
     expect(tree.length).toBe(2);
     for (const r of tree) expect(Math.abs(area([r], scale))).toBeGreaterThan(1);
     expect(differenceArea(flat, tree, scale)).toBe(0);
+    // Either winding: a clockwise ring (the copies that fill the "wholly inside" case must not cancel the quads).
+    for (const [ra, sb] of [[ring.slice().reverse(), square], [ring, square.slice().reverse()], [ring.slice().reverse(), square.slice().reverse()]]) {
+      expect(differenceArea(polygonNoFitRings(ra, sb, scale, false), polygonNoFitRings(ra, sb, scale, true), scale)).toBe(0);
+      // The same region as the counter-clockwise outlines give: winding is not a property of the piece.
+      expect(differenceArea(flat, polygonNoFitRings(ra, sb, scale, false), scale)).toBe(0);
+      expect(differenceArea(polygonNoFitRings(ra, sb, scale, false), flat, scale)).toBe(0);
+    }
     // Specks: the half annuli above leave none either.
     expect(polygonNoFitRings(a, halfAnnulus(20, 10, 40, 0.7777, 0.5555), scale, true)).toHaveLength(1);
   });
