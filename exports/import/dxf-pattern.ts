@@ -242,7 +242,7 @@ export function readDxfPattern(text: string, options: PatternReadOptions = {}): 
     for (const o of chained.open) {
       const gap = Math.hypot(o[0].x - o[o.length - 1].x, o[0].y - o[o.length - 1].y);
       const from = bounds.find((b) => b.points.includes(o[0]) || b.points[b.points.length - 1] === o[0]);
-      problems.push({ entity: from?.what ?? 'outline', reason: `outline does not close: its ends are ${gap.toFixed(2)} mm apart near (${o[0].x.toFixed(1)}, ${o[0].y.toFixed(1)}) mm` });
+      problems.push({ entity: from?.what ?? 'outline', reason: `outline does not close: its ends are ${gap.toFixed(2)} mm apart, near x = ${o[0].x.toFixed(1)} mm, y = ${o[0].y.toFixed(1)} mm` });
     }
     const good = rings.filter((r) => r.length >= 3);
     const marks = g.items.filter((i) => !(i.kind === 'path' && isBoundary(i.layer)));

@@ -297,7 +297,7 @@ export function readSvgPattern(text: string, options: PatternReadOptions = {}): 
       const first = sub.points[0], last = sub.points[sub.points.length - 1];
       const closes = sub.closed || (sub.points.length > 2 && Math.hypot(first.x - last.x, first.y - last.y) <= IMPORT_ENDPOINT_TOLERANCE_MM);
       if (!closes) {
-        if (!hasSew) problems.push({ entity: s.what, reason: `an open line (ends ${Math.hypot(first.x - last.x, first.y - last.y).toFixed(2)} mm apart) is not a piece outline` });
+        if (!hasSew) problems.push({ entity: s.what, reason: `an open line, its ends ${Math.hypot(first.x - last.x, first.y - last.y).toFixed(2)} mm apart, is not a piece outline` });
         continue;
       }
       if (sub.points.length < 3) continue;

@@ -95,10 +95,10 @@ function parseRow(row: string[], rowNo: number, ctx: RowContext): void {
  * POINTS_OF_MEASURE order. `unit` 'mm' writes plain numbers (up to 3 decimals); 'in' writes fractions to 1/8 in.
  * The output parses back with {@link parseSizeChartTable}.
  */
-export function sizeChartToRows(chart: SizeChart, unit: 'mm' | 'in' = 'mm'): string[][] {
+export function sizeChartToRows(chart: SizeChart, unit: 'mm' | 'cm' | 'in' = 'mm'): string[][] {
   const rows: string[][] = [['measurement', 'unit', ...chart.sizes]];
   for (const [key, vals] of Object.entries(chart.values) as [PointOfMeasure, Millimetres[]][]) {
-    const cells = vals.map((v) => (unit === 'mm' ? String(Number(v.toFixed(3))) : formatLength(v, 'imperial').replace('"', '')));
+    const cells = vals.map((v) => (unit === 'mm' ? String(Number(v.toFixed(3))) : unit === 'cm' ? String(Number((v / 10).toFixed(4))) : formatLength(v, 'imperial').replace('"', '')));
     rows.push([key, unit, ...cells]);
   }
   return rows;

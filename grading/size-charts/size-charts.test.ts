@@ -58,6 +58,16 @@ describe('ASTM D5585-11e1 Table 1 imported as a chart', () => {
     expect(sizeChartToRows(parsed.chart, 'in')[5].slice(0, 4)).toEqual(['bust', 'in', '31 1/8', '31 3/4']);
   });
 
+  it('exports centimetre rows for a metric studio: size 12 bust 38 3/4 in is 98.425 cm (1 in = 2.54 cm exactly), and they re-import to the same mm', () => {
+    const rows = sizeChartToRows(parsed.chart, 'cm');
+    expect(rows[5][0]).toBe('bust');
+    expect(rows[5][1]).toBe('cm');
+    expect(rows[5][2 + 7]).toBe('98.425');
+    const again = parseSizeChartTable(rows, parsed.chart.name);
+    if (!again.ok) throw new Error('the cm rows did not re-import');
+    parsed.chart.values.bust!.forEach((mm, i) => expect(again.chart.values.bust![i]).toBeCloseTo(mm, 9));
+  });
+
   it('converts size 12 bust 38 3/4 in to 984.25 mm exactly (Table 1; 1 in = 25.4 mm)', () => {
     expect(parsed.chart.values.bust![7]).toBeCloseTo(984.25, 9);
   });

@@ -154,27 +154,54 @@ describe('the pay page notes', () => {
   });
 });
 
+/**
+ * The string literals `pick` finds in each file (its first group), each as the server would write it (`text`,
+ * or null to leave it out), that have no French: a reader may not report a problem the dictionary lacks.
+ */
+function untranslated(files: string[], pick: RegExp, text: (literal: string) => string | null): string[] {
+  const unknown: string[] = [];
+  for (const file of files) {
+    const literals = [...readFileSync(file, 'utf8').matchAll(pick)].map((m) => m[1].slice(1, -1));
+    expect(literals.length, file).toBeGreaterThan(0);
+    for (const literal of literals) {
+      const said = text(literal);
+      if (said !== null && translate(said, fr) === null) unknown.push(`${file}: ${literal}`);
+    }
+  }
+  return unknown;
+}
+
 describe('the problems found reading an imported table', () => {
   const TABLE_READERS = ['grading/size-charts/size-chart-table.ts', 'server/modules/line/operations-sheet.ts', 'server/modules/cutting/packing-list.ts'];
 
   it('knows every problem the size-chart, operations-sheet and packing-list readers report', () => {
-    const unknown: string[] = [];
-    for (const file of TABLE_READERS) {
-      const literals = [...readFileSync(file, 'utf8').matchAll(/(?:message: |bad\([^,]+, )('[^']*'|`[^`]*`)/g)].map((m) => m[1].slice(1, -1));
-      expect(literals.length, file).toBeGreaterThan(0);
-      for (const literal of literals) {
-        // A reader's own library error (`${(err as Error).message}`) is not ours to word.
-        if (/\$\{\(err/.test(literal)) continue;
-        if (translate(sample(literal), fr) === null) unknown.push(`${file}: ${literal}`);
-      }
-    }
-    expect(unknown).toEqual([]);
+    // A reader's own library error (`${(err as Error).message}`) is not ours to word.
+    expect(untranslated(TABLE_READERS, /(?:message: |bad\([^,]+, )('[^']*'|`[^`]*`)/g, (literal) => (/\$\{\(err/.test(literal) ? null : sample(literal)))).toEqual([]);
   });
 
   it('says a bad cell of a size chart in French, inside the sentence that refuses the file', () => {
     const text = 'row 4, column 3: not a length: "abc" (2 problems; nothing imported)';
     expect(translate(text, fr)).toBe('ligne 4, colonne 3\u202f: pas une longueur\u202f: «\u202fabc\u202f» (2 problèmes\u202f; rien n’est importé)');
     expect(translate('expected 5 values, got 3', fr)).toBe('5 valeurs attendues, 3 trouvées');
+    expect(translate(text, en)).toBe(text);
+  });
+});
+
+describe('the problems found reading a pattern file', () => {
+  const PATTERN_READERS = ['exports/import/dxf-pattern.ts', 'exports/import/svg-pattern.ts'];
+
+  it('knows every problem the DXF and SVG readers report', () => {
+    // The entity label (`LINE #1A on layer CUT`) is not a sentence: the `entity` kind words it (test below).
+    // A type name or an SVG tag built into a sentence is sampled as a word, not as a number.
+    const pick = /(?:reason: |new Error\(|return )('[^']*'|`[^`]*`)/g;
+    expect(untranslated(PATTERN_READERS, pick, (literal) => (literal.startsWith('${where}') ? null : sample(literal.replace(/\$\{(?:e\.type|type|tag|cmd)\}/g, 'LINE'))))).toEqual([]);
+  });
+
+  it('says an open outline in French, naming the entity and the layer, inside the sentence that refuses the file', () => {
+    // The sentence server/modules/grading/pattern-import.ts writes for the first problem of a DXF.
+    const text = 'LWPOLYLINE #2F on layer CUT: outline does not close: its ends are 1.25 mm apart, near x = 10.0 mm, y = 20.5 mm (2 problems; nothing imported)';
+    expect(translate(text, fr)).toBe('LWPOLYLINE #2F sur le calque CUT\u202f: le contour ne se ferme pas\u202f: ses extrémités sont à 1,25 mm l’une de l’autre, près de x = 10 mm, y = 20,5 mm (2 problèmes\u202f; rien n’est importé)');
+    expect(translate('3 HATCH entities: HATCH entities are not read (1 problem; nothing imported)', fr)).toBe('3 entités HATCH\u202f: les entités HATCH ne sont pas lues (1 problème\u202f; rien n’est importé)');
     expect(translate(text, en)).toBe(text);
   });
 });

@@ -69,6 +69,12 @@ function param(value: string | number | undefined, kind: string | undefined, who
         `${n} problème${Number(n) > 1 ? 's' : ''}${first ? `, les ${first} premiers cités` : ''}`);
     case 'bytes':
       return text.replace(/\bMB\b/, 'Mo').replace(/\bkB\b/, 'ko').replace(/\bGB\b/, 'Go').replace(/(\d)\.(\d)/, '$1,$2');
+    case 'entity':
+      // What a pattern-file reader names: `file`, `outline`, `3 HATCH entities`, `block "B" LINE #1A on layer CUT`.
+      return text === 'file' ? 'fichier' : text === 'outline' ? 'contour' : text
+        .replace(/^(\d+) (\S+) entit(?:y|ies)$/, (_m, n: string, type: string) => `${n} entité${Number(n) > 1 ? 's' : ''} ${type}`)
+        .replace(/^block "(.*?)" /, 'bloc \u00ab\u202f$1\u202f\u00bb ')
+        .replace(/ on layer (.*)$/, ' sur le calque $1');
     case 'sizes':
       return text.replace(/, size /g, ', taille ');
     default:

@@ -46,10 +46,10 @@ export const putGradeRuleInput = z.object({
 });
 export type PutGradeRuleInput = z.infer<typeof putGradeRuleInput>;
 
-/** GET chart export: ?format=csv|xlsx&unit=mm|in. */
+/** GET chart export: ?format=csv|xlsx&unit=mm|cm|in. */
 export const chartExportQuery = z.object({
   format: z.enum(['csv', 'xlsx']).default('csv'),
-  unit: z.enum(['mm', 'in']).default('mm'),
+  unit: z.enum(['mm', 'cm', 'in']).default('mm'),
 });
 
 /** GET piece downloads: ?size=<label>|all&paper=A4|Letter. */

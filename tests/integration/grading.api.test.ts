@@ -168,6 +168,13 @@ describe('size charts: import, export, errors', () => {
     const csv = await owner.get('/api/styles/1/grading/chart/export?format=csv&unit=mm');
     expect(csv.status).toBe(200);
     expect(csv.text.split('\r\n')[0]).toBe('measurement,unit,XS,S,M,L,XL');
+    // A metric studio's export is in cm, the unit its grid shows; mm (the default) and in stay for files made elsewhere.
+    const cm = await owner.get('/api/styles/1/grading/chart/export?format=csv&unit=cm');
+    expect(cm.status).toBe(200);
+    const bustCm = cm.text.split('\r\n').find((l) => l.startsWith('bust,'))!.split(',');
+    expect(bustCm[1]).toBe('cm');
+    demoSizeChart().values.bust!.forEach((mm, i) => expect(Number(bustCm[2 + i])).toBeCloseTo(mm / 10, 6));
+    expect((await owner.get('/api/styles/1/grading/chart/export?format=csv&unit=yd')).status).toBe(400);
     const xlsx = await owner.get('/api/styles/1/grading/chart/export?format=xlsx').buffer(true).parse(asBytes);
     expect(xlsx.status).toBe(200);
     expect((xlsx.body as Buffer).subarray(0, 2).toString()).toBe('PK');

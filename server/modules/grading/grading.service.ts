@@ -146,7 +146,7 @@ export function createGradingService({ styles, sets, audit, now }: GradingServic
       return saveChart(actor, styleId, parsed.chart, undefined, 'import_chart');
     },
 
-    async exportChart(actor: Actor, styleId: number, format: 'csv' | 'xlsx', unit: 'mm' | 'in'): Promise<Download> {
+    async exportChart(actor: Actor, styleId: number, format: 'csv' | 'xlsx', unit: 'mm' | 'cm' | 'in'): Promise<Download> {
       const style = await styleOf(actor, styleId);
       const set = await setOf(actor, styleId);
       const rows = sizeChartToRows(set.sizeChart, unit);

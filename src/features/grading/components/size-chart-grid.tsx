@@ -20,14 +20,14 @@ const label = (pom: string) => i18n.t(`${area}.pom.${pom}`, { defaultValue: pom.
 /** The body chart as an editable grid (studio units), the grade between neighbouring sizes, import and export. */
 export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; grading: GradingDto; canEdit: boolean }) {
   const { t } = useTranslation();
-  const { cell, parseCell, cellUnit, cellUnitWord, small, len, system } = useLength();
+  const { bodyCell, parseBodyCell, bodyUnit, bodyUnitWord, bodyGrade, len, system } = useLength();
   const chart = grading.chart;
   const [cells, setCells] = useState<string[][]>([]);
   const [cellErrors, setCellErrors] = useState<Record<string, string>>({});
   const put = usePutChart(styleId);
   const imp = useImportChart(styleId);
   const fileRef = useRef<HTMLInputElement>(null);
-  useEffect(() => setCells(chart ? chart.rows.map((r) => r.values.map(cell)) : []), [chart]);
+  useEffect(() => setCells(chart ? chart.rows.map((r) => r.values.map(bodyCell)) : []), [chart]);
   const importError = imp.error instanceof ApiError ? imp.error : null;
   const importProblems = importError ? (
     <div role="alert" className="rounded-lg bg-madder-100 px-3 py-2 text-sm text-madder-700">
@@ -61,7 +61,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
     const rows = chart.rows.map((r, i) => ({
       pointOfMeasure: r.pointOfMeasure,
       values: cells[i].map((text, j) => {
-        const v = parseCell(text.trim());
+        const v = parseBodyCell(text.trim());
         if (v === null || !(v > 0)) errs[`${i}.${j}`] = t(`${area}.chart.notALength`);
         return v ?? 0;
       }),
@@ -74,8 +74,8 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
       <div className="flex flex-wrap gap-2">
         {canEdit ? <button type="button" className="btn-primary" onClick={save} disabled={put.isPending}>{put.isPending ? t(`${area}.chart.saving`) : t(`${area}.chart.save`)}</button> : null}
         {importControl}
-        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.csv')}>{t(`${area}.chart.exportCsv`)}</button>
-        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${cellUnit === 'mm' ? 'mm' : 'in'}`, 'size-chart.xlsx')}>{t(`${area}.chart.exportXlsx`)}</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=csv&unit=${bodyUnit}`, 'size-chart.csv')}>{t(`${area}.chart.exportCsv`)}</button>
+        <button type="button" className="btn-quiet" onClick={() => downloadFile(`/styles/${styleId}/grading/chart/export?format=xlsx&unit=${bodyUnit}`, 'size-chart.xlsx')}>{t(`${area}.chart.exportXlsx`)}</button>
       </div>
       <ErrorNote error={put.error} />
       {importProblems}
@@ -83,7 +83,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
         <table className="w-full min-w-[640px] text-sm" data-testid="size-chart">
           <thead>
             <tr className="border-b border-calico-200 text-left">
-              <th className="py-1 pr-2 text-ink-600">{t(`${area}.chart.body`, { unit: cellUnitWord })}</th>
+              <th className="py-1 pr-2 text-ink-600">{t(`${area}.chart.body`, { unit: bodyUnitWord })}</th>
               {chart.sizes.map((s, j) => (
                 <th key={s} className="px-1 text-center" colSpan={j < chart.sizes.length - 1 ? 2 : 1}>
                   {s}{grading.designations[s] ? <span className="block text-[10px] font-normal text-ink-400">{t(`${area}.chart.designation`, { designation: enInterval(grading.designations[s], system, len) })}</span> : null}
@@ -96,7 +96,7 @@ export function SizeChartGrid({ styleId, grading, canEdit }: { styleId: number; 
               <tr key={r.pointOfMeasure} className="border-b border-calico-100">
                 <th scope="row" className="whitespace-nowrap py-1 pr-2 text-left font-normal">{label(r.pointOfMeasure)}</th>
                 {chart.sizes.map((s, j) => (
-                  <FragmentCells key={s} last={j === chart.sizes.length - 1} grade={r.grades[j]} gradeText={r.grades[j] !== undefined ? small(r.grades[j]) : ''}>
+                  <FragmentCells key={s} last={j === chart.sizes.length - 1} grade={r.grades[j]} gradeText={r.grades[j] !== undefined ? bodyGrade(r.grades[j]) : ''}>
                     <input
                       aria-label={`${label(r.pointOfMeasure)} ${s}`}
                       className={`w-20 rounded border px-1.5 py-1 text-right tabular-nums ${cellErrors[`${i}.${j}`] ? 'border-madder-500 bg-madder-100' : 'border-calico-300'}`}

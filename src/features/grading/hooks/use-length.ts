@@ -20,6 +20,17 @@ export function useLength() {
     cell: (v: number) => (system === 'metric' ? decimal(String(Number(v.toFixed(1)))) : f.length(v).replace('"', '')),
     parseCell: (text: string) => parseLength(system === 'metric' ? `${text} mm` : `${text} in`, 'metric'),
     cellUnit: system === 'metric' ? 'mm' : 'in',
+    /**
+     * A body measurement's cell text for a mm value, and back: centimetres in a metric studio (as
+     * EN 13402 and a tape measure write girths), fractional inches in an imperial one.
+     */
+    bodyCell: (v: number) => (system === 'metric' ? decimal(String(Number((v / 10).toFixed(2)))) : f.length(v).replace('"', '')),
+    parseBodyCell: (text: string) => parseLength(system === 'metric' ? `${text} cm` : `${text} in`, 'metric'),
+    /** The body chart's unit as the export route takes it, and its word as the studio's language writes it. */
+    bodyUnit: system === 'metric' ? ('cm' as const) : ('in' as const),
+    bodyUnitWord: f.fabricWidthUnit,
+    /** A grade between sizes in the chart's unit: cm to one decimal, or fractional inches. */
+    bodyGrade: (v: number) => (system === 'metric' ? f.length(v) : f.smallLength(v)),
     /** The unit word of a grid cell as the studio's language writes it (`mm`, `in`, `po`). */
     cellUnitWord: system === 'metric' ? 'mm' : f.fabricWidthUnit,
     /** The unit word of a garment length typed in centimetres or inches (`cm`, `in`, `po`). */
