@@ -21,12 +21,17 @@ export interface Nfp {
   gx: number;
   gy: number;
   /**
-   * Per cell, built on first use: the edges (by end-point index) that can be nearest to a point of the
-   * cell, by increasing distance from the cell to the edge's bounding box (`nearLb2`, squared), so a
-   * nearest-edge search stops at the first edge that cannot beat the best so far.
+   * Per cell, built on first use: the edges that can be nearest to a point of the cell, by increasing
+   * distance from the cell to the edge's bounding box, so a nearest-edge search stops at the first edge that
+   * cannot beat the best so far. All cells' lists share one growing array, `nearData`, `SEG` numbers per edge
+   * (that distance squared, start x, start y, dx, dy, length², end-point index): the hot loop reads one
+   * contiguous run instead of following per-cell arrays and end-point indices. `nearAt[k]` is where cell k's
+   * run starts (−1 until built), `nearCount[k]` its edges; `nearUsed` the numbers in use.
    */
-  near: (Int32Array | undefined)[];
-  nearLb2: (Float64Array | undefined)[];
+  nearAt: Int32Array;
+  nearCount: Int32Array;
+  nearData: Float64Array;
+  nearUsed: number;
   /** Start-point index of the edge ending at each point (rings are closed). */
   prev: Int32Array;
   /**
@@ -94,7 +99,7 @@ function withBounds(coords: Float64Array, ringStarts: Int32Array): Nfp {
   }
   const nfp: Nfp = {
     coords, ringStarts, minX, maxX, minY, maxY, grid: new Uint8Array(gridSize * gridSize).fill(CELL_UNKNOWN), gridSize, gx, gy,
-    near: new Array<Int32Array | undefined>(gridSize * gridSize), nearLb2: new Array<Float64Array | undefined>(gridSize * gridSize), prev, side: new Int8Array(prev.length),
+    nearAt: new Int32Array(gridSize * gridSize).fill(-1), nearCount: new Int32Array(gridSize * gridSize), nearData: new Float64Array(0), nearUsed: 0, prev, side: new Int8Array(prev.length),
   };
   classifyCells(nfp);
   ringSides(nfp);
@@ -186,9 +191,9 @@ function segmentDist2(c: Float64Array, a: number, b: number, px: number, py: num
  * largest value over the cell is at a corner: U = min over edges of that corner maximum bounds the
  * nearest distance of every point in the cell; an edge whose bounding box is farther than U from
  * the cell can never be nearest. A small slack covers points rounded into the cell. Kept sorted by that
- * bounding-box distance (`nearLb2`), so a search can stop early.
+ * bounding-box distance, so a search can stop early. Returns where its run starts in `nearData`.
  */
-function nearEdges(nfp: Nfp, k: number): Int32Array {
+function nearEdges(nfp: Nfp, k: number): number {
   const { coords: c, prev, gridSize: G, gx, gy } = nfp;
   const slack = 1e-9 * Math.max(nfp.maxX - nfp.minX, nfp.maxY - nfp.minY);
   const cx = k % G, cy = (k - cx) / G;
@@ -222,16 +227,33 @@ function nearEdges(nfp: Nfp, k: number): Int32Array {
   const order = new Int32Array(count);
   for (let e = 0; e < count; e++) order[e] = e;
   order.sort((p, q) => lb2[p] - lb2[q] || edges[p] - edges[q]);
-  const near = new Int32Array(count);
-  const nearLb2 = new Float64Array(count);
-  for (let e = 0; e < count; e++) {
-    near[e] = edges[order[e]];
-    nearLb2[e] = lb2[order[e]];
+  const at = nfp.nearUsed;
+  if (at + count * SEG > nfp.nearData.length) {
+    const grown = new Float64Array(Math.max(2 * nfp.nearData.length, at + count * SEG, 64 * SEG));
+    grown.set(nfp.nearData.subarray(0, at));
+    nfp.nearData = grown;
   }
-  nfp.near[k] = near;
-  nfp.nearLb2[k] = nearLb2;
-  return near;
+  const seg = nfp.nearData;
+  for (let e = 0; e < count; e++) {
+    const i = edges[order[e]], a = prev[i];
+    const ax = c[2 * a], ay = c[2 * a + 1], dx = c[2 * i] - ax, dy = c[2 * i + 1] - ay;
+    const o = at + e * SEG;
+    seg[o] = lb2[order[e]];
+    seg[o + 1] = ax;
+    seg[o + 2] = ay;
+    seg[o + 3] = dx;
+    seg[o + 4] = dy;
+    seg[o + 5] = dx * dx + dy * dy;
+    seg[o + 6] = i;
+  }
+  nfp.nearAt[k] = at;
+  nfp.nearCount[k] = count;
+  nfp.nearUsed = at + count * SEG;
+  return at;
 }
+
+/** Numbers per packed edge in `Nfp.nearData`. */
+const SEG = 7;
 
 /** Scratch buffers of `nearEdges` (one thread runs one search at a time). */
 let scratchEdges = new Int32Array(256);
@@ -342,21 +364,25 @@ export function nfpDepth(nfp: Nfp, px: number, py: number): number {
   let cell = nfp.grid[k];
   if (cell === CELL_UNKNOWN) cell = classifyCell(nfp, k);
   if (cell === CELL_OUT) return 0;
-  const edges = nfp.near[k] ?? nearEdges(nfp, k);
-  const lb2 = nfp.nearLb2[k]!;
-  const c = nfp.coords;
-  const prev = nfp.prev;
+  let at = nfp.nearAt[k];
+  if (at < 0) at = nearEdges(nfp, k);
+  const seg = nfp.nearData;
+  const end = at + nfp.nearCount[k] * SEG;
   let best = Infinity;
-  let bestEdge = -1;
-  for (let e = 0; e < edges.length && lb2[e] < best; e++) {
-    const i = edges[e];
-    const d2 = segmentDist2(c, prev[i], i, px, py);
+  let bestAt = -1;
+  // segmentDist2 on the packed edge, operation for operation (the same rounding, so the same markers).
+  for (let o = at; o < end && seg[o] < best; o += SEG) {
+    const ax = seg[o + 1], ay = seg[o + 2], dx = seg[o + 3], dy = seg[o + 4], len2 = seg[o + 5];
+    let t = len2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / len2 : 0;
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const ex = ax + t * dx - px, ey = ay + t * dy - py;
+    const d2 = ex * ex + ey * ey;
     if (d2 < best) {
       best = d2;
-      bestEdge = i;
+      bestAt = o;
     }
   }
-  if (cell === CELL_MIXED && !insideNear(nfp, bestEdge, px, py)) return 0;
+  if (cell === CELL_MIXED && !insideNear(nfp, seg[bestAt + 6], px, py)) return 0;
   return Math.sqrt(best);
 }
 
