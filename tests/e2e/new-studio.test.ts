@@ -122,6 +122,9 @@ describe('a new studio with its own dress, from nothing to a costing sheet', () 
     writeFileSync(chartFile, CHART);
     await owner.getByLabel('Size chart file').setInputFiles(chartFile);
     await expect.poll(() => owner.getByTestId('size-chart').isVisible(), { timeout: 15_000 }).toBe(true);
+    // A metric studio reads its girths in centimetres, as the file gave them (EN 13402 writes girths in cm).
+    expect(await owner.getByLabel('Bust XS', { exact: true }).inputValue()).toBe('84');
+    expect(await owner.getByLabel('Neck base M', { exact: true }).inputValue()).toBe('37.5');
     await owner.getByRole('button', { name: 'Propose rules from chart' }).click();
     await expect.poll(() => owner.getByRole('tablist', { name: 'Pieces' }).isVisible(), { timeout: 30_000 }).toBe(true);
     expect(await owner.getByRole('tab').count()).toBeGreaterThanOrEqual(8);

@@ -121,7 +121,7 @@ function FragmentCells({ children, last, gradeText }: { children: React.ReactNod
   return (
     <>
       <td className="px-1 py-1 text-center">{children}</td>
-      {last ? null : <td className="px-0.5 text-center text-[11px] text-ink-400 tabular-nums" aria-label={t(`${area}.chart.grade`)}>{gradeText}</td>}
+      {last ? null : <td className="whitespace-nowrap px-0.5 text-center text-[11px] text-ink-400 tabular-nums" aria-label={t(`${area}.chart.grade`)}>{gradeText}</td>}
     </>
   );
 }
